@@ -1,0 +1,56 @@
+package org.miscela.calc.meta;
+
+import java.util.Arrays;
+import java.util.Collections;
+import java.util.List;
+
+/** What a person needs to know about one cell function; the wizard metadata and the reference are made from it. */
+public final class FunctionInfo {
+    private final String method;
+    private final String displayName;
+    private final String summary;
+    private final String formula;
+    private final String example;
+    private final List<ArgumentInfo> arguments;
+
+    FunctionInfo(String method, String displayName, String summary, String formula, String example,
+            ArgumentInfo... arguments) {
+        this.method = method;
+        this.displayName = displayName;
+        this.summary = summary;
+        this.formula = formula;
+        this.example = example;
+        this.arguments = Collections.unmodifiableList(Arrays.asList(arguments));
+    }
+
+    /** The IDL method name, permanent: saved workbooks refer to it. */
+    public String method() {
+        return method;
+    }
+
+    /** The name users type in a cell. */
+    public String displayName() {
+        return displayName;
+    }
+
+    public String summary() {
+        return summary;
+    }
+
+    public String formula() {
+        return formula;
+    }
+
+    public String example() {
+        return example;
+    }
+
+    public List<ArgumentInfo> arguments() {
+        return arguments;
+    }
+
+    /** Calc's own category (one of its fixed English names). */
+    public String category() {
+        return FunctionCatalog.CATEGORY;
+    }
+}

@@ -1,0 +1,119 @@
+package org.miscela.calc.meta;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.Paths;
+
+/**
+ * Writes the artefacts made from the {@link FunctionCatalog}: Calc's wizard metadata (CalcAddIns.xcu) and the function
+ * reference (docs/functions.md). Run by the build; {@code --docs PATH} rewrites the reference.
+ */
+public final class MetadataWriter {
+    private MetadataWriter() {
+    }
+
+    public static void main(String[] args) throws IOException {
+        if (args.length == 2 && args[0].equals("--docs")) {
+            write(Paths.get(args[1]), functionReference());
+        } else if (args.length == 1) {
+            write(Paths.get(args[0]), calcAddInsXcu());
+        } else {
+            throw new IllegalArgumentException("usage: MetadataWriter OUT.xcu | --docs OUT.md");
+        }
+    }
+
+    private static void write(Path out, String text) throws IOException {
+        if (out.getParent() != null) {
+            Files.createDirectories(out.getParent());
+        }
+        Files.write(out, text.getBytes(StandardCharsets.UTF_8));
+    }
+
+    /** The CalcAddIns configuration: node names must equal the UNO service, IDL method and IDL parameter names. */
+    public static String calcAddInsXcu() {
+        StringBuilder x = new StringBuilder();
+        x.append("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n");
+        x.append("<!-- Generated from the function catalogue by MetadataWriter; do not edit. -->\n");
+        x.append("<oor:component-data xmlns:oor=\"http://openoffice.org/2001/registry\"")
+                .append(" xmlns:xs=\"http://www.w3.org/2001/XMLSchema\"")
+                .append(" oor:name=\"CalcAddIns\" oor:package=\"org.openoffice.Office\">\n");
+        x.append(" <node oor:name=\"AddInInfo\">\n");
+        x.append("  <node oor:name=\"").append(FunctionCatalog.SERVICE).append("\" oor:op=\"replace\">\n");
+        x.append("   <node oor:name=\"AddInFunctions\">\n");
+        for (FunctionInfo f : FunctionCatalog.functions()) {
+            x.append("    <node oor:name=\"").append(f.method()).append("\" oor:op=\"replace\">\n");
+            prop(x, "      ", "DisplayName", f.displayName(), true);
+            prop(x, "      ", "Description", f.summary(), true);
+            prop(x, "      ", "Category", f.category(), false);
+            x.append("      <node oor:name=\"Parameters\">\n");
+            for (ArgumentInfo a : f.arguments()) {
+                x.append("       <node oor:name=\"").append(a.name()).append("\" oor:op=\"replace\">\n");
+                prop(x, "        ", "DisplayName", a.displayName(), true);
+                prop(x, "        ", "Description", a.description(), true);
+                x.append("       </node>\n");
+            }
+            x.append("      </node>\n");
+            x.append("    </node>\n");
+        }
+        x.append("   </node>\n");
+        x.append("  </node>\n");
+        x.append(" </node>\n");
+        x.append("</oor:component-data>\n");
+        return x.toString();
+    }
+
+    private static void prop(StringBuilder x, String indent, String name, String value, boolean localised) {
+        x.append(indent).append("<prop oor:name=\"").append(name).append("\">");
+        x.append(localised ? "<value xml:lang=\"en-US\">" : "<value>").append(escape(value)).append("</value>");
+        x.append("</prop>\n");
+    }
+
+    static String escape(String s) {
+        return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;").replace("\"", "&quot;");
+    }
+
+    /** docs/functions.md. */
+    public static String functionReference() {
+        StringBuilder m = new StringBuilder();
+        m.append("# Function reference\n\n");
+        m.append("<!-- Generated from the function catalogue (addin/src/main/java/org/miscela/calc/meta/"
+                + "FunctionCatalog.java); a test fails when this file is out of date. Regenerate with\n"
+                + "     scripts/regenerate-docs. -->\n\n");
+        m.append("All functions take the card (a named range) first. Numbers are in the units the card states. "
+                + "A composition or temperature argument may be a range: the result is then an array of the same "
+                + "shape (enter the formula as an array formula), and blank input cells give blank results. "
+                + "Bad input shows Err:502; `MIX.CHECK` tells why. Outside the card's validity range results "
+                + "are refused unless extrapolation is allowed (per call or on the card).\n\n");
+        m.append("| function | what it returns |\n|---|---|\n");
+        for (FunctionInfo f : FunctionCatalog.functions()) {
+            m.append("| [`").append(f.displayName()).append("`](#").append(anchor(f.displayName())).append(") | ")
+                    .append(f.summary().replace("|", "\\|")).append(" |\n");
+        }
+        for (FunctionInfo f : FunctionCatalog.functions()) {
+            m.append("\n## ").append(f.displayName()).append("\n\n");
+            m.append(f.summary()).append("\n\n");
+            m.append("Syntax: `").append(f.displayName()).append("(");
+            for (int i = 0; i < f.arguments().size(); i++) {
+                ArgumentInfo a = f.arguments().get(i);
+                m.append(i > 0 ? "; " : "").append(a.optional() ? "[" + a.displayName() + "]" : a.displayName());
+            }
+            m.append(")`\n\n");
+            m.append("| argument | meaning |\n|---|---|\n");
+            for (ArgumentInfo a : f.arguments()) {
+                m.append("| ").append(a.displayName()).append(" | ").append(a.description().replace("|", "\\|"))
+                        .append(" |\n");
+            }
+            m.append("\nFormula: ").append(f.formula()).append("\n\n");
+            m.append("Example: `").append(f.example()).append("`\n\n");
+            m.append("Saved in ODF files as `").append(FunctionCatalog.SERVICE).append('.').append(f.method())
+                    .append("`.\n");
+        }
+        return m.toString();
+    }
+
+    private static String anchor(String displayName) {
+        return displayName.toLowerCase(java.util.Locale.ROOT).replace(".", "");
+    }
+}

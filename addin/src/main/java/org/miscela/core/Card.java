@@ -1,0 +1,110 @@
+package org.miscela.core;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.Locale;
+
+/**
+ * A parsed card: components with their pure-liquid data, the excess-volume coefficients of every pair, units,
+ * validity range and source. Immutable; build one with {@link CardReader}.
+ */
+public final class Card {
+    private final String title;
+    private final String source;
+    private final Units units;
+    private final List<Component> components;
+    private final RedlichKister[][] excessVolume;
+    private final Validity validity;
+    private final boolean extrapolationAllowed;
+    private final BinaryMixture binary;
+
+    Card(String title, String source, Units units, List<Component> components, RedlichKister[][] excessVolume,
+            Validity validity, boolean extrapolationAllowed) {
+        this.title = title;
+        this.source = source;
+        this.units = units;
+        this.components = Collections.unmodifiableList(new ArrayList<>(components));
+        this.excessVolume = excessVolume;
+        this.validity = validity;
+        this.extrapolationAllowed = extrapolationAllowed;
+        this.binary = components.size() == 2 ? new BinaryMixture(this) : null;
+    }
+
+    public String title() {
+        return title;
+    }
+
+    public String source() {
+        return source;
+    }
+
+    public Units units() {
+        return units;
+    }
+
+    public List<Component> components() {
+        return components;
+    }
+
+    public int componentCount() {
+        return components.size();
+    }
+
+    /** Index (0-based) of the component with this name, ignoring case, or −1. */
+    public int indexOf(String name) {
+        String n = name.trim();
+        for (int i = 0; i < components.size(); i++) {
+            if (components.get(i).name().equalsIgnoreCase(n)) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    /** The excess-volume expansion of components i and j, written in that order (internal units, cm³/mol). */
+    public RedlichKister excessVolume(int i, int j) {
+        if (i < j) {
+            return excessVolume[i][j];
+        }
+        return excessVolume[j][i].swapped();
+    }
+
+    public Validity validity() {
+        return validity;
+    }
+
+    public boolean extrapolationAllowed() {
+        return extrapolationAllowed;
+    }
+
+    /** Whether this evaluation may leave the validity range. */
+    boolean mayExtrapolate(Extrapolation e) {
+        return e == Extrapolation.ALLOW || (e == Extrapolation.AS_CARD && extrapolationAllowed);
+    }
+
+    /** The binary calculator; fails with a readable message when the card does not have exactly two components. */
+    public BinaryMixture binary() {
+        if (binary == null) {
+            throw Problem.NOT_BINARY.raise(components.size());
+        }
+        return binary;
+    }
+
+    /** Component names joined for messages. */
+    String componentNames() {
+        StringBuilder b = new StringBuilder();
+        for (Component c : components) {
+            if (b.length() > 0) {
+                b.append(", ");
+            }
+            b.append(c.name());
+        }
+        return b.toString();
+    }
+
+    @Override
+    public String toString() {
+        return String.format(Locale.ROOT, "Card[%s; %s]", title, componentNames());
+    }
+}

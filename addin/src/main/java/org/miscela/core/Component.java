@@ -1,0 +1,32 @@
+package org.miscela.core;
+
+/** A pure component of a mixture: its name, molar mass (g/mol) and density model. Immutable. */
+public final class Component {
+    private final String name;
+    private final double molarMass;
+    private final PureDensity density;
+
+    public Component(String name, double molarMassGramPerMol, PureDensity density) {
+        this.name = name;
+        this.molarMass = molarMassGramPerMol;
+        this.density = density;
+    }
+
+    public String name() {
+        return name;
+    }
+
+    /** g/mol. */
+    public double molarMass() {
+        return molarMass;
+    }
+
+    public PureDensity density() {
+        return density;
+    }
+
+    /** Molar volume of the pure liquid in cm³/mol: M / ρ with M in g/mol and ρ in kg/m³ (= g/L). */
+    public double molarVolume(double kelvin) {
+        return 1000.0 * molarMass / density.at(kelvin);
+    }
+}

@@ -1,0 +1,78 @@
+package org.miscela.core;
+
+import java.util.Locale;
+
+/**
+ * The catalogue of every message the library can produce. Each entry is one kind of problem with a message pattern
+ * ({@link String#format} style) that names what was wrong and how to fix it. Keeping them in one place lets the
+ * documentation list them all and lets tests prove each can occur.
+ */
+public enum Problem {
+    // --- the card as a whole
+    CARD_EMPTY("The card is empty: the range must hold a card whose first row is 'Miscela card | 1'."),
+    CARD_HEADER("Card row %d: a card starts with the row 'Miscela card | 1'; found \"%s\"."),
+    CARD_VERSION("Card row %d: card format version %s is not supported; this add-in reads version %d."),
+    UNKNOWN_LABEL("Card row %d: unknown label \"%s\"."),
+    DUPLICATE_ROW("Card row %d: \"%s\" is given twice (also in row %d)."),
+    MISSING_ROW("The card lacks the row \"%s\"."),
+    NO_LABEL("Card row %d holds values but no label in its first column."),
+    MISSING_VALUE("Card row %d (%s): column %d is empty; a value belongs there."),
+    NOT_A_NUMBER("Card row %d (%s): column %d holds the text \"%s\" where a number belongs."),
+    NOT_TEXT("Card row %d (%s): column %d must hold text; found %s."),
+    NOT_FINITE("Card row %d (%s): column %d is not a finite number."),
+    EXTRA_VALUE("Card row %d (%s): unexpected value in column %d (\"%s\")."),
+    UNKNOWN_UNIT("Card row %d (%s): unit \"%s\" is not recognised; use one of: %s."),
+    BAD_KEYWORD("Card row %d (%s): \"%s\" is not recognised; use one of: %s."),
+    UNKNOWN_COMPONENT("Card row %d (%s): \"%s\" is not declared by a 'component' row."),
+    BAD_PAIR("Card row %d (%s): \"%s\" must name two different components joined by '+', e.g. 'ethanol + water'."),
+    NOT_POSITIVE("Card row %d (%s): %s must be greater than zero; found %s."),
+    BAD_RANGE("Card row %d (%s): the lower limit %s must be below the upper limit %s."),
+    MOLE_FRACTION_LIMIT("Card row %d (%s): mole-fraction limits must lie within 0..1; found %s..%s."),
+    TOO_FEW_COMPONENTS("The card declares %d component(s); a mixture needs at least 2."),
+    MISSING_DENSITY("The card gives no 'density model' row for component \"%s\"."),
+    MODEL_VALUES("Card row %d (%s): the %s model takes %s; %s."),
+    MODEL_RANGE("Card row %d (%s): the %s model is valid from %s to %s K, but the card's 'valid temperature' range runs from %s to %s K."),
+    PAIR_ORDER("Card row %d (%s): the pair is written \"%s\" here but \"%s\" in row %d; write every row of a pair in the same order."),
+    DENSITY_NOT_POSITIVE("The density model of %s gives %s kg/m³ at %s K, inside the card's validity range."),
+    MISSING_PAIR("The card gives no excess volume for the pair %s + %s: add its 'excess volume A0' row (write 0 for an ideal pair)."),
+    MISSING_PAIR_ROW("The card gives '%s' rows for %s but no '%s' row."),
+    COEFFICIENT_GAP("The card gives 'excess volume A%d' for %s but not 'excess volume A%d'; coefficients must run from A0 without gaps (write 0 where needed)."),
+    NO_COMPOSITION_LIMIT("The card gives no 'valid mole fraction' row; state the composition range the coefficients were fitted over."),
+
+    // --- arguments of a call
+    NOT_BINARY("This function needs a card with exactly 2 components; the card has %d."),
+    ARG_BLANK("The %s is blank."),
+    ARG_NOT_NUMBER("The %s must be a number; found %s."),
+    ARG_NOT_FINITE("The %s must be a finite number."),
+    ARG_NOT_FLAG("The %s must be TRUE or FALSE (or left out); found %s."),
+    ARG_NOT_SINGLE("The %s must be a single value here, not a range."),
+    ARG_SHAPE("The %s range is %d×%d but the %s range is %d×%d; give ranges of the same shape, or a single value."),
+    MOLE_FRACTION_OUTSIDE_UNIT("The mole fraction %s lies outside 0..1."),
+    BELOW_ABSOLUTE_ZERO("The temperature %s %s is below absolute zero."),
+    UNKNOWN_COMPONENT_ARG("Component %s is not on the card; give a number from 1 to %d or one of the names: %s."),
+    OUTSIDE_TEMPERATURE("The temperature %s %s is outside the card's validity range %s to %s %s. Extrapolation is refused; to accept it, pass TRUE as 'extrapolate' or write 'extrapolation | allow' on the card."),
+    OUTSIDE_COMPOSITION("The mole fraction of %s, %s, is outside the card's validity range %s to %s. Extrapolation is refused; to accept it, pass TRUE as 'extrapolate' or write 'extrapolation | allow' on the card."),
+    CHECK_NEEDS_BOTH("To check a point, give both the mole fraction and the temperature."),
+    NON_PHYSICAL("At %s %s the card gives a %s of %s, which is not physical; the card is being used where its models do not hold.");
+
+    private final String pattern;
+
+    Problem(String pattern) {
+        this.pattern = pattern;
+    }
+
+    /** The message pattern, for documentation. */
+    public String pattern() {
+        return pattern;
+    }
+
+    /** The message with its blanks filled in; numbers are formatted by the caller. */
+    public String format(Object... args) {
+        return String.format(Locale.ROOT, pattern, args);
+    }
+
+    /** A {@link MiscelaException} carrying this problem. */
+    public MiscelaException raise(Object... args) {
+        return new MiscelaException(this, format(args));
+    }
+}
