@@ -439,8 +439,8 @@ class CardReaderTest {
                 .set(8, "valid temperature", 273.15, 313.15).read();
         PureDensity water = c.components().get(1).density();
         assertEquals("Tanaka 2001", water.modelName());
-        // M. Tanaka et al., Metrologia 38, 301 (2001), Table 1: 997.0470 kg/m³ at 25 °C, 998.2067 at 20 °C,
-        // 999.9750 at 4 °C (SMOW, air-free, 101.325 kPa).
+        // Values of the recommended table of M. Tanaka et al., Metrologia 38, 301 (2001), to 0.1 g/m³:
+        // 997.0470 kg/m³ at 25 °C, 998.2067 at 20 °C, 999.9750 at 4 °C (SMOW, air-free, 101.325 kPa).
         assertEquals(997.0470, water.at(298.15), 5e-4);
         assertEquals(998.2067, water.at(293.15), 5e-4);
         assertEquals(999.9750, water.at(277.15), 5e-4);
