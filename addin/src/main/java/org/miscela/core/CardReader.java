@@ -38,6 +38,8 @@ public final class CardReader {
     static final String VALID_MOLE_FRACTION = "valid mole fraction";
     static final String EXCESS_REFERENCE = "excess volume reference temperature";
     static final String EXCESS_PREFIX = "excess volume a";
+    /** Intervals the validity range is split into when checking a density model stays positive. */
+    private static final int DENSITY_SAMPLES = 256;
     private static final Pattern EXCESS_COEFFICIENT = Pattern.compile("excess volume a(\\d{1,2})");
 
     /** Rows whose values start in column 2. */
@@ -231,10 +233,14 @@ public final class CardReader {
                         Numbers.show(d.lowestKelvin()), Numbers.show(d.highestKelvin()), Numbers.show(lo),
                         Numbers.show(hi));
             }
-            for (double t : new double[] {lo, 0.5 * (lo + hi), hi}) {
+            // A polynomial can dip below zero between widely spaced points, so sample the range finely.
+            Row cause = coefficients != null ? coefficients : model;
+            for (int s = 0; s <= DENSITY_SAMPLES; s++) {
+                double t = s == DENSITY_SAMPLES ? hi : lo + (hi - lo) * s / DENSITY_SAMPLES;
                 double rho = d.at(t);
                 if (!(rho > 0) || Double.isInfinite(rho)) {
-                    throw Problem.DENSITY_NOT_POSITIVE.raise(name, Numbers.show(rho), Numbers.show(t));
+                    throw Problem.DENSITY_NOT_POSITIVE.raise(cause.number, cause.label, name, Numbers.show(rho),
+                            Numbers.show(t));
                 }
             }
             return d;
@@ -249,7 +255,8 @@ public final class CardReader {
                 throw Problem.BAD_RANGE.raise(t.number, t.label, Numbers.show(t.number(0)), Numbers.show(t.number(1)));
             }
             if (!(lo > 0)) {
-                throw Problem.BELOW_ABSOLUTE_ZERO.raise(Numbers.show(t.number(0)), units.temperature().symbol());
+                throw Problem.NOT_POSITIVE.raise(t.number, t.label, "the lower limit, in kelvin,",
+                        Numbers.show(lo) + " K");
             }
             double[] xLo = new double[names.size()];
             double[] xHi = new double[names.size()];
@@ -287,6 +294,15 @@ public final class CardReader {
             Map<Long, Row> referenceRow = new HashMap<>();
             Map<String, Row> seen = new HashMap<>();
             double factor = units.molarVolume().toCm3PerMol(1.0);
+            // The first row of a pair, in card order, fixes the order the pair is written in.
+            List<Row> pairRows = new ArrayList<>(excessReferenceRows);
+            for (List<Row> rs : excessRows.values()) {
+                pairRows.addAll(rs);
+            }
+            pairRows.sort((a, b) -> Integer.compare(a.number, b.number));
+            for (Row r : pairRows) {
+                orient(r, pair(r, names), orientation);
+            }
             for (Map.Entry<Integer, List<Row>> e : excessRows.entrySet()) {
                 int k = e.getKey();
                 for (Row r : e.getValue()) {
@@ -378,7 +394,7 @@ public final class CardReader {
             }
             String subject = r.text(0);
             String[] parts = subject.split("\\+", -1);
-            if (parts.length != 2) {
+            if (parts.length != 2 || isBlank(parts[0]) || isBlank(parts[1])) {
                 throw Problem.BAD_PAIR.raise(r.number, r.label, subject.trim());
             }
             int[] p = new int[2];

@@ -33,7 +33,7 @@ public enum Problem {
     MODEL_VALUES("Card row %d (%s): the %s model takes %s; %s."),
     MODEL_RANGE("Card row %d (%s): the %s model is valid from %s to %s K, but the card's 'valid temperature' range runs from %s to %s K."),
     PAIR_ORDER("Card row %d (%s): the pair is written \"%s\" here but \"%s\" in row %d; write every row of a pair in the same order."),
-    DENSITY_NOT_POSITIVE("The density model of %s gives %s kg/m³ at %s K, inside the card's validity range."),
+    DENSITY_NOT_POSITIVE("Card row %d (%s): the density model of %s gives %s kg/m³ at %s K, inside the card's validity range."),
     MISSING_PAIR("The card gives no excess volume for the pair %s + %s: add its 'excess volume A0' row (write 0 for an ideal pair)."),
     MISSING_PAIR_ROW("The card gives '%s' rows for %s but no '%s' row."),
     COEFFICIENT_GAP("The card gives 'excess volume A%d' for %s but not 'excess volume A%d'; coefficients must run from A0 without gaps (write 0 where needed)."),
