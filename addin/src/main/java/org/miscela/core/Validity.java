@@ -37,7 +37,14 @@ public final class Validity {
         return kelvin >= lowestKelvin && kelvin <= highestKelvin;
     }
 
+    /**
+     * Whether a mole fraction is inside the component's limits. A component's fraction is often computed as 1 − x1,
+     * which can miss a limit by an ulp (1 − 0.8 = 0.19999999999999996), so limits are widened by 1e-12.
+     */
     public boolean containsFraction(int component, double x) {
-        return x >= lowestFraction[component] && x <= highestFraction[component];
+        return x >= lowestFraction[component] - FRACTION_SLACK && x <= highestFraction[component] + FRACTION_SLACK;
     }
+
+    /** Far below any meaningful composition difference, far above rounding in 1 − x. */
+    static final double FRACTION_SLACK = 1e-12;
 }

@@ -13,7 +13,6 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.TimeUnit;
-import org.junit.jupiter.api.Disabled;
 import org.junit.jupiter.api.Test;
 
 /** The content-keyed card cache. Card values are invented. */
@@ -178,9 +177,6 @@ class CardCacheTest {
      * parseCount ≤ distinct cards + evictions (= 0 here).
      */
     @Test
-    @Disabled("Fails (17-18 parses for 6 contents in 3 runs): CardCache.get looks up and stores under the lock but "
-            + "parses outside it, so threads that miss the same content at once each parse it. CardCache.java is "
-            + "outside this branch's remit; enable once get() parses each content once, e.g. via a per-key future.")
     void concurrentColdGetsParseEachContentOnce() throws Exception {
         CardCache cache = new CardCache(16);
         hammer(cache);

@@ -131,6 +131,7 @@ class CardFormatDocTest {
         // "the functions refuse x1 above 0.9 unless extrapolation is allowed"
         assertEquals(CardFunctions.OK, CardFunctions.check(one, 0.0, T, Extrapolation.AS_CARD));
         assertEquals(CardFunctions.OK, CardFunctions.check(one, 0.89, T, Extrapolation.AS_CARD));
+        assertEquals(CardFunctions.OK, CardFunctions.check(one, 0.9, T, Extrapolation.AS_CARD), "limits are inclusive");
         assertTrue(CardFunctions.check(one, 0.95, T, Extrapolation.AS_CARD).contains("solvent Q"));
         assertEquals(CardFunctions.OK, CardFunctions.check(one, 0.95, T, Extrapolation.ALLOW));
         assertEquals(-1.62, one.excessVolume(0, 1).coefficientAt(0, T), 0.0);

@@ -71,7 +71,8 @@ public final class Office implements AutoCloseable {
         Path oxt = base.resolve("miscela.oxt");
         Files.copy(builtExtension(), oxt, StandardCopyOption.REPLACE_EXISTING);
         handOver(base);
-        run(base, 180, program().resolve("unopkg").toString(), "add", "--suppress-license",
+        // no --suppress-license and stdin from /dev/null: an install that asked anything would fail here
+        run(base, 180, program().resolve("unopkg").toString(), "add",
                 "-env:UserInstallation=" + profile.toUri(), oxt.toString());
         return launch(base, profile);
     }
