@@ -57,8 +57,8 @@ public final class ExampleWorkbookBuilder {
     private static final int CARD_COLUMNS = 5;
 
     /** Composition table on sheet Blend: header row and first data row (0-based), first column. */
-    private static final int TABLE_HEAD = 7;
-    private static final int TABLE_FIRST = 8;
+    private static final int TABLE_HEAD = 6;
+    private static final int TABLE_FIRST = 7;
     private static final int TABLE_ROWS = 21;
     private static final int TABLE_COL = 5; // column F
 
@@ -66,6 +66,9 @@ public final class ExampleWorkbookBuilder {
     private static final int CAUTION_COLOUR = 0xFFF2B3;
     private static final int HEAD_COLOUR = 0xDCE9E4;
     private static final int INPUT_COLOUR = 0xE8F0FB;
+
+    /** The number formats of the document being built. */
+    private static Formats formats;
 
     private ExampleWorkbookBuilder() {
     }
@@ -105,14 +108,14 @@ public final class ExampleWorkbookBuilder {
         }
         XSpreadsheet blend = sheet(sheets, "Blend");
         XSpreadsheet card = sheet(sheets, "Card");
-        Formats formats = new Formats(doc);
+        formats = new Formats(doc);
         int cardRows = writeCard(card, formats);
         XPropertySet dp = UnoRuntime.queryInterface(XPropertySet.class, doc);
         XNamedRanges ranges = UnoRuntime.queryInterface(XNamedRanges.class, dp.getPropertyValue("NamedRanges"));
         String area = "$Card.$A$" + (CARD_TOP + 1) + ":$" + (char) ('A' + CARD_COLUMNS - 1) + "$" + (CARD_TOP + cardRows);
         ranges.addNewByName("card", area, new CellAddress((short) 0, 0, 0), 0);
         writeBlend(blend, formats);
-        addChart(blend);
+        addCharts(blend);
         pageSetup(doc);
     }
 
@@ -126,9 +129,11 @@ public final class ExampleWorkbookBuilder {
                 + "design or trade.");
         band(s, "A2:G2", INVENTED_COLOUR);
         bold(s, "A2", 10);
+        wrapped(s, "A2:G2", 1);
         text(s, 0, 2, "The named range 'card' covers A" + (CARD_TOP + 1) + ":E" + (CARD_TOP + 21)
                 + ". Labels are in column A and values to their right; in keyed rows column B names the component "
                 + "or the pair. Rows whose label starts with # are comments. Column G explains each row.");
+        wrapped(s, "A3:G3", 2);
         String[] heads = {"label", "subject / value", "value", "value", "value", "", "what the row says"};
         for (int c = 0; c < heads.length; c++) {
             text(s, c, CARD_TOP - 1, heads[c]);
@@ -137,11 +142,11 @@ public final class ExampleWorkbookBuilder {
         bold(s, "A" + CARD_TOP + ":G" + CARD_TOP, 10);
         Object[][] rows = {
             {"Miscela card", 1.0, null, null, null, "card format version 1"},
-            {"# invented", "The density and excess volume coefficients below are invented for this example.", null, null, null,
-                "a comment row: the reader skips it"},
-            {"title", "Ethanol + water, Fernhollow blend sheet (invented coefficients)", null, null, null, ""},
-            {"source", "Invented for the Miscela example workbook coolant-blend.ods; not measured data.", null, null,
-                null, "where the coefficients came from"},
+            {"# invented", "coefficients below are invented", null, null, null,
+                "a comment row (label starts with #): the reader skips it"},
+            {"title", "Ethanol + water (invented coefficients)", null, null, null, ""},
+            {"source", "Invented for the Miscela example; not measured", null, null, null,
+                "where the coefficients came from: here, nowhere (they are invented)"},
             {"temperature unit", "°C", null, null, null, ""},
             {"density unit", "kg/m³", null, null, null, ""},
             {"molar volume unit", "cm³/mol", null, null, null, ""},
@@ -177,10 +182,11 @@ public final class ExampleWorkbookBuilder {
         int last = CARD_TOP + rows.length;
         band(s, "A" + (CARD_TOP + 1) + ":E" + last, INVENTED_COLOUR);
         prop(s, "G" + (CARD_TOP + 1) + ":G" + last, "CharPosture", com.sun.star.awt.FontSlant.ITALIC);
-        prop(s, "C" + (CARD_TOP + 1) + ":E" + last, "HoriJustify", com.sun.star.table.CellHoriJustify.RIGHT);
-        text(s, 0, last + 1, "Cells shaded like the card hold invented values. Change them only if you have "
-                + "coefficients of your own with a known source, and write that source in the 'source' row.");
-        widths(s, 62, 52, 22, 16, 12, 4, 80);
+        text(s, 0, last + 1, "The shaded card holds the invented density and excess volume coefficients (the molar "
+                + "masses are ordinary rounded values). Replace them only with coefficients of your own whose source "
+                + "you know, and write that source in the 'source' row.");
+        wrapped(s, "A" + (last + 2) + ":G" + (last + 2), last + 1);
+        widths(s, 74, 66, 22, 16, 12, 4, 92);
         return rows.length;
     }
 
@@ -213,57 +219,64 @@ public final class ExampleWorkbookBuilder {
         bold(s, "A3", 10);
 
         // inputs
-        text(s, 0, 5, "Inputs (change the blue cells)");
-        head(s, "A6:C6");
-        label(s, 6, "Ethanol mole fraction x1 (component 1)", "mol/mol");
-        s.getCellByPosition(1, 6).setValue(0.5);
-        label(s, 7, "Temperature", "°C");
-        s.getCellByPosition(1, 7).setValue(20.0);
-        band(s, "B7:B8", INPUT_COLOUR);
-        prop(s, "B7", "NumberFormat", f.key("0.000"));
-        prop(s, "B8", "NumberFormat", f.key("0.0"));
-        label(s, 8, "Card check (MIX.CHECK)", "");
-        s.getCellByPosition(1, 8).setFormula("=MIX.CHECK(card)");
-        label(s, 9, "Point check (MIX.CHECKPOINT)", "");
-        s.getCellByPosition(1, 9).setFormula("=MIX.CHECKPOINT(card;B7;B8)");
-        prop(s, "B9:B10", "HoriJustify", com.sun.star.table.CellHoriJustify.RIGHT);
+        text(s, 0, 6, "Inputs (change the blue cells)");
+        head(s, "A7:C7");
+        label(s, 7, "Ethanol mole fraction x1 (component 1)", "mol/mol");
+        s.getCellByPosition(1, 7).setValue(0.5);
+        label(s, 8, "Temperature", "°C");
+        s.getCellByPosition(1, 8).setValue(20.0);
+        band(s, "B8:B9", INPUT_COLOUR);
+        prop(s, "B8", "NumberFormat", f.key("0.000"));
+        prop(s, "B9", "NumberFormat", f.key("0.0"));
+        label(s, 9, "Card check (MIX.CHECK)", "");
+        s.getCellByPosition(1, 9).setFormula("=MIX.CHECK(card)");
+        label(s, 10, "Point check (MIX.CHECKPOINT)", "");
+        s.getCellByPosition(1, 10).setFormula("=MIX.CHECKPOINT(card;B8;B9)");
+        prop(s, "B10:B11", "HoriJustify", com.sun.star.table.CellHoriJustify.RIGHT);
 
         // results at the input point
-        text(s, 0, 11, "Results at the input point");
-        head(s, "A12:C12");
+        text(s, 0, 12, "Results at the input point");
+        head(s, "A13:C13");
         String[][] results = {
-            {"Excess molar volume Vᴱ (MIX.EXCESSVOLUME)", "=MIX.EXCESSVOLUME(card;B7;B8)", "cm³/mol", "0.0000"},
-            {"Partial molar volume of ethanol (MIX.PARTIALVOLUME)", "=MIX.PARTIALVOLUME(card;1;B7;B8)", "cm³/mol",
+            {"Excess molar volume Vᴱ (MIX.EXCESSVOLUME)", "=MIX.EXCESSVOLUME(card;B8;B9)", "cm³/mol", "0.0000"},
+            {"Partial molar volume of ethanol (MIX.PARTIALVOLUME)", "=MIX.PARTIALVOLUME(card;1;B8;B9)", "cm³/mol",
                 "0.000"},
-            {"Partial molar volume of water (MIX.PARTIALVOLUME)", "=MIX.PARTIALVOLUME(card;\"water\";B7;B8)",
+            {"Partial molar volume of water (MIX.PARTIALVOLUME)", "=MIX.PARTIALVOLUME(card;\"water\";B8;B9)",
                 "cm³/mol", "0.000"},
-            {"Partial excess volume of ethanol (MIX.PARTIALEXCESS)", "=MIX.PARTIALEXCESS(card;1;B7;B8)", "cm³/mol",
+            {"Partial excess volume of ethanol (MIX.PARTIALEXCESS)", "=MIX.PARTIALEXCESS(card;1;B8;B9)", "cm³/mol",
                 "0.0000"},
-            {"Partial excess volume of water (MIX.PARTIALEXCESS)", "=MIX.PARTIALEXCESS(card;2;B7;B8)", "cm³/mol",
+            {"Partial excess volume of water (MIX.PARTIALEXCESS)", "=MIX.PARTIALEXCESS(card;2;B8;B9)", "cm³/mol",
                 "0.0000"},
-            {"Molar volume of the blend (MIX.MOLARVOLUME)", "=MIX.MOLARVOLUME(card;B7;B8)", "cm³/mol", "0.000"},
-            {"Density of the blend (MIX.DENSITY)", "=MIX.DENSITY(card;B7;B8)", "kg/m³", "0.00"},
-            {"Density of pure ethanol (MIX.PUREDENSITY)", "=MIX.PUREDENSITY(card;\"ethanol\";B8)", "kg/m³", "0.00"},
-            {"Density of pure water (MIX.PUREDENSITY)", "=MIX.PUREDENSITY(card;2;B8)", "kg/m³", "0.00"},
+            {"Molar volume of the blend (MIX.MOLARVOLUME)", "=MIX.MOLARVOLUME(card;B8;B9)", "cm³/mol", "0.000"},
+            {"Density of the blend (MIX.DENSITY)", "=MIX.DENSITY(card;B8;B9)", "kg/m³", "0.00"},
+            {"Density of pure ethanol (MIX.PUREDENSITY)", "=MIX.PUREDENSITY(card;\"ethanol\";B9)", "kg/m³", "0.00"},
+            {"Density of pure water (MIX.PUREDENSITY)", "=MIX.PUREDENSITY(card;2;B9)", "kg/m³", "0.00"},
             {"Ethanol mass fraction w1 (from the card's molar masses)",
-                "=B7*$Card.C16/(B7*$Card.C16+(1-B7)*$Card.C17)", "kg/kg", "0.0000"},
+                "=B8*$Card.C16/(B8*$Card.C16+(1-B8)*$Card.C17)", "kg/kg", "0.0000"},
             {"Volume change on mixing, Vᴱ / ideal volume",
-                "=B13/(B18-B13)", "—", "0.00%"},
+                "=B14/(B19-B14)", "—", "0.00%"},
         };
         for (int i = 0; i < results.length; i++) {
-            int row = 12 + i;
+            int row = 13 + i;
             label(s, row, results[i][0], results[i][2]);
             s.getCellByPosition(1, row).setFormula(results[i][1]);
             prop(s, "B" + (row + 1), "NumberFormat", f.key(results[i][3]));
         }
-        text(s, 0, 12 + results.length + 1, "A cell showing Err:502 means the add-in refused: the point check "
-                + "above says why (for example a temperature outside 5..35 °C).");
-        prop(s, "A" + (12 + results.length + 2), "CharPosture", com.sun.star.awt.FontSlant.ITALIC);
+        int noteRow = 13 + results.length + 1;
+        text(s, 0, noteRow, "A cell showing Err:502 means the add-in refused: the point check above says why "
+                + "(for example a temperature outside 5..35 °C).");
+        String note = "A" + (noteRow + 1) + ":C" + (noteRow + 2);
+        UnoRuntime.queryInterface(XMergeable.class, s.getCellRangeByName(note)).merge(true);
+        prop(s, note, "IsTextWrapped", Boolean.TRUE);
+        prop(s, note, "VertJustify", com.sun.star.table.CellVertJustify.TOP);
+        prop(s, note, "CharPosture", com.sun.star.awt.FontSlant.ITALIC);
+        // a little room between the numbers and their units
+        prop(s, "C8:C" + (12 + results.length), "ParaLeftMargin", 150);
 
         // composition table (array formulas over the x1 column)
-        text(s, TABLE_COL, TABLE_HEAD - 2, "Across the composition range at the input temperature (array formulas)");
-        bold(s, col(TABLE_COL) + (TABLE_HEAD - 1), 10);
-        String[] heads = {"x1 ethanol\nmol/mol", "Vᴱ\ncm³/mol", "V̄ ethanol\ncm³/mol", "V̄ water\ncm³/mol",
+        text(s, TABLE_COL, TABLE_HEAD - 1, "Across the composition range at the input temperature (array formulas)");
+        bold(s, col(TABLE_COL) + TABLE_HEAD, 10);
+        String[] heads = {"x1 ethanol\nmol/mol", "V̄ ethanol\ncm³/mol", "V̄ water\ncm³/mol", "Vᴱ\ncm³/mol",
             "V̄ᴱ ethanol\ncm³/mol", "V̄ᴱ water\ncm³/mol", "Vm blend\ncm³/mol", "ρ blend\nkg/m³", "w1 ethanol\nkg/kg"};
         for (int c = 0; c < heads.length; c++) {
             text(s, TABLE_COL + c, TABLE_HEAD, heads[c]);
@@ -278,16 +291,16 @@ public final class ExampleWorkbookBuilder {
         }
         String x = column(TABLE_COL);
         String[] arrays = {
-            "=MIX.EXCESSVOLUME(card;" + x + ";$B$8)",
-            "=MIX.PARTIALVOLUME(card;1;" + x + ";$B$8)",
-            "=MIX.PARTIALVOLUME(card;2;" + x + ";$B$8)",
-            "=MIX.PARTIALEXCESS(card;1;" + x + ";$B$8)",
-            "=MIX.PARTIALEXCESS(card;2;" + x + ";$B$8)",
-            "=MIX.MOLARVOLUME(card;" + x + ";$B$8)",
-            "=MIX.DENSITY(card;" + x + ";$B$8)",
+            "=MIX.PARTIALVOLUME(card;1;" + x + ";$B$9)",
+            "=MIX.PARTIALVOLUME(card;2;" + x + ";$B$9)",
+            "=MIX.EXCESSVOLUME(card;" + x + ";$B$9)",
+            "=MIX.PARTIALEXCESS(card;1;" + x + ";$B$9)",
+            "=MIX.PARTIALEXCESS(card;2;" + x + ";$B$9)",
+            "=MIX.MOLARVOLUME(card;" + x + ";$B$9)",
+            "=MIX.DENSITY(card;" + x + ";$B$9)",
             "=" + x + "*$Card.$C$16/(" + x + "*$Card.$C$16+(1-" + x + ")*$Card.$C$17)",
         };
-        String[] numberFormats = {"0.0000", "0.000", "0.000", "0.0000", "0.0000", "0.000", "0.00", "0.0000"};
+        String[] numberFormats = {"0.000", "0.000", "0.0000", "0.0000", "0.0000", "0.000", "0.00", "0.0000"};
         for (int c = 0; c < arrays.length; c++) {
             XCellRange r = s.getCellRangeByName(column(TABLE_COL + 1 + c));
             UnoRuntime.queryInterface(XArrayFormulaRange.class, r).setArrayFormula(arrays[c]);
@@ -306,19 +319,43 @@ public final class ExampleWorkbookBuilder {
         }
         UnoRuntime.queryInterface(XPropertySet.class, rowsAccess.getByIndex(TABLE_HEAD))
                 .setPropertyValue("Height", 900);
-        widths(s, 92, 26, 17, 4, 4, 19, 19, 20, 19, 21, 20, 20, 19, 19);
+        widths(s, 100, 24, 19, 3, 3, 19, 20, 19, 18, 21, 19, 20, 18, 19);
     }
 
-    private static void addChart(XSpreadsheet s) throws Exception {
+    /** Two XY charts under the tables: the partial molar volumes, and the excess volumes. */
+    private static void addCharts(XSpreadsheet s) throws Exception {
+        int last = TABLE_FIRST + TABLE_ROWS - 1;
+        CellRangeAddress x = new CellRangeAddress((short) 0, TABLE_COL, TABLE_HEAD, TABLE_COL, last);
+        CellRangeAddress partial = new CellRangeAddress((short) 0, TABLE_COL, TABLE_HEAD, TABLE_COL + 2, last);
+        CellRangeAddress excess = new CellRangeAddress((short) 0, TABLE_COL + 3, TABLE_HEAD, TABLE_COL + 5, last);
+        int top = TABLE_FIRST + TABLE_ROWS + 2;
+        XDiagram a = chart(s, "partial-volumes", new CellRangeAddress[] {partial}, 0, top, 14000,
+                "Partial molar volumes (invented coefficients)", "V̄ ethanol, cm³/mol", "0.0");
+        XPropertySet ap = UnoRuntime.queryInterface(XPropertySet.class, a);
+        // water (the second series) on the right-hand axis, so that both curves show their shape
+        ap.setPropertyValue("HasSecondaryYAxis", Boolean.TRUE);
+        ap.setPropertyValue("HasSecondaryYAxisTitle", Boolean.TRUE);
+        UnoRuntime.queryInterface(XPropertySet.class, UnoRuntime.queryInterface(
+                com.sun.star.chart.XSecondAxisTitleSupplier.class, a).getSecondYAxisTitle())
+                .setPropertyValue("String", "V̄ water, cm³/mol");
+        // in this API an XY chart's data row 0 is the x column, so the water series is row 2
+        a.getDataRowProperties(2).setPropertyValue("Axis", ChartAxisAssign.SECONDARY_Y);
+        XPropertySet y2 = UnoRuntime.queryInterface(com.sun.star.chart.XTwoAxisYSupplier.class, a)
+                .getSecondaryYAxis();
+        y2.setPropertyValue("LinkNumberFormatToSource", Boolean.FALSE);
+        y2.setPropertyValue("NumberFormat", numberFormat(s, "0.0"));
+        chart(s, "excess-volumes", new CellRangeAddress[] {x, excess}, TABLE_COL, top, 17400,
+                "Excess volumes (invented coefficients)", "cm³/mol", "0.0");
+    }
+
+    /** One XY line chart anchored at a cell; returns its diagram. */
+    private static XDiagram chart(XSpreadsheet s, String name, CellRangeAddress[] ranges, int column, int row, int width,
+            String title, String yTitle, String yFormat) throws Exception {
         XTableCharts charts = UnoRuntime.queryInterface(XTableChartsSupplier.class, s).getCharts();
-        CellRangeAddress data = new CellRangeAddress((short) 0, TABLE_COL, TABLE_HEAD, TABLE_COL + 3,
-                TABLE_FIRST + TABLE_ROWS - 1);
-        // below the results block, left of nothing: rows 27.. (positions in 1/100 mm, measured from the sheet corner)
-        XPropertySet anchor = UnoRuntime.queryInterface(XPropertySet.class, s.getCellByPosition(0, 26));
+        XPropertySet anchor = UnoRuntime.queryInterface(XPropertySet.class, s.getCellByPosition(column, row));
         com.sun.star.awt.Point p = (com.sun.star.awt.Point) anchor.getPropertyValue("Position");
-        Rectangle rect = new Rectangle(p.X, p.Y, 13200, 8200);
-        charts.addNewByName("composition", rect, new CellRangeAddress[] {data}, true, false);
-        Object chart = UnoRuntime.queryInterface(XNameAccess.class, charts).getByName("composition");
+        charts.addNewByName(name, new Rectangle(p.X, p.Y, width, 8000), ranges, true, false);
+        Object chart = UnoRuntime.queryInterface(XNameAccess.class, charts).getByName(name);
         XChartDocument cd = UnoRuntime.queryInterface(XChartDocument.class,
                 UnoRuntime.queryInterface(XEmbeddedObjectSupplier.class, chart).getEmbeddedObject());
         XDiagram d = UnoRuntime.queryInterface(XDiagram.class, UnoRuntime.queryInterface(
@@ -326,8 +363,9 @@ public final class ExampleWorkbookBuilder {
         cd.setDiagram(d);
         XPropertySet cp = UnoRuntime.queryInterface(XPropertySet.class, cd);
         cp.setPropertyValue("HasMainTitle", Boolean.TRUE);
-        UnoRuntime.queryInterface(XPropertySet.class, cd.getTitle()).setPropertyValue("String",
-                "Ethanol + water at the input temperature (invented coefficients)");
+        XPropertySet tp = UnoRuntime.queryInterface(XPropertySet.class, cd.getTitle());
+        tp.setPropertyValue("String", title);
+        tp.setPropertyValue("CharHeight", 11f);
         cp.setPropertyValue("HasLegend", Boolean.TRUE);
         UnoRuntime.queryInterface(XPropertySet.class, cd.getLegend()).setPropertyValue("Alignment",
                 ChartLegendPosition.BOTTOM);
@@ -336,8 +374,6 @@ public final class ExampleWorkbookBuilder {
         dp.setPropertyValue("SymbolType", ChartSymbolType.NONE);
         dp.setPropertyValue("HasXAxisTitle", Boolean.TRUE);
         dp.setPropertyValue("HasYAxisTitle", Boolean.TRUE);
-        dp.setPropertyValue("HasSecondaryYAxis", Boolean.TRUE);
-        dp.setPropertyValue("HasSecondaryYAxisTitle", Boolean.TRUE);
         XAxisXSupplier xs = UnoRuntime.queryInterface(XAxisXSupplier.class, d);
         UnoRuntime.queryInterface(XPropertySet.class, xs.getXAxisTitle()).setPropertyValue("String",
                 "ethanol mole fraction x1");
@@ -347,15 +383,29 @@ public final class ExampleWorkbookBuilder {
         xAxis.setPropertyValue("AutoStepMain", Boolean.FALSE);
         xAxis.setPropertyValue("Min", 0.0);
         xAxis.setPropertyValue("Max", 1.0);
-        xAxis.setPropertyValue("StepMain", 0.1);
-        UnoRuntime.queryInterface(XPropertySet.class, UnoRuntime.queryInterface(XAxisYSupplier.class, d)
-                .getYAxisTitle()).setPropertyValue("String", "partial molar volume, cm³/mol");
-        UnoRuntime.queryInterface(XPropertySet.class, UnoRuntime.queryInterface(
-                com.sun.star.chart.XSecondAxisTitleSupplier.class, d)
-                .getSecondYAxisTitle()).setPropertyValue("String", "excess molar volume Vᴱ, cm³/mol");
-        // series 0 is Vᴱ (the first column after x1): put it on the right-hand axis
-        d.getDataRowProperties(0).setPropertyValue("Axis", ChartAxisAssign.SECONDARY_Y);
-        d.getDataRowProperties(0).setPropertyValue("LineWidth", 60);
+        xAxis.setPropertyValue("StepMain", 0.2);
+        xAxis.setPropertyValue("LinkNumberFormatToSource", Boolean.FALSE);
+        xAxis.setPropertyValue("NumberFormat", numberFormat(s, "0.0"));
+        // keep the composition axis at the foot of the plot even when the values are negative
+        xAxis.setPropertyValue("CrossoverPosition", com.sun.star.chart.ChartAxisPosition.START);
+        XAxisYSupplier ys = UnoRuntime.queryInterface(XAxisYSupplier.class, d);
+        UnoRuntime.queryInterface(XPropertySet.class, ys.getYAxisTitle()).setPropertyValue("String", yTitle);
+        XPropertySet yAxis = ys.getYAxis();
+        yAxis.setPropertyValue("LinkNumberFormatToSource", Boolean.FALSE);
+        yAxis.setPropertyValue("NumberFormat", numberFormat(s, yFormat));
+        for (int i = 0; i < 3; i++) {
+            try {
+                d.getDataRowProperties(i).setPropertyValue("LineWidth", 50);
+            } catch (com.sun.star.lang.IndexOutOfBoundsException e) {
+                break;
+            }
+        }
+        return d;
+    }
+
+    /** The chart's axis formats are keys of the spreadsheet's own number formats. */
+    private static int numberFormat(XSpreadsheet s, String code) throws Exception {
+        return formats.key(code);
     }
 
     private static void pageSetup(XComponent doc) throws Exception {
@@ -393,6 +443,15 @@ public final class ExampleWorkbookBuilder {
         if (!unit.isEmpty()) {
             text(s, 2, r, unit);
         }
+    }
+
+    /** Merges a one-row range, wraps its text and gives the row room for two lines. */
+    private static void wrapped(XSpreadsheet s, String range, int row) throws Exception {
+        UnoRuntime.queryInterface(XMergeable.class, s.getCellRangeByName(range)).merge(true);
+        prop(s, range, "IsTextWrapped", Boolean.TRUE);
+        XIndexAccess rows = UnoRuntime.queryInterface(XIndexAccess.class,
+                UnoRuntime.queryInterface(XColumnRowRange.class, s).getRows());
+        UnoRuntime.queryInterface(XPropertySet.class, rows.getByIndex(row)).setPropertyValue("Height", 900);
     }
 
     private static void head(XSpreadsheet s, String range) throws Exception {
