@@ -29,11 +29,14 @@ import org.miscela.it.Office;
 /**
  * The examples' main job: installs the built extension into a fresh private office profile, opens every
  * examples/*.ods, recalculates it, and writes a PDF of each workbook and a CSV of each of its sheets into the output
- * folder (first argument; default out/examples under the repository root). It then checks that no formula cell
- * shows an error and that every MIX.CHECK / MIX.CHECKPOINT cell says OK, and exits non-zero when one does not.
+ * folder (first argument, else system property miscela.examples.out, else out/examples under the repository
+ * root). It then checks that no formula cell shows an error and that every MIX.CHECK / MIX.CHECKPOINT cell says OK,
+ * and exits non-zero when one does not.
  *
  * <p>Run: {@code mvn -q -B test-compile exec:java -pl addin -Dexec.classpathScope=test
- * -Dexec.mainClass=org.miscela.examples.ExampleRunner -Dmiscela.oxt=$PWD/addin/target/miscela.oxt}
+ * -Dexec.mainClass=org.miscela.examples.ExampleRunner -Dmiscela.oxt=$PWD/addin/target/miscela.oxt}. To choose the
+ * folder use {@code -Dmiscela.examples.out=DIR}: {@code -Dexec.args} would also reach the build's own exec execution
+ * (the wizard metadata writer) when a lifecycle phase such as test-compile runs in the same command.
  */
 public final class ExampleRunner {
     /**
@@ -42,12 +45,16 @@ public final class ExampleRunner {
      */
     static final String CSV_OPTIONS = "44,34,76,1,,0,false,true,true,false,false,";
 
+    /** Error cells listed per sheet before the rest are only counted. */
+    private static final int SHOWN = 12;
+
     private ExampleRunner() {
     }
 
     public static void main(String[] args) throws Exception {
         Path root = ExampleWorkbookBuilder.repoRoot();
-        Path out = args.length > 0 ? Paths.get(args[0]).toAbsolutePath() : root.resolve("out").resolve("examples");
+        String chosen = args.length > 0 ? args[0] : System.getProperty("miscela.examples.out");
+        Path out = chosen != null ? Paths.get(chosen).toAbsolutePath() : root.resolve("out").resolve("examples");
         List<Path> workbooks = new ArrayList<>();
         try (DirectoryStream<Path> ds = Files.newDirectoryStream(root.resolve("examples"), "*.ods")) {
             ds.forEach(workbooks::add);
@@ -129,16 +136,31 @@ public final class ExampleRunner {
                 String shown = UnoRuntime.queryInterface(XText.class, c).getString();
                 if (!"OK".equals(shown)) {
                     notOk++;
-                    System.err.println(book + " / " + name + ": " + c.getFormula() + " says: " + shown);
+                    System.err.println(book + " / " + name + ": " + address(c) + " says: " + shown);
                 }
             }
         }
-        for (XCell c : errors) {
-            System.err.println(book + " / " + name + ": error " + c.getError() + " in " + c.getFormula());
+        for (int i = 0; i < errors.size() && i < SHOWN; i++) {
+            XCell c = errors.get(i);
+            System.err.println(book + " / " + name + ": " + address(c) + " shows error " + c.getError() + " ("
+                    + c.getFormula() + ")");
+        }
+        if (errors.size() > SHOWN) {
+            System.err.println(book + " / " + name + ": ... and " + (errors.size() - SHOWN) + " more error cells");
         }
         System.out.println(book + " / " + name + ": " + formulas.size() + " formula cells, " + errors.size()
                 + " with an error, " + checks + " check cells, " + notOk + " not OK");
         return errors.size() + notOk;
+    }
+
+    private static String address(XCell c) {
+        com.sun.star.table.CellAddress a = UnoRuntime.queryInterface(com.sun.star.sheet.XCellAddressable.class, c)
+                .getCellAddress();
+        String col = "";
+        for (int n = a.Column + 1; n > 0; n = (n - 1) / 26) {
+            col = (char) ('A' + (n - 1) % 26) + col;
+        }
+        return col + (a.Row + 1);
     }
 
     private static List<XCell> cells(XSheetCellRanges ranges) throws Exception {
