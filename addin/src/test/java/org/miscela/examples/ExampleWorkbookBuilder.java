@@ -109,10 +109,11 @@ public final class ExampleWorkbookBuilder {
         XSpreadsheet blend = sheet(sheets, "Blend");
         XSpreadsheet card = sheet(sheets, "Card");
         formats = new Formats(doc);
-        int cardRows = writeCard(card, formats);
+        int cardRows = writeCard(card);
         XPropertySet dp = UnoRuntime.queryInterface(XPropertySet.class, doc);
         XNamedRanges ranges = UnoRuntime.queryInterface(XNamedRanges.class, dp.getPropertyValue("NamedRanges"));
-        String area = "$Card.$A$" + (CARD_TOP + 1) + ":$" + (char) ('A' + CARD_COLUMNS - 1) + "$" + (CARD_TOP + cardRows);
+        String area = "$Card.$A$" + (CARD_TOP + 1) + ":$" + (char) ('A' + CARD_COLUMNS - 1) + "$"
+                + (CARD_TOP + cardRows);
         ranges.addNewByName("card", area, new CellAddress((short) 0, 0, 0), 0);
         writeBlend(blend, formats);
         addCharts(blend);
@@ -121,7 +122,7 @@ public final class ExampleWorkbookBuilder {
 
     // --- sheet Card
 
-    private static int writeCard(XSpreadsheet s, Formats f) throws Exception {
+    private static int writeCard(XSpreadsheet s) throws Exception {
         text(s, 0, 0, "Miscela card: ethanol + water for the Fernhollow Fluids Ltd example (invented company)");
         bold(s, "A1", 13);
         text(s, 0, 1, "INVENTED VALUES. Every coefficient on this card was made up to show how the add-in works. "
@@ -277,7 +278,8 @@ public final class ExampleWorkbookBuilder {
         text(s, TABLE_COL, TABLE_HEAD - 1, "Across the composition range at the input temperature (array formulas)");
         bold(s, col(TABLE_COL) + TABLE_HEAD, 10);
         String[] heads = {"x1 ethanol\nmol/mol", "V̄ ethanol\ncm³/mol", "V̄ water\ncm³/mol", "Vᴱ\ncm³/mol",
-            "V̄ᴱ ethanol\ncm³/mol", "V̄ᴱ water\ncm³/mol", "Vm blend\ncm³/mol", "ρ blend\nkg/m³", "w1 ethanol\nkg/kg"};
+            "V̄ᴱ ethanol\ncm³/mol", "V̄ᴱ water\ncm³/mol", "Vm blend\ncm³/mol", "ρ blend\nkg/m³",
+            "w1 ethanol\nkg/kg"};
         for (int c = 0; c < heads.length; c++) {
             text(s, TABLE_COL + c, TABLE_HEAD, heads[c]);
         }
@@ -349,8 +351,8 @@ public final class ExampleWorkbookBuilder {
     }
 
     /** One XY line chart anchored at a cell; returns its diagram. */
-    private static XDiagram chart(XSpreadsheet s, String name, CellRangeAddress[] ranges, int column, int row, int width,
-            String title, String yTitle, String yFormat) throws Exception {
+    private static XDiagram chart(XSpreadsheet s, String name, CellRangeAddress[] ranges, int column, int row,
+            int width, String title, String yTitle, String yFormat) throws Exception {
         XTableCharts charts = UnoRuntime.queryInterface(XTableChartsSupplier.class, s).getCharts();
         XPropertySet anchor = UnoRuntime.queryInterface(XPropertySet.class, s.getCellByPosition(column, row));
         com.sun.star.awt.Point p = (com.sun.star.awt.Point) anchor.getPropertyValue("Position");
