@@ -1,0 +1,531 @@
+package org.miscela.examples;
+
+import com.sun.star.awt.Rectangle;
+import com.sun.star.beans.PropertyValue;
+import com.sun.star.beans.XPropertySet;
+import com.sun.star.chart.ChartAxisAssign;
+import com.sun.star.chart.ChartLegendPosition;
+import com.sun.star.chart.ChartSymbolType;
+import com.sun.star.chart.XAxisXSupplier;
+import com.sun.star.chart.XAxisYSupplier;
+import com.sun.star.chart.XChartDocument;
+import com.sun.star.chart.XDiagram;
+import com.sun.star.container.XIndexAccess;
+import com.sun.star.container.XNameAccess;
+import com.sun.star.document.XEmbeddedObjectSupplier;
+import com.sun.star.frame.XStorable;
+import com.sun.star.lang.Locale;
+import com.sun.star.lang.XComponent;
+import com.sun.star.sheet.XArrayFormulaRange;
+import com.sun.star.sheet.XCalculatable;
+import com.sun.star.sheet.XNamedRanges;
+import com.sun.star.sheet.XSpreadsheet;
+import com.sun.star.sheet.XSpreadsheetDocument;
+import com.sun.star.sheet.XSpreadsheets;
+import com.sun.star.style.XStyleFamiliesSupplier;
+import com.sun.star.table.CellAddress;
+import com.sun.star.table.CellRangeAddress;
+import com.sun.star.table.XCell;
+import com.sun.star.table.XCellRange;
+import com.sun.star.table.XColumnRowRange;
+import com.sun.star.table.XTableChartsSupplier;
+import com.sun.star.table.XTableCharts;
+import com.sun.star.text.XText;
+import com.sun.star.uno.UnoRuntime;
+import com.sun.star.util.XMergeable;
+import com.sun.star.util.XNumberFormats;
+import com.sun.star.util.XNumberFormatsSupplier;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.Paths;
+import java.nio.file.StandardCopyOption;
+import org.miscela.it.Office;
+
+/**
+ * Builds the example workbook examples/coolant-blend.ods from nothing, through a real office with the built
+ * extension installed. The scenario (Fernhollow Fluids Ltd) and every coefficient on its card are invented.
+ *
+ * <p>Run: {@code mvn -q -B test-compile exec:java -pl addin -Dexec.classpathScope=test
+ * -Dexec.mainClass=org.miscela.examples.ExampleWorkbookBuilder -Dmiscela.oxt=$PWD/addin/target/miscela.oxt}
+ * (optional argument: the output file).
+ */
+public final class ExampleWorkbookBuilder {
+    static final String FILE = "coolant-blend.ods";
+
+    /** The card's first row on sheet Card (0-based) and its size. */
+    private static final int CARD_TOP = 5;
+    private static final int CARD_COLUMNS = 5;
+
+    /** Composition table on sheet Blend: header row and first data row (0-based), first column. */
+    private static final int TABLE_HEAD = 6;
+    private static final int TABLE_FIRST = 7;
+    private static final int TABLE_ROWS = 21;
+    private static final int TABLE_COL = 5; // column F
+
+    private static final int INVENTED_COLOUR = 0xFCE4D6;
+    private static final int CAUTION_COLOUR = 0xFFF2B3;
+    private static final int HEAD_COLOUR = 0xDCE9E4;
+    private static final int INPUT_COLOUR = 0xE8F0FB;
+
+    /** The number formats of the document being built. */
+    private static Formats formats;
+
+    private ExampleWorkbookBuilder() {
+    }
+
+    public static void main(String[] args) throws Exception {
+        Path target = args.length > 0 ? Paths.get(args[0]).toAbsolutePath()
+                : repoRoot().resolve("examples").resolve(FILE);
+        Office office = Office.start();
+        try {
+            XComponent doc = office.newSpreadsheet();
+            build(doc);
+            UnoRuntime.queryInterface(XCalculatable.class, doc).calculateAll();
+            Path scratch = office.scratch(FILE);
+            UnoRuntime.queryInterface(XStorable.class, doc).storeToURL(scratch.toUri().toString(),
+                    new PropertyValue[] {property("FilterName", "calc8")});
+            doc.dispose();
+            Files.createDirectories(target.getParent());
+            Files.copy(scratch, target, StandardCopyOption.REPLACE_EXISTING);
+            System.out.println("wrote " + target);
+        } finally {
+            office.dispose();
+        }
+    }
+
+    static void build(XComponent doc) throws Exception {
+        XSpreadsheetDocument sd = UnoRuntime.queryInterface(XSpreadsheetDocument.class, doc);
+        XSpreadsheets sheets = sd.getSheets();
+        XIndexAccess index = UnoRuntime.queryInterface(XIndexAccess.class, sheets);
+        // a new document has one sheet; rename it Blend and add Card after it
+        com.sun.star.container.XNamed named = UnoRuntime.queryInterface(com.sun.star.container.XNamed.class,
+                index.getByIndex(0));
+        named.setName("Blend");
+        sheets.insertNewByName("Card", (short) 1);
+        while (index.getCount() > 2) {
+            sheets.removeByName(UnoRuntime.queryInterface(com.sun.star.container.XNamed.class,
+                    index.getByIndex(2)).getName());
+        }
+        XSpreadsheet blend = sheet(sheets, "Blend");
+        XSpreadsheet card = sheet(sheets, "Card");
+        formats = new Formats(doc);
+        int cardRows = writeCard(card);
+        XPropertySet dp = UnoRuntime.queryInterface(XPropertySet.class, doc);
+        XNamedRanges ranges = UnoRuntime.queryInterface(XNamedRanges.class, dp.getPropertyValue("NamedRanges"));
+        String area = "$Card.$A$" + (CARD_TOP + 1) + ":$" + (char) ('A' + CARD_COLUMNS - 1) + "$"
+                + (CARD_TOP + cardRows);
+        ranges.addNewByName("card", area, new CellAddress((short) 0, 0, 0), 0);
+        writeBlend(blend, formats);
+        addCharts(blend);
+        pageSetup(doc);
+    }
+
+    // --- sheet Card
+
+    private static int writeCard(XSpreadsheet s) throws Exception {
+        text(s, 0, 0, "Miscela card: ethanol + water for the Fernhollow Fluids Ltd example (invented company)");
+        bold(s, "A1", 13);
+        text(s, 0, 1, "INVENTED VALUES. Every coefficient on this card was made up to show how the add-in works. "
+                + "They are not measurements and come from no publication: do not use them for real blending, "
+                + "design or trade.");
+        band(s, "A2:G2", INVENTED_COLOUR);
+        bold(s, "A2", 10);
+        wrapped(s, "A2:G2", 1);
+        text(s, 0, 2, "The named range 'card' covers A" + (CARD_TOP + 1) + ":E" + (CARD_TOP + 21)
+                + ". Labels are in column A and values to their right; in keyed rows column B names the component "
+                + "or the pair. Rows whose label starts with # are comments. Column G explains each row.");
+        wrapped(s, "A3:G3", 2);
+        String[] heads = {"label", "subject / value", "value", "value", "value", "", "what the row says"};
+        for (int c = 0; c < heads.length; c++) {
+            text(s, c, CARD_TOP - 1, heads[c]);
+        }
+        band(s, "A" + CARD_TOP + ":G" + CARD_TOP, HEAD_COLOUR);
+        bold(s, "A" + CARD_TOP + ":G" + CARD_TOP, 10);
+        Object[][] rows = {
+            {"Miscela card", 1.0, null, null, null, "card format version 1"},
+            {"# invented", "coefficients below are invented", null, null, null,
+                "a comment row (label starts with #): the reader skips it"},
+            {"title", "Ethanol + water (invented coefficients)", null, null, null, ""},
+            {"source", "Invented for the Miscela example; not measured", null, null, null,
+                "where the coefficients came from: here, nowhere (they are invented)"},
+            {"temperature unit", "°C", null, null, null, ""},
+            {"density unit", "kg/m³", null, null, null, ""},
+            {"molar volume unit", "cm³/mol", null, null, null, ""},
+            {"molar mass unit", "g/mol", null, null, null, ""},
+            {"valid temperature", 5.0, 35.0, null, null, "the functions refuse outside 5..35 °C"},
+            {"extrapolation", "refuse", null, null, null, "no answers outside the validity range"},
+            {"component", "ethanol", 46.07, null, null, "component 1 (x1 is its mole fraction); molar mass g/mol"},
+            {"component", "water", 18.015, null, null, "component 2; molar mass g/mol"},
+            {"density model", "ethanol", "polynomial", null, null, ""},
+            {"density reference temperature", "ethanol", 20.0, null, null, ""},
+            {"density coefficients", "ethanol", 789.3, -0.84, null,
+                "ρ = 789.3 − 0.84·(T − 20 °C) kg/m³ (invented)"},
+            {"density model", "water", "Tanaka 2001", null, null, "the add-in's built-in water model"},
+            {"valid mole fraction", "ethanol", 0.0, 1.0, null, "whole composition range"},
+            {"excess volume reference temperature", "ethanol + water", 20.0, null, null, ""},
+            {"excess volume A0", "ethanol + water", -4.2, -0.012, null,
+                "A0 = −4.2 − 0.012·(T − 20 °C) cm³/mol (invented)"},
+            {"excess volume A1", "ethanol + water", -0.9, 0.004, null,
+                "A1 = −0.9 + 0.004·(T − 20 °C) cm³/mol (invented)"},
+            {"excess volume A2", "ethanol + water", 0.6, null, null, "A2 = 0.6 cm³/mol, constant (invented)"},
+        };
+        for (int r = 0; r < rows.length; r++) {
+            for (int c = 0; c < CARD_COLUMNS; c++) {
+                Object v = rows[r][c];
+                if (v instanceof String) {
+                    text(s, c, CARD_TOP + r, (String) v);
+                } else if (v instanceof Double) {
+                    s.getCellByPosition(c, CARD_TOP + r).setValue((Double) v);
+                }
+            }
+            text(s, 6, CARD_TOP + r, (String) rows[r][5]);
+        }
+        int last = CARD_TOP + rows.length;
+        band(s, "A" + (CARD_TOP + 1) + ":E" + last, INVENTED_COLOUR);
+        prop(s, "G" + (CARD_TOP + 1) + ":G" + last, "CharPosture", com.sun.star.awt.FontSlant.ITALIC);
+        text(s, 0, last + 1, "The shaded card holds the invented density and excess volume coefficients (the molar "
+                + "masses are ordinary rounded values). Replace them only with coefficients of your own whose source "
+                + "you know, and write that source in the 'source' row.");
+        wrapped(s, "A" + (last + 2) + ":G" + (last + 2), last + 1);
+        widths(s, 74, 66, 22, 16, 12, 4, 92);
+        return rows.length;
+    }
+
+    // --- sheet Blend
+
+    private static void writeBlend(XSpreadsheet s, Formats f) throws Exception {
+        text(s, 0, 0, "Fernhollow Fluids Ltd (invented company): ethanol + water blend sheet");
+        bold(s, "A1", 14);
+        text(s, 0, 1, "Invented scenario with INVENTED coefficients (see sheet Card). The numbers show how the "
+                + "Miscela functions work; they are not measured properties of any product.");
+        band(s, "A2:N2", INVENTED_COLOUR);
+        String[] cautions = {
+            "CAUTION: ethanol and its blends with water are flammable liquids, and their vapours can ignite. Keep "
+                    + "ignition sources away, ventilate, earth containers, and blend and store only as your site "
+                    + "safety rules and local fire codes require.",
+            "Volumes and densities from this sheet are not for custody transfer, trade, tax or labelling. Use "
+                    + "such figures only after a check by a licensed or accredited measurement body, under the "
+                    + "rules that apply where you are.",
+            "Glycol coolants are harmful if swallowed. If you adapt this sheet to a glycol, use a card with a "
+                    + "known source and follow the supplier's safety data sheet and local regulations.",
+        };
+        for (int i = 0; i < cautions.length; i++) {
+            int row = 2 + i;
+            text(s, 0, row, cautions[i]);
+            String a = "A" + (row + 1) + ":N" + (row + 1);
+            UnoRuntime.queryInterface(XMergeable.class, s.getCellRangeByName(a)).merge(true);
+            band(s, a, CAUTION_COLOUR);
+            prop(s, a, "IsTextWrapped", Boolean.TRUE);
+        }
+        bold(s, "A3", 10);
+
+        // inputs
+        text(s, 0, 6, "Inputs (change the blue cells)");
+        head(s, "A7:C7");
+        label(s, 7, "Ethanol mole fraction x1 (component 1)", "mol/mol");
+        s.getCellByPosition(1, 7).setValue(0.5);
+        label(s, 8, "Temperature", "°C");
+        s.getCellByPosition(1, 8).setValue(20.0);
+        band(s, "B8:B9", INPUT_COLOUR);
+        prop(s, "B8", "NumberFormat", f.key("0.000"));
+        prop(s, "B9", "NumberFormat", f.key("0.0"));
+        label(s, 9, "Card check (MIX.CHECK)", "");
+        s.getCellByPosition(1, 9).setFormula("=MIX.CHECK(card)");
+        label(s, 10, "Point check (MIX.CHECKPOINT)", "");
+        s.getCellByPosition(1, 10).setFormula("=MIX.CHECKPOINT(card;B8;B9)");
+        prop(s, "B10:B11", "HoriJustify", com.sun.star.table.CellHoriJustify.RIGHT);
+
+        // results at the input point
+        text(s, 0, 12, "Results at the input point");
+        head(s, "A13:C13");
+        String[][] results = {
+            {"Excess molar volume Vᴱ (MIX.EXCESSVOLUME)", "=MIX.EXCESSVOLUME(card;B8;B9)", "cm³/mol", "0.0000"},
+            {"Partial molar volume of ethanol (MIX.PARTIALVOLUME)", "=MIX.PARTIALVOLUME(card;1;B8;B9)", "cm³/mol",
+                "0.000"},
+            {"Partial molar volume of water (MIX.PARTIALVOLUME)", "=MIX.PARTIALVOLUME(card;\"water\";B8;B9)",
+                "cm³/mol", "0.000"},
+            {"Partial excess volume of ethanol (MIX.PARTIALEXCESS)", "=MIX.PARTIALEXCESS(card;1;B8;B9)", "cm³/mol",
+                "0.0000"},
+            {"Partial excess volume of water (MIX.PARTIALEXCESS)", "=MIX.PARTIALEXCESS(card;2;B8;B9)", "cm³/mol",
+                "0.0000"},
+            {"Molar volume of the blend (MIX.MOLARVOLUME)", "=MIX.MOLARVOLUME(card;B8;B9)", "cm³/mol", "0.000"},
+            {"Density of the blend (MIX.DENSITY)", "=MIX.DENSITY(card;B8;B9)", "kg/m³", "0.00"},
+            {"Density of pure ethanol (MIX.PUREDENSITY)", "=MIX.PUREDENSITY(card;\"ethanol\";B9)", "kg/m³", "0.00"},
+            {"Density of pure water (MIX.PUREDENSITY)", "=MIX.PUREDENSITY(card;2;B9)", "kg/m³", "0.00"},
+            {"Ethanol mass fraction w1 (from the card's molar masses)",
+                "=B8*$Card.C16/(B8*$Card.C16+(1-B8)*$Card.C17)", "kg/kg", "0.0000"},
+            {"Volume change on mixing, Vᴱ / ideal volume",
+                "=B14/(B19-B14)", "—", "0.00%"},
+        };
+        for (int i = 0; i < results.length; i++) {
+            int row = 13 + i;
+            label(s, row, results[i][0], results[i][2]);
+            s.getCellByPosition(1, row).setFormula(results[i][1]);
+            prop(s, "B" + (row + 1), "NumberFormat", f.key(results[i][3]));
+        }
+        int noteRow = 13 + results.length + 1;
+        text(s, 0, noteRow, "A cell showing Err:502 means the add-in refused: the point check above says why "
+                + "(for example a temperature outside 5..35 °C).");
+        String note = "A" + (noteRow + 1) + ":C" + (noteRow + 2);
+        UnoRuntime.queryInterface(XMergeable.class, s.getCellRangeByName(note)).merge(true);
+        prop(s, note, "IsTextWrapped", Boolean.TRUE);
+        prop(s, note, "VertJustify", com.sun.star.table.CellVertJustify.TOP);
+        prop(s, note, "CharPosture", com.sun.star.awt.FontSlant.ITALIC);
+        // a little room between the numbers and their units
+        prop(s, "C8:C" + (12 + results.length), "ParaLeftMargin", 150);
+
+        // composition table (array formulas over the x1 column)
+        text(s, TABLE_COL, TABLE_HEAD - 1, "Across the composition range at the input temperature (array formulas)");
+        bold(s, col(TABLE_COL) + TABLE_HEAD, 10);
+        String[] heads = {"x1 ethanol\nmol/mol", "V̄ ethanol\ncm³/mol", "V̄ water\ncm³/mol", "Vᴱ\ncm³/mol",
+            "V̄ᴱ ethanol\ncm³/mol", "V̄ᴱ water\ncm³/mol", "Vm blend\ncm³/mol", "ρ blend\nkg/m³",
+            "w1 ethanol\nkg/kg"};
+        for (int c = 0; c < heads.length; c++) {
+            text(s, TABLE_COL + c, TABLE_HEAD, heads[c]);
+        }
+        String headRange = col(TABLE_COL) + (TABLE_HEAD + 1) + ":" + col(TABLE_COL + heads.length - 1)
+                + (TABLE_HEAD + 1);
+        head(s, headRange);
+        prop(s, headRange, "IsTextWrapped", Boolean.TRUE);
+        prop(s, headRange, "HoriJustify", com.sun.star.table.CellHoriJustify.CENTER);
+        for (int i = 0; i < TABLE_ROWS; i++) {
+            s.getCellByPosition(TABLE_COL, TABLE_FIRST + i).setValue(i * 5 / 100.0);
+        }
+        String x = column(TABLE_COL);
+        String[] arrays = {
+            "=MIX.PARTIALVOLUME(card;1;" + x + ";$B$9)",
+            "=MIX.PARTIALVOLUME(card;2;" + x + ";$B$9)",
+            "=MIX.EXCESSVOLUME(card;" + x + ";$B$9)",
+            "=MIX.PARTIALEXCESS(card;1;" + x + ";$B$9)",
+            "=MIX.PARTIALEXCESS(card;2;" + x + ";$B$9)",
+            "=MIX.MOLARVOLUME(card;" + x + ";$B$9)",
+            "=MIX.DENSITY(card;" + x + ";$B$9)",
+            "=" + x + "*$Card.$C$16/(" + x + "*$Card.$C$16+(1-" + x + ")*$Card.$C$17)",
+        };
+        String[] numberFormats = {"0.000", "0.000", "0.0000", "0.0000", "0.0000", "0.000", "0.00", "0.0000"};
+        for (int c = 0; c < arrays.length; c++) {
+            XCellRange r = s.getCellRangeByName(column(TABLE_COL + 1 + c));
+            UnoRuntime.queryInterface(XArrayFormulaRange.class, r).setArrayFormula(arrays[c]);
+            prop(s, column(TABLE_COL + 1 + c), "NumberFormat", f.key(numberFormats[c]));
+        }
+        prop(s, column(TABLE_COL), "NumberFormat", f.key("0.00"));
+        int end = TABLE_FIRST + TABLE_ROWS;
+        text(s, TABLE_COL, end, "V̄ = partial molar volume; V̄ᴱ = partial molar excess volume; "
+                + "Vm = molar volume of the blend; w1 = ethanol mass fraction.");
+        prop(s, col(TABLE_COL) + (end + 1), "CharPosture", com.sun.star.awt.FontSlant.ITALIC);
+        // rows
+        XColumnRowRange crr = UnoRuntime.queryInterface(XColumnRowRange.class, s);
+        XIndexAccess rowsAccess = UnoRuntime.queryInterface(XIndexAccess.class, crr.getRows());
+        for (int r = 2; r <= 4; r++) {
+            UnoRuntime.queryInterface(XPropertySet.class, rowsAccess.getByIndex(r)).setPropertyValue("Height", 900);
+        }
+        UnoRuntime.queryInterface(XPropertySet.class, rowsAccess.getByIndex(TABLE_HEAD))
+                .setPropertyValue("Height", 900);
+        widths(s, 100, 24, 19, 3, 3, 19, 20, 19, 18, 21, 19, 20, 18, 19);
+    }
+
+    /** Two XY charts under the tables: the partial molar volumes, and the excess volumes. */
+    private static void addCharts(XSpreadsheet s) throws Exception {
+        int last = TABLE_FIRST + TABLE_ROWS - 1;
+        CellRangeAddress x = new CellRangeAddress((short) 0, TABLE_COL, TABLE_HEAD, TABLE_COL, last);
+        CellRangeAddress partial = new CellRangeAddress((short) 0, TABLE_COL, TABLE_HEAD, TABLE_COL + 2, last);
+        CellRangeAddress excess = new CellRangeAddress((short) 0, TABLE_COL + 3, TABLE_HEAD, TABLE_COL + 5, last);
+        int top = TABLE_FIRST + TABLE_ROWS + 2;
+        XDiagram a = chart(s, "partial-volumes", new CellRangeAddress[] {partial}, 0, top, 14000,
+                "Partial molar volumes (invented coefficients)", "V̄ ethanol, cm³/mol", "0.0");
+        XPropertySet ap = UnoRuntime.queryInterface(XPropertySet.class, a);
+        // water (the second series) on the right-hand axis, so that both curves show their shape
+        ap.setPropertyValue("HasSecondaryYAxis", Boolean.TRUE);
+        ap.setPropertyValue("HasSecondaryYAxisTitle", Boolean.TRUE);
+        UnoRuntime.queryInterface(XPropertySet.class, UnoRuntime.queryInterface(
+                com.sun.star.chart.XSecondAxisTitleSupplier.class, a).getSecondYAxisTitle())
+                .setPropertyValue("String", "V̄ water, cm³/mol");
+        // in this API an XY chart's data row 0 is the x column, so the water series is row 2
+        a.getDataRowProperties(2).setPropertyValue("Axis", ChartAxisAssign.SECONDARY_Y);
+        XPropertySet y2 = UnoRuntime.queryInterface(com.sun.star.chart.XTwoAxisYSupplier.class, a)
+                .getSecondaryYAxis();
+        y2.setPropertyValue("LinkNumberFormatToSource", Boolean.FALSE);
+        y2.setPropertyValue("NumberFormat", numberFormat(s, "0.0"));
+        chart(s, "excess-volumes", new CellRangeAddress[] {x, excess}, TABLE_COL, top, 17400,
+                "Excess volumes (invented coefficients)", "cm³/mol", "0.0");
+    }
+
+    /** One XY line chart anchored at a cell; returns its diagram. */
+    private static XDiagram chart(XSpreadsheet s, String name, CellRangeAddress[] ranges, int column, int row,
+            int width, String title, String yTitle, String yFormat) throws Exception {
+        XTableCharts charts = UnoRuntime.queryInterface(XTableChartsSupplier.class, s).getCharts();
+        XPropertySet anchor = UnoRuntime.queryInterface(XPropertySet.class, s.getCellByPosition(column, row));
+        com.sun.star.awt.Point p = (com.sun.star.awt.Point) anchor.getPropertyValue("Position");
+        charts.addNewByName(name, new Rectangle(p.X, p.Y, width, 8000), ranges, true, false);
+        Object chart = UnoRuntime.queryInterface(XNameAccess.class, charts).getByName(name);
+        XChartDocument cd = UnoRuntime.queryInterface(XChartDocument.class,
+                UnoRuntime.queryInterface(XEmbeddedObjectSupplier.class, chart).getEmbeddedObject());
+        XDiagram d = UnoRuntime.queryInterface(XDiagram.class, UnoRuntime.queryInterface(
+                com.sun.star.lang.XMultiServiceFactory.class, cd).createInstance("com.sun.star.chart.XYDiagram"));
+        cd.setDiagram(d);
+        XPropertySet cp = UnoRuntime.queryInterface(XPropertySet.class, cd);
+        cp.setPropertyValue("HasMainTitle", Boolean.TRUE);
+        XPropertySet tp = UnoRuntime.queryInterface(XPropertySet.class, cd.getTitle());
+        tp.setPropertyValue("String", title);
+        tp.setPropertyValue("CharHeight", 11f);
+        cp.setPropertyValue("HasLegend", Boolean.TRUE);
+        UnoRuntime.queryInterface(XPropertySet.class, cd.getLegend()).setPropertyValue("Alignment",
+                ChartLegendPosition.BOTTOM);
+        XPropertySet dp = UnoRuntime.queryInterface(XPropertySet.class, d);
+        dp.setPropertyValue("Lines", Boolean.TRUE);
+        dp.setPropertyValue("SymbolType", ChartSymbolType.NONE);
+        dp.setPropertyValue("HasXAxisTitle", Boolean.TRUE);
+        dp.setPropertyValue("HasYAxisTitle", Boolean.TRUE);
+        XAxisXSupplier xs = UnoRuntime.queryInterface(XAxisXSupplier.class, d);
+        UnoRuntime.queryInterface(XPropertySet.class, xs.getXAxisTitle()).setPropertyValue("String",
+                "ethanol mole fraction x1");
+        XPropertySet xAxis = xs.getXAxis();
+        xAxis.setPropertyValue("AutoMin", Boolean.FALSE);
+        xAxis.setPropertyValue("AutoMax", Boolean.FALSE);
+        xAxis.setPropertyValue("AutoStepMain", Boolean.FALSE);
+        xAxis.setPropertyValue("Min", 0.0);
+        xAxis.setPropertyValue("Max", 1.0);
+        xAxis.setPropertyValue("StepMain", 0.2);
+        xAxis.setPropertyValue("LinkNumberFormatToSource", Boolean.FALSE);
+        xAxis.setPropertyValue("NumberFormat", numberFormat(s, "0.0"));
+        // keep the composition axis at the foot of the plot even when the values are negative
+        xAxis.setPropertyValue("CrossoverPosition", com.sun.star.chart.ChartAxisPosition.START);
+        XAxisYSupplier ys = UnoRuntime.queryInterface(XAxisYSupplier.class, d);
+        UnoRuntime.queryInterface(XPropertySet.class, ys.getYAxisTitle()).setPropertyValue("String", yTitle);
+        XPropertySet yAxis = ys.getYAxis();
+        yAxis.setPropertyValue("LinkNumberFormatToSource", Boolean.FALSE);
+        yAxis.setPropertyValue("NumberFormat", numberFormat(s, yFormat));
+        for (int i = 0; i < 3; i++) {
+            try {
+                d.getDataRowProperties(i).setPropertyValue("LineWidth", 50);
+            } catch (com.sun.star.lang.IndexOutOfBoundsException e) {
+                break;
+            }
+        }
+        return d;
+    }
+
+    /** The chart's axis formats are keys of the spreadsheet's own number formats. */
+    private static int numberFormat(XSpreadsheet s, String code) throws Exception {
+        return formats.key(code);
+    }
+
+    private static void pageSetup(XComponent doc) throws Exception {
+        XNameAccess families = UnoRuntime.queryInterface(XStyleFamiliesSupplier.class, doc).getStyleFamilies();
+        XNameAccess pages = UnoRuntime.queryInterface(XNameAccess.class, families.getByName("PageStyles"));
+        XPropertySet ps = UnoRuntime.queryInterface(XPropertySet.class, pages.getByName("Default"));
+        int w = (Integer) ps.getPropertyValue("Width");
+        int h = (Integer) ps.getPropertyValue("Height");
+        if (w < h) {
+            ps.setPropertyValue("IsLandscape", Boolean.TRUE);
+            ps.setPropertyValue("Width", h);
+            ps.setPropertyValue("Height", w);
+        }
+        for (String m : new String[] {"LeftMargin", "RightMargin", "TopMargin", "BottomMargin"}) {
+            ps.setPropertyValue(m, 1000);
+        }
+        ps.setPropertyValue("ScaleToPagesX", (short) 1);
+        ps.setPropertyValue("ScaleToPagesY", (short) 1);
+        ps.setPropertyValue("CenterHorizontally", Boolean.TRUE);
+    }
+
+    // --- small helpers
+
+    private static XSpreadsheet sheet(XSpreadsheets sheets, String name) throws Exception {
+        return UnoRuntime.queryInterface(XSpreadsheet.class, sheets.getByName(name));
+    }
+
+    private static void text(XSpreadsheet s, int c, int r, String v) throws Exception {
+        XCell cell = s.getCellByPosition(c, r);
+        UnoRuntime.queryInterface(XText.class, cell).setString(v);
+    }
+
+    private static void label(XSpreadsheet s, int r, String label, String unit) throws Exception {
+        text(s, 0, r, label);
+        if (!unit.isEmpty()) {
+            text(s, 2, r, unit);
+        }
+    }
+
+    /** Merges a one-row range, wraps its text and gives the row room for two lines. */
+    private static void wrapped(XSpreadsheet s, String range, int row) throws Exception {
+        UnoRuntime.queryInterface(XMergeable.class, s.getCellRangeByName(range)).merge(true);
+        prop(s, range, "IsTextWrapped", Boolean.TRUE);
+        XIndexAccess rows = UnoRuntime.queryInterface(XIndexAccess.class,
+                UnoRuntime.queryInterface(XColumnRowRange.class, s).getRows());
+        UnoRuntime.queryInterface(XPropertySet.class, rows.getByIndex(row)).setPropertyValue("Height", 900);
+    }
+
+    private static void head(XSpreadsheet s, String range) throws Exception {
+        band(s, range, HEAD_COLOUR);
+        bold(s, range, 10);
+    }
+
+    private static void bold(XSpreadsheet s, String range, float size) throws Exception {
+        prop(s, range, "CharWeight", com.sun.star.awt.FontWeight.BOLD);
+        prop(s, range, "CharHeight", size);
+    }
+
+    private static void band(XSpreadsheet s, String range, int colour) throws Exception {
+        prop(s, range, "CellBackColor", colour);
+    }
+
+    private static void prop(XSpreadsheet s, String range, String name, Object value) throws Exception {
+        UnoRuntime.queryInterface(XPropertySet.class, s.getCellRangeByName(range)).setPropertyValue(name, value);
+    }
+
+    /** Column widths in mm, from column A. */
+    private static void widths(XSpreadsheet s, int... mm) throws Exception {
+        XIndexAccess cols = UnoRuntime.queryInterface(XIndexAccess.class,
+                UnoRuntime.queryInterface(XColumnRowRange.class, s).getColumns());
+        for (int i = 0; i < mm.length; i++) {
+            UnoRuntime.queryInterface(XPropertySet.class, cols.getByIndex(i)).setPropertyValue("Width", mm[i] * 100);
+        }
+    }
+
+    private static String col(int c) {
+        return String.valueOf((char) ('A' + c));
+    }
+
+    /** The table's data cells in column c, as an absolute range. */
+    private static String column(int c) {
+        return "$" + col(c) + "$" + (TABLE_FIRST + 1) + ":$" + col(c) + "$" + (TABLE_FIRST + TABLE_ROWS);
+    }
+
+    static PropertyValue property(String name, Object value) {
+        PropertyValue p = new PropertyValue();
+        p.Name = name;
+        p.Value = value;
+        return p;
+    }
+
+    /** The repository root: system property miscela.repo, else the nearest directory up with addin/ and pom.xml. */
+    static Path repoRoot() {
+        String p = System.getProperty("miscela.repo");
+        if (p != null) {
+            return Paths.get(p).toAbsolutePath().normalize();
+        }
+        Path d = Paths.get("").toAbsolutePath();
+        for (Path at = d; at != null; at = at.getParent()) {
+            if (Files.isDirectory(at.resolve("addin")) && Files.exists(at.resolve("pom.xml"))) {
+                return at;
+            }
+        }
+        return d;
+    }
+
+    /** Number format keys by format code, added to the document when missing. */
+    private static final class Formats {
+        private final XNumberFormats formats;
+        private final Locale locale = new Locale("en", "GB", "");
+
+        Formats(XComponent doc) {
+            formats = UnoRuntime.queryInterface(XNumberFormatsSupplier.class, doc).getNumberFormats();
+        }
+
+        int key(String code) throws Exception {
+            int k = formats.queryKey(code, locale, false);
+            return k >= 0 ? k : formats.addNew(code, locale);
+        }
+    }
+}
