@@ -82,7 +82,7 @@ public final class ExampleRunner {
     }
 
     /** Exports one workbook and returns how many problems it has. */
-    private static int run(Office office, Path workbook, Path out) throws Exception {
+    static int run(Office office, Path workbook, Path out) throws Exception {
         String base = workbook.getFileName().toString().replaceFirst("\\.ods$", "");
         XComponent doc = office.load(office.stage(workbook));
         int problems = 0;
