@@ -122,6 +122,18 @@ class CardFormatDocTest {
         }
     }
 
+    /** The card shown in the README reads too, with a density a person can recognise. */
+    @Test
+    void readmeCardReads() throws IOException {
+        Path readme = document().getParent().getParent().resolve("README.md");
+        List<Example> examples = examples(Files.readAllLines(readme, StandardCharsets.UTF_8));
+        assertEquals(1, examples.size(), "the README shows one card");
+        Card card = CardReader.read(examples.get(0).cells);
+        assertEquals(examples.get(0).components.size(), card.componentCount());
+        double water = CardFunctions.density(card, 0, 20, Extrapolation.AS_CARD);
+        assertEquals(998.2067, water, 1e-4, "pure water at 20 °C through the README card (Tanaka 2001)");
+    }
+
     /** The statements the examples' prose makes about them. */
     @Test
     void examplesBehaveAsDescribed() throws IOException {

@@ -36,6 +36,7 @@ public final class Office implements AutoCloseable {
     private final Process process;
     private final XComponentContext context;
     private final XDesktop desktop;
+    private final java.util.concurrent.atomic.AtomicBoolean closed = new java.util.concurrent.atomic.AtomicBoolean();
 
     private Office(Path base, Path profile, Process process, XComponentContext context, XDesktop desktop) {
         this.base = base;
@@ -172,6 +173,9 @@ public final class Office implements AutoCloseable {
     /** Terminates the office through its desktop, then ends whatever this class started that is still alive. */
     @Override
     public void close() {
+        if (!closed.compareAndSet(false, true)) {
+            return;
+        }
         try {
             desktop.terminate();
         } catch (RuntimeException e) {

@@ -13,6 +13,8 @@ final class OfficeExtension {
         if (office == null) {
             office = Office.start();
             Office started = office;
+            // also when the test JVM is stopped before JUnit closes its store
+            Runtime.getRuntime().addShutdownHook(new Thread(started::close, "miscela-office-shutdown"));
             context.getRoot().getStore(ExtensionContext.Namespace.GLOBAL).put("miscela-office",
                     (AutoCloseable) started::dispose);
         }

@@ -62,7 +62,9 @@ public final class FunctionCatalog {
                     "Density of one pure component from its model on the card, in the card's density unit.",
                     "constant: ρ = c0; polynomial: ρ = Σ_j c_j·(T − T_ref)^j; Tanaka 2001: the CIPM water formula",
                     "=MIX.PUREDENSITY(card; \"water\"; 20)",
-                    CARD, COMPONENT, TEMPERATURE, EXTRAPOLATE),
+                    CARD, COMPONENT, required("temperature", "temperature",
+                            "Temperature in the card's temperature unit. A single value, or a range for an array "
+                                    + "result."), EXTRAPOLATE),
             new FunctionInfo("checkCard", "MIX.CHECK",
                     "\"OK\" when the card can be read and used; otherwise its first problem, naming the row.",
                     "—",
