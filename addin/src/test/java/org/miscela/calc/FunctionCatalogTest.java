@@ -123,6 +123,22 @@ class FunctionCatalogTest {
         }
     }
 
+    /** The README's function list names every function with its exact syntax, and nothing else. */
+    @Test
+    void readmeListsEveryFunction() throws IOException {
+        String readme = new String(Files.readAllBytes(Paths.get("../README.md")), StandardCharsets.UTF_8);
+        for (FunctionInfo f : FunctionCatalog.functions()) {
+            assertTrue(readme.contains("| `" + MetadataWriter.syntax(f) + "` |"),
+                    "README lacks the row for " + MetadataWriter.syntax(f));
+        }
+        Matcher rows = Pattern.compile("(?m)^\\| `MIX\\.").matcher(readme);
+        int count = 0;
+        while (rows.find()) {
+            count++;
+        }
+        assertEquals(FunctionCatalog.functions().size(), count, "function rows in the README");
+    }
+
     @Test
     void functionReferenceIsUpToDate() throws IOException {
         String committed = new String(Files.readAllBytes(Paths.get("../docs/functions.md")), StandardCharsets.UTF_8);

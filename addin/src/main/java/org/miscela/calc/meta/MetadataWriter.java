@@ -94,12 +94,7 @@ public final class MetadataWriter {
         for (FunctionInfo f : FunctionCatalog.functions()) {
             m.append("\n## ").append(f.displayName()).append("\n\n");
             m.append(f.summary()).append("\n\n");
-            m.append("Syntax: `").append(f.displayName()).append("(");
-            for (int i = 0; i < f.arguments().size(); i++) {
-                ArgumentInfo a = f.arguments().get(i);
-                m.append(i > 0 ? "; " : "").append(a.optional() ? "[" + a.displayName() + "]" : a.displayName());
-            }
-            m.append(")`\n\n");
+            m.append("Syntax: `").append(syntax(f)).append("`\n\n");
             m.append("| argument | meaning |\n|---|---|\n");
             for (ArgumentInfo a : f.arguments()) {
                 m.append("| ").append(a.displayName()).append(" | ").append(a.description().replace("|", "\\|"))
@@ -111,6 +106,16 @@ public final class MetadataWriter {
                     .append("`.\n");
         }
         return m.toString();
+    }
+
+    /** How a call is written, optional arguments in brackets: {@code MIX.DENSITY(card; x1; temperature; [extrapolate])}. */
+    public static String syntax(FunctionInfo f) {
+        StringBuilder b = new StringBuilder(f.displayName()).append('(');
+        for (int i = 0; i < f.arguments().size(); i++) {
+            ArgumentInfo a = f.arguments().get(i);
+            b.append(i > 0 ? "; " : "").append(a.optional() ? "[" + a.displayName() + "]" : a.displayName());
+        }
+        return b.append(')').toString();
     }
 
     private static String anchor(String displayName) {
