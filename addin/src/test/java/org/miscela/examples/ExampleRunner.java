@@ -92,7 +92,7 @@ public final class ExampleRunner {
 
             Path pdf = office.scratch(base + ".pdf");
             store.storeToURL(pdf.toUri().toString(), new PropertyValue[] {
-                ExampleWorkbookBuilder.property("FilterName", "calc_pdf_Export")});
+                Office.property("FilterName", "calc_pdf_Export")});
             System.out.println("wrote " + copy(pdf, out));
 
             XIndexAccess sheets = UnoRuntime.queryInterface(XIndexAccess.class,
@@ -104,8 +104,8 @@ public final class ExampleRunner {
                 // "-<sheet name>" to the file name it is given
                 Path csv = office.scratch(base + "-" + name + ".csv");
                 store.storeToURL(office.scratch(base + ".csv").toUri().toString(), new PropertyValue[] {
-                    ExampleWorkbookBuilder.property("FilterName", "Text - txt - csv (StarCalc)"),
-                    ExampleWorkbookBuilder.property("FilterOptions", CSV_OPTIONS + (i + 1))});
+                    Office.property("FilterName", "Text - txt - csv (StarCalc)"),
+                    Office.property("FilterOptions", CSV_OPTIONS + (i + 1))});
                 Path written = copy(csv, out);
                 System.out.println("wrote " + written);
                 String a1 = UnoRuntime.queryInterface(XText.class, sheet.getCellByPosition(0, 0)).getString();

@@ -83,7 +83,7 @@ public final class ExampleWorkbookBuilder {
             UnoRuntime.queryInterface(XCalculatable.class, doc).calculateAll();
             Path scratch = office.scratch(FILE);
             UnoRuntime.queryInterface(XStorable.class, doc).storeToURL(scratch.toUri().toString(),
-                    new PropertyValue[] {property("FilterName", "calc8")});
+                    new PropertyValue[] {Office.property("FilterName", "calc8")});
             doc.dispose();
             Files.createDirectories(target.getParent());
             Files.copy(scratch, target, StandardCopyOption.REPLACE_EXISTING);
@@ -492,12 +492,6 @@ public final class ExampleWorkbookBuilder {
         return "$" + col(c) + "$" + (TABLE_FIRST + 1) + ":$" + col(c) + "$" + (TABLE_FIRST + TABLE_ROWS);
     }
 
-    static PropertyValue property(String name, Object value) {
-        PropertyValue p = new PropertyValue();
-        p.Name = name;
-        p.Value = value;
-        return p;
-    }
 
     /** The repository root: system property miscela.repo, else the nearest directory up with addin/ and pom.xml. */
     static Path repoRoot() {

@@ -163,7 +163,7 @@ public final class Office implements AutoCloseable {
         return context.getServiceManager().createInstanceWithContext(name, context);
     }
 
-    static PropertyValue property(String name, Object value) {
+    public static PropertyValue property(String name, Object value) {
         PropertyValue p = new PropertyValue();
         p.Name = name;
         p.Value = value;
