@@ -301,13 +301,13 @@ public final class CardReader {
             }
             pairRows.sort((a, b) -> Integer.compare(a.number, b.number));
             for (Row r : pairRows) {
-                orient(r, pair(r, names), orientation);
+                checkOrder(r, pair(r, names), names, orientation);
             }
             for (Map.Entry<Integer, List<Row>> e : excessRows.entrySet()) {
                 int k = e.getKey();
                 for (Row r : e.getValue()) {
                     int[] p = pair(r, names);
-                    long key = orient(r, p, orientation);
+                    long key = pairKey(p, n);
                     double[] c = r.numbersFrom(1);
                     double sign = p[0] > p[1] && k % 2 == 1 ? -1.0 : 1.0;
                     for (int j = 0; j < c.length; j++) {
@@ -321,8 +321,7 @@ public final class CardReader {
                 }
             }
             for (Row r : excessReferenceRows) {
-                int[] p = pair(r, names);
-                long key = orient(r, p, orientation);
+                long key = pairKey(pair(r, names), n);
                 r.atMost(2);
                 reference.put(key, units.temperature().toKelvin(r.number(1)));
                 Row before = referenceRow.put(key, r);
@@ -366,32 +365,22 @@ public final class CardReader {
             return result;
         }
 
-        /** The pair's index in card order, checking every row of a pair writes it the same way round. */
-        private long orient(Row r, int[] p, Map<Long, Row> orientation) {
-            int n = components.size();
-            int i = Math.min(p[0], p[1]);
-            int j = Math.max(p[0], p[1]);
-            long key = (long) i * n + j;
-            Row first = orientation.putIfAbsent(key, r);
-            if (first != null && !normalise(first.text(0)).equals(normalise(r.text(0)))) {
-                int[] q = pair(first, null);
-                if (q == null || q[0] != p[0]) {
-                    throw Problem.PAIR_ORDER.raise(r.number, r.label, r.text(0).trim(), first.text(0).trim(),
-                            first.number);
-                }
-            }
-            return key;
+        /** Index of the unordered pair {p[0], p[1]} among n components. */
+        private static long pairKey(int[] p, int n) {
+            return (long) Math.min(p[0], p[1]) * n + Math.max(p[0], p[1]);
         }
 
-        /** Component indices named by a pair subject "a + b"; with names == null, uses the components read. */
-        private int[] pair(Row r, List<String> names) {
-            List<String> known = names;
-            if (known == null) {
-                known = new ArrayList<>();
-                for (Component c : components) {
-                    known.add(c.name());
-                }
+        /** The first row of a pair (in card order) fixes which way round it is written; later rows must agree. */
+        private void checkOrder(Row r, int[] p, List<String> names, Map<Long, Row> orientation) {
+            Row first = orientation.putIfAbsent(pairKey(p, names.size()), r);
+            if (first != null && pair(first, names)[0] != p[0]) {
+                throw Problem.PAIR_ORDER.raise(r.number, r.label, r.text(0).trim(), first.text(0).trim(),
+                        first.number);
             }
+        }
+
+        /** Component indices named by a pair subject "a + b". */
+        private int[] pair(Row r, List<String> known) {
             String subject = r.text(0);
             String[] parts = subject.split("\\+", -1);
             if (parts.length != 2 || isBlank(parts[0]) || isBlank(parts[1])) {

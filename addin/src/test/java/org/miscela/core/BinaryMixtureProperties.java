@@ -64,6 +64,10 @@ class BinaryMixtureProperties {
         assertEquals(vm, sum, 1e-12 * Math.abs(vm));
     }
 
+    /**
+     * Σ x_k dV̄_k = 0 with the library's analytic slopes; those slopes are checked against finite differences of the
+     * partial molar volumes in {@link #partialSlopesMatchFiniteDifferences}, so together the two pin Gibbs–Duhem.
+     */
     @Property(tries = 2000)
     void gibbsDuhem(@ForAll("cards") Card card, @ForAll @DoubleRange(min = 0, max = 1) double x1,
             @ForAll @DoubleRange(min = 260, max = 340) double t) {
