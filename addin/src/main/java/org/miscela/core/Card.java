@@ -6,29 +6,48 @@ import java.util.List;
 import java.util.Locale;
 
 /**
- * A parsed card: components with their pure-liquid data, the excess-volume coefficients of every pair, units,
- * validity range and source. Immutable; build one with {@link CardReader}.
+ * A parsed card: components with their pure-liquid data, the excess volume (and optionally excess enthalpy) of the
+ * mixture as binary Redlich–Kister sets combined by a geometric model, units, validity range and source. Immutable;
+ * build one with {@link CardReader}.
  */
 public final class Card {
     private final String title;
     private final String source;
     private final Units units;
     private final List<Component> components;
-    private final RedlichKister[][] excessVolume;
+    private final ExcessFunction excessVolume;
+    private final ExcessFunction excessEnthalpy;
     private final Validity validity;
     private final boolean extrapolationAllowed;
+    private final boolean missingPairsIdeal;
+    private final Mixture mixture;
     private final BinaryMixture binary;
 
+    /** A volumetric card combined by Muggianu's model; {@code excessVolume[i][j]} for i &lt; j, written i then j. */
     Card(String title, String source, Units units, List<Component> components, RedlichKister[][] excessVolume,
             Validity validity, boolean extrapolationAllowed) {
+        this(title, source, units, components, new ExcessFunction(components.size(), GeometricModel.MUGGIANU, -1,
+                excessVolume, Collections.<TernaryTerm>emptyList()), null, validity, extrapolationAllowed, false);
+    }
+
+    /**
+     * @param excessVolume null for a card that describes enthalpy only
+     * @param excessEnthalpy null when the card holds no enthalpy data
+     */
+    Card(String title, String source, Units units, List<Component> components, ExcessFunction excessVolume,
+            ExcessFunction excessEnthalpy, Validity validity, boolean extrapolationAllowed,
+            boolean missingPairsIdeal) {
         this.title = title;
         this.source = source;
         this.units = units;
         this.components = Collections.unmodifiableList(new ArrayList<>(components));
         this.excessVolume = excessVolume;
+        this.excessEnthalpy = excessEnthalpy;
         this.validity = validity;
         this.extrapolationAllowed = extrapolationAllowed;
-        this.binary = components.size() == 2 ? new BinaryMixture(this) : null;
+        this.missingPairsIdeal = missingPairsIdeal;
+        this.mixture = new Mixture(this);
+        this.binary = components.size() == 2 ? new BinaryMixture(mixture) : null;
     }
 
     public String title() {
@@ -62,12 +81,32 @@ public final class Card {
         return -1;
     }
 
-    /** The excess-volume expansion of components i and j, written in that order (internal units, cm³/mol). */
+    /**
+     * The excess-volume expansion of components i and j, written in that order (internal units, cm³/mol), or null
+     * when the card treats the pair as ideal.
+     */
     public RedlichKister excessVolume(int i, int j) {
-        if (i < j) {
-            return excessVolume[i][j];
-        }
-        return excessVolume[j][i].swapped();
+        return excessVolume == null ? null : excessVolume.pair(i, j);
+    }
+
+    /** The multicomponent excess volume (cm³/mol), or null for a card that describes enthalpy only. */
+    public ExcessFunction excessVolume() {
+        return excessVolume;
+    }
+
+    /** The multicomponent excess enthalpy (J/mol), or null when the card holds none. */
+    public ExcessFunction excessEnthalpy() {
+        return excessEnthalpy;
+    }
+
+    /** Whether pairs without coefficient rows are ideal (the card's 'missing pairs | ideal'). */
+    public boolean missingPairsIdeal() {
+        return missingPairsIdeal;
+    }
+
+    /** The calculator for any number of components. */
+    public Mixture mixture() {
+        return mixture;
     }
 
     public Validity validity() {

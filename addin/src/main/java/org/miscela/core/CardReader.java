@@ -18,8 +18,8 @@ import java.util.regex.Pattern;
  * {@link Boolean} or null.
  */
 public final class CardReader {
-    /** The card format version this reader understands. */
-    public static final int FORMAT_VERSION = 1;
+    /** The newest card format version this reader understands; it also reads every older one. */
+    public static final int FORMAT_VERSION = 2;
 
     static final String HEADER = "miscela card";
     static final String TITLE = "title";
@@ -36,18 +36,33 @@ public final class CardReader {
     static final String DENSITY_REFERENCE = "density reference temperature";
     static final String DENSITY_COEFFICIENTS = "density coefficients";
     static final String VALID_MOLE_FRACTION = "valid mole fraction";
-    static final String EXCESS_REFERENCE = "excess volume reference temperature";
-    static final String EXCESS_PREFIX = "excess volume a";
+    static final String EXCESS_VOLUME = "excess volume";
+    static final String EXCESS_ENTHALPY = "excess enthalpy";
+    static final String REFERENCE_SUFFIX = " reference temperature";
+    static final String MODEL = "multicomponent model";
+    static final String MISSING_PAIRS = "missing pairs";
+    static final String ENTHALPY_UNIT = "enthalpy unit";
+    static final String HEAT_CAPACITY = "heat capacity";
+    static final String HEAT_CAPACITY_REFERENCE = "heat capacity reference temperature";
+    static final String VALID_PAIR_TEMPERATURE = "valid pair temperature";
+    static final String VALID_PAIR_FRACTION = "valid pair mole fraction";
     /** Intervals the validity range is split into when checking a density model stays positive. */
     private static final int DENSITY_SAMPLES = 256;
-    private static final Pattern EXCESS_COEFFICIENT = Pattern.compile("excess volume a(\\d{1,2})");
+    /** Rows of an excess-property section: binary coefficients A0..A99, ternary C0..C2, reference temperature. */
+    private static final Pattern SECTION_ROW = Pattern.compile(
+            "(excess volume|excess enthalpy) (?:a(\\d{1,2})|ternary c(\\d)|(reference temperature))");
 
     /** Rows whose values start in column 2. */
     private static final String[] GLOBAL = {TITLE, SOURCE, TEMPERATURE_UNIT, DENSITY_UNIT, MOLAR_VOLUME_UNIT,
-        MOLAR_MASS_UNIT, VALID_TEMPERATURE, EXTRAPOLATION};
+        MOLAR_MASS_UNIT, VALID_TEMPERATURE, EXTRAPOLATION, MODEL, MISSING_PAIRS, ENTHALPY_UNIT};
     /** Rows whose column 2 names a component (or a pair) and whose values follow. */
     private static final String[] KEYED = {COMPONENT, DENSITY_MODEL, DENSITY_REFERENCE, DENSITY_COEFFICIENTS,
-        VALID_MOLE_FRACTION, EXCESS_REFERENCE};
+        VALID_MOLE_FRACTION, HEAT_CAPACITY, HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION};
+    /** Labels of version 2 beyond the excess-enthalpy and ternary rows. */
+    private static final String[] VERSION_2 = {MODEL, MISSING_PAIRS, ENTHALPY_UNIT, HEAT_CAPACITY,
+        HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION};
+    /** Keyed rows whose subject is a pair "a + b" rather than one component. */
+    private static final String[] PAIR_KEYED = {VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION};
 
     private CardReader() {
     }
@@ -63,11 +78,11 @@ public final class CardReader {
             throw Problem.CARD_HEADER.raise(header.number, header.label);
         }
         double version = header.number(0);
-        if (version != FORMAT_VERSION) {
+        if (version != 1 && version != 2) {
             throw Problem.CARD_VERSION.raise(header.number, Numbers.show(version), FORMAT_VERSION);
         }
         header.atMost(1);
-        return new Parse(rows.subList(1, rows.size())).card();
+        return new Parse(rows.subList(1, rows.size()), (int) version).card();
     }
 
     /** The working state of one parse. */
@@ -75,16 +90,28 @@ public final class CardReader {
         final Map<String, Row> global = new HashMap<>();
         /** keyed rows: key → (normalised subject → row), in card order */
         final Map<String, LinkedHashMap<String, Row>> keyed = new HashMap<>();
-        /** excess coefficient rows: k → rows */
-        final TreeMap<Integer, List<Row>> excessRows = new TreeMap<>();
-        final List<Row> excessReferenceRows = new ArrayList<>();
+        /** excess-property sections by prefix ("excess volume", "excess enthalpy") */
+        final Map<String, SectionRows> sections = new LinkedHashMap<>();
         final List<Component> components = new ArrayList<>();
         Units units;
 
-        Parse(List<Row> rows) {
+        Parse(List<Row> rows, int version) {
             for (Row r : rows) {
+                if (version < 2 && isVersion2(r.key)) {
+                    throw Problem.NEEDS_VERSION_2.raise(r.number, r.label);
+                }
                 sort(r);
             }
+        }
+
+        /** Labels added in version 2: a version 1 card promised never to contain them. */
+        private static boolean isVersion2(String key) {
+            for (String v2 : VERSION_2) {
+                if (key.equals(v2)) {
+                    return true;
+                }
+            }
+            return key.startsWith(EXCESS_ENTHALPY + " ") || key.startsWith(EXCESS_VOLUME + " ternary");
         }
 
         private void sort(Row r) {
@@ -103,17 +130,25 @@ public final class CardReader {
                     return;
                 }
             }
-            Matcher m = EXCESS_COEFFICIENT.matcher(r.key);
+            Matcher m = SECTION_ROW.matcher(r.key);
             if (m.matches()) {
-                excessRows.computeIfAbsent(Integer.parseInt(m.group(1)), k -> new ArrayList<>()).add(r);
+                SectionRows section = sections.computeIfAbsent(m.group(1), SectionRows::new);
+                if (m.group(2) != null) {
+                    section.binary.computeIfAbsent(Integer.parseInt(m.group(2)), k -> new ArrayList<>()).add(r);
+                } else if (m.group(3) != null) {
+                    int c = Integer.parseInt(m.group(3));
+                    if (c > 2) {
+                        throw Problem.UNKNOWN_LABEL.raise(r.number, r.label);
+                    }
+                    section.ternary.computeIfAbsent(c, k -> new ArrayList<>()).add(r);
+                } else {
+                    section.reference.add(r);
+                }
                 putKeyed(r);
                 return;
             }
             for (String k : KEYED) {
                 if (r.key.equals(k)) {
-                    if (k.equals(EXCESS_REFERENCE)) {
-                        excessReferenceRows.add(r);
-                    }
                     putKeyed(r);
                     return;
                 }
@@ -130,8 +165,11 @@ public final class CardReader {
         }
 
         Card card() {
+            Units.MolarEnthalpy enthalpyUnit = global.containsKey(ENTHALPY_UNIT)
+                    ? unit(ENTHALPY_UNIT, Units.MolarEnthalpy.class) : null;
             units = new Units(unit(TEMPERATURE_UNIT, Units.Temperature.class), unit(DENSITY_UNIT, Units.Density.class),
-                    unit(MOLAR_VOLUME_UNIT, Units.MolarVolume.class), unit(MOLAR_MASS_UNIT, Units.MolarMass.class));
+                    unit(MOLAR_VOLUME_UNIT, Units.MolarVolume.class), unit(MOLAR_MASS_UNIT, Units.MolarMass.class),
+                    enthalpyUnit);
             String source = required(SOURCE).text(0);
             required(SOURCE).atMost(1);
             Row titleRow = global.get(TITLE);
@@ -157,18 +195,105 @@ public final class CardReader {
             checkSubjects(componentRows);
             Validity validity = validity(names);
             for (int i = 0; i < names.size(); i++) {
-                components.add(new Component(names.get(i), masses.get(i), density(names.get(i), validity)));
+                components.add(new Component(names.get(i), masses.get(i), density(names.get(i), validity),
+                        heatCapacity(names.get(i))));
             }
-            RedlichKister[][] excess = excess(names);
+            int[] asymmetric = {-1};
+            GeometricModel model = model(names, asymmetric);
+            boolean missingIdeal = missingPairsIdeal();
+            // A card may describe enthalpy alone; then the volumetric functions refuse rather than guess.
+            boolean enthalpyOnly = sections.containsKey(EXCESS_ENTHALPY) && !sections.containsKey(EXCESS_VOLUME);
+            ExcessFunction volume = enthalpyOnly ? null : section(EXCESS_VOLUME, units.molarVolume().toCm3PerMol(1.0),
+                    names, model, asymmetric[0], missingIdeal);
+            ExcessFunction enthalpy = null;
+            if (sections.containsKey(EXCESS_ENTHALPY)) {
+                if (enthalpyUnit == null) {
+                    throw Problem.MISSING_ROW.raise(ENTHALPY_UNIT);
+                }
+                enthalpy = section(EXCESS_ENTHALPY, enthalpyUnit.toJoulePerMol(1.0), names, model, asymmetric[0],
+                        missingIdeal);
+            }
             boolean allow = extrapolation();
-            return new Card(title, source, units, components, excess, validity, allow);
+            return new Card(title, source, units, components, volume, enthalpy, validity, allow, missingIdeal);
+        }
+
+        /** The component's heat capacity, or null when the card gives none. */
+        private HeatCapacity heatCapacity(String name) {
+            String subject = normalise(name);
+            Row r = keyedRows(HEAT_CAPACITY).get(subject);
+            Row reference = keyedRows(HEAT_CAPACITY_REFERENCE).get(subject);
+            if (r == null) {
+                if (reference != null) {
+                    throw Problem.MISSING_PAIR_ROW.raise(HEAT_CAPACITY_REFERENCE, name, HEAT_CAPACITY);
+                }
+                return null;
+            }
+            if (units.enthalpy() == null) {
+                throw Problem.MISSING_ROW.raise(ENTHALPY_UNIT);
+            }
+            double[] c = r.numbersFrom(1);
+            for (int j = 0; j < c.length; j++) {
+                c[j] = units.enthalpy().toJoulePerMol(c[j]);
+            }
+            double tRef = 298.15; // irrelevant for a constant heat capacity
+            if (reference != null) {
+                reference.atMost(2);
+                tRef = units.temperature().toKelvin(reference.number(1));
+            } else if (c.length > 1) {
+                throw Problem.MISSING_PAIR_ROW.raise(HEAT_CAPACITY, name, HEAT_CAPACITY_REFERENCE);
+            }
+            return new HeatCapacity(tRef, c);
+        }
+
+        private GeometricModel model(List<String> names, int[] asymmetric) {
+            Row r = global.get(MODEL);
+            if (r == null) {
+                return GeometricModel.MUGGIANU;
+            }
+            String kind = normalise(r.text(0));
+            for (GeometricModel m : GeometricModel.values()) {
+                if (kind.equals(normalise(m.cardName()))) {
+                    if (m == GeometricModel.TOOP) {
+                        r.atMost(2);
+                        String a = r.text(1).trim();
+                        for (int i = 0; i < names.size(); i++) {
+                            if (normalise(names.get(i)).equals(normalise(a))) {
+                                asymmetric[0] = i;
+                            }
+                        }
+                        if (asymmetric[0] < 0) {
+                            throw Problem.UNKNOWN_COMPONENT.raise(r.number, r.label, a);
+                        }
+                    } else {
+                        r.atMost(1);
+                    }
+                    return m;
+                }
+            }
+            throw Problem.BAD_KEYWORD.raise(r.number, r.label, r.text(0).trim(), "Muggianu, Kohler, Toop");
+        }
+
+        private boolean missingPairsIdeal() {
+            Row r = global.get(MISSING_PAIRS);
+            if (r == null) {
+                return false;
+            }
+            r.atMost(1);
+            String v = normalise(r.text(0));
+            if (v.equals("ideal")) {
+                return true;
+            }
+            if (v.equals("refuse")) {
+                return false;
+            }
+            throw Problem.BAD_KEYWORD.raise(r.number, r.label, r.text(0).trim(), "refuse, ideal");
         }
 
         /** Every keyed row must name a declared component (or, for excess rows, a pair of them). */
         private void checkSubjects(Map<String, Row> componentRows) {
             for (Map.Entry<String, LinkedHashMap<String, Row>> e : keyed.entrySet()) {
-                if (e.getKey().equals(COMPONENT) || e.getKey().startsWith(EXCESS_PREFIX)
-                        || e.getKey().equals(EXCESS_REFERENCE)) {
+                if (e.getKey().equals(COMPONENT) || SECTION_ROW.matcher(e.getKey()).matches()
+                        || java.util.Arrays.asList(PAIR_KEYED).contains(e.getKey())) {
                     continue;
                 }
                 for (Map.Entry<String, Row> s : e.getValue().entrySet()) {
@@ -282,46 +407,59 @@ public final class CardReader {
                 xLo[i] = a;
                 xHi[i] = b;
             }
-            return new Validity(lo, hi, xLo, xHi);
+            List<Validity.PairLimit> pairLimits = new ArrayList<>();
+            for (Row r : keyedRows(VALID_PAIR_TEMPERATURE).values()) {
+                int[] p = pair(r, names);
+                r.atMost(3);
+                double a = units.temperature().toKelvin(r.number(1));
+                double b = units.temperature().toKelvin(r.number(2));
+                if (!(a < b)) {
+                    throw Problem.BAD_RANGE.raise(r.number, r.label, Numbers.show(r.number(1)),
+                            Numbers.show(r.number(2)));
+                }
+                if (!(a > 0)) {
+                    throw Problem.NOT_POSITIVE.raise(r.number, r.label, "the lower limit, in kelvin,",
+                            Numbers.show(a) + " K");
+                }
+                pairLimits.add(new Validity.PairLimit(p[0], p[1], a, b, Double.NaN, Double.NaN));
+            }
+            for (Row r : keyedRows(VALID_PAIR_FRACTION).values()) {
+                int[] p = pair(r, names);
+                r.atMost(3);
+                double a = r.number(1);
+                double b = r.number(2);
+                if (a < 0 || b > 1) {
+                    throw Problem.MOLE_FRACTION_LIMIT.raise(r.number, r.label, Numbers.show(a), Numbers.show(b));
+                }
+                if (!(a < b)) {
+                    throw Problem.BAD_RANGE.raise(r.number, r.label, Numbers.show(a), Numbers.show(b));
+                }
+                pairLimits.add(new Validity.PairLimit(p[0], p[1], Double.NaN, Double.NaN, a, b));
+            }
+            return new Validity(lo, hi, xLo, xHi, pairLimits);
         }
 
-        private RedlichKister[][] excess(List<String> names) {
+        /**
+         * One excess-property section: every pair's Redlich–Kister set (a missing pair is an error unless the card
+         * says 'missing pairs | ideal') and the optional ternary terms.
+         */
+        private ExcessFunction section(String prefix, double factor, List<String> names, GeometricModel model,
+                int asymmetric, boolean missingIdeal) {
+            SectionRows rows = sections.getOrDefault(prefix, new SectionRows(prefix));
             int n = names.size();
-            // per unordered pair (i<j): k → coefficients as written for i then j
-            Map<Long, TreeMap<Integer, double[]>> coefficients = new HashMap<>();
-            Map<Long, Row> orientation = new HashMap<>();
-            Map<Long, Double> reference = new HashMap<>();
-            Map<Long, Row> referenceRow = new HashMap<>();
-            Map<String, Row> seen = new HashMap<>();
-            double factor = units.molarVolume().toCm3PerMol(1.0);
-            // The first row of a pair, in card order, fixes the order the pair is written in.
-            List<Row> pairRows = new ArrayList<>(excessReferenceRows);
-            for (List<Row> rs : excessRows.values()) {
-                pairRows.addAll(rs);
+            // The first row of a pair (or triple), in card order, fixes the order it is written in.
+            List<Row> all = new ArrayList<>(rows.reference);
+            rows.binary.values().forEach(all::addAll);
+            rows.ternary.values().forEach(all::addAll);
+            all.sort((a, b) -> Integer.compare(a.number, b.number));
+            Map<String, Row> orientation = new HashMap<>();
+            for (Row r : all) {
+                checkOrder(r, members(r, names, sizeOf(r)), names, orientation);
             }
-            pairRows.sort((a, b) -> Integer.compare(a.number, b.number));
-            for (Row r : pairRows) {
-                checkOrder(r, pair(r, names), names, orientation);
-            }
-            for (Map.Entry<Integer, List<Row>> e : excessRows.entrySet()) {
-                int k = e.getKey();
-                for (Row r : e.getValue()) {
-                    int[] p = pair(r, names);
-                    long key = pairKey(p, n);
-                    double[] c = r.numbersFrom(1);
-                    double sign = p[0] > p[1] && k % 2 == 1 ? -1.0 : 1.0;
-                    for (int j = 0; j < c.length; j++) {
-                        c[j] *= sign * factor;
-                    }
-                    coefficients.computeIfAbsent(key, x -> new TreeMap<>()).put(k, c);
-                    Row before = seen.put(key + "/" + k, r);
-                    if (before != null) {
-                        throw Problem.DUPLICATE_ROW.raise(r.number, r.label, before.number);
-                    }
-                }
-            }
-            for (Row r : excessReferenceRows) {
-                long key = pairKey(pair(r, names), n);
+            Map<String, Double> reference = new HashMap<>();
+            Map<String, Row> referenceRow = new HashMap<>();
+            for (Row r : rows.reference) {
+                String key = setKey(members(r, names), n);
                 r.atMost(2);
                 reference.put(key, units.temperature().toKelvin(r.number(1)));
                 Row before = referenceRow.put(key, r);
@@ -329,51 +467,120 @@ public final class CardReader {
                     throw Problem.DUPLICATE_ROW.raise(r.number, r.label, before.number);
                 }
             }
-            RedlichKister[][] result = new RedlichKister[n][n];
+            Map<String, TreeMap<Integer, double[]>> binary = coefficients(rows.binary, names, 2, factor, true);
+            Map<String, TreeMap<Integer, double[]>> ternary = coefficients(rows.ternary, names, 3, factor, false);
+            RedlichKister[][] pairs = new RedlichKister[n][n];
             for (int i = 0; i < n; i++) {
                 for (int j = i + 1; j < n; j++) {
-                    long key = (long) i * n + j;
-                    TreeMap<Integer, double[]> ks = coefficients.get(key);
+                    String key = setKey(new int[] {i, j}, n);
+                    TreeMap<Integer, double[]> ks = binary.get(key);
                     String pairName = names.get(i) + " + " + names.get(j);
                     if (ks == null) {
                         if (referenceRow.containsKey(key)) {
-                            throw Problem.MISSING_PAIR_ROW.raise("excess volume reference temperature", pairName,
-                                    "excess volume A0");
+                            throw Problem.MISSING_PAIR_ROW.raise(prefix + REFERENCE_SUFFIX, pairName, prefix + " A0");
                         }
-                        throw Problem.MISSING_PAIR.raise(names.get(i), names.get(j));
-                    }
-                    double[][] a = new double[ks.lastKey() + 1][];
-                    boolean temperatureDependent = false;
-                    for (int k = 0; k < a.length; k++) {
-                        a[k] = ks.get(k);
-                        if (a[k] == null) {
-                            throw Problem.COEFFICIENT_GAP.raise(ks.ceilingKey(k), pairName, k);
+                        if (!missingIdeal) {
+                            throw Problem.MISSING_PAIR.raise(prefix, names.get(i), names.get(j), prefix);
                         }
-                        temperatureDependent |= a[k].length > 1;
+                        continue;
                     }
-                    Double tRef = reference.get(key);
-                    if (tRef == null) {
-                        if (temperatureDependent) {
-                            throw Problem.MISSING_PAIR_ROW.raise("excess volume A", pairName,
-                                    "excess volume reference temperature");
-                        }
-                        tRef = 298.15; // irrelevant: every A_k is a constant
-                    }
-                    result[i][j] = new RedlichKister(tRef, a);
+                    double[][] a = withoutGaps(ks, prefix + " A", pairName);
+                    pairs[i][j] = new RedlichKister(referenceFor(reference, key, a, prefix, pairName), a);
                 }
             }
-            return result;
+            List<TernaryTerm> terms = new ArrayList<>();
+            for (Map.Entry<String, TreeMap<Integer, double[]>> e : ternary.entrySet()) {
+                Row first = orientation.get(e.getKey());
+                int[] t = members(first, names);
+                String tripleName = names.get(t[0]) + " + " + names.get(t[1]) + " + " + names.get(t[2]);
+                double[][] c = withoutGaps(e.getValue(), prefix + " ternary C", tripleName);
+                terms.add(new TernaryTerm(t[0], t[1], t[2], referenceFor(reference, e.getKey(), c, prefix,
+                        tripleName), c));
+            }
+            for (Map.Entry<String, Row> e : referenceRow.entrySet()) {
+                if (members(e.getValue(), names).length == 3 && !ternary.containsKey(e.getKey())) {
+                    throw Problem.MISSING_PAIR_ROW.raise(prefix + REFERENCE_SUFFIX, e.getValue().text(0).trim(),
+                            prefix + " ternary C0");
+                }
+            }
+            return new ExcessFunction(n, model, asymmetric, pairs, terms);
         }
 
-        /** Index of the unordered pair {p[0], p[1]} among n components. */
-        private static long pairKey(int[] p, int n) {
-            return (long) Math.min(p[0], p[1]) * n + Math.max(p[0], p[1]);
+        /**
+         * Coefficient rows of one kind, per pair or triple (keyed by its member set) and index, converted to internal
+         * units and, for pairs, to the card's component order (A_k → (−1)^k A_k when written the other way round).
+         * Triples keep the order of their first row, so they need no conversion.
+         */
+        private Map<String, TreeMap<Integer, double[]>> coefficients(TreeMap<Integer, List<Row>> byIndex,
+                List<String> names, int size, double factor, boolean toCardOrder) {
+            Map<String, TreeMap<Integer, double[]>> out = new LinkedHashMap<>();
+            Map<String, Row> seen = new HashMap<>();
+            for (Map.Entry<Integer, List<Row>> e : byIndex.entrySet()) {
+                int k = e.getKey();
+                for (Row r : e.getValue()) {
+                    int[] p = members(r, names, size);
+                    String key = setKey(p, names.size());
+                    double[] c = r.numbersFrom(1);
+                    double sign = toCardOrder && p[0] > p[1] && k % 2 == 1 ? -1.0 : 1.0;
+                    for (int j = 0; j < c.length; j++) {
+                        c[j] *= sign * factor;
+                    }
+                    out.computeIfAbsent(key, x -> new TreeMap<>()).put(k, c);
+                    Row before = seen.put(key + "/" + k, r);
+                    if (before != null) {
+                        throw Problem.DUPLICATE_ROW.raise(r.number, r.label, before.number);
+                    }
+                }
+            }
+            return out;
         }
 
-        /** The first row of a pair (in card order) fixes which way round it is written; later rows must agree. */
-        private void checkOrder(Row r, int[] p, List<String> names, Map<Long, Row> orientation) {
-            Row first = orientation.putIfAbsent(pairKey(p, names.size()), r);
-            if (first != null && pair(first, names)[0] != p[0]) {
+        private double[][] withoutGaps(TreeMap<Integer, double[]> ks, String label, String subject) {
+            double[][] a = new double[ks.lastKey() + 1][];
+            for (int k = 0; k < a.length; k++) {
+                a[k] = ks.get(k);
+                if (a[k] == null) {
+                    throw Problem.COEFFICIENT_GAP.raise(label + ks.ceilingKey(k), subject, label + k);
+                }
+            }
+            return a;
+        }
+
+        /** The reference temperature of a set, required when any coefficient depends on temperature. */
+        private double referenceFor(Map<String, Double> reference, String key, double[][] a, String prefix,
+                String subject) {
+            Double tRef = reference.get(key);
+            if (tRef != null) {
+                return tRef;
+            }
+            for (double[] row : a) {
+                if (row.length > 1) {
+                    throw Problem.MISSING_PAIR_ROW.raise(prefix + " coefficient", subject, prefix + REFERENCE_SUFFIX);
+                }
+            }
+            return 298.15; // irrelevant: every coefficient is a constant
+        }
+
+        /** How many components a section row's subject names: 3 for ternary rows, 2 for A_k rows, either for others. */
+        private static int sizeOf(Row r) {
+            Matcher m = SECTION_ROW.matcher(r.key);
+            if (!m.matches()) {
+                return 0;
+            }
+            return m.group(2) != null ? 2 : m.group(3) != null ? 3 : 0;
+        }
+
+        /** A key for the set {p...} among n components, independent of the order written. */
+        private static String setKey(int[] p, int n) {
+            int[] q = p.clone();
+            java.util.Arrays.sort(q);
+            return java.util.Arrays.toString(q);
+        }
+
+        /** The first row of a pair or triple (in card order) fixes its order; later rows must agree. */
+        private void checkOrder(Row r, int[] p, List<String> names, Map<String, Row> orientation) {
+            Row first = orientation.putIfAbsent(setKey(p, names.size()), r);
+            if (first != null && !java.util.Arrays.equals(members(first, names), p)) {
                 throw Problem.PAIR_ORDER.raise(r.number, r.label, r.text(0).trim(), first.text(0).trim(),
                         first.number);
             }
@@ -381,13 +588,36 @@ public final class CardReader {
 
         /** Component indices named by a pair subject "a + b". */
         private int[] pair(Row r, List<String> known) {
+            int[] p = members(r, known);
+            if (p.length != 2) {
+                throw Problem.BAD_PAIR.raise(r.number, r.label, r.text(0).trim());
+            }
+            return p;
+        }
+
+        /** Component indices named by a subject "a + b" or "a + b + c", all different. */
+        private int[] members(Row r, List<String> known) {
+            return members(r, known, 0);
+        }
+
+        /**
+         * Component indices named by a subject of {@code size} members (2 or 3; 0 accepts either), all different.
+         * Ternary rows take three; everything else two.
+         */
+        private int[] members(Row r, List<String> known, int size) {
             String subject = r.text(0);
             String[] parts = subject.split("\\+", -1);
-            if (parts.length != 2 || isBlank(parts[0]) || isBlank(parts[1])) {
-                throw Problem.BAD_PAIR.raise(r.number, r.label, subject.trim());
+            boolean triple = size == 3 || (size == 0 && parts.length == 3);
+            Problem bad = triple ? Problem.BAD_TRIPLE : Problem.BAD_PAIR;
+            boolean blank = parts.length != (triple ? 3 : 2);
+            for (String part : parts) {
+                blank |= isBlank(part);
             }
-            int[] p = new int[2];
-            for (int s = 0; s < 2; s++) {
+            if (blank) {
+                throw bad.raise(r.number, r.label, subject.trim());
+            }
+            int[] p = new int[parts.length];
+            for (int s = 0; s < parts.length; s++) {
                 p[s] = -1;
                 for (int i = 0; i < known.size(); i++) {
                     if (normalise(known.get(i)).equals(normalise(parts[s]))) {
@@ -397,9 +627,11 @@ public final class CardReader {
                 if (p[s] < 0) {
                     throw Problem.UNKNOWN_COMPONENT.raise(r.number, r.label, parts[s].trim());
                 }
-            }
-            if (p[0] == p[1]) {
-                throw Problem.BAD_PAIR.raise(r.number, r.label, subject.trim());
+                for (int q = 0; q < s; q++) {
+                    if (p[q] == p[s]) {
+                        throw bad.raise(r.number, r.label, subject.trim());
+                    }
+                }
             }
             return p;
         }
@@ -494,6 +726,18 @@ public final class CardReader {
     static String normalise(String s) {
         String t = s.trim().replaceAll("\\s+", " ").toLowerCase(Locale.ROOT);
         return t.endsWith(":") ? t.substring(0, t.length() - 1).trim() : t;
+    }
+
+    /** The rows of one excess-property section, sorted by kind as they are read. */
+    private static final class SectionRows {
+        final String prefix;
+        final TreeMap<Integer, List<Row>> binary = new TreeMap<>();
+        final TreeMap<Integer, List<Row>> ternary = new TreeMap<>();
+        final List<Row> reference = new ArrayList<>();
+
+        SectionRows(String prefix) {
+            this.prefix = prefix;
+        }
     }
 
     /** One non-blank row of the card: its 1-based row number, label and the cells after the label. */

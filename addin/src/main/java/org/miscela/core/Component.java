@@ -1,15 +1,27 @@
 package org.miscela.core;
 
-/** A pure component of a mixture: its name, molar mass (g/mol) and density model. Immutable. */
+/** A pure component of a mixture: its name, molar mass (g/mol), density model and heat capacity. Immutable. */
 public final class Component {
     private final String name;
     private final double molarMass;
     private final PureDensity density;
+    private final HeatCapacity heatCapacity;
 
     public Component(String name, double molarMassGramPerMol, PureDensity density) {
+        this(name, molarMassGramPerMol, density, null);
+    }
+
+    /** @param heatCapacity null when the card gives none */
+    public Component(String name, double molarMassGramPerMol, PureDensity density, HeatCapacity heatCapacity) {
         this.name = name;
         this.molarMass = molarMassGramPerMol;
         this.density = density;
+        this.heatCapacity = heatCapacity;
+    }
+
+    /** The liquid's heat capacity, or null when the card gives none. */
+    public HeatCapacity heatCapacity() {
+        return heatCapacity;
     }
 
     public String name() {

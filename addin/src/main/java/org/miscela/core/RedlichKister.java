@@ -47,6 +47,49 @@ public final class RedlichKister {
         return v;
     }
 
+    /** dA_k/dT at the given temperature, per kelvin. */
+    public double coefficientSlopeAt(int k, double kelvin) {
+        double dt = kelvin - referenceKelvin;
+        double[] row = a[k];
+        double v = 0.0;
+        for (int j = row.length - 1; j >= 1; j--) {
+            v = v * dt + j * row[j];
+        }
+        return v;
+    }
+
+    /** Whether any A_k depends on temperature. */
+    public boolean temperatureDependent() {
+        for (double[] row : a) {
+            if (row.length > 1) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * The series S(d) = Σ_k A_k·d^k and its first two derivatives in d, with the coefficients at T
+     * (or, when {@code temperatureSlope}, their temperature derivatives dA_k/dT). Multicomponent models evaluate
+     * each binary as x_i·x_j·S(d) with a model-specific d.
+     *
+     * @param out receives {S, dS/dd, d²S/dd²}
+     */
+    public void series(double d, double kelvin, boolean temperatureSlope, double[] out) {
+        int last = a.length - 1;
+        double s = temperatureSlope ? coefficientSlopeAt(last, kelvin) : coefficientAt(last, kelvin);
+        double ds = 0.0;
+        double dds = 0.0;
+        for (int k = last - 1; k >= 0; k--) {
+            dds = dds * d + ds;
+            ds = ds * d + s;
+            s = s * d + (temperatureSlope ? coefficientSlopeAt(k, kelvin) : coefficientAt(k, kelvin));
+        }
+        out[0] = s;
+        out[1] = ds;
+        out[2] = 2.0 * dds;
+    }
+
     /** The same expansion written for the components in the other order: A_k → (−1)^k A_k. */
     public RedlichKister swapped() {
         double[][] b = new double[a.length][];

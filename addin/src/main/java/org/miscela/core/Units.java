@@ -142,6 +142,45 @@ public final class Units {
         }
     }
 
+    /** Molar enthalpy units: the factor to J/mol. Heat capacities are in the same unit per kelvin. */
+    public enum MolarEnthalpy implements Spelled {
+        J_PER_MOL("J/mol", 1.0, "J/mol"),
+        KJ_PER_MOL("kJ/mol", 1000.0, "kJ/mol");
+
+        final String symbol;
+        final double factor;
+        final String[] spellings;
+
+        MolarEnthalpy(String symbol, double factor, String... spellings) {
+            this.symbol = symbol;
+            this.factor = factor;
+            this.spellings = spellings;
+        }
+
+        @Override
+        public String symbol() {
+            return symbol;
+        }
+
+        @Override
+        public String[] spellings() {
+            return spellings.clone();
+        }
+
+        /** The energy unit of this molar unit times moles: J or kJ. */
+        public String energySymbol() {
+            return symbol.substring(0, symbol.indexOf('/'));
+        }
+
+        public double toJoulePerMol(double v) {
+            return v * factor;
+        }
+
+        public double fromJoulePerMol(double v) {
+            return v / factor;
+        }
+    }
+
     /** A unit with a display symbol and the spellings a card may use for it. */
     public interface Spelled {
         String symbol();
@@ -153,12 +192,21 @@ public final class Units {
     private final Density density;
     private final MolarVolume molarVolume;
     private final MolarMass molarMass;
+    private final MolarEnthalpy enthalpy;
 
+    /** Units of a card without enthalpy data. */
     public Units(Temperature temperature, Density density, MolarVolume molarVolume, MolarMass molarMass) {
+        this(temperature, density, molarVolume, molarMass, null);
+    }
+
+    /** @param enthalpy null when the card holds no enthalpy data */
+    public Units(Temperature temperature, Density density, MolarVolume molarVolume, MolarMass molarMass,
+            MolarEnthalpy enthalpy) {
         this.temperature = temperature;
         this.density = density;
         this.molarVolume = molarVolume;
         this.molarMass = molarMass;
+        this.enthalpy = enthalpy;
     }
 
     public Temperature temperature() {
@@ -175,6 +223,11 @@ public final class Units {
 
     public MolarMass molarMass() {
         return molarMass;
+    }
+
+    /** The enthalpy unit, or null when the card states none (and so holds no enthalpy data). */
+    public MolarEnthalpy enthalpy() {
+        return enthalpy;
     }
 
     /** Finds the constant whose spelling matches {@code text} exactly (after trimming), or null. */
@@ -206,8 +259,8 @@ public final class Units {
 
     @Override
     public String toString() {
-        return String.format(Locale.ROOT, "%s, %s, %s, %s", temperature.symbol, density.symbol, molarVolume.symbol,
-                molarMass.symbol);
+        return String.format(Locale.ROOT, "%s, %s, %s, %s%s", temperature.symbol, density.symbol, molarVolume.symbol,
+                molarMass.symbol, enthalpy == null ? "" : ", " + enthalpy.symbol);
     }
 
     @Override
@@ -217,11 +270,11 @@ public final class Units {
         }
         Units u = (Units) o;
         return u.temperature == temperature && u.density == density && u.molarVolume == molarVolume
-                && u.molarMass == molarMass;
+                && u.molarMass == molarMass && u.enthalpy == enthalpy;
     }
 
     @Override
     public int hashCode() {
-        return Arrays.hashCode(new Object[] {temperature, density, molarVolume, molarMass});
+        return Arrays.hashCode(new Object[] {temperature, density, molarVolume, molarMass, enthalpy});
     }
 }

@@ -138,7 +138,7 @@ class CardFormatDocTest {
     @Test
     void examplesBehaveAsDescribed() throws IOException {
         List<Example> examples = examples(lines());
-        assertEquals(3, examples.size());
+        assertEquals(5, examples.size());
         Card one = CardReader.read(examples.get(0).cells);
         // "the functions refuse x1 above 0.9 unless extrapolation is allowed"
         assertEquals(CardFunctions.OK, CardFunctions.check(one, 0.0, T, Extrapolation.AS_CARD));
@@ -162,6 +162,26 @@ class CardFormatDocTest {
         assertEquals(-2.1, three.excessVolume(0, 1).coefficientAt(0, T), 1e-12); // -0.0021 L/mol in cm³/mol
         assertEquals(-0.4, three.excessVolume(0, 1).coefficientAt(1, T), 1e-12);
         assertEquals(74.1, three.components().get(0).molarMass(), 1e-9);
+
+        // Example 4: Toop with water asymmetric; the additive + glycol pair limit; a ternary term.
+        Card four = CardReader.read(examples.get(3).cells);
+        assertEquals(GeometricModel.TOOP, four.excessVolume().model());
+        assertEquals(1, four.excessVolume().asymmetricComponent());
+        assertEquals(1, four.excessVolume().ternaryTerms().size());
+        double[] inside = {0.5, 0.4, 0.1}; // additive share of the pair 0.1/0.6 = 0.17
+        double[] outside = {0.2, 0.6, 0.2}; // 0.2/0.4 = 0.5 > 0.3
+        assertTrue(CardFunctions.inside(four, inside, 20));
+        assertTrue(CardFunctions.check(four, outside, 20, Extrapolation.AS_CARD).contains("additive + glycol"));
+
+        // Example 5: enthalpy only; volumes refused; H^E depends on T, so Cp^E = x1 x2 Σ dA_k/dT (x1 − x2)^k.
+        Card five = CardReader.read(examples.get(4).cells);
+        assertEquals(null, five.excessVolume());
+        assertEquals(Problem.NO_VOLUME, org.junit.jupiter.api.Assertions.assertThrows(MiscelaException.class,
+                () -> CardFunctions.density(five, 0.2, 25, Extrapolation.AS_CARD)).problem());
+        double[] x = {0.2, 0.8};
+        assertEquals(0.2 * 0.8 * 0.05 * 1000, five.mixture().excessHeatCapacity(x, 298.15), 1e-9);
+        assertEquals(0.2 * 0.8 * (-55 + 33 * -0.6 + 14 * 0.36),
+                CardFunctions.excessEnthalpy(five, x, 25, Extrapolation.AS_CARD), 1e-12);
     }
 
     /** The document's table of problems names every card problem of the catalogue. */
@@ -182,6 +202,7 @@ class CardFormatDocTest {
         all.addAll(Arrays.asList(Units.Density.values()));
         all.addAll(Arrays.asList(Units.MolarVolume.values()));
         all.addAll(Arrays.asList(Units.MolarMass.values()));
+        all.addAll(Arrays.asList(Units.MolarEnthalpy.values()));
         for (Units.Spelled u : all) {
             for (String s : u.spellings()) {
                 assertTrue(text.contains("`" + s + "`"), "docs/card-format.md does not list the spelling " + s);

@@ -32,6 +32,14 @@ class CardReaderTest {
         return edit.apply(TestCard.base()).cells();
     }
 
+    private static Object[][] v2(java.util.function.UnaryOperator<TestCard> edit) {
+        return edit.apply(TestCard.base().set(1, "Miscela card", 2)).cells();
+    }
+
+    private static Object[][] ternary(java.util.function.UnaryOperator<TestCard> edit) {
+        return edit.apply(TestCard.ternary()).cells();
+    }
+
     static Stream<Arguments> malformed() {
         return Stream.of(
                 bad("no cells", Problem.CARD_EMPTY, 0, "empty", new Object[0][]),
@@ -44,8 +52,12 @@ class CardReaderTest {
                         base(c -> c.insert(1).blank(2))),
                 bad("comment before the header", Problem.CARD_HEADER, 1, "\"# draft\"",
                         base(c -> c.insert(1, "# draft"))),
-                bad("version 2", Problem.CARD_VERSION, 1, "version 2 is not supported",
-                        base(c -> c.set(1, "Miscela card", 2))),
+                bad("version 3", Problem.CARD_VERSION, 1, "version 3 is not supported",
+                        base(c -> c.set(1, "Miscela card", 3))),
+                bad("a version 2 row on a version 1 card", Problem.NEEDS_VERSION_2, 20, "'Miscela card | 2'",
+                        base(c -> c.row("multicomponent model", "Kohler"))),
+                bad("an excess enthalpy row on a version 1 card", Problem.NEEDS_VERSION_2, 20, "excess enthalpy A0",
+                        base(c -> c.row("excess enthalpy A0", "alpha + beta", -800))),
                 bad("version 1.5", Problem.CARD_VERSION, 1, "version 1.5",
                         base(c -> c.set(1, "Miscela card", 1.5))),
                 bad("unknown label", Problem.UNKNOWN_LABEL, 20, "\"viscosity\"",
@@ -189,7 +201,54 @@ class CardReaderTest {
                 bad("no A0", Problem.COEFFICIENT_GAP, 0, "but not 'excess volume A0'",
                         base(c -> c.blank(17))),
                 bad("no composition limit", Problem.NO_COMPOSITION_LIMIT, 0, "'valid mole fraction'",
-                        base(c -> c.blank(16))));
+                        base(c -> c.blank(16))),
+                // --- multicomponent, enthalpy and validity rows
+                bad("ternary term naming two components", Problem.BAD_TRIPLE, 25, "\"alpha + beta\"",
+                        ternary(c -> c.row("excess volume ternary C0", "alpha + beta", 0.3))),
+                bad("ternary term naming one component twice", Problem.BAD_TRIPLE, 25, "\"alpha + beta + beta\"",
+                        ternary(c -> c.row("excess volume ternary C0", "alpha + beta + beta", 0.3))),
+                bad("ternary coefficient beyond C2", Problem.UNKNOWN_LABEL, 25, "excess volume ternary C3",
+                        ternary(c -> c.row("excess volume ternary C3", "alpha + beta + gamma", 0.3))),
+                bad("ternary gap", Problem.COEFFICIENT_GAP, 0, "'excess volume ternary C0'",
+                        ternary(c -> c.row("excess volume ternary C1", "alpha + beta + gamma", 0.3))),
+                bad("ternary written two ways", Problem.PAIR_ORDER, 26, "in row 25",
+                        ternary(c -> c.row("excess volume ternary C0", "alpha + beta + gamma", 0.3)
+                                .row("excess volume ternary C1", "beta + alpha + gamma", 0.1))),
+                bad("T-dependent ternary term without reference temperature", Problem.MISSING_PAIR_ROW, 0,
+                        "'excess volume reference temperature'",
+                        ternary(c -> c.row("excess volume ternary C0", "alpha + beta + gamma", 0.3, 0.01))),
+                bad("ternary reference temperature without terms", Problem.MISSING_PAIR_ROW, 0,
+                        "no 'excess volume ternary C0' row",
+                        ternary(c -> c.row("excess volume reference temperature", "alpha + beta + gamma", 298.15))),
+                bad("missing pair in a ternary card", Problem.MISSING_PAIR, 0, "pair beta + gamma",
+                        ternary(c -> c.blank(24))),
+                bad("unknown model", Problem.BAD_KEYWORD, 25, "Muggianu, Kohler, Toop",
+                        ternary(c -> c.row("multicomponent model", "Redlich"))),
+                bad("Toop without its asymmetric component", Problem.MISSING_VALUE, 25, "column 3",
+                        ternary(c -> c.row("multicomponent model", "Toop"))),
+                bad("Toop naming an unknown component", Problem.UNKNOWN_COMPONENT, 25, "\"delta\"",
+                        ternary(c -> c.row("multicomponent model", "Toop", "delta"))),
+                bad("Muggianu with a component", Problem.EXTRA_VALUE, 25, "column 3",
+                        ternary(c -> c.row("multicomponent model", "Muggianu", "alpha"))),
+                bad("unknown missing-pairs word", Problem.BAD_KEYWORD, 25, "refuse, ideal",
+                        ternary(c -> c.row("missing pairs", "zero"))),
+                bad("excess enthalpy without an enthalpy unit", Problem.MISSING_ROW, 0, "\"enthalpy unit\"",
+                        v2(c -> c.row("excess enthalpy A0", "alpha + beta", -800))),
+                bad("unknown enthalpy unit", Problem.UNKNOWN_UNIT, 20, "J/mol, kJ/mol",
+                        v2(c -> c.row("enthalpy unit", "cal/mol"))),
+                bad("heat capacity without an enthalpy unit", Problem.MISSING_ROW, 0, "\"enthalpy unit\"",
+                        v2(c -> c.row("heat capacity", "alpha", 112.0))),
+                bad("temperature-dependent heat capacity without reference", Problem.MISSING_PAIR_ROW, 0,
+                        "'heat capacity reference temperature'",
+                        v2(c -> c.row("enthalpy unit", "J/mol").row("heat capacity", "alpha", 112.0, 0.3))),
+                bad("heat capacity of an unknown component", Problem.UNKNOWN_COMPONENT, 21, "\"delta\"",
+                        v2(c -> c.row("enthalpy unit", "J/mol").row("heat capacity", "delta", 112.0))),
+                bad("pair temperature range reversed", Problem.BAD_RANGE, 20, "lower limit 300",
+                        v2(c -> c.row("valid pair temperature", "alpha + beta", 300, 290))),
+                bad("pair mole-fraction range beyond 1", Problem.MOLE_FRACTION_LIMIT, 20, "0..1.5",
+                        v2(c -> c.row("valid pair mole fraction", "alpha + beta", 0, 1.5))),
+                bad("pair limit on a pair of one", Problem.BAD_PAIR, 20, "\"alpha\"",
+                        v2(c -> c.row("valid pair mole fraction", "alpha", 0, 0.5))));
     }
 
     @ParameterizedTest(name = "{0}")
@@ -216,7 +275,7 @@ class CardReaderTest {
         Set<Problem> missing = EnumSet.copyOf(card);
         missing.removeAll(produced);
         assertTrue(missing.isEmpty(), "no malformed card for " + missing);
-        assertEquals(29, card.size(), "the card problems changed; update the malformed cards");
+        assertEquals(31, card.size(), "the card problems changed; update the malformed cards");
     }
 
     // ------------------------------------------------------------------ well-formed cards

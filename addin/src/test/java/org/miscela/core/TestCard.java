@@ -47,6 +47,20 @@ final class TestCard {
                 .row("excess volume A2", "alpha + beta", -0.5);
     }
 
+    /**
+     * The base card with a third component, gamma (invented values), in card format version 2 so rows of the
+     * multicomponent features may be added. Rows 1-19 as in {@link #base}, then
+     * 20 component gamma, 21-22 its density, 23 excess volume A0 alpha + gamma, 24 excess volume A0 beta + gamma.
+     */
+    static TestCard ternary() {
+        return base().set(1, "Miscela card", 2)
+                .row("component", "gamma", 92.09)
+                .row("density model", "gamma", "constant")
+                .row("density coefficients", "gamma", 1261.0)
+                .row("excess volume A0", "alpha + gamma", -1.2)
+                .row("excess volume A0", "beta + gamma", -0.8);
+    }
+
     /** Appends a row. */
     TestCard row(Object... cells) {
         rows.add(cells(cells));
