@@ -3,11 +3,13 @@ package org.miscela.calc;
 import com.sun.star.uno.Any;
 import com.sun.star.uno.AnyConverter;
 import com.sun.star.uno.Type;
+import org.miscela.core.AmountBasis;
 import org.miscela.core.Card;
 import org.miscela.core.CardCache;
 import org.miscela.core.CardFunctions;
 import org.miscela.core.Extrapolation;
 import org.miscela.core.Problem;
+import org.miscela.core.PropertyKind;
 
 /**
  * Decoding of Calc's arguments and encoding of results. Calc passes an {@code any} argument as a Double, a String,
@@ -21,7 +23,13 @@ final class Arguments {
 
     /** A function of one point: the card and the point's numbers, in argument order. */
     interface PointFunction {
-        double at(Card card, double[] point);
+        /** A Double (checked finite) or a Boolean. */
+        Object at(Card card, double[] point);
+    }
+
+    /** A function of one composition (or one batch's amounts) and a temperature. */
+    interface RowFunction {
+        Object at(Card card, double[] row, double temperature);
     }
 
     static Card card(Object[][] cells) {
@@ -96,7 +104,7 @@ final class Arguments {
             for (int i = 0; i < values.length; i++) {
                 point[i] = required(names[i], scalars[i]);
             }
-            return finite(f.at(card, point));
+            return checked(f.at(card, point));
         }
         Object[][] out = new Object[rows][cols];
         for (int r = 0; r < rows; r++) {
@@ -110,20 +118,181 @@ final class Arguments {
                     }
                     point[i] = required(names[i], cell);
                 }
-                out[r][c] = blank ? "" : (Object) finite(f.at(card, point));
+                out[r][c] = blank ? "" : checked(f.at(card, point));
             }
         }
         return new Any(GRID, out);
+    }
+
+    /**
+     * Evaluates f over compositions. For a two-component card a single value or a range that is not two columns wide
+     * holds values of x1 (broadcast against the temperature as in {@link #broadcast}); otherwise see
+     * {@link #overRows}.
+     */
+    static Object overCompositions(Card card, Object[][] composition, Object[][] temperature, RowFunction f) {
+        if (card.componentCount() == 2 && !(nonEmpty(composition) && composition[0].length == 2)) {
+            return broadcast(card, new String[] {"mole fraction", "temperature"},
+                    new Object[][][] {composition, temperature},
+                    (k, p) -> f.at(k, CardFunctions.binary(k, p[0]), p[1]));
+        }
+        return overRows(card, "composition", composition, temperature, f);
+    }
+
+    /**
+     * Evaluates f over rows of n values, one per component in card order: a row or a column of n cells is one row
+     * (a single result); a block of n columns is one row per line (a column of results). The temperature is a single
+     * value or a column with one value per line. A line that is entirely blank, or whose temperature is blank,
+     * gives a blank result.
+     */
+    static Object overRows(Card card, String what, Object[][] grid, Object[][] temperature, RowFunction f) {
+        Object[][] lines = lines(card, what, grid);
+        Object[] temperatures = temperatures(temperature, lines.length);
+        int n = card.componentCount();
+        Object[][] out = new Object[lines.length][1];
+        double[] row = new double[n];
+        for (int r = 0; r < lines.length; r++) {
+            if (allBlank(lines[r]) || isBlank(temperatures[r])) {
+                if (lines.length == 1) {
+                    throw Problem.ARG_BLANK.raise(allBlank(lines[r]) ? what : "temperature");
+                }
+                out[r][0] = "";
+                continue;
+            }
+            for (int k = 0; k < n; k++) {
+                String name = what + " of " + card.components().get(k).name()
+                        + (lines.length > 1 ? " in line " + (r + 1) : "");
+                row[k] = required(name, lines[r][k]);
+            }
+            Object v = f.at(card, row.clone(), required("temperature", temperatures[r]));
+            out[r][0] = checked(v);
+        }
+        return lines.length == 1 ? out[0][0] : new Any(GRID, out);
+    }
+
+    /** One composition (or batch) given as a row or column of n cells, or x1 alone for a binary card. */
+    static double[] singleComposition(Card card, String what, Object[][] grid) {
+        if (card.componentCount() == 2 && nonEmpty(grid) && grid.length == 1 && grid[0].length == 1) {
+            return CardFunctions.binary(card, single(what, grid));
+        }
+        Object[][] lines = lines(card, what, grid);
+        if (lines.length != 1) {
+            throw Problem.ARG_NOT_SINGLE.raise(what);
+        }
+        double[] row = new double[card.componentCount()];
+        for (int k = 0; k < row.length; k++) {
+            row[k] = required(what + " of " + card.components().get(k).name(), lines[0][k]);
+        }
+        return row;
+    }
+
+    /** The lines of a row/column/block argument, each with one cell per component. */
+    private static Object[][] lines(Card card, String what, Object[][] grid) {
+        int n = card.componentCount();
+        if (!nonEmpty(grid)) {
+            throw Problem.ARG_BLANK.raise(what);
+        }
+        int rows = grid.length;
+        int cols = grid[0].length;
+        if (cols == n) {
+            return grid;
+        }
+        if (cols == 1 && rows == n) {
+            Object[] line = new Object[n];
+            for (int k = 0; k < n; k++) {
+                line[k] = grid[k][0];
+            }
+            return new Object[][] {line};
+        }
+        if (rows == 1 && cols == 1 && n > 2) {
+            throw Problem.NOT_BINARY.raise(n);
+        }
+        throw Problem.COMPOSITION_SHAPE.raise(rows, cols, n, n, n);
+    }
+
+    private static Object[] temperatures(Object[][] grid, int lines) {
+        if (!nonEmpty(grid)) {
+            throw Problem.ARG_BLANK.raise("temperature");
+        }
+        Object[] out = new Object[lines];
+        if (grid.length == 1 && grid[0].length == 1) {
+            java.util.Arrays.fill(out, grid[0][0]);
+            return out;
+        }
+        if (grid[0].length != 1 || grid.length != lines) {
+            throw Problem.ARG_SHAPE.raise("composition", lines, 1, "temperature", grid.length, grid[0].length);
+        }
+        for (int r = 0; r < lines; r++) {
+            out[r] = grid[r][0];
+        }
+        return out;
+    }
+
+    /** The amount basis argument: "mol" when left out. */
+    static AmountBasis basis(Object value) {
+        Object v = unwrap(value);
+        if (v == null) {
+            return AmountBasis.MOL;
+        }
+        AmountBasis b = v instanceof String ? AmountBasis.lookup((String) v) : null;
+        if (b == null) {
+            throw Problem.UNKNOWN_BASIS.raise(v instanceof String ? v : describe(v), AmountBasis.accepted());
+        }
+        return b;
+    }
+
+    /** A property name argument: "volume" when left out. */
+    static PropertyKind property(Object value) {
+        Object v = unwrap(value);
+        if (v == null) {
+            return PropertyKind.VOLUME;
+        }
+        if (!(v instanceof String)) {
+            throw Problem.UNKNOWN_PROPERTY.raise(describe(v), "volume, enthalpy");
+        }
+        return PropertyKind.lookup((String) v);
+    }
+
+    /** One number from an {@code any} argument. */
+    static double number(String what, Object value) {
+        Object v = unwrap(value);
+        if (v instanceof Object[][]) {
+            Object[][] g = (Object[][]) v;
+            return single(what, g);
+        }
+        return required(what, v);
+    }
+
+    /** A two-column (label, value) table as Calc's array result. */
+    static Object table(Object[][] rows) {
+        for (Object[] r : rows) {
+            if (r[1] instanceof Double) {
+                finite((Double) r[1]);
+            }
+        }
+        return new Any(GRID, rows);
+    }
+
+    private static boolean nonEmpty(Object[][] g) {
+        return g != null && g.length > 0 && g[0] != null && g[0].length > 0;
+    }
+
+    private static boolean allBlank(Object[] line) {
+        for (Object o : line) {
+            if (!isBlank(o)) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private static double required(String what, Object v) {
         if (isBlank(v)) {
             throw Problem.ARG_BLANK.raise(what);
         }
-        return number(what, v);
+        return numberOf(what, v);
     }
 
-    private static double number(String what, Object v) {
+    private static double numberOf(String what, Object v) {
         if (v instanceof Number) {
             return ((Number) v).doubleValue();
         }
@@ -135,6 +304,10 @@ final class Arguments {
 
     private static boolean isBlank(Object v) {
         return v == null || (v instanceof String && ((String) v).trim().isEmpty());
+    }
+
+    private static Object checked(Object v) {
+        return v instanceof Double ? finite((Double) v) : v;
     }
 
     /** The last line of defence: Calc must never receive NaN or infinity from us. */

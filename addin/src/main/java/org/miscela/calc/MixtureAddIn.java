@@ -4,6 +4,7 @@ import com.sun.star.lang.IllegalArgumentException;
 import com.sun.star.lang.XServiceInfo;
 import com.sun.star.lib.uno.helper.WeakBase;
 import org.miscela.calc.meta.FunctionCatalog;
+import org.miscela.core.AmountBasis;
 import org.miscela.core.Card;
 import org.miscela.core.CardFunctions;
 import org.miscela.core.Extrapolation;
@@ -14,7 +15,6 @@ import org.miscela.core.MiscelaException;
  * A {@link MiscelaException} becomes an IllegalArgumentException, which Calc shows as Err:502.
  */
 public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, XServiceInfo {
-    private static final String[] POINT = {"mole fraction", "temperature"};
     private static final String[] TEMPERATURE = {"temperature"};
 
     /** The office's factory needs a public no-argument constructor; the add-in keeps no per-instance state. */
@@ -28,8 +28,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
         try {
             Card c = Arguments.card(card);
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return Arguments.broadcast(c, POINT, new Object[][][] {moleFraction, temperature},
-                    (k, p) -> CardFunctions.excessMolarVolume(k, p[0], p[1], e));
+            return Arguments.overCompositions(c, moleFraction, temperature,
+                    (k, x, t) -> CardFunctions.excessMolarVolume(k, x, t, e));
         } catch (MiscelaException ex) {
             throw refused(ex);
         }
@@ -42,8 +42,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Card c = Arguments.card(card);
             int i = Arguments.component(c, component);
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return Arguments.broadcast(c, POINT, new Object[][][] {moleFraction, temperature},
-                    (k, p) -> CardFunctions.partialMolarVolume(k, i, p[0], p[1], e));
+            return Arguments.overCompositions(c, moleFraction, temperature,
+                    (k, x, t) -> CardFunctions.partialMolarVolume(k, i, x, t, e));
         } catch (MiscelaException ex) {
             throw refused(ex);
         }
@@ -56,8 +56,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Card c = Arguments.card(card);
             int i = Arguments.component(c, component);
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return Arguments.broadcast(c, POINT, new Object[][][] {moleFraction, temperature},
-                    (k, p) -> CardFunctions.partialExcessMolarVolume(k, i, p[0], p[1], e));
+            return Arguments.overCompositions(c, moleFraction, temperature,
+                    (k, x, t) -> CardFunctions.partialExcessMolarVolume(k, i, x, t, e));
         } catch (MiscelaException ex) {
             throw refused(ex);
         }
@@ -69,8 +69,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
         try {
             Card c = Arguments.card(card);
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return Arguments.broadcast(c, POINT, new Object[][][] {moleFraction, temperature},
-                    (k, p) -> CardFunctions.molarVolume(k, p[0], p[1], e));
+            return Arguments.overCompositions(c, moleFraction, temperature,
+                    (k, x, t) -> CardFunctions.molarVolume(k, x, t, e));
         } catch (MiscelaException ex) {
             throw refused(ex);
         }
@@ -82,8 +82,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
         try {
             Card c = Arguments.card(card);
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return Arguments.broadcast(c, POINT, new Object[][][] {moleFraction, temperature},
-                    (k, p) -> CardFunctions.density(k, p[0], p[1], e));
+            return Arguments.overCompositions(c, moleFraction, temperature,
+                    (k, x, t) -> CardFunctions.density(k, x, t, e));
         } catch (MiscelaException ex) {
             throw refused(ex);
         }
@@ -115,10 +115,106 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     @Override
     public String checkPoint(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object extrapolate) {
         try {
-            return CardFunctions.check(Arguments.card(card), Arguments.single("mole fraction", moleFraction),
+            Card c = Arguments.card(card);
+            return CardFunctions.check(c, Arguments.singleComposition(c, "composition", moleFraction),
                     Arguments.single("temperature", temperature), Arguments.extrapolation(extrapolate));
         } catch (MiscelaException ex) {
             return ex.getMessage();
+        }
+    }
+
+    @Override
+    public Object excessEnthalpy(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object extrapolate)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return Arguments.overCompositions(c, moleFraction, temperature,
+                    (k, x, t) -> CardFunctions.excessEnthalpy(k, x, t, e));
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object partialExcessEnthalpy(Object[][] card, Object component, Object[][] moleFraction,
+            Object[][] temperature, Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int i = Arguments.component(c, component);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return Arguments.overCompositions(c, moleFraction, temperature,
+                    (k, x, t) -> CardFunctions.partialExcessEnthalpy(k, i, x, t, e));
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object mixingHeat(Object[][] card, Object[][] amounts, Object[][] temperature, Object basis,
+            Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            AmountBasis b = Arguments.basis(basis);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return Arguments.overRows(c, "amount", amounts, temperature,
+                    (k, n, t) -> CardFunctions.mixingHeat(k, n, b, t, e));
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object additionHeat(Object[][] card, Object[][] amounts, Object component, Object added,
+            Object[][] temperature, Object basis, Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int i = Arguments.component(c, component);
+            double more = Arguments.number("amount added", added);
+            AmountBasis b = Arguments.basis(basis);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return Arguments.overRows(c, "amount", amounts, temperature,
+                    (k, n, t) -> CardFunctions.additionHeat(k, n, i, more, b, t, e));
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object adiabaticRise(Object[][] card, Object[][] amounts, Object[][] temperature, Object basis,
+            Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            AmountBasis b = Arguments.basis(basis);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return Arguments.overRows(c, "amount", amounts, temperature,
+                    (k, n, t) -> CardFunctions.adiabaticRise(k, n, b, t, e));
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object insideValidity(Object[][] card, Object[][] moleFraction, Object[][] temperature)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            return Arguments.overCompositions(c, moleFraction, temperature, CardFunctions::inside);
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object traceEvaluation(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object quantity,
+            Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            return Arguments.table(CardFunctions.trace(c, Arguments.singleComposition(c, "composition", moleFraction),
+                    Arguments.single("temperature", temperature), Arguments.property(quantity),
+                    Arguments.extrapolation(extrapolate)));
+        } catch (MiscelaException ex) {
+            throw refused(ex);
         }
     }
 

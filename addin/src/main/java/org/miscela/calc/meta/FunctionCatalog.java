@@ -16,46 +16,61 @@ public final class FunctionCatalog {
 
     private static final ArgumentInfo CARD = required("card", "card",
             "The named range holding the mixture's card: labels in the first column, values to their right.");
-    private static final ArgumentInfo MOLE_FRACTION = required("moleFraction", "x1",
-            "Mole fraction of the card's first component, 0 to 1. A single value, or a range for an array result.");
+    private static final ArgumentInfo MOLE_FRACTION = required("moleFraction", "x",
+            "Composition: the mole fractions of all components in card order, as a row or column; or a block with "
+                    + "one composition per row (the result is a column). For a two-component card, x1 alone, "
+                    + "or a range of x1 values.");
     private static final ArgumentInfo TEMPERATURE = required("temperature", "temperature",
-            "Temperature in the card's temperature unit. A single value, or a range of the same shape as x1.");
+            "Temperature in the card's temperature unit: a single value, or one per composition (a column for a "
+                    + "block, the same shape for a range of x1).");
     private static final ArgumentInfo EXTRAPOLATE = optional("extrapolate", "extrapolate",
             "Optional. TRUE accepts a result outside the card's validity range; FALSE refuses it; "
                     + "left out, the card's 'extrapolation' row decides (refuse when absent).");
-    private static final ArgumentInfo MOLE_FRACTION_ONE = required("moleFraction", "x1",
-            "Mole fraction of the card's first component, 0 to 1 (one value).");
+    private static final ArgumentInfo MOLE_FRACTION_ONE = required("moleFraction", "x",
+            "One composition: the mole fractions of all components in card order, as a row or column; "
+                    + "for a two-component card, x1 alone.");
     private static final ArgumentInfo TEMPERATURE_ONE = required("temperature", "temperature",
             "Temperature in the card's temperature unit (one value).");
     private static final ArgumentInfo COMPONENT = required("component", "component",
             "The component: its number on the card (1 for the first) or its name as written on the card.");
+    private static final ArgumentInfo AMOUNTS = required("amounts", "amounts",
+            "Amount of each component in card order, as a row or column (one batch); or a block with one batch "
+                    + "per row (the result is a column).");
+    private static final ArgumentInfo BATCH_TEMPERATURE = required("temperature", "temperature",
+            "Temperature of the components and of the mixture, in the card's temperature unit: a single value, "
+                    + "or a column with one per batch.");
+    private static final ArgumentInfo BASIS = optional("basis", "basis",
+            "Optional. The unit of the amounts: \"mol\" (left out), \"kmol\", \"g\" or \"kg\"; masses are "
+                    + "converted with the card's molar masses.");
 
     private static final List<FunctionInfo> FUNCTIONS = Collections.unmodifiableList(Arrays.asList(
             new FunctionInfo("excessMolarVolume", "MIX.EXCESSVOLUME",
-                    "Excess molar volume of a binary mixture from the card's Redlich–Kister coefficients, "
+                    "Excess molar volume of the mixture from the card's Redlich–Kister coefficients, "
                             + "in the card's molar volume unit.",
-                    "V^E = x1·x2·Σ_k A_k(T)·(x1 − x2)^k, A_k(T) = Σ_j a_kj·(T − T_ref)^j (Redlich & Kister 1948)",
+                    "V^E = Σ_i<j x_i·x_j·Σ_k A_k^ij(T)·d_ij^k + ternary terms; binary: d = x1 − x2 (Redlich & Kister "
+                            + "1948); d_ij by the card's model: Muggianu x_i − x_j, Kohler (x_i − x_j)/(x_i + x_j), "
+                            + "Toop 2x_a − 1 for pairs with the asymmetric component a",
                     "=MIX.EXCESSVOLUME(card; 0.3; 20)",
                     CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE),
             new FunctionInfo("partialMolarVolume", "MIX.PARTIALVOLUME",
-                    "Partial molar volume of one component of a binary mixture, in the card's molar volume unit.",
-                    "V̄_1 = V_1* + V^E + x2·dV^E/dx1; V̄_2 = V_2* + V^E − x1·dV^E/dx1",
+                    "Partial molar volume of one component in the mixture, in the card's molar volume unit.",
+                    "V̄_k = V_k* + V^E + ∂V^E/∂x_k − Σ_j x_j·∂V^E/∂x_j (binary: V̄_1 = V_1* + V^E + x2·dV^E/dx1)",
                     "=MIX.PARTIALVOLUME(card; 1; 0.3; 20)",
                     CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE),
             new FunctionInfo("partialExcessMolarVolume", "MIX.PARTIALEXCESS",
-                    "Partial molar excess volume of one component of a binary mixture "
+                    "Partial molar excess volume of one component "
                             + "(its partial molar volume less its pure molar volume), in the card's molar volume unit.",
-                    "V̄_1^E = V^E + x2·dV^E/dx1; V̄_2^E = V^E − x1·dV^E/dx1",
+                    "V̄_k^E = V^E + ∂V^E/∂x_k − Σ_j x_j·∂V^E/∂x_j (binary: V̄_1^E = V^E + x2·dV^E/dx1)",
                     "=MIX.PARTIALEXCESS(card; \"water\"; 0.3; 20)",
                     CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE),
             new FunctionInfo("mixtureMolarVolume", "MIX.MOLARVOLUME",
-                    "Molar volume of a binary mixture (volume per mole of mixture), in the card's molar volume unit.",
-                    "V_m = x1·V_1* + x2·V_2* + V^E, V_k* = M_k / ρ_k(T)",
+                    "Molar volume of the mixture (volume per mole of mixture), in the card's molar volume unit.",
+                    "V_m = Σ_k x_k·V_k* + V^E, V_k* = M_k / ρ_k(T)",
                     "=MIX.MOLARVOLUME(card; 0.3; 20)",
                     CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE),
             new FunctionInfo("mixtureDensity", "MIX.DENSITY",
-                    "Density of a binary mixture, in the card's density unit.",
-                    "ρ = (x1·M_1 + x2·M_2) / V_m",
+                    "Density of the mixture, in the card's density unit.",
+                    "ρ = Σ_k x_k·M_k / V_m",
                     "=MIX.DENSITY(card; 0.3; 20)",
                     CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE),
             new FunctionInfo("pureDensity", "MIX.PUREDENSITY",
@@ -75,7 +90,57 @@ public final class FunctionCatalog {
                             + "refuse (for example the validity limit that is exceeded).",
                     "—",
                     "=MIX.CHECKPOINT(card; 0.3; 45)",
-                    CARD, MOLE_FRACTION_ONE, TEMPERATURE_ONE, EXTRAPOLATE)));
+                    CARD, MOLE_FRACTION_ONE, TEMPERATURE_ONE, EXTRAPOLATE),
+            new FunctionInfo("excessEnthalpy", "MIX.EXCESSENTHALPY",
+                    "Excess molar enthalpy (heat of mixing per mole of mixture) from the card's excess enthalpy "
+                            + "coefficients, in the card's enthalpy unit; negative when mixing releases heat.",
+                    "H^E = Σ_i<j x_i·x_j·Σ_k A_k^ij(T)·d_ij^k + ternary terms, combined as for V^E",
+                    "=MIX.EXCESSENTHALPY(card; B2:D2; 25)",
+                    CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE),
+            new FunctionInfo("partialExcessEnthalpy", "MIX.PARTIALENTHALPY",
+                    "Partial molar excess enthalpy of one component (its partial molar enthalpy less its pure molar "
+                            + "enthalpy), in the card's enthalpy unit.",
+                    "H̄_k^E = H^E + ∂H^E/∂x_k − Σ_j x_j·∂H^E/∂x_j",
+                    "=MIX.PARTIALENTHALPY(card; \"water\"; B2:D2; 25)",
+                    CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE),
+            new FunctionInfo("mixingHeat", "MIX.MIXINGHEAT",
+                    "Enthalpy change when the given amounts of the pure components, all at one temperature, are mixed "
+                            + "and kept at that temperature: J or kJ as the card's enthalpy unit; negative means heat "
+                            + "is released and must be removed.",
+                    "ΔH = N·H^E(x, T), N = Σ n_k, x_k = n_k/N",
+                    "=MIX.MIXINGHEAT(card; B2:D2; 25; \"kg\")",
+                    CARD, AMOUNTS, BATCH_TEMPERATURE, BASIS, EXTRAPOLATE),
+            new FunctionInfo("additionHeat", "MIX.ADDITIONHEAT",
+                    "Enthalpy change when an amount of one component is added to an existing batch, all at one "
+                            + "temperature: J or kJ as the card's enthalpy unit; negative means heat is released.",
+                    "ΔH = (N + Δn)·H^E(x') − N·H^E(x)",
+                    "=MIX.ADDITIONHEAT(card; B2:D2; \"water\"; 50; 25; \"kg\")",
+                    CARD, AMOUNTS, COMPONENT, required("added", "added",
+                            "The amount of the component added, in the same basis as the amounts."),
+                    BATCH_TEMPERATURE, BASIS, EXTRAPOLATE),
+            new FunctionInfo("adiabaticRise", "MIX.TEMPERATURERISE",
+                    "Estimated temperature rise, in K (the same in °C), of a batch mixed from pure components all at "
+                            + "one temperature with no heat exchanged. An estimate for planning, not a safety "
+                            + "rating: it ignores the vessel, losses, evaporation and reaction.",
+                    "Σ_k n_k·∫_T^T_f Cp_k dT + N·H^E(x, T_f) = 0, solved for T_f (Brent); result T_f − T",
+                    "=MIX.TEMPERATURERISE(card; B2:D2; 20; \"kg\")",
+                    CARD, AMOUNTS, required("temperature", "temperature",
+                            "Starting temperature of every component, in the card's temperature unit: a single "
+                                    + "value, or a column with one per batch."), BASIS, EXTRAPOLATE),
+            new FunctionInfo("insideValidity", "MIX.INSIDE",
+                    "TRUE when the composition and temperature lie inside every validity limit the card states "
+                            + "(temperature, each component's mole fraction, each pair's limits); FALSE otherwise.",
+                    "—",
+                    "=MIX.INSIDE(card; B2:D2; 45)",
+                    CARD, MOLE_FRACTION, TEMPERATURE),
+            new FunctionInfo("traceEvaluation", "MIX.TRACE",
+                    "Every intermediate number of one evaluation, as a two-column array of labels and values, so the "
+                            + "result can be re-derived by hand (see docs/trace.md).",
+                    "—",
+                    "=MIX.TRACE(card; B2:D2; 25)",
+                    CARD, MOLE_FRACTION_ONE, TEMPERATURE_ONE, optional("quantity", "property",
+                            "Optional. \"volume\" (left out) or \"enthalpy\": which of the card's properties to "
+                                    + "trace."), EXTRAPOLATE)));
 
     private FunctionCatalog() {
     }
