@@ -27,10 +27,12 @@ public enum FitProblem {
     NOT_NESTED("Fit %d of the order comparison has %d parameter(s), no more than fit %d with %d; each order must "
             + "add parameters to the one before."),
     NOT_SAME_POINTS("Fit %d of the order comparison uses %d point(s) but fit 1 uses %d; compare fits to the same data."),
-    COVARIANCE_SHAPE("The covariance must be %d×%d for this expansion (order %d in x, %d in T); found %d×%d."),
+    COVARIANCE_SHAPE("The covariance must be %d×%d for this expansion; found %d×%d."),
     COVARIANCE_NOT_FINITE("The covariance entry (%d, %d) is not a finite number (%s)."),
     COVARIANCE_NOT_SYMMETRIC("The covariance is not symmetric: entry (%d, %d) is %s but (%d, %d) is %s."),
     COVARIANCE_NEGATIVE_VARIANCE("The covariance has a negative variance %s at (%d, %d)."),
+    MOLE_FRACTION("The mole fraction %s lies outside 0..1."),
+    TEMPERATURE("The temperature %s K is not a finite value above absolute zero."),
     BAD_COMPONENT("The component must be 1 or 2; found %d.");
 
     private final String pattern;
