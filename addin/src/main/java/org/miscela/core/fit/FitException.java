@@ -3,7 +3,7 @@ package org.miscela.core.fit;
 /** Thrown for input the fitting engine cannot use; the message is meant for the person who supplied the data. */
 public final class FitException extends IllegalArgumentException {
     private static final long serialVersionUID = 1L;
-    private final transient FitProblem problem;
+    private final FitProblem problem;
 
     FitException(FitProblem problem, String message) {
         super(message);

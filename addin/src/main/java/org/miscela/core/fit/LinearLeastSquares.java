@@ -4,9 +4,9 @@ import java.util.Objects;
 import org.apache.commons.math3.util.MathArrays;
 
 /**
- * Weighted linear least squares, min Σ w_i (y_i − Σ_j X_ij b_j)², solved by Householder QR of the weighted design
- * (Commons Math QRDecomposition, see {@link ScaledQr}); the normal equations are never formed, so the condition number enters once,
- * not squared.
+ * Weighted linear least squares, min Σ w_i (y_i − Σ_j X_ij b_j)², solved by Householder QR of the column-scaled,
+ * weighted design (Commons Math QRDecomposition, see {@link ScaledQr}) and iterative refinement; the normal equations
+ * are never formed, so the condition number is not squared.
  *
  * <p>Contracts: at least one point and one parameter; every design row of the same length; one response (and one
  * weight, if weights are given) per row; all values finite; weights zero or positive (a zero weight leaves the point

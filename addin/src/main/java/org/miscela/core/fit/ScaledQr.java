@@ -1,5 +1,6 @@
 package org.miscela.core.fit;
 
+import java.util.Locale;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
 import org.apache.commons.math3.linear.DecompositionSolver;
@@ -66,7 +67,8 @@ final class ScaledQr {
         // The usual numerical-rank tolerance, σ_min ≤ σ_max·max(n, p)·ε: below it the last digits of the data decide.
         double limit = 1.0 / (Math.max(n, p) * Math.ulp(1.0));
         if (!(conditionNumber < limit)) {
-            throw FitProblem.RANK_DEFICIENT.raise(p, conditionNumber, limit);
+            throw FitProblem.RANK_DEFICIENT.raise(p, String.format(Locale.ROOT, "%.3g", conditionNumber),
+                    String.format(Locale.ROOT, "%.3g", limit));
         }
     }
 

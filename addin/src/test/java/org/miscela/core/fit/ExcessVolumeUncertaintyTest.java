@@ -172,6 +172,8 @@ class ExcessVolumeUncertaintyTest {
                 assertThrows(FitException.class, () -> u.partialExcessVolume(3, 0.5, 300)).problem());
         assertEquals("The mole fraction 1.2 lies outside 0..1.",
                 assertThrows(FitException.class, () -> u.excessVolume(1.2, 300)).getMessage());
+        assertEquals("The temperature -1.0 K is not a finite value above absolute zero.",
+                assertThrows(FitException.class, () -> u.density(0.5, -1, FIRST, SECOND)).getMessage());
     }
 
     /** {V^E, V̄1^E, V̄2^E} from the library's own expansion and its analytic slope. */

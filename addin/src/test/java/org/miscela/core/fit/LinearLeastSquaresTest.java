@@ -144,7 +144,8 @@ class LinearLeastSquaresTest {
         double[][] twice = {{1, 2, 2}, {1, 3, 3}, {1, 5, 5}, {1, 7, 7}};
         FitException e = assertThrows(FitException.class, () -> LinearLeastSquares.fit(twice, new double[4]));
         assertEquals(FitProblem.RANK_DEFICIENT, e.problem());
-        assertTrue(e.getMessage().startsWith("The points cannot separate the 3 parameters"), e.getMessage());
+        assertTrue(e.getMessage().startsWith("The points cannot separate the 3 parameters: the design is rank "
+                + "deficient (condition number "), e.getMessage());
         double[][] zero = {{1, 0}, {1, 0}, {1, 0}};
         assertEquals(FitProblem.ZERO_COLUMN,
                 assertThrows(FitException.class, () -> LinearLeastSquares.fit(zero, new double[3])).problem());
