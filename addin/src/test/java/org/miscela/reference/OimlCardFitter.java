@@ -7,23 +7,29 @@ import java.nio.file.Paths;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.ArrayRealVector;
-import org.apache.commons.math3.linear.QRDecomposition;
-import org.apache.commons.math3.linear.RealVector;
+import org.miscela.core.Component;
+import org.miscela.core.PolynomialDensity;
+import org.miscela.core.fit.DeviationMeasure;
+import org.miscela.core.fit.RedlichKisterFit;
+import org.miscela.core.fit.RedlichKisterFitter;
 
 /**
  * Writes the ethanol + water card fitted to OIML R 22 densities (test resource cards/ethanol-water-oiml.tsv):
  * pure-component polynomials taken exactly from the formula, Redlich–Kister coefficients of V^E = x1·x2·Σ A_k (x1 −
- * x2)^k with A_k(t) = Σ_j a_kj (t − 20)^j fitted by linear least squares (Householder QR) to V^E derived from the
- * formula on a grid of mass fractions and temperatures. Run once; the tests check the committed card against the
- * formula, so the numbers are never trusted on their own.
+ * x2)^k with A_k(t) = Σ_j a_kj (t − 20)^j fitted by the library's fit engine ({@link RedlichKisterFitter}, scaled
+ * Householder QR) to the formula's densities on a grid of mass fractions and temperatures. Run once; the tests check
+ * the committed card against the formula, so the numbers are never trusted on their own.
  */
 public final class OimlCardFitter {
     static final int ORDER_X = Integer.getInteger("fit.orderX", 15);
     static final int ORDER_T = Integer.getInteger("fit.orderT", 4);
     static final double T_LOW = 0.0;
     static final double T_HIGH = 40.0;
+    /** The pure liquids: the formula's own polynomials in t − 20 °C at p = 1 and p = 0. */
+    static final Component ETHANOL = new Component("ethanol", Oiml22.M_ETHANOL,
+            new PolynomialDensity(293.15, Oiml22.pureEthanolPolynomial()));
+    static final Component WATER = new Component("water", Oiml22.M_WATER,
+            new PolynomialDensity(293.15, Oiml22.pureWaterPolynomial()));
 
     private OimlCardFitter() {
     }
@@ -61,45 +67,31 @@ public final class OimlCardFitter {
 
     /** a[k][j] in cm³/mol. */
     static double[][] fit() {
-        List<double[]> rows = new ArrayList<>();
-        List<Double> y = new ArrayList<>();
-        double[] e = Oiml22.pureEthanolPolynomial();
-        double[] w = Oiml22.pureWaterPolynomial();
+        return fitWithStatistics().coefficients();
+    }
+
+    /**
+     * The fit engine's Redlich–Kister fit to OIML densities over p = 1/400..399/400 and t = T_LOW..T_HIGH in steps of
+     * 1 °C, minimising density deviations (each V^E residual weighted by (ρ/V_m)²).
+     */
+    static RedlichKisterFit fitWithStatistics() {
+        List<double[]> points = new ArrayList<>();
         for (int ip = 1; ip < 400; ip++) {
             double p = ip / 400.0;
-            double x = Oiml22.moleFraction(p);
             for (double t = T_LOW; t <= T_HIGH + 1e-9; t += 1.0) {
-                double v1 = 1000.0 * Oiml22.M_ETHANOL / horner(e, t - 20);
-                double v2 = 1000.0 * Oiml22.M_WATER / horner(w, t - 20);
-                double vm = 1000.0 * (x * Oiml22.M_ETHANOL + (1 - x) * Oiml22.M_WATER) / Oiml22.density(p, t);
-                double ve = vm - x * v1 - (1 - x) * v2;
-                double[] basis = new double[(ORDER_X + 1) * (ORDER_T + 1)];
-                double d = 2 * x - 1;
-                int c = 0;
-                for (int k = 0; k <= ORDER_X; k++) {
-                    for (int j = 0; j <= ORDER_T; j++) {
-                        basis[c++] = x * (1 - x) * Math.pow(d, k) * Math.pow(t - 20, j);
-                    }
-                }
-                double weight = Oiml22.density(p, t) / vm;
-                for (int i = 0; i < basis.length; i++) {
-                    basis[i] *= weight;
-                }
-                rows.add(basis);
-                y.add(ve * weight);
+                points.add(new double[] {Oiml22.moleFraction(p), t + 273.15, Oiml22.density(p, t)});
             }
         }
-        Array2DRowRealMatrix m = new Array2DRowRealMatrix(rows.toArray(new double[0][]), false);
-        RealVector rhs = new ArrayRealVector(y.stream().mapToDouble(Double::doubleValue).toArray());
-        RealVector sol = new QRDecomposition(m).getSolver().solve(rhs);
-        double[][] a = new double[ORDER_X + 1][ORDER_T + 1];
-        int c = 0;
-        for (int k = 0; k <= ORDER_X; k++) {
-            for (int j = 0; j <= ORDER_T; j++) {
-                a[k][j] = sol.getEntry(c++);
-            }
+        double[] x = new double[points.size()];
+        double[] kelvin = new double[x.length];
+        double[] rho = new double[x.length];
+        for (int i = 0; i < x.length; i++) {
+            x[i] = points.get(i)[0];
+            kelvin[i] = points.get(i)[1];
+            rho[i] = points.get(i)[2];
         }
-        return a;
+        return RedlichKisterFitter.densities(x, kelvin, rho, ETHANOL, WATER, ORDER_X, ORDER_T, 293.15,
+                DeviationMeasure.DENSITY, null);
     }
 
     /** Largest |ρ − ρ_OIML| on the test grid p = 0..1 step 0.01, t = 0..40 step 1. */
