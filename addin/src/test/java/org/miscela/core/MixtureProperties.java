@@ -161,11 +161,18 @@ class MixtureProperties {
         double[] v = tangent(r, n);
         double[] slope = new double[n];
         c.f.partialSlopes(c.x, T, v, slope);
+        // The sum cancels terms x_k·(H·v)_k (H the Hessian), so their size is the scale of its rounding error.
+        double[][] hessian = new double[n][n];
+        c.f.evaluate(c.x, T, false, null, hessian);
         double sum = 0;
         double scale = 0;
         for (int k = 0; k < n; k++) {
             sum += c.x[k] * slope[k];
-            scale += Math.abs(c.x[k] * slope[k]);
+            double hv = 0;
+            for (int j = 0; j < n; j++) {
+                hv += hessian[k][j] * v[j];
+            }
+            scale += Math.abs(c.x[k] * slope[k]) + Math.abs(c.x[k] * hv);
         }
         record("Gibbs-Duhem", sum, scale);
         assertEquals(0.0, sum, 1e-12 * scale + 1e-300, c.toString());
