@@ -23,13 +23,12 @@ final class Arguments {
 
     /** A function of one point: the card and the point's numbers, in argument order. */
     interface PointFunction {
-        /** A Double (checked finite) or a Boolean. */
-        Object at(Card card, double[] point);
+        double at(Card card, double[] point);
     }
 
     /** A function of one composition (or one batch's amounts) and a temperature. */
     interface RowFunction {
-        Object at(Card card, double[] row, double temperature);
+        double at(Card card, double[] row, double temperature);
     }
 
     static Card card(Object[][] cells) {
@@ -104,7 +103,7 @@ final class Arguments {
             for (int i = 0; i < values.length; i++) {
                 point[i] = required(names[i], scalars[i]);
             }
-            return checked(f.at(card, point));
+            return finite(f.at(card, point));
         }
         Object[][] out = new Object[rows][cols];
         for (int r = 0; r < rows; r++) {
@@ -118,7 +117,7 @@ final class Arguments {
                     }
                     point[i] = required(names[i], cell);
                 }
-                out[r][c] = blank ? "" : checked(f.at(card, point));
+                out[r][c] = blank ? "" : (Object) finite(f.at(card, point));
             }
         }
         return new Any(GRID, out);
@@ -163,8 +162,7 @@ final class Arguments {
                         + (lines.length > 1 ? " in line " + (r + 1) : "");
                 row[k] = required(name, lines[r][k]);
             }
-            Object v = f.at(card, row.clone(), required("temperature", temperatures[r]));
-            out[r][0] = checked(v);
+            out[r][0] = finite(f.at(card, row.clone(), required("temperature", temperatures[r])));
         }
         return lines.length == 1 ? out[0][0] : new Any(GRID, out);
     }
@@ -304,10 +302,6 @@ final class Arguments {
 
     private static boolean isBlank(Object v) {
         return v == null || (v instanceof String && ((String) v).trim().isEmpty());
-    }
-
-    private static Object checked(Object v) {
-        return v instanceof Double ? finite((Double) v) : v;
     }
 
     /** The last line of defence: Calc must never receive NaN or infinity from us. */

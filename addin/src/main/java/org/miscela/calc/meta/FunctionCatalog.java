@@ -128,8 +128,8 @@ public final class FunctionCatalog {
                             "Starting temperature of every component, in the card's temperature unit: a single "
                                     + "value, or a column with one per batch."), BASIS, EXTRAPOLATE),
             new FunctionInfo("insideValidity", "MIX.INSIDE",
-                    "TRUE when the composition and temperature lie inside every validity limit the card states "
-                            + "(temperature, each component's mole fraction, each pair's limits); FALSE otherwise.",
+                    "1 (TRUE) when the composition and temperature lie inside every validity limit the card states "
+                            + "(temperature, each component's mole fraction, each pair's limits); 0 (FALSE) otherwise.",
                     "—",
                     "=MIX.INSIDE(card; B2:D2; 45)",
                     CARD, MOLE_FRACTION, TEMPERATURE),
