@@ -49,7 +49,8 @@ public final class FunctionCatalog {
             "Optional. A weight per point, zero or positive (left out: 1 each); a zero weight leaves the point out.");
     private static final ArgumentInfo RESULT = optional("result", "result",
             "Optional. \"coefficients\" (left out), \"standard errors\", \"statistics\", \"covariance\", "
-                    + "\"residuals\" or \"orders\" (fits of order 0 to the order given, with F-tests, AIC and BIC).");
+                    + "\"residuals\", \"orders\" (fits of order 0 to the order given, with F-tests, AIC and BIC) or "
+                    + "\"check\" (\"OK\", or why the fit is refused, in words).");
     private static final ArgumentInfo BASIS = optional("basis", "basis",
             "Optional. The unit of the amounts: \"mol\" (left out), \"kmol\", \"g\" or \"kg\"; masses are "
                     + "converted with the card's molar masses.");
@@ -196,7 +197,18 @@ public final class FunctionCatalog {
                             + "(include a column of 1s for an intercept)."),
                     required("response", "y", "The observed values, one per point (a column)."),
                     WEIGHTS, optional("result", "result", "Optional. \"coefficients\" (left out), \"standard "
-                            + "errors\", \"statistics\", \"covariance\" or \"residuals\"."))));
+                            + "errors\", \"statistics\", \"covariance\", \"residuals\" or \"check\".")),
+            new FunctionInfo("uncertainty", "MIX.UNCERTAINTY",
+                    "Standard uncertainty of the density, excess volume, molar volume or a partial molar volume, "
+                            + "propagated linearly from the coefficient covariance the card holds (the pure liquids "
+                            + "taken as exact), in the result's unit.",
+                    "u²(Q) = Σ_pairs gᵀ·C·g, g = ∂Q/∂a (GUM, JCGM 100:2008, law of propagation of uncertainty)",
+                    "=MIX.UNCERTAINTY(card; 0.3; 20)",
+                    CARD, MOLE_FRACTION, TEMPERATURE, optional("quantity", "quantity",
+                            "Optional. \"density\" (left out), \"excess volume\", \"molar volume\" or "
+                                    + "\"partial volume\" (then give the component)."),
+                    optional("component", "component", "For a partial volume: the component's number on the card "
+                            + "or its name."), EXTRAPOLATE)));
 
     private FunctionCatalog() {
     }
