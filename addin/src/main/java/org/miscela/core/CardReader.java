@@ -811,9 +811,12 @@ public final class CardReader {
         return o.toString();
     }
 
+    /** Runs of white space, compiled once: a parse normalises every label and, per keyed row, every name. */
+    private static final Pattern WHITE_SPACE = Pattern.compile("\\s+");
+
     /** Lower case, single spaces, no trailing colon: the form labels and names are compared in. */
     static String normalise(String s) {
-        String t = s.trim().replaceAll("\\s+", " ").toLowerCase(Locale.ROOT);
+        String t = WHITE_SPACE.matcher(s.trim()).replaceAll(" ").toLowerCase(Locale.ROOT);
         return t.endsWith(":") ? t.substring(0, t.length() - 1).trim() : t;
     }
 
