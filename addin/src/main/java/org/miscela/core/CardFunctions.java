@@ -169,6 +169,10 @@ public final class CardFunctions {
         double kelvin = checkPoint(card, z, t, e);
         physicalDensity(card, z, kelvin, t);
         double u = Uncertainty.of(card, q, component, z, kelvin);
+        if (!Double.isFinite(u)) {
+            // e.g. a density's sensitivity −ρ/V_m overflowing for a molar volume that underflows to nearly zero
+            throw nonPhysical(card, t, "standard uncertainty", u);
+        }
         return q == Uncertainty.Quantity.DENSITY ? card.units().density().fromKgPerM3(u)
                 : card.units().molarVolume().fromCm3PerMol(u);
     }
@@ -241,6 +245,11 @@ public final class CardFunctions {
             double h = moles * m.excessEnthalpy(x, tf);
             for (int k = 0; k < n.length; k++) {
                 h += n[k] * m.heatCapacity(k).enthalpyChange(start, tf);
+            }
+            if (!Double.isFinite(h)) {
+                // The polynomials overflow (temperatures or amounts near the double range): no root to bracket.
+                throw Problem.NO_TEMPERATURE_ROOT.raise(Numbers.show(Math.min(start, tf)),
+                        Numbers.show(Math.max(start, tf)));
             }
             return h;
         };
@@ -341,7 +350,15 @@ public final class CardFunctions {
         } else {
             card.mixture().volume();
         }
-        return Trace.of(card, z, t, kelvin, property, e, violations(card, z, kelvin, t));
+        Object[][] rows = Trace.of(card, z, t, kelvin, property, e, violations(card, z, kelvin, t));
+        for (Object[] row : rows) {
+            // An intermediate that overflows (say a pure molar volume M/ρ of a card with extreme numbers) is refused
+            // like a final result that does: a trace never shows NaN or infinity.
+            if (row[1] instanceof Double && !Double.isFinite((Double) row[1])) {
+                throw nonPhysical(card, t, (String) row[0], (Double) row[1]);
+            }
+        }
+        return rows;
     }
 
     // --- checks shared by every function

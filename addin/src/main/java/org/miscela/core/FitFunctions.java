@@ -149,14 +149,23 @@ public final class FitFunctions {
         rows.add(new Object[] {"degrees of freedom", (double) fit.degreesOfFreedom()});
         double s = fit.residualStandardDeviation();
         rows.add(new Object[] {"standard deviation of the fit" + unit,
-            Double.isNaN(s) ? "none: as many parameters as points" : (Object) (s * deviationScale)});
+            Double.isNaN(s) ? "none: as many parameters as points" : finiteOr(s * deviationScale, OVERFLOW)});
         int worst = fit.largestResidualIndex();
-        rows.add(new Object[] {"largest residual" + unit, fit.largestResidual() * deviationScale});
+        rows.add(new Object[] {"largest residual" + unit, finiteOr(fit.largestResidual() * deviationScale, OVERFLOW)});
         rows.add(new Object[] {"largest residual at point", (double) (worst + 1)});
         double r2 = fit.rSquared();
-        rows.add(new Object[] {fit.isCentred() ? "R²" : "R² (uncentred)", Double.isNaN(r2) ? "undefined" : (Object) r2});
+        // R² = 1 − RSS/TSS is undefined when the data do not vary (TSS = 0), whatever RSS rounds to.
+        rows.add(new Object[] {fit.isCentred() ? "R²" : "R² (uncentred)", finiteOr(r2, "undefined")});
         rows.add(new Object[] {"condition number (scaled columns)", fit.conditionNumber()});
         return rows.toArray(new Object[0][]);
+    }
+
+    /** The statistics' text for a sum of squares beyond double range (data near ±1e308). */
+    private static final String OVERFLOW = "overflow: the residuals are too large to square";
+
+    /** The number, or the text saying why there is none: a statistics table never holds NaN or infinity. */
+    private static Object finiteOr(double v, String text) {
+        return Double.isFinite(v) ? (Object) v : text;
     }
 
     private static Object[][] orders(OrderSelection selection, String unit) {

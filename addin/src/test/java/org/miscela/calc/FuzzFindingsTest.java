@@ -1,0 +1,160 @@
+package org.miscela.calc;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.sun.star.lang.IllegalArgumentException;
+import com.sun.star.uno.Any;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.miscela.core.Catalogue;
+
+/**
+ * Regression tests for what the fuzzers ({@link MixtureAddInFuzzProperties}) found: each is the failing call reduced
+ * to its cause. Before the fixes each of these reached Calc as an undeclared exception (the adapter's last-line
+ * IllegalStateException for a NaN or an infinity, or a Commons Math exception) instead of a number, a text or the
+ * designed error. Card values are invented.
+ */
+class FuzzFindingsTest {
+    private final MixtureAddIn addIn = new MixtureAddIn();
+
+    private static Object[][] one(Object v) {
+        return new Object[][] {{v}};
+    }
+
+    /** A range padded with "" to a rectangle, as Calc passes it. */
+    private static Object[][] range(Object[]... rows) {
+        int width = 0;
+        for (Object[] r : rows) {
+            width = Math.max(width, r.length);
+        }
+        Object[][] out = new Object[rows.length][];
+        for (int i = 0; i < rows.length; i++) {
+            out[i] = Arrays.copyOf(rows[i], width);
+            for (int c = rows[i].length; c < width; c++) {
+                out[i][c] = "";
+            }
+        }
+        return out;
+    }
+
+    private static Object[] row(Object... cells) {
+        return cells;
+    }
+
+    /** A table result: every cell a finite number or a text. Returns the rows. */
+    private static Object[][] table(Object result) {
+        Object[][] rows = (Object[][]) ((Any) result).getObject();
+        for (Object[] r : rows) {
+            for (Object v : r) {
+                assertTrue(v instanceof String || (v instanceof Double && Double.isFinite((Double) v)),
+                        () -> "cell " + v + " in " + Arrays.deepToString(rows));
+            }
+        }
+        return rows;
+    }
+
+    private static Object valueOf(Object[][] statistics, String label) {
+        for (Object[] r : statistics) {
+            if (label.equals(r[0])) {
+                return r[1];
+            }
+        }
+        throw new AssertionError("no row " + label + " in " + Arrays.deepToString(statistics));
+    }
+
+    /**
+     * Found by the adapter fuzzer (LEAST_SQUARES, "statistics", a response of −1e308): the residual sum of squares
+     * overflows, so the standard deviation was +∞. Fix: FitFunctions gives the statistic as a text saying why.
+     */
+    @Test
+    void statisticsOfResponsesNearTheDoubleRangeSayOverflow() throws Exception {
+        Object[][] design = {{1.0, 0.0}, {1.0, 1.0}, {1.0, 2.0}, {1.0, 3.0}};
+        Object[][] response = {{-1e308}, {1.0}, {2.0}, {3.0}};
+        Object[][] statistics = table(addIn.leastSquares(design, response, Any.VOID, "statistics"));
+        Object s = valueOf(statistics, "standard deviation of the fit");
+        assertTrue(s instanceof String && ((String) s).startsWith("overflow"), () -> "standard deviation " + s);
+    }
+
+    /**
+     * Found by the adapter fuzzer (FIT_EXCESS, "statistics", one point, order 0): the data do not vary, so
+     * R² = 1 − RSS/0 was −∞ (RSS rounded to a tiny positive number rather than 0). Fix: R² is "undefined".
+     */
+    @Test
+    void rSquaredOfDataThatDoNotVaryIsUndefined() throws Exception {
+        Object[][] statistics = table(addIn.fitExcessVolume(one(0.5988679358961072), one(-1.9274398520227651), 0.0,
+                Any.VOID, Any.VOID, Any.VOID, Any.VOID, "statistics"));
+        assertEquals("undefined", valueOf(statistics, "R²"));
+    }
+
+    /** A binary v2 card with constant densities, heat capacities and an excess enthalpy (invented values). */
+    private static List<Object[]> heatCard() {
+        return new ArrayList<>(Arrays.asList(row("Miscela card", 2.0), row("source", "invented values, for a test"),
+                row("temperature unit", "K"), row("density unit", "kg/m³"), row("molar volume unit", "cm³/mol"),
+                row("molar mass unit", "g/mol"), row("enthalpy unit", "J/mol"), row("valid temperature", 280.0, 320.0),
+                row("extrapolation", "allow"), row("component", "alpha", 46.07), row("component", "beta", 18.015),
+                row("density model", "alpha", "constant"), row("density coefficients", "alpha", 789.3),
+                row("density model", "beta", "constant"), row("density coefficients", "beta", 997.0),
+                row("heat capacity", "alpha", 112.0), row("heat capacity", "beta", 75.3),
+                row("valid mole fraction", "alpha", 0.0, 1.0), row("excess volume A0", "alpha + beta", -4.0),
+                row("excess enthalpy A0", "alpha + beta", -800.0)));
+    }
+
+    /**
+     * Found by the adapter fuzzer (ADIABATIC_RISE at 1e308, extrapolation allowed): the heat balance is NaN there
+     * (∞ − ∞ in the heat-capacity integral), the bracket search stopped at once and Commons Math's solver threw
+     * NumberIsTooLargeException. Fix: a balance that is not finite ends the search with NO_TEMPERATURE_ROOT.
+     */
+    @Test
+    void temperatureRiseWhereTheBalanceOverflowsIsRefusedByDesign() throws Exception {
+        Object[][] card = range(heatCard().toArray(new Object[0][]));
+        assertTrue((Double) addIn.adiabaticRise(card, range(row(1.0, 1.0)), one(300.0), Any.VOID, Any.VOID) > 0,
+                "the card itself works: exothermic mixing warms the batch");
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> addIn.adiabaticRise(card, range(row(1.0, 1.0)), one(1e308), Any.VOID, Boolean.TRUE));
+        assertEquals("Problem.NO_TEMPERATURE_ROOT", Catalogue.entryOf(e.getMessage()), e.getMessage());
+    }
+
+    /**
+     * Found by the adapter fuzzer (UNCERTAINTY of the density of a pure component whose molar mass is the smallest
+     * double): the density's sensitivity −ρ/V_m overflows and 0·∞ made the uncertainty NaN. Fix: a non-finite
+     * uncertainty is refused as NON_PHYSICAL, like every other non-finite result.
+     */
+    @Test
+    void uncertaintyThatIsNotFiniteIsRefusedByDesign() throws Exception {
+        List<Object[]> rows = heatCard();
+        rows.set(10, row("component", "beta", Double.MIN_VALUE));
+        rows.add(row("excess volume covariance", "alpha + beta", 1e-4));
+        Object[][] card = range(rows.toArray(new Object[0][]));
+        assertTrue((Double) addIn.uncertainty(card, one(0.5), one(300.0), Any.VOID, Any.VOID, Any.VOID) > 0,
+                "the card itself works at an ordinary point");
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> addIn.uncertainty(card, one(0.0), one(300.0), "density", Any.VOID, Any.VOID));
+        assertEquals("Problem.NON_PHYSICAL", Catalogue.entryOf(e.getMessage()), e.getMessage());
+    }
+
+    /**
+     * Found by the adapter fuzzer (TRACE of the enthalpy of an extreme card): a coefficient of 1e306 kJ/mol is
+     * +∞ in J/mol, and the enthalpy trace, which has no final density to check, carried it. Fix: a trace with a
+     * non-finite intermediate is refused as NON_PHYSICAL, as MIX.EXCESSENTHALPY refuses the same point.
+     */
+    @Test
+    void traceWithAnIntermediateThatOverflowsIsRefusedByDesign() throws Exception {
+        List<Object[]> rows = heatCard();
+        rows.set(6, row("enthalpy unit", "kJ/mol"));
+        rows.set(19, row("excess enthalpy A0", "alpha + beta", -1e306));
+        Object[][] card = range(rows.toArray(new Object[0][]));
+        assertEquals("OK", addIn.checkCard(card), "the card reads");
+        IllegalArgumentException enthalpy = assertThrows(IllegalArgumentException.class,
+                () -> addIn.excessEnthalpy(card, one(0.5), one(300.0), Any.VOID));
+        assertEquals("Problem.NON_PHYSICAL", Catalogue.entryOf(enthalpy.getMessage()), enthalpy.getMessage());
+        IllegalArgumentException trace = assertThrows(IllegalArgumentException.class,
+                () -> addIn.traceEvaluation(card, one(0.5), one(300.0), "enthalpy", Any.VOID));
+        assertEquals("Problem.NON_PHYSICAL", Catalogue.entryOf(trace.getMessage()), trace.getMessage());
+        table(addIn.traceEvaluation(range(heatCard().toArray(new Object[0][])), one(0.5), one(300.0), "enthalpy",
+                Any.VOID));
+    }
+}
