@@ -1,32 +1,42 @@
 package org.miscela.core;
 
 import java.util.Arrays;
+import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.concurrent.atomic.AtomicLong;
 
 /**
  * Parsed cards keyed by the content of their cells, so a sheet with thousands of formulas over one card parses it
- * once. Failed parses are remembered too (the same bad card fails the same way). Thread-safe and bounded: the least
- * recently used entry goes first.
+ * once. Failed parses are remembered too (the same bad card fails the same way). Thread-safe and bounded twice: at
+ * most {@code capacity} entries and at most {@code cellBudget} cells kept in the keys, the least recently used entry
+ * going first. A key keeps only the card's extent: trailing blank rows and cells, which the reader ignores, are
+ * dropped, so a card named as whole columns costs what its filled cells cost. A card larger than the whole budget is
+ * parsed on every call and never kept.
  */
 public final class CardCache {
-    private static final CardCache SHARED = new CardCache(64);
+    /**
+     * Cells the shared cache may keep. A kept cell costs a reference in the key plus the cell's value kept alive
+     * (about 24 bytes for a number, 50 or more for a text), so this bounds the keys to some 25 to 60 MB; typical cards
+     * have a few hundred cells, and the entry count binds long before this does.
+     */
+    public static final long DEFAULT_CELL_BUDGET = 1_000_000;
+    private static final CardCache SHARED = new CardCache(64, DEFAULT_CELL_BUDGET);
 
     private final int capacity;
-    private final Map<ContentKey, Object> entries;
+    private final long cellBudget;
+    /** Access order: the eldest entry is the least recently used. Guarded by itself, as is {@link #cells}. */
+    private final LinkedHashMap<ContentKey, Object> entries = new LinkedHashMap<>(16, 0.75f, true);
+    private long cells;
     private final AtomicLong parses = new AtomicLong();
 
     public CardCache(int capacity) {
-        this.capacity = capacity;
-        this.entries = new LinkedHashMap<ContentKey, Object>(16, 0.75f, true) {
-            private static final long serialVersionUID = 1L;
+        this(capacity, DEFAULT_CELL_BUDGET);
+    }
 
-            @Override
-            protected boolean removeEldestEntry(Map.Entry<ContentKey, Object> eldest) {
-                return size() > CardCache.this.capacity;
-            }
-        };
+    public CardCache(int capacity, long cellBudget) {
+        this.capacity = capacity;
+        this.cellBudget = cellBudget;
     }
 
     /** The process-wide cache the add-in uses. */
@@ -49,13 +59,26 @@ public final class CardCache {
                     hit = e;
                 }
                 parses.incrementAndGet();
-                entries.put(key.detached(), hit);
+                if (key.cellCount <= cellBudget) {
+                    entries.put(key, hit);
+                    this.cells += key.cellCount;
+                    evict();
+                }
             }
         }
         if (hit instanceof MiscelaException) {
             throw (MiscelaException) hit;
         }
         return (Card) hit;
+    }
+
+    /** Drops least recently used entries until both bounds hold (the newest entry fits the budget alone). */
+    private void evict() {
+        Iterator<ContentKey> eldest = entries.keySet().iterator();
+        while (entries.size() > capacity || this.cells > cellBudget) {
+            this.cells -= eldest.next().cellCount;
+            eldest.remove();
+        }
     }
 
     /** How many parses this cache has run (a measure of how well it works). */
@@ -69,28 +92,49 @@ public final class CardCache {
         }
     }
 
-    /** The cells' content as a map key; compares cell by cell. */
+    /** How many cells the keys of the entries hold. */
+    public long retainedCells() {
+        synchronized (entries) {
+            return cells;
+        }
+    }
+
+    /**
+     * The cells' content as a map key, compared cell by cell: a copy (the caller may reuse its arrays) of the rows up
+     * to the last one with a non-blank cell, each up to its last non-blank cell. Blank rows inside the card stay, as
+     * empty rows, because messages count them.
+     */
     private static final class ContentKey {
         private final Object[][] cells;
         private final int hash;
+        final long cellCount;
 
-        ContentKey(Object[][] cells) {
-            this.cells = cells == null ? new Object[0][] : cells;
-            this.hash = Arrays.deepHashCode(this.cells);
-        }
-
-        private ContentKey(Object[][] cells, int hash) {
-            this.cells = cells;
-            this.hash = hash;
-        }
-
-        /** A copy that no longer shares the caller's arrays (cell values themselves are immutable). */
-        ContentKey detached() {
-            Object[][] copy = new Object[cells.length][];
-            for (int i = 0; i < cells.length; i++) {
-                copy[i] = cells[i] == null ? null : cells[i].clone();
+        ContentKey(Object[][] range) {
+            Object[][] in = range == null ? new Object[0][] : range;
+            int rows = in.length;
+            while (rows > 0 && extent(in[rows - 1]) == 0) {
+                rows--;
             }
-            return new ContentKey(copy, hash);
+            this.cells = new Object[rows][];
+            long count = 0;
+            for (int i = 0; i < rows; i++) {
+                cells[i] = in[i] == null ? new Object[0] : Arrays.copyOf(in[i], extent(in[i]));
+                count += cells[i].length;
+            }
+            this.cellCount = count;
+            this.hash = Arrays.deepHashCode(cells);
+        }
+
+        /** The length of the row without its trailing blank cells. */
+        private static int extent(Object[] row) {
+            if (row == null) {
+                return 0;
+            }
+            int last = row.length;
+            while (last > 0 && CardReader.isBlank(row[last - 1])) {
+                last--;
+            }
+            return last;
         }
 
         @Override
