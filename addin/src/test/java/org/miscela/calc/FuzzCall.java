@@ -518,8 +518,11 @@ final class FuzzCall {
                     "residuals", "orders", "check", " Check ", "residual", 3.0);
         }
 
-        /** A column (usually) or row of values; blanks and junk mixed in now and then. */
+        /** A column (usually) or row of values; blanks and junk mixed in now and then, rarely a block instead. */
         Object[][] vector(double[] v, boolean row) {
+            if (!clean && r.nextInt(40) == 0) {
+                return randomShape();
+            }
             Object[][] g = row ? new Object[1][v.length] : new Object[v.length][1];
             for (int i = 0; i < v.length; i++) {
                 Object cell = !clean && r.nextInt(60) == 0 ? junk() : (Object) v[i];

@@ -50,7 +50,7 @@ class MixtureAddInFuzzProperties {
     }
 
     @Property(shrinking = ShrinkingMode.OFF)
-    @FuzzProfile.Tries(ci = 12_000, full = 700_000)
+    @FuzzProfile.Tries(ci = 9_000, full = 700_000)
     @AddLifecycleHook(FuzzProfile.class)
     void everyCallKeepsTheContract(@ForAll("calls") FuzzCall call) {
         try {
