@@ -52,7 +52,7 @@ public final class ExampleRunner {
     }
 
     public static void main(String[] args) throws Exception {
-        Path root = ExampleWorkbookBuilder.repoRoot();
+        Path root = ExampleWorkbooks.repoRoot();
         String chosen = args.length > 0 ? args[0] : System.getProperty("miscela.examples.out");
         Path out = chosen != null ? Paths.get(chosen).toAbsolutePath() : root.resolve("out").resolve("examples");
         List<Path> workbooks = new ArrayList<>();

@@ -19,7 +19,7 @@ import org.miscela.it.OfficeParameterResolver;
 class ExamplesIT {
     @Test
     void everyExampleRecalculatesCleanly(Office office) throws Exception {
-        Path root = ExampleWorkbookBuilder.repoRoot();
+        Path root = ExampleWorkbooks.repoRoot();
         List<Path> workbooks = new ArrayList<>();
         try (DirectoryStream<Path> ds = Files.newDirectoryStream(root.resolve("examples"), "*.ods")) {
             ds.forEach(workbooks::add);
