@@ -3,11 +3,14 @@ package org.miscela.calc;
 import com.sun.star.uno.Any;
 import com.sun.star.uno.AnyConverter;
 import com.sun.star.uno.Type;
+import java.util.ArrayList;
+import java.util.List;
 import org.miscela.core.AmountBasis;
 import org.miscela.core.Card;
 import org.miscela.core.CardCache;
 import org.miscela.core.CardFunctions;
 import org.miscela.core.Extrapolation;
+import org.miscela.core.FitOutput;
 import org.miscela.core.Problem;
 import org.miscela.core.PropertyKind;
 
@@ -23,13 +26,12 @@ final class Arguments {
 
     /** A function of one point: the card and the point's numbers, in argument order. */
     interface PointFunction {
-        /** A Double (checked finite) or a Boolean. */
-        Object at(Card card, double[] point);
+        double at(Card card, double[] point);
     }
 
     /** A function of one composition (or one batch's amounts) and a temperature. */
     interface RowFunction {
-        Object at(Card card, double[] row, double temperature);
+        double at(Card card, double[] row, double temperature);
     }
 
     static Card card(Object[][] cells) {
@@ -104,7 +106,7 @@ final class Arguments {
             for (int i = 0; i < values.length; i++) {
                 point[i] = required(names[i], scalars[i]);
             }
-            return checked(f.at(card, point));
+            return finite(f.at(card, point));
         }
         Object[][] out = new Object[rows][cols];
         for (int r = 0; r < rows; r++) {
@@ -118,7 +120,7 @@ final class Arguments {
                     }
                     point[i] = required(names[i], cell);
                 }
-                out[r][c] = blank ? "" : checked(f.at(card, point));
+                out[r][c] = blank ? "" : (Object) finite(f.at(card, point));
             }
         }
         return new Any(GRID, out);
@@ -163,8 +165,7 @@ final class Arguments {
                         + (lines.length > 1 ? " in line " + (r + 1) : "");
                 row[k] = required(name, lines[r][k]);
             }
-            Object v = f.at(card, row.clone(), required("temperature", temperatures[r]));
-            out[r][0] = checked(v);
+            out[r][0] = finite(f.at(card, row.clone(), required("temperature", temperatures[r])));
         }
         return lines.length == 1 ? out[0][0] : new Any(GRID, out);
     }
@@ -262,14 +263,198 @@ final class Arguments {
         return required(what, v);
     }
 
-    /** A two-column (label, value) table as Calc's array result. */
+    /** A table of numbers and text as Calc's array result (checked: no NaN or infinity). */
     static Object table(Object[][] rows) {
         for (Object[] r : rows) {
-            if (r[1] instanceof Double) {
-                finite((Double) r[1]);
+            for (Object v : r) {
+                if (v instanceof Double) {
+                    finite((Double) v);
+                }
             }
         }
         return new Any(GRID, rows);
+    }
+
+    /**
+     * Columns of lab data, one value per point in each: every range a single column or row of the same length (a
+     * single cell in a range marked {@code broadcast} is used for every point). Points blank in every range are
+     * left out, so a table may have room for more measurements; a point blank in some ranges only is refused.
+     *
+     * @param grids null for a range that was left out (its column is then null)
+     */
+    static double[][] dataColumns(String[] names, Object[][][] grids, boolean[] broadcast) {
+        int length = -1;
+        int lengthFrom = -1;
+        Object[][] vectors = new Object[grids.length][];
+        for (int i = 0; i < grids.length; i++) {
+            if (grids[i] == null) {
+                continue;
+            }
+            Object[] v = vector(names[i], grids[i]);
+            vectors[i] = v;
+            if (broadcast[i] && v.length == 1) {
+                continue;
+            }
+            if (length >= 0 && v.length != length) {
+                throw Problem.DATA_LENGTH.raise(names[lengthFrom], length, names[i], v.length);
+            }
+            length = v.length;
+            lengthFrom = i;
+        }
+        if (length < 0) {
+            length = 1;
+        }
+        List<double[]> points = new ArrayList<>();
+        for (int r = 0; r < length; r++) {
+            int present = -1;
+            int absent = -1;
+            for (int i = 0; i < grids.length; i++) {
+                if (vectors[i] == null || (broadcast[i] && vectors[i].length == 1)) {
+                    continue;
+                }
+                if (isBlank(vectors[i][r])) {
+                    absent = absent < 0 ? i : absent;
+                } else {
+                    present = present < 0 ? i : present;
+                }
+            }
+            if (present < 0) {
+                continue;
+            }
+            if (absent >= 0) {
+                throw Problem.DATA_PARTLY_BLANK.raise(r + 1, names[present], names[absent]);
+            }
+            double[] p = new double[grids.length];
+            for (int i = 0; i < grids.length; i++) {
+                if (vectors[i] != null) {
+                    Object cell = vectors[i].length == 1 && broadcast[i] ? vectors[i][0] : vectors[i][r];
+                    p[i] = required(names[i] + " of point " + (r + 1), cell);
+                }
+            }
+            points.add(p);
+        }
+        double[][] columns = new double[grids.length][];
+        for (int i = 0; i < grids.length; i++) {
+            if (vectors[i] == null) {
+                continue;
+            }
+            columns[i] = new double[points.size()];
+            for (int r = 0; r < points.size(); r++) {
+                columns[i][r] = points.get(r)[i];
+            }
+        }
+        return columns;
+    }
+
+    /** The cells of a single column or row. */
+    private static Object[] vector(String what, Object[][] g) {
+        if (!nonEmpty(g)) {
+            throw Problem.ARG_BLANK.raise(what);
+        }
+        if (g[0].length == 1) {
+            Object[] v = new Object[g.length];
+            for (int r = 0; r < g.length; r++) {
+                v[r] = g[r][0];
+            }
+            return v;
+        }
+        if (g.length == 1) {
+            return g[0].clone();
+        }
+        throw Problem.DATA_SHAPE.raise(what, g.length, g[0].length);
+    }
+
+    /** The numbers of a single column or row, none blank. */
+    static double[] values(String what, Object[][] g) {
+        Object[] v = vector(what, g);
+        double[] out = new double[v.length];
+        for (int i = 0; i < v.length; i++) {
+            out[i] = required(what + " " + (i + 1), v[i]);
+        }
+        return out;
+    }
+
+    /** A matrix of numbers (a design), rows as given; blank rows are refused. */
+    static double[][] numbers(String what, Object[][] g) {
+        if (!nonEmpty(g)) {
+            throw Problem.ARG_BLANK.raise(what);
+        }
+        double[][] out = new double[g.length][g[0].length];
+        for (int r = 0; r < g.length; r++) {
+            for (int c = 0; c < g[r].length; c++) {
+                out[r][c] = required(what + " (row " + (r + 1) + ", column " + (c + 1) + ")", g[r][c]);
+            }
+        }
+        return out;
+    }
+
+    /** An optional range argument: null when left out. A single cell arrives as a plain value. */
+    static Object[][] optionalRange(Object value) {
+        Object v = unwrap(value);
+        if (v == null) {
+            return null;
+        }
+        if (v instanceof Object[][]) {
+            return (Object[][]) v;
+        }
+        return new Object[][] {{v}};
+    }
+
+    /** A whole number from 0 to {@code highest}; {@code absent} when left out. */
+    static int count(String what, Object value, int highest, int absent) {
+        Object v = unwrap(value);
+        if (v == null) {
+            return absent;
+        }
+        double d = number(what, v);
+        if (d != Math.rint(d) || d < 0 || d > highest) {
+            throw Problem.NOT_A_COUNT.raise(what, highest, describe(v));
+        }
+        return (int) d;
+    }
+
+    /** An optional number: NaN when left out. */
+    static double optionalNumber(String what, Object value) {
+        Object v = unwrap(value);
+        return v == null ? Double.NaN : number(what, v);
+    }
+
+    /** The fit output argument: coefficients when left out. */
+    static FitOutput fitOutput(Object value) {
+        Object v = unwrap(value);
+        if (v == null) {
+            return FitOutput.COEFFICIENTS;
+        }
+        if (!(v instanceof String)) {
+            throw Problem.UNKNOWN_FIT_OUTPUT.raise(describe(v), "coefficients, standard errors, statistics, "
+                    + "covariance, residuals, orders");
+        }
+        return FitOutput.lookup((String) v);
+    }
+
+    /** A pair "a + b" of the card's components as {first, second}; left out, the two components of a binary card. */
+    static int[] pair(Card card, Object value) {
+        Object v = unwrap(value);
+        if (v == null || (v instanceof String && ((String) v).trim().isEmpty())) {
+            if (card.componentCount() != 2) {
+                throw Problem.UNKNOWN_PAIR_ARG.raise("", card.componentCount() + " components");
+            }
+            return new int[] {0, 1};
+        }
+        String text = v instanceof String ? (String) v : describe(v);
+        String[] parts = text.split("\\+", -1);
+        if (parts.length == 2) {
+            int a = card.indexOf(parts[0]);
+            int b = card.indexOf(parts[1]);
+            if (a >= 0 && b >= 0 && a != b) {
+                return new int[] {a, b};
+            }
+        }
+        StringBuilder names = new StringBuilder();
+        for (org.miscela.core.Component c : card.components()) {
+            names.append(names.length() == 0 ? "" : ", ").append(c.name());
+        }
+        throw Problem.UNKNOWN_PAIR_ARG.raise(text.trim(), names);
     }
 
     private static boolean nonEmpty(Object[][] g) {
@@ -304,10 +489,6 @@ final class Arguments {
 
     private static boolean isBlank(Object v) {
         return v == null || (v instanceof String && ((String) v).trim().isEmpty());
-    }
-
-    private static Object checked(Object v) {
-        return v instanceof Double ? finite((Double) v) : v;
     }
 
     /** The last line of defence: Calc must never receive NaN or infinity from us. */

@@ -6,6 +6,9 @@ import com.sun.star.lib.uno.helper.WeakBase;
 import org.miscela.calc.meta.FunctionCatalog;
 import org.miscela.core.AmountBasis;
 import org.miscela.core.Card;
+import org.miscela.core.CardReader;
+import org.miscela.core.FitFunctions;
+import org.miscela.core.fit.FitException;
 import org.miscela.core.CardFunctions;
 import org.miscela.core.Extrapolation;
 import org.miscela.core.MiscelaException;
@@ -218,7 +221,62 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
         }
     }
 
-    private static IllegalArgumentException refused(MiscelaException ex) {
+    @Override
+    public Object fitExcessVolume(Object[][] moleFraction, Object[][] excessVolume, Object order, Object temperature,
+            Object orderInTemperature, Object referenceTemperature, Object weights, Object result)
+            throws IllegalArgumentException {
+        try {
+            int m = Arguments.count("order", order, MAX_ORDER_IN_X, -1);
+            int mt = Arguments.count("order in T", orderInTemperature, MAX_ORDER_IN_T, 0);
+            double[][] d = Arguments.dataColumns(new String[] {"mole fraction", "excess volume", "temperature",
+                "weight"}, new Object[][][] {moleFraction, excessVolume, Arguments.optionalRange(temperature),
+                    Arguments.optionalRange(weights)}, new boolean[] {false, false, false, false});
+            return Arguments.table(FitFunctions.excess(d[0], d[1], m, d[2], mt,
+                    Arguments.optionalNumber("reference temperature", referenceTemperature), d[3],
+                    Arguments.fitOutput(result)));
+        } catch (MiscelaException | FitException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object fitDensity(Object[][] pure, Object pair, Object[][] moleFraction, Object[][] density,
+            Object[][] temperature, Object order, Object orderInTemperature, Object referenceTemperature,
+            Object weights, Object result) throws IllegalArgumentException {
+        try {
+            Card c = CardReader.readPureComponents(pure);
+            int[] p = Arguments.pair(c, pair);
+            int m = Arguments.count("order", order, MAX_ORDER_IN_X, -1);
+            int mt = Arguments.count("order in T", orderInTemperature, MAX_ORDER_IN_T, 0);
+            double[][] d = Arguments.dataColumns(new String[] {"mole fraction", "density", "temperature", "weight"},
+                    new Object[][][] {moleFraction, density, temperature, Arguments.optionalRange(weights)},
+                    new boolean[] {false, false, true, false});
+            return Arguments.table(FitFunctions.density(c, p[0], p[1], d[0], d[1], d[2], m, mt,
+                    Arguments.optionalNumber("reference temperature", referenceTemperature), d[3],
+                    Arguments.fitOutput(result)));
+        } catch (MiscelaException | FitException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object leastSquares(Object[][] design, Object[][] response, Object weights, Object result)
+            throws IllegalArgumentException {
+        try {
+            Object[][] w = Arguments.optionalRange(weights);
+            return Arguments.table(FitFunctions.leastSquares(Arguments.numbers("design", design),
+                    Arguments.values("response", response), w == null ? null : Arguments.values("weights", w),
+                    Arguments.fitOutput(result)));
+        } catch (MiscelaException | FitException ex) {
+            throw refused(ex);
+        }
+    }
+
+    /** The fit engine's limits on the orders (beyond them the power basis is too ill-conditioned). */
+    private static final int MAX_ORDER_IN_X = 30;
+    private static final int MAX_ORDER_IN_T = 10;
+
+    private static IllegalArgumentException refused(RuntimeException ex) {
         return new IllegalArgumentException(ex.getMessage());
     }
 

@@ -69,6 +69,20 @@ public final class CardReader {
 
     /** Parses a card; throws {@link MiscelaException} naming the first problem found. */
     public static Card read(Object[][] cells) {
+        return read(cells, false);
+    }
+
+    /**
+     * Parses the pure-component part of a card: like {@link #read}, but pairs without coefficient rows are ideal and
+     * the composition limits may be left out. The fit functions read the data they fit against from such a range
+     * (the top of a card, whose coefficient rows below hold the fit's array formula, which would otherwise refer to
+     * itself).
+     */
+    public static Card readPureComponents(Object[][] cells) {
+        return read(cells, true);
+    }
+
+    private static Card read(Object[][] cells, boolean pureOnly) {
         List<Row> rows = rows(cells);
         if (rows.isEmpty()) {
             throw Problem.CARD_EMPTY.raise();
@@ -82,7 +96,7 @@ public final class CardReader {
             throw Problem.CARD_VERSION.raise(header.number, Numbers.show(version), FORMAT_VERSION);
         }
         header.atMost(1);
-        return new Parse(rows.subList(1, rows.size()), (int) version).card();
+        return new Parse(rows.subList(1, rows.size()), (int) version, pureOnly).card();
     }
 
     /** The working state of one parse. */
@@ -95,7 +109,10 @@ public final class CardReader {
         final List<Component> components = new ArrayList<>();
         Units units;
 
-        Parse(List<Row> rows, int version) {
+        final boolean pureOnly;
+
+        Parse(List<Row> rows, int version, boolean pureOnly) {
+            this.pureOnly = pureOnly;
             for (Row r : rows) {
                 if (version < 2 && isVersion2(r.key)) {
                     throw Problem.NEEDS_VERSION_2.raise(r.number, r.label);
@@ -200,7 +217,7 @@ public final class CardReader {
             }
             int[] asymmetric = {-1};
             GeometricModel model = model(names, asymmetric);
-            boolean missingIdeal = missingPairsIdeal();
+            boolean missingIdeal = missingPairsIdeal() || pureOnly;
             // A card may describe enthalpy alone; then the volumetric functions refuse rather than guess.
             boolean enthalpyOnly = sections.containsKey(EXCESS_ENTHALPY) && !sections.containsKey(EXCESS_VOLUME);
             ExcessFunction volume = enthalpyOnly ? null : section(EXCESS_VOLUME, units.molarVolume().toCm3PerMol(1.0),
@@ -387,7 +404,7 @@ public final class CardReader {
             double[] xHi = new double[names.size()];
             java.util.Arrays.fill(xHi, 1.0);
             Map<String, Row> fractionRows = keyedRows(VALID_MOLE_FRACTION);
-            if (fractionRows.isEmpty()) {
+            if (fractionRows.isEmpty() && !pureOnly) {
                 throw Problem.NO_COMPOSITION_LIMIT.raise();
             }
             for (int i = 0; i < names.size(); i++) {

@@ -93,4 +93,115 @@ class MixtureAddInTest {
         assertThrows(IllegalArgumentException.class, () -> addIn.mixtureDensity(broken, one(0.4), one(20.0),
                 Any.VOID));
     }
+
+    // --- compositions of any size (ternary test card, invented values)
+
+    private static final Object[][] TERNARY = TestCards.cells("ternary-invented.tsv");
+    private static final org.miscela.core.Card TERNARY_CARD = TestCards.card("ternary-invented.tsv");
+    private static final double[] X = {0.2, 0.5, 0.3};
+
+    private static double core(double[] x, double t) {
+        return CardFunctions.density(TERNARY_CARD, x, t, Extrapolation.AS_CARD);
+    }
+
+    @Test
+    void aRowOrAColumnIsOneComposition() throws Exception {
+        Object row = addIn.mixtureDensity(TERNARY, new Object[][] {{0.2, 0.5, 0.3}}, one(20.0), Any.VOID);
+        Object column = addIn.mixtureDensity(TERNARY, new Object[][] {{0.2}, {0.5}, {0.3}}, one(20.0), Any.VOID);
+        assertEquals(core(X, 20), (Double) row, 0.0);
+        assertEquals(core(X, 20), (Double) column, 0.0);
+    }
+
+    @Test
+    void aBlockGivesAColumnWithBlankLinesBlank() throws Exception {
+        Object[][] block = {{0.2, 0.5, 0.3}, {"", "", ""}, {0.1, 0.1, 0.8}, {0.3, 0.3, 0.4}};
+        Object[][] ts = {{20.0}, {20.0}, {25.0}, {""}};
+        Object[][] grid = (Object[][]) ((Any) addIn.mixtureDensity(TERNARY, block, ts, Boolean.TRUE)).getObject();
+        assertEquals(4, grid.length);
+        assertEquals(1, grid[0].length);
+        assertEquals(core(X, 20), (Double) grid[0][0], 0.0);
+        assertEquals("", grid[1][0]);
+        assertEquals(CardFunctions.density(TERNARY_CARD, new double[] {0.1, 0.1, 0.8}, 25, Extrapolation.ALLOW),
+                (Double) grid[2][0], 0.0);
+        assertEquals("", grid[3][0], "a blank temperature gives a blank result");
+    }
+
+    @Test
+    void aPartlyBlankLineIsRefusedWithItsName() {
+        Object[][] block = {{0.2, 0.5, 0.3}, {0.2, "", 0.8}};
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> addIn.mixtureDensity(TERNARY, block, one(20.0), Any.VOID));
+        assertTrue(e.getMessage().contains("composition of Q in line 2"), e.getMessage());
+    }
+
+    @Test
+    void shapesThatFitNoCompositionAreRefused() {
+        IllegalArgumentException single = assertThrows(IllegalArgumentException.class,
+                () -> addIn.mixtureDensity(TERNARY, one(0.3), one(20.0), Any.VOID));
+        assertTrue(single.getMessage().contains("this card has 3"), single.getMessage());
+        IllegalArgumentException wide = assertThrows(IllegalArgumentException.class,
+                () -> addIn.mixtureDensity(TERNARY, new Object[][] {{0.2, 0.5}, {0.3, 0.1}}, one(20.0), Any.VOID));
+        assertTrue(wide.getMessage().contains("2×2"), wide.getMessage());
+        IllegalArgumentException sum = assertThrows(IllegalArgumentException.class,
+                () -> addIn.mixtureDensity(TERNARY, new Object[][] {{0.2, 0.5, 0.2}}, one(20.0), Any.VOID));
+        assertTrue(sum.getMessage().contains("sum to 0.9"), sum.getMessage());
+        IllegalArgumentException temperatures = assertThrows(IllegalArgumentException.class,
+                () -> addIn.mixtureDensity(TERNARY, new Object[][] {{0.2, 0.5, 0.3}, {0.2, 0.5, 0.3}},
+                        new Object[][] {{20.0, 25.0}}, Any.VOID));
+        assertTrue(temperatures.getMessage().contains("temperature"), temperatures.getMessage());
+    }
+
+    /** For a binary card a two-column block holds compositions, anything else x1 values. */
+    @Test
+    void binaryCardsTakeX1OrTwoColumnBlocks() throws Exception {
+        Object[][] block = {{0.3, 0.7}, {0.6, 0.4}};
+        Object[][] grid = (Object[][]) ((Any) addIn.mixtureDensity(CARD, block, one(20.0), Any.VOID)).getObject();
+        assertEquals(2, grid.length);
+        assertEquals((Double) addIn.mixtureDensity(CARD, one(0.6), one(20.0), Any.VOID), (Double) grid[1][0], 0.0);
+        Object[][] x1 = {{0.3, 0.6, 0.9}};
+        Object[][] row = (Object[][]) ((Any) addIn.mixtureDensity(CARD, x1, one(20.0), Any.VOID)).getObject();
+        assertEquals(3, row[0].length, "a row of three x1 values gives a row of three results");
+    }
+
+    @Test
+    void heatFunctionsTakeAmountsAndABasis() throws Exception {
+        Object[][] batch = {{2.0, 5.0, 1.0}};
+        double mol = (Double) addIn.mixingHeat(TERNARY, batch, one(25.0), Any.VOID, Any.VOID);
+        double kmol = (Double) addIn.mixingHeat(TERNARY, batch, one(25.0), "kmol", Any.VOID);
+        assertEquals(mol * 1000, kmol, 1e-9 * Math.abs(kmol));
+        assertEquals(CardFunctions.mixingHeat(TERNARY_CARD, new double[] {2, 5, 1}, org.miscela.core.AmountBasis.MOL,
+                25, Extrapolation.AS_CARD), mol, 0.0);
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> addIn.mixingHeat(TERNARY, batch, one(25.0), "lb", Any.VOID));
+        assertTrue(e.getMessage().contains("mol, kmol, g, kg"), e.getMessage());
+        double added = (Double) addIn.additionHeat(TERNARY, batch, "Q", 1.0, one(25.0), Any.VOID, Any.VOID);
+        double direct = CardFunctions.mixingHeat(TERNARY_CARD, new double[] {2, 6, 1},
+                org.miscela.core.AmountBasis.MOL, 25, Extrapolation.AS_CARD) - mol;
+        assertEquals(direct, added, 1e-9 * Math.abs(direct));
+        double rise = (Double) addIn.adiabaticRise(TERNARY, batch, one(25.0), Any.VOID, Any.VOID);
+        assertTrue(rise > 0, "exothermic mixing warms the batch");
+    }
+
+    @Test
+    void insideAndTrace() throws Exception {
+        assertEquals(1.0, (Double) addIn.insideValidity(TERNARY, new Object[][] {{0.2, 0.5, 0.3}}, one(20.0)));
+        Object[][] block = {{0.2, 0.5, 0.3}, {0.1, 0.3, 0.6}};
+        Object[][] inside = (Object[][]) ((Any) addIn.insideValidity(TERNARY, block, one(20.0))).getObject();
+        assertEquals(0.0, (Double) inside[1][0], "R above its 0.5 limit");
+        Object[][] trace = (Object[][]) ((Any) addIn.traceEvaluation(TERNARY, new Object[][] {{0.2, 0.5, 0.3}},
+                one(20.0), Any.VOID, Any.VOID)).getObject();
+        assertEquals("card", trace[0][0]);
+        boolean found = false;
+        for (Object[] r : trace) {
+            if ("mixture density [kg/m³]".equals(r[0])) {
+                assertEquals(core(X, 20), (Double) r[1], 0.0);
+                found = true;
+            }
+        }
+        assertTrue(found);
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> addIn.traceEvaluation(TERNARY, new Object[][] {{0.2, 0.5, 0.3}}, one(20.0), "viscosity",
+                        Any.VOID));
+        assertTrue(e.getMessage().contains("volume, enthalpy"), e.getMessage());
+    }
 }

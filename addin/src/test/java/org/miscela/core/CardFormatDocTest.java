@@ -170,7 +170,7 @@ class CardFormatDocTest {
         assertEquals(1, four.excessVolume().ternaryTerms().size());
         double[] inside = {0.5, 0.4, 0.1}; // additive share of the pair 0.1/0.6 = 0.17
         double[] outside = {0.2, 0.6, 0.2}; // 0.2/0.4 = 0.5 > 0.3
-        assertTrue(CardFunctions.inside(four, inside, 20));
+        assertEquals(1.0, CardFunctions.inside(four, inside, 20));
         assertTrue(CardFunctions.check(four, outside, 20, Extrapolation.AS_CARD).contains("additive + glycol"));
 
         // Example 5: enthalpy only; volumes refused; H^E depends on T, so Cp^E = x1 x2 Σ dA_k/dT (x1 − x2)^k.

@@ -1,7 +1,6 @@
 package org.miscela.core;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -127,9 +126,9 @@ class MulticomponentCardTest {
     void pairLimits() {
         Card c = TestCard.ternary().row("valid pair mole fraction", "alpha + gamma", 0, 0.5)
                 .row("valid pair temperature", "beta + gamma", 290, 300).read();
-        assertTrue(CardFunctions.inside(c, X, T));
+        assertEquals(1.0, CardFunctions.inside(c, X, T));
         double[] rich = {0.5, 0.1, 0.4}; // alpha/(alpha + gamma) = 0.556
-        assertFalse(CardFunctions.inside(c, rich, T));
+        assertEquals(0.0, CardFunctions.inside(c, rich, T));
         MiscelaException e = assertThrows(MiscelaException.class,
                 () -> CardFunctions.density(c, rich, T, Extrapolation.AS_CARD));
         assertEquals(Problem.OUTSIDE_PAIR_COMPOSITION, e.problem());
@@ -137,7 +136,7 @@ class MulticomponentCardTest {
         CardFunctions.density(c, rich, T, Extrapolation.ALLOW);
         assertEquals(Problem.OUTSIDE_PAIR_TEMPERATURE, problem(() -> CardFunctions.density(c, X, 305,
                 Extrapolation.AS_CARD)));
-        assertTrue(CardFunctions.inside(c, new double[] {0.5, 0, 0.5}, 305), "beta absent: its pair limit is moot");
+        assertEquals(1.0, CardFunctions.inside(c, new double[] {0.5, 0, 0.5}, 305), "beta absent: its pair limit is moot");
         Map<String, Object> trace = traceAllowed(c, rich);
         assertTrue(String.valueOf(trace.get("outside validity")).contains("alpha + gamma"), trace.toString());
         assertEquals("allowed by the extrapolate argument", trace.get("extrapolation"));

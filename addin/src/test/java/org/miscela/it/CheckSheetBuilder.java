@@ -53,6 +53,11 @@ public final class CheckSheetBuilder {
             }
         }
         XComponent doc = office.newSpreadsheet();
+        // Lookups of trace labels (which hold '+' and '[') need wildcards, not regular expressions.
+        com.sun.star.beans.XPropertySet settings = UnoRuntime.queryInterface(com.sun.star.beans.XPropertySet.class,
+                doc);
+        settings.setPropertyValue("RegularExpressions", false);
+        settings.setPropertyValue("Wildcards", true);
         XSpreadsheetDocument sd = UnoRuntime.queryInterface(XSpreadsheetDocument.class, doc);
         sd.getSheets().insertNewByName("Checks", (short) 1);
         sd.getSheets().insertNewByName("Cards", (short) 2);

@@ -39,6 +39,17 @@ public final class FunctionCatalog {
     private static final ArgumentInfo BATCH_TEMPERATURE = required("temperature", "temperature",
             "Temperature of the components and of the mixture, in the card's temperature unit: a single value, "
                     + "or a column with one per batch.");
+    private static final ArgumentInfo ORDER = required("order", "order",
+            "The highest k of the coefficients A0..Ak to fit, 0 to 30.");
+    private static final ArgumentInfo ORDER_IN_T = optional("orderInTemperature", "order in T",
+            "Optional. The highest power j of (T − T_ref) in each A_k (left out: 0, constant coefficients).");
+    private static final ArgumentInfo REFERENCE_T = optional("referenceTemperature", "reference temperature",
+            "Optional. T_ref of the temperature polynomials; needed when the order in T is above 0.");
+    private static final ArgumentInfo WEIGHTS = optional("weights", "weights",
+            "Optional. A weight per point, zero or positive (left out: 1 each); a zero weight leaves the point out.");
+    private static final ArgumentInfo RESULT = optional("result", "result",
+            "Optional. \"coefficients\" (left out), \"standard errors\", \"statistics\", \"covariance\", "
+                    + "\"residuals\" or \"orders\" (fits of order 0 to the order given, with F-tests, AIC and BIC).");
     private static final ArgumentInfo BASIS = optional("basis", "basis",
             "Optional. The unit of the amounts: \"mol\" (left out), \"kmol\", \"g\" or \"kg\"; masses are "
                     + "converted with the card's molar masses.");
@@ -128,8 +139,8 @@ public final class FunctionCatalog {
                             "Starting temperature of every component, in the card's temperature unit: a single "
                                     + "value, or a column with one per batch."), BASIS, EXTRAPOLATE),
             new FunctionInfo("insideValidity", "MIX.INSIDE",
-                    "TRUE when the composition and temperature lie inside every validity limit the card states "
-                            + "(temperature, each component's mole fraction, each pair's limits); FALSE otherwise.",
+                    "1 (TRUE) when the composition and temperature lie inside every validity limit the card states "
+                            + "(temperature, each component's mole fraction, each pair's limits); 0 (FALSE) otherwise.",
                     "—",
                     "=MIX.INSIDE(card; B2:D2; 45)",
                     CARD, MOLE_FRACTION, TEMPERATURE),
@@ -140,7 +151,52 @@ public final class FunctionCatalog {
                     "=MIX.TRACE(card; B2:D2; 25)",
                     CARD, MOLE_FRACTION_ONE, TEMPERATURE_ONE, optional("quantity", "property",
                             "Optional. \"volume\" (left out) or \"enthalpy\": which of the card's properties to "
-                                    + "trace."), EXTRAPOLATE)));
+                                    + "trace."), EXTRAPOLATE),
+            new FunctionInfo("fitExcessVolume", "MIX.FITEXCESS",
+                    "Redlich–Kister coefficients fitted by least squares to excess volumes: an array of A0..Am "
+                            + "(one row each, one column per power of T − T_ref) to enter over a card's coefficient "
+                            + "cells, or the fit's standard errors, statistics, covariance, residuals or order table.",
+                    "min Σ w_i (V^E_i − x1·x2·Σ_k Σ_j a_kj (x1 − x2)^k (T_i − T_ref)^j)², Householder QR with column "
+                            + "scaling and iterative refinement",
+                    "=MIX.FITEXCESS(A2:A20; B2:B20; 3)",
+                    required("moleFraction", "x1", "Mole fraction of the first component at each point: a column "
+                            + "(or row). Points left blank in every data range are skipped."),
+                    required("excessVolume", "excess volume", "The excess molar volume at each point, in any unit: "
+                            + "the coefficients come out in the same unit."),
+                    ORDER,
+                    optional("temperature", "temperature", "Optional. The temperature of each point, needed for "
+                            + "temperature-dependent coefficients; any scale (only differences from T_ref are used)."),
+                    ORDER_IN_T, REFERENCE_T, WEIGHTS, RESULT),
+            new FunctionInfo("fitDensity", "MIX.FITDENSITY",
+                    "Redlich–Kister coefficients of one pair fitted to measured densities, with the pure liquids' "
+                            + "molar masses and densities taken from a card: an array to enter over the card's "
+                            + "coefficient cells (in its molar volume unit), or the fit's statistics.",
+                    "V^E_i = Σ x M / ρ_i − x1·V_1*(T_i) − x2·V_2*(T_i); min Σ w_i (ρ_i − ρ_fit,i)² to first order "
+                            + "(each V^E residual weighted by (ρ_i²/M_i)²)",
+                    "=MIX.FITDENSITY(pure; \"ethanol + water\"; A2:A40; C2:C40; B2:B40; 4; 1; 20)",
+                    required("pure", "pure data", "The cells of a card's pure-component part: header, units, "
+                            + "components and density models (put the coefficient rows, which hold this formula, "
+                            + "below it)."),
+                    optional("pair", "pair", "The pair as \"first + second\"; may be left out for a card of two "
+                            + "components."),
+                    required("moleFraction", "x", "Mole fraction of the pair's first component at each point (a "
+                            + "column). Points left blank in every data range are skipped."),
+                    required("density", "density", "The measured density at each point, in the card's density "
+                            + "unit."),
+                    required("temperature", "temperature", "The temperature of each point, or one value for all, in "
+                            + "the card's temperature unit."),
+                    ORDER, ORDER_IN_T, REFERENCE_T, WEIGHTS, RESULT),
+            new FunctionInfo("leastSquares", "MIX.LEASTSQUARES",
+                    "General weighted linear least squares y ≈ X·b, by the same engine as the card fits: the "
+                            + "coefficients b as a column, or their standard errors, the statistics, the covariance "
+                            + "or the residuals.",
+                    "min Σ w_i (y_i − Σ_j X_ij b_j)², Householder QR with column scaling and iterative refinement",
+                    "=MIX.LEASTSQUARES(B2:H17; A2:A17)",
+                    required("design", "X", "The design matrix: one row per point, one column per parameter "
+                            + "(include a column of 1s for an intercept)."),
+                    required("response", "y", "The observed values, one per point (a column)."),
+                    WEIGHTS, optional("result", "result", "Optional. \"coefficients\" (left out), \"standard "
+                            + "errors\", \"statistics\", \"covariance\" or \"residuals\"."))));
 
     private FunctionCatalog() {
     }

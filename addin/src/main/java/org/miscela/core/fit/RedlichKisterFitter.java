@@ -53,6 +53,27 @@ public final class RedlichKisterFitter {
         return new RedlichKisterFit(fit, orderInX, orderInT, referenceKelvin);
     }
 
+    /**
+     * Coefficients a_kj from (x1, τ, V^E) with τ = T − T_ref given directly, for data whose temperature scale is not
+     * known (the basis only uses temperature differences, which are the same in K and °C).
+     */
+    public static RedlichKisterFit excessVolumesAtOffsets(double[] x1, double[] tau, double[] excessVolume,
+            int orderInX, int orderInT, double[] weights) {
+        checkOrders(orderInX, orderInT);
+        checkLengths(x1.length, "mole fractions", tau.length, "temperatures");
+        checkLengths(x1.length, "mole fractions", excessVolume.length, "excess volumes");
+        double[][] design = new double[x1.length][];
+        for (int i = 0; i < x1.length; i++) {
+            checkMoleFraction(x1[i], i + 1);
+            if (!Double.isFinite(tau[i])) {
+                throw FitProblem.NOT_FINITE.raise("temperature", i + 1, tau[i]);
+            }
+            design[i] = basis(x1[i], tau[i], orderInX, orderInT);
+        }
+        return new RedlichKisterFit(LinearLeastSquares.fit(design, excessVolume, weights), orderInX, orderInT,
+                Double.NaN);
+    }
+
     /** Coefficients A0..A_order at one temperature from (x1, ρ) pairs, with the pure liquids' densities given. */
     public static RedlichKisterFit densities(double[] x1, double[] density, Component first, Component second,
             double kelvin, int order, DeviationMeasure measure, double[] weights) {

@@ -17,7 +17,7 @@ import java.util.regex.Pattern;
  * Statistical Reference Datasets, Linear Least Squares Regression): its data, the model read from its "Model:" line,
  * and its certified values. Nothing here is typed in by hand; everything comes from the file.
  */
-final class NistDataset {
+public final class NistDataset {
     private static final String NUMBER = "([-+]?\\d*\\.?\\d+(?:[eE][-+]?\\d+)?)";
     private static final Pattern PARAMETER = Pattern.compile("^\\s*B(\\d+)\\s+" + NUMBER + "\\s+" + NUMBER + "\\s*$");
     private static final Pattern RESIDUAL_SD = Pattern.compile("^\\s*Standard Deviation\\s+" + NUMBER + "\\s*$");
@@ -28,17 +28,17 @@ final class NistDataset {
     /** A model term: B3, B1*x, B2*(x**2), B4*x4. */
     private static final Pattern TERM = Pattern.compile("^B(\\d+)(?:\\*\\(?x(\\d*)(?:\\*\\*(\\d+))?\\)?)?$");
 
-    final String name;
-    final String modelLine;
-    final double[] certifiedCoefficients;
-    final double[] certifiedStandardDeviations;
-    final double certifiedResidualSd;
-    final double certifiedRSquared;
+    public final String name;
+    public final String modelLine;
+    public final double[] certifiedCoefficients;
+    public final double[] certifiedStandardDeviations;
+    public final double certifiedResidualSd;
+    public final double certifiedRSquared;
     /** The header's own counts, to check the reading of data and model against. */
     final int declaredObservations;
     final int declaredParameters;
     /** y, then the predictors, per observation. */
-    final double[][] data;
+    public final double[][] data;
     /** For parameter k: the predictor it multiplies (1-based; 0 for the constant) and the power. */
     private final int[][] terms;
 
@@ -56,7 +56,7 @@ final class NistDataset {
         this.declaredParameters = declaredParameters;
     }
 
-    static NistDataset load(String name) {
+    public static NistDataset load(String name) {
         try (InputStream in = NistDataset.class.getResourceAsStream("/nist-strd/" + name + ".dat")) {
             if (in == null) {
                 throw new IllegalStateException("test resource nist-strd/" + name + ".dat is missing");
@@ -184,7 +184,7 @@ final class NistDataset {
      * rounded once) moves its LREs by a few tenths of a digit either way: that is the limit of double precision for
      * this problem, not of the solver.
      */
-    double[][] design() {
+    public double[][] design() {
         double[][] x = new double[data.length][terms.length];
         for (int i = 0; i < data.length; i++) {
             for (int k = 0; k < terms.length; k++) {
@@ -194,7 +194,12 @@ final class NistDataset {
         return x;
     }
 
-    double[] response() {
+    /** Parameter k's term: {predictor (1-based; 0 for the constant), power}. */
+    public int[] term(int k) {
+        return terms[k].clone();
+    }
+
+    public double[] response() {
         double[] y = new double[data.length];
         for (int i = 0; i < data.length; i++) {
             y[i] = data[i][0];

@@ -20,7 +20,7 @@ import org.junit.jupiter.api.function.Executable;
  * deviation, R²) compared by its log relative error, the number of correct significant digits. Certified values and
  * models are read from the .dat files themselves (test resources, copied verbatim).
  */
-class NistLinearRegressionTest {
+public class NistLinearRegressionTest {
     private static final String[] DATASETS = {"Norris", "Pontius", "NoInt1", "NoInt2", "Filip", "Longley",
         "Wampler1", "Wampler2", "Wampler3", "Wampler4", "Wampler5"};
     /** Certified values carry 15 significant digits, so agreement beyond that cannot be told apart. */
@@ -34,7 +34,7 @@ class NistLinearRegressionTest {
      * Wampler2 fit exactly) the absolute error is used instead, −log10|q| (the usual convention for StRD, from
      * memory: McCullough 1998, "Assessing the reliability of statistical software").
      */
-    static double lre(double computed, double certified) {
+    public static double lre(double computed, double certified) {
         if (computed == certified) {
             return LRE_CAP;
         }
