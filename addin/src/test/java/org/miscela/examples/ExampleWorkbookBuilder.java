@@ -69,7 +69,7 @@ public final class ExampleWorkbookBuilder {
     }
 
     public static void main(String[] args) throws Exception {
-        ExampleWorkbooks.buildAndSave(FILE, args, ExampleWorkbookBuilder::build);
+        ExampleWorkbooks.buildAndSave(FILE, args, (doc, context) -> build(doc));
     }
 
     static void build(XComponent doc) throws Exception {

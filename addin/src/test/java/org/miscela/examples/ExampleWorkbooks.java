@@ -19,6 +19,7 @@ import com.sun.star.table.XCell;
 import com.sun.star.table.XColumnRowRange;
 import com.sun.star.text.XText;
 import com.sun.star.uno.UnoRuntime;
+import com.sun.star.uno.XComponentContext;
 import com.sun.star.util.XMergeable;
 import com.sun.star.util.XNumberFormats;
 import com.sun.star.util.XNumberFormatsSupplier;
@@ -40,9 +41,9 @@ final class ExampleWorkbooks {
     /** Background of the cells a reader is meant to change. */
     static final int INPUT_COLOUR = 0xE8F0FB;
 
-    /** Fills a new, empty spreadsheet document. */
+    /** Fills a new, empty spreadsheet document; the office's context is there for services the document lacks. */
     interface Content {
-        void build(XComponent doc) throws Exception;
+        void build(XComponent doc, XComponentContext context) throws Exception;
     }
 
     private ExampleWorkbooks() {
@@ -58,7 +59,7 @@ final class ExampleWorkbooks {
         Office office = Office.start();
         try {
             XComponent doc = office.newSpreadsheet();
-            content.build(doc);
+            content.build(doc, office.context());
             UnoRuntime.queryInterface(XCalculatable.class, doc).calculateAll();
             Path scratch = office.scratch(file);
             UnoRuntime.queryInterface(XStorable.class, doc).storeToURL(scratch.toUri().toString(),
