@@ -71,7 +71,7 @@ import org.miscela.it.Office;
  *
  * <p>Sheets: Overview (inputs, cautions, a ternary plot drawn as an XY chart), Card (a version-2 card), Grid (66
  * compositions across the triangle, array formulas), Batch (a recipe in kg and its heats), Audit (MIX.TRACE re-derived
- * by native formulas).
+ * by native formulas), Plot (the chart's coordinates). The constants that locate cells are shared with ExamplesIT.
  *
  * <p>Run: {@code mvn -q -B test-compile exec:java -pl addin -Dexec.classpathScope=test
  * -Dexec.mainClass=org.miscela.examples.TernaryWorkbookBuilder -Dmiscela.oxt=$PWD/addin/target/miscela.oxt}
@@ -79,12 +79,12 @@ import org.miscela.it.Office;
  */
 public final class TernaryWorkbookBuilder {
     static final String FILE = "ternary-blend.ods";
-    static final String[] COMPONENTS = {"propylene glycol", "water", "glycerol"};
+    private static final String[] COMPONENTS = {"propylene glycol", "water", "glycerol"};
 
-    // --- where things are (0-based rows and columns), shared with ExamplesIT
+    // --- where things are (0-based rows and columns); the package-visible ones are read by ExamplesIT
 
     /** Card sheet: the card's first row; the named range spans columns A..E. */
-    static final int CARD_TOP = 5;
+    private static final int CARD_TOP = 5;
     private static final int CARD_COLUMNS = 5;
 
     /** Overview sheet: the temperature of the grid and the three density band limits, column B. */
@@ -94,9 +94,9 @@ public final class TernaryWorkbookBuilder {
 
     /** Grid sheet: header row, first composition row, number of compositions (step 0.1 in two fractions). */
     static final String GRID_TEMPERATURE_CELL = "D4";
-    static final int GRID_HEAD = 6;
+    private static final int GRID_HEAD = 6;
     static final int GRID_FIRST = 7;
-    static final int GRID_STEPS = 10;
+    private static final int GRID_STEPS = 10;
     static final int GRID_ROWS = (GRID_STEPS + 1) * (GRID_STEPS + 2) / 2;
     /** Grid columns: x of the three components from B, then density, excess volume, inside. */
     static final int GRID_X = 1;
@@ -132,16 +132,17 @@ public final class TernaryWorkbookBuilder {
     /** Batch sheet: starting temperature (B5), recipe rows (B8:B10 in kg), results and the top-up. */
     static final int BATCH_TEMPERATURE_ROW = 4;
     static final int RECIPE_FIRST = 7;
-    static final double[] RECIPE_KG = {400.0, 520.0, 80.0};
+    private static final double[] RECIPE_KG = {400.0, 520.0, 80.0};
     static final int MIXING_HEAT_ROW = 16;
     static final int RISE_ROW = 18;
+    static final int BATCH_DENSITY_ROW = 20;
     static final int TOP_UP_ROW = 24;
-    static final double TOP_UP_WATER_KG = 100.0;
+    private static final double TOP_UP_WATER_KG = 100.0;
     static final int ADDITION_HEAT_ROW = 29;
 
     /** Audit sheet: composition B5:B7, temperature B8, pass cell B10, largest residual B11, trace from A14. */
-    static final double[] AUDIT_X = {0.30, 0.60, 0.10};
-    static final double AUDIT_TEMPERATURE = 25.0;
+    private static final double[] AUDIT_X = {0.30, 0.60, 0.10};
+    private static final double AUDIT_TEMPERATURE = 25.0;
     static final int AUDIT_X_ROW = 4;
     static final int AUDIT_TEMPERATURE_ROW = 7;
     static final int AUDIT_PASS_ROW = 9;
@@ -303,12 +304,12 @@ public final class TernaryWorkbookBuilder {
         new CardRow("heat capacity reference temperature", "", COMPONENTS[0], 25.0),
         new CardRow("heat capacity", "Cp = 0.189 + 0.0004·(T − 25 °C) kJ/(mol·K) (invented)", COMPONENTS[0], 0.189,
                 0.0004),
-        new CardRow("heat capacity", "kJ/(mol·K), a rounded approximate value", COMPONENTS[1], 0.0753),
+        new CardRow("heat capacity", "kJ/(mol·K), approximate and not from a cited source", COMPONENTS[1], 0.0753),
         new CardRow("heat capacity", "kJ/(mol·K) (invented)", COMPONENTS[2], 0.219),
     };
 
     /** The card's cells as Calc hands them to the add-in (blank cells as empty text). */
-    static Object[][] cardCells() {
+    private static Object[][] cardCells() {
         Object[][] cells = new Object[CARD_ROWS.length][CARD_COLUMNS];
         for (int r = 0; r < CARD_ROWS.length; r++) {
             cells[r][0] = CARD_ROWS[r].label;
@@ -526,10 +527,11 @@ public final class TernaryWorkbookBuilder {
         s.getCellByPosition(3, 3).setFormula("=" + overviewCell(OVERVIEW_TEMPERATURE_ROW));
         text(s, 4, 3, "°C");
         prop(s, GRID_TEMPERATURE_CELL, "NumberFormat", formats.key("0.0"));
-        fitted(s, "A5:K5", 4, "The grid spans the whole triangle, beyond the card's limits (glycerol at most 0.4; glycerol at "
-                + "most 0.6 of the polyols). The density and Vᴱ columns therefore pass TRUE, the explicit extrapolate "
-                + "argument; MIX.INSIDE flags every point, and values outside the limits are grey: extrapolations of "
-                + "invented coefficients, not results. Each block is one call, entered as an array formula.", 190);
+        fitted(s, "A5:K5", 4, "The grid spans the whole triangle, beyond the card's limits (glycerol at most 0.4; "
+                + "glycerol at most 0.6 of the polyols). The density and Vᴱ columns therefore pass TRUE, the explicit "
+                + "extrapolate argument; MIX.INSIDE flags every point, and values outside the limits are grey: "
+                + "extrapolations of invented coefficients, not results. Each block is one call, entered as an array "
+                + "formula.", 190);
 
         String[] heads = {"point", "x propylene glycol\nmol/mol", "x water\n= 1 − others", "x glycerol\nmol/mol",
             "ρ blend\nkg/m³", "Vᴱ\ncm³/mol", "inside\nlimits", "", "V̄ propylene glycol\ncm³/mol",
@@ -783,7 +785,8 @@ public final class TernaryWorkbookBuilder {
             {"Estimated final temperature without cooling", "=" + t + "+B" + (RISE_ROW + 1), "°C", "0.0"},
             {"Density of the batch at the starting temperature (MIX.DENSITY)",
                 "=MIX.DENSITY(card;" + x + ";" + t + ")", "kg/m³", "0.00"},
-            {"Volume of the batch at the starting temperature", "=B" + (total + 1) + "/B21*1000", "L", "#,##0"},
+            {"Volume of the batch at the starting temperature",
+                "=B" + (total + 1) + "/B" + (BATCH_DENSITY_ROW + 1) + "*1000", "L", "#,##0"},
         };
         for (int i = 0; i < results.length; i++) {
             resultRow(s, 13 + i, results[i]);
@@ -821,8 +824,8 @@ public final class TernaryWorkbookBuilder {
             "=MIX.ADDITIONHEAT(card;" + kg + ";\"water\";" + added + ";" + t + ";\"kg\")", "kJ", "#,##0"});
         resultRow(s, ADDITION_HEAT_ROW + 1, new String[] {"Density after the top-up (MIX.DENSITY)",
             "=MIX.DENSITY(card;" + after + ";" + t + ")", "kg/m³", "0.00"});
-        text(s, 0, ADDITION_HEAT_ROW + 3, "MIX.ADDITIONHEAT = (N + Δn)·Hᴱ(after) − N·Hᴱ(before): the heat of stirring the "
-                + "water into the finished batch, on top of the heat of mixing above.");
+        text(s, 0, ADDITION_HEAT_ROW + 3, "MIX.ADDITIONHEAT = (N + Δn)·Hᴱ(after) − N·Hᴱ(before): the heat of stirring "
+                + "the water into the finished batch, on top of the heat of mixing above.");
         prop(s, "A" + (ADDITION_HEAT_ROW + 4), "CharPosture", com.sun.star.awt.FontSlant.ITALIC);
         prop(s, "C5:C" + (ADDITION_HEAT_ROW + 2), "ParaLeftMargin", 150);
         widths(s, 112, 24, 20, 20, 18, 18, 4, 120);
@@ -841,7 +844,7 @@ public final class TernaryWorkbookBuilder {
     // --- Audit
 
     /** The number of rows MIX.TRACE returns for this card, from the core library itself. */
-    static int traceRows() {
+    private static int traceRows() {
         Card card = CardReader.read(cardCells());
         return CardFunctions.trace(card, AUDIT_X, AUDIT_TEMPERATURE, PropertyKind.VOLUME, Extrapolation.AS_CARD)
                 .length;
@@ -927,11 +930,12 @@ public final class TernaryWorkbookBuilder {
         prop(s, "B" + (AUDIT_RESIDUAL_ROW + 1), "NumberFormat", formats.key("0.0E+00"));
         prop(s, "B" + (AUDIT_PASS_ROW + 1) + ":B" + (AUDIT_RESIDUAL_ROW + 1), "HoriJustify",
                 com.sun.star.table.CellHoriJustify.RIGHT);
-        fitted(s, "A" + (TRACE_TOP + rows + 2) + ":H" + (TRACE_TOP + rows + 2), TRACE_TOP + rows + 1, "Every trace label is explained in docs/trace.md. The hand column uses only "
-                + "the inputs above, the card's cells and the trace's own numbers, never the add-in's code. Trace "
-                + "values are looked up as INDEX(B; MATCH(label; A&\"\"; 0)): Calc matches the add-in's array text "
-                + "only once a formula has copied it (&\"\").", 380);
-        prop(s, "A" + (TRACE_TOP + rows + 2), "CharPosture", com.sun.star.awt.FontSlant.ITALIC);
+        int noteRow = TRACE_TOP + rows + 1;
+        fitted(s, "A" + (noteRow + 1) + ":H" + (noteRow + 1), noteRow, "Every trace label is explained in "
+                + "docs/trace.md. The hand column uses only the inputs above, the card's cells and the trace's own "
+                + "numbers, never the add-in's code. Trace values are looked up as INDEX(B; MATCH(label; A&\"\"; 0)): "
+                + "Calc matches the add-in's array text only once a formula has copied it (&\"\").", 380);
+        prop(s, "A" + (noteRow + 1), "CharPosture", com.sun.star.awt.FontSlant.ITALIC);
         widths(s, 106, 34, 16, 112, 32, 32, 24, 100);
     }
 
