@@ -189,6 +189,14 @@ public final class Compositions {
                 throw BlendProblem.TOO_CONCENTRATED.raise(basis.plural(), Show.number(t),
                         card.units().temperature().symbol(), Checks.name(card, b), Show.number(100.0 * reach));
             }
+            // No root although the others alone would over-fill the litre: the model breaks down on the way.
+            // Let the card say where (its non-physical or validity message); the catalogue's message is the fallback.
+            for (int i = 0; i <= SCAN_CELLS; i++) {
+                double[] x = along(r, b, (double) i / SCAN_CELLS);
+                if (!Double.isFinite(excess.value((double) i / SCAN_CELLS))) {
+                    Checks.molarVolume(card, x, t, e);
+                }
+            }
             throw BlendProblem.NO_COMPOSITION.raise(basis.plural(), Show.number(t),
                     card.units().temperature().symbol(), Checks.name(card, b));
         }

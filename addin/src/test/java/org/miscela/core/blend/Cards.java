@@ -1,6 +1,7 @@
 package org.miscela.core.blend;
 
 import org.miscela.core.Card;
+import org.miscela.core.CardReader;
 import org.miscela.core.TestCards;
 
 /** The test cards the blending tests use, read once. */
@@ -15,6 +16,16 @@ final class Cards {
     static final Card TERNARY = TestCards.card("invented-ternary.tsv");
     /** Invented values: a pair with equal pure densities and a strongly negative V^E, so ρ has a maximum. */
     static final Card DENSITY_MAXIMUM = TestCards.card("invented-density-maximum.tsv");
+
+    /** Invented values: three constant-density liquids; C's mole fraction must be at least 0.1. */
+    static final Card LIMITED_TERNARY = CardReader.read(new Object[][] {{"Miscela card", 1.0},
+        {"source", "invented values, for tests"}, {"temperature unit", "°C"}, {"density unit", "kg/m³"},
+        {"molar volume unit", "cm³/mol"}, {"molar mass unit", "g/mol"}, {"valid temperature", 10.0, 30.0},
+        {"component", "A", 50.0}, {"component", "B", 20.0}, {"component", "C", 80.0},
+        {"density model", "A", "constant"}, {"density coefficients", "A", 800.0}, {"density model", "B", "constant"},
+        {"density coefficients", "B", 1000.0}, {"density model", "C", "constant"},
+        {"density coefficients", "C", 1200.0}, {"valid mole fraction", "C", 0.1, 1.0},
+        {"excess volume A0", "A + B", -1.0}, {"excess volume A0", "A + C", 0.0}, {"excess volume A0", "B + C", 0.0}});
 
     /**
      * Largest |ρ_card − ρ_OIML| over p = 0..1, t = 0..40 °C, as established by EthanolWaterCardTest: 0.011 kg/m³
