@@ -16,6 +16,9 @@ import org.miscela.core.Extrapolation;
  * volume of mixture (strength, molarity, mass concentration) need the mixture's molar volume at their temperature,
  * which the card checks like any other evaluation (validity range, extrapolation). Reading them needs a solve: see
  * {@link #toMoleFractions}.
+ *
+ * <p>Model estimates: where a strength or concentration feeds custody transfer, duty or labelling, defer to
+ * calibrated measurement, the prescribed tables, local codes and licensed practice.
  */
 public final class Compositions {
     /** How far from 1 fractions may sum (rounding in typed or computed values), as in the card functions. */
