@@ -178,7 +178,7 @@ public final class Compositions {
         List<Double> roots = Roots.all(excess, null, 0.0, 1.0, SCAN_CELLS);
         List<Double> usable = new ArrayList<>();
         for (double s : roots) {
-            if (s < 1.0 && (Checks.mayExtrapolate(card, e) || CardFunctions.inside(card, along(r, b, s), t))) {
+            if (s < 1.0 && (Checks.mayExtrapolate(card, e) || CardFunctions.isInside(card, along(r, b, s), t))) {
                 usable.add(s);
             }
         }
