@@ -419,6 +419,18 @@ final class Arguments {
         return v == null ? Double.NaN : number(what, v);
     }
 
+    /** An optional text argument: {@code absent} when left out. */
+    static String text(String what, Object value, String absent) {
+        Object v = unwrap(value);
+        if (v == null) {
+            return absent;
+        }
+        if (!(v instanceof String)) {
+            throw Problem.ARG_NOT_TEXT.raise(what, describe(v));
+        }
+        return (String) v;
+    }
+
     /** The fit output argument: coefficients when left out. */
     static FitOutput fitOutput(Object value) {
         Object v = unwrap(value);
@@ -427,7 +439,7 @@ final class Arguments {
         }
         if (!(v instanceof String)) {
             throw Problem.UNKNOWN_FIT_OUTPUT.raise(describe(v), "coefficients, standard errors, statistics, "
-                    + "covariance, residuals, orders");
+                    + "covariance, residuals, orders, check");
         }
         return FitOutput.lookup((String) v);
     }

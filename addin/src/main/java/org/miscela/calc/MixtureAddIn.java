@@ -8,6 +8,7 @@ import org.miscela.core.AmountBasis;
 import org.miscela.core.Card;
 import org.miscela.core.CardReader;
 import org.miscela.core.FitFunctions;
+import org.miscela.core.FitOutput;
 import org.miscela.core.fit.FitException;
 import org.miscela.core.CardFunctions;
 import org.miscela.core.Extrapolation;
@@ -226,16 +227,16 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Object orderInTemperature, Object referenceTemperature, Object weights, Object result)
             throws IllegalArgumentException {
         try {
+            FitOutput output = Arguments.fitOutput(result);
             int m = Arguments.count("order", order, MAX_ORDER_IN_X, -1);
             int mt = Arguments.count("order in T", orderInTemperature, MAX_ORDER_IN_T, 0);
             double[][] d = Arguments.dataColumns(new String[] {"mole fraction", "excess volume", "temperature",
                 "weight"}, new Object[][][] {moleFraction, excessVolume, Arguments.optionalRange(temperature),
                     Arguments.optionalRange(weights)}, new boolean[] {false, false, false, false});
             return Arguments.table(FitFunctions.excess(d[0], d[1], m, d[2], mt,
-                    Arguments.optionalNumber("reference temperature", referenceTemperature), d[3],
-                    Arguments.fitOutput(result)));
+                    Arguments.optionalNumber("reference temperature", referenceTemperature), d[3], output));
         } catch (MiscelaException | FitException ex) {
-            throw refused(ex);
+            return checkOrRefuse(result, ex);
         }
     }
 
@@ -244,6 +245,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Object[][] temperature, Object order, Object orderInTemperature, Object referenceTemperature,
             Object weights, Object result) throws IllegalArgumentException {
         try {
+            FitOutput output = Arguments.fitOutput(result);
             Card c = CardReader.readPureComponents(pure);
             int[] p = Arguments.pair(c, pair);
             int m = Arguments.count("order", order, MAX_ORDER_IN_X, -1);
@@ -252,10 +254,9 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
                     new Object[][][] {moleFraction, density, temperature, Arguments.optionalRange(weights)},
                     new boolean[] {false, false, true, false});
             return Arguments.table(FitFunctions.density(c, p[0], p[1], d[0], d[1], d[2], m, mt,
-                    Arguments.optionalNumber("reference temperature", referenceTemperature), d[3],
-                    Arguments.fitOutput(result)));
+                    Arguments.optionalNumber("reference temperature", referenceTemperature), d[3], output));
         } catch (MiscelaException | FitException ex) {
-            throw refused(ex);
+            return checkOrRefuse(result, ex);
         }
     }
 
@@ -270,6 +271,35 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
         } catch (MiscelaException | FitException ex) {
             throw refused(ex);
         }
+    }
+
+    @Override
+    public Object uncertainty(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object quantity,
+            Object component, Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            String q = Arguments.text("quantity", quantity, "density");
+            int i = Arguments.unwrap(component) == null ? -1 : Arguments.component(c, component);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return Arguments.overCompositions(c, moleFraction, temperature,
+                    (k, x, t) -> CardFunctions.uncertainty(k, q, i, x, t, e));
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    /** A fit's problem: the message itself when the "check" result was asked for, Err:502 otherwise. */
+    private static Object checkOrRefuse(Object result, RuntimeException ex) throws IllegalArgumentException {
+        boolean check;
+        try {
+            check = Arguments.fitOutput(result) == FitOutput.CHECK;
+        } catch (MiscelaException unknown) {
+            check = false;
+        }
+        if (check) {
+            return ex.getMessage();
+        }
+        throw refused(ex);
     }
 
     /** The fit engine's limits on the orders (beyond them the power basis is too ill-conditioned). */

@@ -152,6 +152,27 @@ public final class CardFunctions {
         return card.units().density().fromKgPerM3(pureDensityAt(card, component, kelvin, t));
     }
 
+    /**
+     * Standard uncertainty of a volumetric result from the card's coefficient covariances (linear propagation), in
+     * the result's unit: the density unit for "density", the molar volume unit otherwise.
+     *
+     * @param quantity "density", "excess volume", "molar volume" or "partial volume" (which needs the component)
+     * @param component the component of a partial volume, or −1
+     */
+    public static double uncertainty(Card card, String quantity, int component, double[] x, double t,
+            Extrapolation e) {
+        Uncertainty.Quantity q = Uncertainty.Quantity.lookup(quantity);
+        if (q == Uncertainty.Quantity.PARTIAL_VOLUME && component < 0) {
+            throw Problem.ARG_BLANK.raise("component (needed for a partial volume)");
+        }
+        double[] z = moleFractions(card, x);
+        double kelvin = checkPoint(card, z, t, e);
+        physicalDensity(card, z, kelvin, t);
+        double u = Uncertainty.of(card, q, component, z, kelvin);
+        return q == Uncertainty.Quantity.DENSITY ? card.units().density().fromKgPerM3(u)
+                : card.units().molarVolume().fromCm3PerMol(u);
+    }
+
     // --- enthalpy
 
     /** H^E in the card's enthalpy unit. */
@@ -265,6 +286,11 @@ public final class CardFunctions {
      * because Calc shows an add-in's boolean result as 0 whatever its value; 1 and 0 work as TRUE and FALSE in IF.
      */
     public static double inside(Card card, double[] x, double t) {
+        return isInside(card, x, t) ? 1.0 : 0.0;
+    }
+
+    /** Whether the point lies inside every limit of the card (extrapolation is not considered). */
+    public static boolean isInside(Card card, double[] x, double t) {
         double[] z = moleFractions(card, x);
         if (Double.isNaN(t) || Double.isInfinite(t)) {
             throw Problem.ARG_NOT_FINITE.raise("temperature");
@@ -273,7 +299,7 @@ public final class CardFunctions {
         if (!(kelvin > 0.0)) {
             throw Problem.BELOW_ABSOLUTE_ZERO.raise(Numbers.show(t), card.units().temperature().symbol());
         }
-        return violations(card, z, kelvin, t).isEmpty() ? 1.0 : 0.0;
+        return violations(card, z, kelvin, t).isEmpty();
     }
 
     /**

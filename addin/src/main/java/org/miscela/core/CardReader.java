@@ -50,7 +50,7 @@ public final class CardReader {
     private static final int DENSITY_SAMPLES = 256;
     /** Rows of an excess-property section: binary coefficients A0..A99, ternary C0..C2, reference temperature. */
     private static final Pattern SECTION_ROW = Pattern.compile(
-            "(excess volume|excess enthalpy) (?:a(\\d{1,2})|ternary c(\\d)|(reference temperature))");
+            "(excess volume|excess enthalpy) (?:a(\\d{1,2})|ternary c(\\d)|(reference temperature)|(covariance))");
 
     /** Rows whose values start in column 2. */
     private static final String[] GLOBAL = {TITLE, SOURCE, TEMPERATURE_UNIT, DENSITY_UNIT, MOLAR_VOLUME_UNIT,
@@ -60,6 +60,7 @@ public final class CardReader {
         VALID_MOLE_FRACTION, HEAT_CAPACITY, HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION};
     /** Labels of version 2 beyond the excess-enthalpy and ternary rows. */
     private static final String[] VERSION_2 = {MODEL, MISSING_PAIRS, ENTHALPY_UNIT, HEAT_CAPACITY,
+        EXCESS_VOLUME + " covariance",
         HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION};
     /** Keyed rows whose subject is a pair "a + b" rather than one component. */
     private static final String[] PAIR_KEYED = {VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION};
@@ -158,6 +159,10 @@ public final class CardReader {
                         throw Problem.UNKNOWN_LABEL.raise(r.number, r.label);
                     }
                     section.ternary.computeIfAbsent(c, k -> new ArrayList<>()).add(r);
+                } else if (m.group(5) != null) {
+                    // One row per coefficient: the same subject repeats, so these rows are not keyed.
+                    section.covariance.add(r);
+                    return;
                 } else {
                     section.reference.add(r);
                 }
@@ -466,6 +471,7 @@ public final class CardReader {
             int n = names.size();
             // The first row of a pair (or triple), in card order, fixes the order it is written in.
             List<Row> all = new ArrayList<>(rows.reference);
+            all.addAll(rows.covariance);
             rows.binary.values().forEach(all::addAll);
             rows.ternary.values().forEach(all::addAll);
             all.sort((a, b) -> Integer.compare(a.number, b.number));
@@ -486,7 +492,12 @@ public final class CardReader {
             }
             Map<String, TreeMap<Integer, double[]>> binary = coefficients(rows.binary, names, 2, factor, true);
             Map<String, TreeMap<Integer, double[]>> ternary = coefficients(rows.ternary, names, 3, factor, false);
+            Map<String, List<Row>> covarianceRows = new LinkedHashMap<>();
+            for (Row r : rows.covariance) {
+                covarianceRows.computeIfAbsent(setKey(members(r, names, 2), n), k -> new ArrayList<>()).add(r);
+            }
             RedlichKister[][] pairs = new RedlichKister[n][n];
+            double[][][][] covariance = new double[n][n][][];
             for (int i = 0; i < n; i++) {
                 for (int j = i + 1; j < n; j++) {
                     String key = setKey(new int[] {i, j}, n);
@@ -503,7 +514,15 @@ public final class CardReader {
                     }
                     double[][] a = withoutGaps(ks, prefix + " A", pairName);
                     pairs[i][j] = new RedlichKister(referenceFor(reference, key, a, prefix, pairName), a);
+                    List<Row> cov = covarianceRows.remove(key);
+                    if (cov != null) {
+                        covariance[i][j] = covariance(cov, a, factor * factor, pairName, names);
+                    }
                 }
+            }
+            for (List<Row> orphan : covarianceRows.values()) {
+                throw Problem.MISSING_PAIR_ROW.raise(prefix + " covariance", orphan.get(0).text(0).trim(),
+                        prefix + " A0");
             }
             List<TernaryTerm> terms = new ArrayList<>();
             for (Map.Entry<String, TreeMap<Integer, double[]>> e : ternary.entrySet()) {
@@ -520,7 +539,60 @@ public final class CardReader {
                             prefix + " ternary C0");
                 }
             }
-            return new ExcessFunction(n, model, asymmetric, pairs, terms);
+            return new ExcessFunction(n, model, asymmetric, pairs, terms, covariance);
+        }
+
+        /**
+         * A pair's coefficient covariance, one row per coefficient in the order a_00, a_01, …, a_10, … (each A_k's
+         * temperature terms in turn), converted to the card's component order and to internal units.
+         */
+        private double[][] covariance(List<Row> rows, double[][] a, double factor, String pairName,
+                List<String> names) {
+            int size = 0;
+            for (double[] row : a) {
+                size += row.length;
+            }
+            int[] k = new int[size]; // the A_k each parameter belongs to
+            for (int kk = 0, q = 0; kk < a.length; kk++) {
+                for (int j = 0; j < a[kk].length; j++) {
+                    k[q++] = kk;
+                }
+            }
+            Row first = rows.get(0);
+            if (rows.size() != size) {
+                throw Problem.COVARIANCE_SIZE.raise(first.number, first.label, pairName, size, size, size,
+                        rows.size() + " row(s)");
+            }
+            int[] p = members(first, names, 2);
+            boolean reversed = p[0] > p[1];
+            double[][] c = new double[size][];
+            for (int r = 0; r < size; r++) {
+                Row row = rows.get(r);
+                c[r] = row.numbersFrom(1);
+                if (c[r].length != size) {
+                    throw Problem.COVARIANCE_SIZE.raise(row.number, row.label, pairName, size, size, size,
+                            c[r].length + " value(s) in this row");
+                }
+                for (int q = 0; q < size; q++) {
+                    double sign = reversed && (k[r] + k[q]) % 2 == 1 ? -1.0 : 1.0;
+                    c[r][q] *= sign * factor;
+                }
+            }
+            for (int r = 0; r < size; r++) {
+                if (c[r][r] < 0) {
+                    Row row = rows.get(r);
+                    throw Problem.COVARIANCE_NEGATIVE.raise(row.number, row.label, r + 1, Numbers.show(c[r][r]));
+                }
+                for (int q = 0; q < r; q++) {
+                    double tolerance = 1e-9 * Math.sqrt(c[r][r] * c[q][q]);
+                    if (!(Math.abs(c[r][q] - c[q][r]) <= tolerance)) {
+                        Row row = rows.get(r);
+                        throw Problem.COVARIANCE_NOT_SYMMETRIC.raise(row.number, row.label, r + 1, q + 1,
+                                Numbers.show(c[r][q] / factor), q + 1, r + 1, Numbers.show(c[q][r] / factor));
+                    }
+                }
+            }
+            return c;
         }
 
         /**
@@ -751,6 +823,7 @@ public final class CardReader {
         final TreeMap<Integer, List<Row>> binary = new TreeMap<>();
         final TreeMap<Integer, List<Row>> ternary = new TreeMap<>();
         final List<Row> reference = new ArrayList<>();
+        final List<Row> covariance = new ArrayList<>();
 
         SectionRows(String prefix) {
             this.prefix = prefix;

@@ -21,6 +21,7 @@ public final class ExcessFunction {
     private final RedlichKister[] expansion;
     private final boolean[] keepsOwnFraction;
     private final TernaryTerm[] ternary;
+    private final double[][][][] covariance;
 
     /**
      * @param pairs pairs[i][j] for i &lt; j: the set written as i then j, or null for a pair the card treats as ideal
@@ -28,6 +29,15 @@ public final class ExcessFunction {
      */
     public ExcessFunction(int n, GeometricModel model, int asymmetric, RedlichKister[][] pairs,
             List<TernaryTerm> ternary) {
+        this(n, model, asymmetric, pairs, ternary, null);
+    }
+
+    /**
+     * @param covariance covariance[i][j] for i &lt; j: the covariance of pair i–j's coefficients (order a_00, a_01, …,
+     *     a_10, …, as written i then j), or null where the card gives none; null for none at all
+     */
+    public ExcessFunction(int n, GeometricModel model, int asymmetric, RedlichKister[][] pairs,
+            List<TernaryTerm> ternary, double[][][][] covariance) {
         if ((model == GeometricModel.TOOP) != (asymmetric >= 0)) {
             throw new IllegalArgumentException("the Toop model, and only it, names an asymmetric component");
         }
@@ -60,6 +70,27 @@ public final class ExcessFunction {
             keepsOwnFraction[p] = model == GeometricModel.TOOP && (i == asymmetric || j == asymmetric);
         }
         this.ternary = ternary.toArray(new TernaryTerm[0]);
+        this.covariance = new double[n][n][][];
+        for (int i = 0; i < n; i++) {
+            for (int j = i + 1; j < n; j++) {
+                double[][] c = covariance == null ? null : covariance[i][j];
+                this.covariance[i][j] = c == null ? null : copy(c);
+            }
+        }
+    }
+
+    private static double[][] copy(double[][] m) {
+        double[][] out = new double[m.length][];
+        for (int i = 0; i < m.length; i++) {
+            out[i] = m[i].clone();
+        }
+        return out;
+    }
+
+    /** The covariance of pair i–j's coefficients (i &lt; j, written i then j, internal units), or null. */
+    public double[][] covariance(int i, int j) {
+        double[][] c = covariance[i][j];
+        return c == null ? null : copy(c);
     }
 
     public int componentCount() {

@@ -31,6 +31,10 @@ public final class FitFunctions {
      */
     public static Object[][] excess(double[] x1, double[] excess, int orderInX, double[] temperatures, int orderInT,
             double reference, double[] weights, FitOutput output) {
+        if (output == FitOutput.CHECK) {
+            excess(x1, excess, orderInX, temperatures, orderInT, reference, weights, FitOutput.COEFFICIENTS);
+            return new Object[][] {{CardFunctions.OK}};
+        }
         double[] tau = offsets(x1.length, temperatures, orderInT, reference);
         if (output == FitOutput.ORDERS) {
             return orders(OrderSelection.compare(orderInX, m -> RedlichKisterFitter.excessVolumesAtOffsets(x1, tau,
@@ -50,6 +54,11 @@ public final class FitFunctions {
      */
     public static Object[][] density(Card pure, int first, int second, double[] x1, double[] density,
             double[] temperatures, int orderInX, int orderInT, double reference, double[] weights, FitOutput output) {
+        if (output == FitOutput.CHECK) {
+            density(pure, first, second, x1, density, temperatures, orderInX, orderInT, reference, weights,
+                    FitOutput.COEFFICIENTS);
+            return new Object[][] {{CardFunctions.OK}};
+        }
         Units u = pure.units();
         if (orderInT > 0 && Double.isNaN(reference)) {
             throw Problem.FIT_NEEDS_REFERENCE.raise();
@@ -107,6 +116,8 @@ public final class FitFunctions {
                 return column(fit.residuals());
             case STATISTICS:
                 return statistics(fit, 1.0, "", "the response");
+            case CHECK:
+                return new Object[][] {{CardFunctions.OK}};
             default:
                 throw Problem.FIT_OUTPUT_NOT_HERE.raise(output.word());
         }

@@ -7,7 +7,9 @@ public enum FitOutput {
     STATISTICS("statistics"),
     COVARIANCE("covariance"),
     RESIDUALS("residuals"),
-    ORDERS("orders");
+    ORDERS("orders"),
+    /** "OK" or the message saying why the fit is refused: the fit's companion check, never an error itself. */
+    CHECK("check");
 
     private final String word;
 

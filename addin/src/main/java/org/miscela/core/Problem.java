@@ -39,6 +39,9 @@ public enum Problem {
     MISSING_PAIR("The card gives no %s for the pair %s + %s: add its '%s A0' row (write 0 for an ideal pair), or write 'missing pairs | ideal' on the card to treat every pair without rows as ideal."),
     MISSING_PAIR_ROW("The card gives '%s' rows for %s but no '%s' row."),
     COEFFICIENT_GAP("The card gives '%s' for %s but not '%s'; coefficients must run from the first without gaps (write 0 where needed)."),
+    COVARIANCE_SIZE("Card row %d (%s): the pair %s has %d coefficients, so its covariance takes %d rows of %d values; found %s."),
+    COVARIANCE_NOT_SYMMETRIC("Card row %d (%s): the covariance is not symmetric: entry (%d, %d) is %s but (%d, %d) is %s."),
+    COVARIANCE_NEGATIVE("Card row %d (%s): the variance of coefficient %d is %s; a variance cannot be negative."),
     NO_COMPOSITION_LIMIT("The card gives no 'valid mole fraction' row; state the composition range the coefficients were fitted over."),
 
     // --- arguments of a call
@@ -66,10 +69,13 @@ public enum Problem {
     DATA_LENGTH("The %s range has %d value(s) but the %s range has %d; give one of each per point."),
     DATA_PARTLY_BLANK("Point %d has a %s but a blank %s; fill it in, or clear the whole point."),
     NOT_A_COUNT("The %s must be a whole number from 0 to %d; found %s."),
+    NO_COVARIANCE("The card gives no 'excess volume covariance' rows for the pair %s, so the uncertainty cannot be propagated (fit the pair with MIX.FITDENSITY or MIX.FITEXCESS and result \"covariance\")."),
+    UNKNOWN_QUANTITY("The quantity \"%s\" is not recognised; use one of: %s."),
     UNKNOWN_PROPERTY("The property \"%s\" is not recognised; use one of: %s."),
     ARG_BLANK("The %s is blank."),
     ARG_NOT_NUMBER("The %s must be a number; found %s."),
     ARG_NOT_FINITE("The %s must be a finite number."),
+    ARG_NOT_TEXT("The %s must be text; found %s."),
     ARG_NOT_FLAG("The %s must be TRUE or FALSE (or left out); found %s."),
     ARG_NOT_SINGLE("The %s must be a single value here, not a range."),
     ARG_SHAPE("The %s range is %d×%d but the %s range is %d×%d; give ranges of the same shape, or a single value."),

@@ -36,6 +36,11 @@ public final class RedlichKister {
         return referenceKelvin;
     }
 
+    /** How many temperature coefficients A_k has (1 for a constant). */
+    public int temperatureTerms(int k) {
+        return a[k].length;
+    }
+
     /** A_k at the given temperature. */
     public double coefficientAt(int k, double kelvin) {
         double dt = kelvin - referenceKelvin;

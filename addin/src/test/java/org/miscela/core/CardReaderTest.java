@@ -247,6 +247,22 @@ class CardReaderTest {
                         v2(c -> c.row("valid pair temperature", "alpha + beta", 300, 290))),
                 bad("pair mole-fraction range beyond 1", Problem.MOLE_FRACTION_LIMIT, 20, "0..1.5",
                         v2(c -> c.row("valid pair mole fraction", "alpha + beta", 0, 1.5))),
+                bad("covariance with too few rows", Problem.COVARIANCE_SIZE, 20, "3 coefficients",
+                        v2(c -> c.row("excess volume covariance", "alpha + beta", 0.01, 0, 0))),
+                bad("covariance row too short", Problem.COVARIANCE_SIZE, 21, "2 value(s) in this row",
+                        v2(c -> c.row("excess volume covariance", "alpha + beta", 0.01, 0, 0)
+                                .row("excess volume covariance", "alpha + beta", 0, 0.02)
+                                .row("excess volume covariance", "alpha + beta", 0, 0, 0.03))),
+                bad("covariance not symmetric", Problem.COVARIANCE_NOT_SYMMETRIC, 21, "entry (2, 1)",
+                        v2(c -> c.row("excess volume covariance", "alpha + beta", 0.01, 0, 0)
+                                .row("excess volume covariance", "alpha + beta", 0.005, 0.02, 0)
+                                .row("excess volume covariance", "alpha + beta", 0, 0, 0.03))),
+                bad("negative variance", Problem.COVARIANCE_NEGATIVE, 22, "coefficient 3",
+                        v2(c -> c.row("excess volume covariance", "alpha + beta", 0.01, 0, 0)
+                                .row("excess volume covariance", "alpha + beta", 0, 0.02, 0)
+                                .row("excess volume covariance", "alpha + beta", 0, 0, -0.03))),
+                bad("covariance written the other way round", Problem.PAIR_ORDER, 20, "in row 17",
+                        v2(c -> c.row("excess volume covariance", "beta + alpha", 0.01, 0, 0))),
                 bad("pair limit on a pair of one", Problem.BAD_PAIR, 20, "\"alpha\"",
                         v2(c -> c.row("valid pair mole fraction", "alpha", 0, 0.5))));
     }
@@ -275,7 +291,7 @@ class CardReaderTest {
         Set<Problem> missing = EnumSet.copyOf(card);
         missing.removeAll(produced);
         assertTrue(missing.isEmpty(), "no malformed card for " + missing);
-        assertEquals(31, card.size(), "the card problems changed; update the malformed cards");
+        assertEquals(34, card.size(), "the card problems changed; update the malformed cards");
     }
 
     // ------------------------------------------------------------------ well-formed cards

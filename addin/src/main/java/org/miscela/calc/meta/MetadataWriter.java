@@ -86,6 +86,21 @@ public final class MetadataWriter {
                 + "shape (enter the formula as an array formula), and blank input cells give blank results. "
                 + "Bad input shows Err:502; `MIX.CHECK` tells why. Outside the card's validity range results "
                 + "are refused unless extrapolation is allowed (per call or on the card).\n\n");
+        m.append("**Examples.** Each function's example is entered in a real office by a test "
+                + "(`ReferenceExamplesIT`), which checks that Calc shows the value printed here. The examples use "
+                + "these cards (test resources in `addin/src/test/resources/cards/`): `card`, ethanol + water "
+                + "fitted to the OIML R 22 densities (`ethanol-water-oiml.tsv`); `tern`, three invented liquids P, Q "
+                + "and R (`ternary-invented.tsv`, invented values); `acid`, sulfuric acid + water fitted to the NBS "
+                + "heats of solution (`sulfuric-acid-water-nbs.tsv`); `cov`, ethanol + water at 20 °C with a "
+                + "coefficient covariance (`ethanol-water-covariance.tsv`, fitted to OIML densities with invented "
+                + "noise). Formulas are written with `;` between arguments and, inside inline arrays, `;` between "
+                + "columns and `|` between rows (the form the office's API and ODF files use; in the English "
+                + "user interface type `,` between the columns of an inline array and `;` between its rows).\n\n"
+                + "**Errors.** A refused call shows Err:502; the message below (with `…` for the details the "
+                + "actual message fills in) says why, and `MIX.CHECK` / `MIX.CHECKPOINT` (or a fit's result "
+                + "`\"check\"`) show it in a cell. Every function that reads a card also reports the card's own "
+                + "problems (docs/card-format.md). Calc itself shows Err:504 for a missing required argument or "
+                + "an error cell inside a range argument.\n\n");
         m.append("| function | what it returns |\n|---|---|\n");
         for (FunctionInfo f : FunctionCatalog.functions()) {
             m.append("| [`").append(f.displayName()).append("`](#").append(anchor(f.displayName())).append(") | ")
@@ -101,7 +116,16 @@ public final class MetadataWriter {
                         .append(" |\n");
             }
             m.append("\nFormula: ").append(f.formula()).append("\n\n");
-            m.append("Example: `").append(f.example()).append("`\n\n");
+            m.append("Example: `").append(f.example()).append("` shows **").append(f.exampleResult())
+                    .append("**.\n\n");
+            if (!f.errors().isEmpty()) {
+                m.append("Refused (Err:502) when:\n\n");
+                for (Enum<?> e : f.errors()) {
+                    m.append("- `").append(e.name()).append("`: ").append(pattern(e).replaceAll("%[sd]", "…"))
+                            .append('\n');
+                }
+                m.append('\n');
+            }
             m.append("Saved in ODF files as `").append(FunctionCatalog.SERVICE).append('.').append(f.method())
                     .append("`.\n");
         }
@@ -116,6 +140,14 @@ public final class MetadataWriter {
             b.append(i > 0 ? "; " : "").append(a.optional() ? "[" + a.displayName() + "]" : a.displayName());
         }
         return b.append(')').toString();
+    }
+
+    /** The message pattern of a Problem or FitProblem entry. */
+    static String pattern(Enum<?> problem) {
+        if (problem instanceof org.miscela.core.Problem) {
+            return ((org.miscela.core.Problem) problem).pattern();
+        }
+        return ((org.miscela.core.fit.FitProblem) problem).pattern();
     }
 
     private static String anchor(String displayName) {
