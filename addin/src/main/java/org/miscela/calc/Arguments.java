@@ -186,6 +186,106 @@ final class Arguments {
         return row;
     }
 
+    /** A function from one line of n values (NaN for blank cells) and a temperature to a line of results. */
+    interface LineFunction {
+        double[] at(double[] values, double temperature);
+    }
+
+    /**
+     * Evaluates f over the lines of a composition-like argument whose blank cells are NaN (a concentration's balance
+     * entry may be left blank): a lone number on a two-component card is expanded by {@code expand} and answered by
+     * the first value of f's result (or, unless {@code scalarGivesFirst}, by the whole result as a row); one line gives its result as a row (a column when the line was a column); a
+     * block gives one row per line, blank lines blank. The temperature is one value, or a column with one per line.
+     */
+    static Object overValueLines(Card card, String what, Object[][] grid, Object[][] temperature,
+            java.util.function.DoubleFunction<double[]> expand, boolean scalarGivesFirst, LineFunction f) {
+        if (card.componentCount() == 2 && nonEmpty(grid) && grid.length == 1 && grid[0].length == 1) {
+            double v = required(what, grid[0][0]);
+            double[] result = f.at(expand.apply(v), single("temperature", temperature));
+            return scalarGivesFirst ? finite(result[0]) : row(result);
+        }
+        boolean column = nonEmpty(grid) && grid[0].length == 1 && grid.length == card.componentCount()
+                && card.componentCount() > 1;
+        Object[][] lines = lines(card, what, grid);
+        Object[] temperatures = temperatures(temperature, lines.length);
+        Object[][] out = new Object[lines.length][];
+        for (int r = 0; r < lines.length; r++) {
+            if (allBlank(lines[r]) || isBlank(temperatures[r])) {
+                if (lines.length == 1) {
+                    throw Problem.ARG_BLANK.raise(allBlank(lines[r]) ? what : "temperature");
+                }
+                out[r] = null;
+                continue;
+            }
+            double[] values = new double[lines[r].length];
+            for (int k = 0; k < values.length; k++) {
+                Object cell = lines[r][k];
+                values[k] = isBlank(cell) ? Double.NaN : required(what + " of " + card.components().get(k).name(),
+                        cell);
+            }
+            double[] result = f.at(values, required("temperature", temperatures[r]));
+            out[r] = new Object[result.length];
+            for (int k = 0; k < result.length; k++) {
+                out[r][k] = finite(result[k]);
+            }
+        }
+        int width = 1;
+        for (Object[] r : out) {
+            width = r == null ? width : Math.max(width, r.length);
+        }
+        for (int r = 0; r < out.length; r++) {
+            if (out[r] == null) {
+                out[r] = new Object[width];
+                java.util.Arrays.fill(out[r], "");
+            }
+        }
+        if (lines.length == 1 && column) {
+            Object[][] transposed = new Object[width][1];
+            for (int k = 0; k < width; k++) {
+                transposed[k][0] = out[0][k];
+            }
+            return new Any(GRID, transposed);
+        }
+        if (lines.length == 1 && width == 1) {
+            return out[0][0];
+        }
+        return new Any(GRID, out);
+    }
+
+    /** One line of n values (blank cells NaN), or null when the argument was left out. */
+    static double[] optionalLine(Card card, String what, Object value) {
+        Object[][] g = optionalRange(value);
+        if (g == null) {
+            return null;
+        }
+        if (g.length == 1 && g[0].length == 1) {
+            return new double[] {required(what, g[0][0])};
+        }
+        Object[][] lines = lines(card, what, g);
+        if (lines.length != 1) {
+            throw Problem.ARG_NOT_SINGLE.raise(what);
+        }
+        double[] v = new double[lines[0].length];
+        for (int k = 0; k < v.length; k++) {
+            v[k] = isBlank(lines[0][k]) ? Double.NaN : required(what, lines[0][k]);
+        }
+        return v;
+    }
+
+    /** A row of results as Calc's array result. */
+    static Object row(double[] values) {
+        Object[][] out = new Object[1][values.length];
+        for (int k = 0; k < values.length; k++) {
+            out[0][k] = finite(values[k]);
+        }
+        return new Any(GRID, out);
+    }
+
+    /** A component given by number or name, or {@code absent} (0-based) when left out. */
+    static int optionalComponent(Card card, Object value, int absent) {
+        return unwrap(value) == null ? absent : component(card, value);
+    }
+
     /** The lines of a row/column/block argument, each with one cell per component. */
     private static Object[][] lines(Card card, String what, Object[][] grid) {
         int n = card.componentCount();

@@ -9,6 +9,9 @@ import org.miscela.core.Card;
 import org.miscela.core.CardReader;
 import org.miscela.core.FitFunctions;
 import org.miscela.core.FitOutput;
+import org.miscela.core.blend.BlendException;
+import org.miscela.core.blend.BlendFunctions;
+import org.miscela.core.blend.CompositionBasis;
 import org.miscela.core.fit.FitException;
 import org.miscela.core.CardFunctions;
 import org.miscela.core.Extrapolation;
@@ -284,6 +287,149 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             return Arguments.overCompositions(c, moleFraction, temperature,
                     (k, x, t) -> CardFunctions.uncertainty(k, q, i, x, t, e));
         } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object convertComposition(Object[][] card, Object[][] values, Object from, Object to, Object temperature,
+            Object targetTemperature, Object balance, Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int b = Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE);
+            double t = Arguments.optionalNumber("temperature", temperature);
+            double tTo = Arguments.optionalNumber("to temperature", targetTemperature);
+            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("from", from, ""), t, b);
+            CompositionBasis out = BlendFunctions.basis(c, Arguments.text("to", to, ""), Double.isNaN(tTo) ? t : tTo, b);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            // Each basis carries its own temperature, so the lines need none of their own (0 is never read).
+            return Arguments.overValueLines(c, "values", values, new Object[][] {{0.0}},
+                    v -> BlendFunctions.binary(c, v, in), true,
+                    (v, unused) -> BlendFunctions.convert(c, v, in, out, e));
+        } catch (MiscelaException | BlendException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object batchTotals(Object[][] card, Object[][] amounts, Object unit, Object[][] temperature, Object result,
+            Object resultUnit, Object storageTemperatures, Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            String u = Arguments.text("unit", unit, null);
+            String r = Arguments.text("result", result, null);
+            String ru = Arguments.text("result unit", resultUnit, null);
+            double[] storage = Arguments.optionalLine(c, "storage temperatures", storageTemperatures);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return Arguments.overRows(c, "amount", amounts, temperature,
+                    (k, n, t) -> BlendFunctions.batch(k, n, u, storage, t, r, ru, e));
+        } catch (MiscelaException | BlendException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object recipe(Object[][] card, Object quantity, Object unit, Object[][] composition, Object basis,
+            Object temperature, Object storageTemperatures, Object resultUnit, Object balance, Object extrapolate)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            double q = Arguments.number("quantity", quantity);
+            String u = Arguments.text("unit", unit, null);
+            double t = Arguments.number("temperature", temperature);
+            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("basis", basis, ""), t,
+                    Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE));
+            double[] storage = Arguments.optionalLine(c, "storage temperatures", storageTemperatures);
+            String ru = Arguments.text("result unit", resultUnit, null);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return Arguments.overValueLines(c, "composition", composition, new Object[][] {{t}},
+                    v -> BlendFunctions.binary(c, v, in), false,
+                    (v, at) -> BlendFunctions.recipe(c, q, u, at, v, in, storage, ru, e));
+        } catch (MiscelaException | BlendException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object adjustBatch(Object[][] card, Object[][] amounts, Object unit, Object[][] target, Object basis,
+            Object temperature, Object mode, Object limit, Object limitUnit, Object result, Object resultUnit,
+            Object balance, Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            double t = Arguments.number("temperature", temperature);
+            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("basis", basis, ""), t,
+                    Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE));
+            double[] batch = Arguments.singleComposition(c, "amounts", amounts);
+            double[] goal = Arguments.optionalLine(c, "target", target);
+            if (goal.length == 1) {
+                goal = BlendFunctions.binary(c, goal[0], in);
+            }
+            Object r = BlendFunctions.adjust(c, batch, Arguments.text("unit", unit, null), null, goal, in, t,
+                    Arguments.text("mode", mode, null), Arguments.optionalNumber("limit", limit),
+                    Arguments.text("limit unit", limitUnit, null), Arguments.text("result", result, null),
+                    Arguments.text("result unit", resultUnit, null), Arguments.extrapolation(extrapolate));
+            return r instanceof double[] ? Arguments.row((double[]) r) : r;
+        } catch (MiscelaException | BlendException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object additionVolume(Object[][] card, Object[][] amounts, Object unit, Object component, Object added,
+            Object temperature, Object result, Object resultUnit, Object storageTemperatures, Object extrapolate)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            String u = Arguments.text("unit", unit, null);
+            return BlendFunctions.additionVolume(c, Arguments.singleComposition(c, "amounts", amounts), u,
+                    Arguments.optionalLine(c, "storage temperatures", storageTemperatures),
+                    Arguments.component(c, component), Arguments.number("amount added", added), u,
+                    Arguments.number("temperature", temperature), Arguments.text("result", result, null),
+                    Arguments.text("result unit", resultUnit, null), Arguments.extrapolation(extrapolate));
+        } catch (MiscelaException | BlendException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object compositionFromDensity(Object[][] card, Object[][] density, Object[][] temperature,
+            Object component, Object basis, Object basisTemperature, Object reference, Object from, Object to,
+            Object balance, Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int k = Arguments.optionalComponent(c, component, 0);
+            int b = Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE);
+            String basisText = Arguments.text("basis", basis, "mole fraction");
+            double tb = Arguments.optionalNumber("basis temperature", basisTemperature);
+            double[] ref = Arguments.optionalLine(c, "reference", reference);
+            double lo = Arguments.optionalNumber("from", from);
+            double hi = Arguments.optionalNumber("to", to);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return Arguments.broadcast(c, new String[] {"density", "temperature"},
+                    new Object[][][] {density, temperature}, (card1, p) -> BlendFunctions.fromDensity(card1, p[0],
+                            p[1], k, ref, lo, hi, BlendFunctions.basis(card1, basisText, Double.isNaN(tb) ? p[1] : tb,
+                                    b), e));
+        } catch (MiscelaException | BlendException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object volumeCorrection(Object[][] card, Object[][] composition, Object basis, Object[][] temperature,
+            Object referenceTemperature, Object result, Object basisTemperature, Object balance, Object extrapolate)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            double tRef = Arguments.number("reference temperature", referenceTemperature);
+            double tb = Arguments.optionalNumber("basis temperature", basisTemperature);
+            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("basis", basis, ""), Double.isNaN(tb) ? tRef
+                    : tb, Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE));
+            String r = Arguments.text("result", result, null);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return Arguments.overValueLines(c, "composition", composition, temperature,
+                    v -> BlendFunctions.binary(c, v, in), true,
+                    (v, t) -> new double[] {BlendFunctions.volumeCorrection(c, v, in, t, tRef, r, e)});
+        } catch (MiscelaException | BlendException ex) {
             throw refused(ex);
         }
     }

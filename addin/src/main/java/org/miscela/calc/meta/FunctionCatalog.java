@@ -4,6 +4,7 @@ import java.util.Arrays;
 import java.util.Collections;
 import java.util.List;
 import org.miscela.core.Problem;
+import org.miscela.core.blend.BlendProblem;
 import org.miscela.core.fit.FitProblem;
 
 /**
@@ -41,6 +42,17 @@ public final class FunctionCatalog {
     private static final ArgumentInfo BATCH_TEMPERATURE = required("temperature", "temperature",
             "Temperature of the components and of the mixture, in the card's temperature unit: a single value, "
                     + "or a column with one per batch.");
+    private static final String BASES = "One of: \"mole fraction\" (\"x\"), \"mass fraction\" (\"w\"), "
+            + "\"volume fraction\" (\"phi\"), \"%vol\", \"mol/L\", \"g/L\", \"mol/kg\".";
+    private static final ArgumentInfo BALANCE = optional("balance", "balance",
+            "Optional. For %vol, mol/L, g/L and mol/kg: the component that makes up the rest (the solvent), by "
+                    + "number or name; left out, the card's last component.");
+    private static final ArgumentInfo UNIT = required("unit", "unit",
+            "The unit of the amounts: mol, kmol, g, kg, or mL, L, m³ for volumes of the pure liquids.");
+    private static final ArgumentInfo RESULT_UNIT = optional("resultUnit", "result unit",
+            "Optional. The unit of the result (left out: L for volumes, kg for masses, mol for moles).");
+    private static final ArgumentInfo STORAGE_T = optional("storageTemperatures", "storage temperatures",
+            "Optional. For volumes of the pure liquids: the temperature of each, in card order (or one for all).");
     private static final ArgumentInfo ORDER = required("order", "order",
             "The highest k of the coefficients A0..Ak to fit, 0 to 30.");
     private static final ArgumentInfo ORDER_IN_T = optional("orderInTemperature", "order in T",
@@ -74,6 +86,9 @@ public final class FunctionCatalog {
             Problem.DATA_SHAPE, Problem.DATA_LENGTH, Problem.DATA_PARTLY_BLANK, Problem.NOT_A_COUNT,
             Problem.UNKNOWN_FIT_OUTPUT);
     private static final List<Enum<?>> FIT_ENGINE_PROBLEMS = list(FitProblem.values());
+    private static final List<Enum<?>> BLEND_PROBLEMS = union(list(BlendProblem.values()), list(Problem.ARG_BLANK,
+            Problem.ARG_NOT_NUMBER, Problem.ARG_NOT_TEXT, Problem.ARG_NOT_SINGLE, Problem.COMPOSITION_SHAPE,
+            Problem.UNKNOWN_COMPONENT_ARG));
 
     private static final List<FunctionInfo> FUNCTIONS = Collections.unmodifiableList(Arrays.asList(
             new FunctionInfo("excessMolarVolume", "MIX.EXCESSVOLUME",
@@ -247,7 +262,134 @@ public final class FunctionCatalog {
                                     + "\"partial volume\" (then give the component)."),
                     optional("component", "component", "For a partial volume: the component's number on the card "
                             + "or its name."), EXTRAPOLATE)
-                    .shows("0.178").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, COMPONENT_PROBLEMS, list(Problem.NO_COVARIANCE, Problem.UNKNOWN_QUANTITY, Problem.ARG_NOT_TEXT)))));
+                    .shows("0.178").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, COMPONENT_PROBLEMS, list(Problem.NO_COVARIANCE, Problem.UNKNOWN_QUANTITY, Problem.ARG_NOT_TEXT))),
+            new FunctionInfo("convertComposition", "MIX.CONVERT",
+                    "A composition written on one basis, written on another: mole fraction, mass fraction, volume "
+                            + "fraction of the unmixed liquids, strength (%vol), molarity (mol/L), mass concentration "
+                            + "(g/L) or molality (mol/kg of the balance component).",
+                    "x_k ↔ w_k = x_k M_k/Σ x M; φ_k = x_k V_k*(T)/Σ x V*; %vol_k = 100 x_k V_k*(T)/V_m(T); "
+                            + "c_k = x_k/V_m(T); ρ_k = x_k M_k/V_m(T); b_k = x_k/(x_s M_s); concentrations read back by "
+                            + "Brent's method on the balance's mole fraction",
+                    "=MIX.CONVERT(card; 0.5; \"mass fraction\"; \"%vol\"; 20)",
+                    CARD, required("values", "values", "The composition on the from basis: one value per component in "
+                            + "card order (a row or column, or a block with one composition per row). On a "
+                            + "concentration basis the balance's own entry may be blank. A lone number on a "
+                            + "two-component card is the first component's value."),
+                    required("from", "from", BASES), required("to", "to", BASES),
+                    optional("temperature", "temperature", "The temperature of the from basis, and of the to basis "
+                            + "unless the next argument gives one, in the card's unit; needed for volume fraction, "
+                            + "%vol, mol/L and g/L."),
+                    optional("targetTemperature", "to temperature", "Optional. The temperature of the to basis."),
+                    BALANCE, EXTRAPOLATE)
+                    .shows("57.889").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
+            new FunctionInfo("batchTotals", "MIX.BATCH",
+                    "One total of the batch made from the given amounts of the components, mixed and brought to a "
+                            + "temperature: its volume, mass, moles, density, the pure liquids' volume before mixing, "
+                            + "or the contraction on mixing (absolute or %).",
+                    "V = N·V_m(x, T); contraction = Σ n_k V_k*(T) − V (positive when the mixture shrinks)",
+                    "=MIX.BATCH(card; {50; 50}; \"g\"; 20; \"contraction\"; \"mL\")",
+                    CARD, AMOUNTS, UNIT, required("temperature", "temperature",
+                            "The temperature of the mixed batch, in the card's unit: one value, or a column with one "
+                                    + "per batch."),
+                    optional("result", "result", "Optional. \"volume\" (left out), \"mass\", \"moles\", "
+                            + "\"density\", \"pure volume\", \"contraction\" or \"contraction %\"."),
+                    RESULT_UNIT, STORAGE_T, EXTRAPOLATE)
+                    .shows("4.006").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
+            new FunctionInfo("recipe", "MIX.RECIPE",
+                    "What to charge of each component to make a quantity (a volume at a temperature, a mass or moles) "
+                            + "of a target composition: a row of amounts in card order, masses in kg unless another "
+                            + "unit is asked for (a volume unit gives each pure liquid's volume at its storage "
+                            + "temperature).",
+                    "N = Q (moles), Q/Σ x M (mass) or V/V_m(x, T) (volume); n_k = N·x_k; m_k = n_k M_k; "
+                            + "V_k = n_k V_k*(T_k)",
+                    "=INDEX(MIX.RECIPE(card; 1; \"L\"; 40; \"%vol\"; 20; 20; \"mL\"); 1; 1)",
+                    CARD, required("quantity", "quantity", "The quantity to make."),
+                    required("unit", "unit", "Its unit: mol, kmol, g, kg, mL, L or m³ (a volume of the mixture at the "
+                            + "temperature)."),
+                    required("composition", "composition", "The target composition on the basis, one value per "
+                            + "component (a lone number on a two-component card is the first component's); a block "
+                            + "gives one recipe per row."),
+                    required("basis", "basis", BASES),
+                    required("temperature", "temperature", "The temperature of the quantity (when a volume) and of "
+                            + "the basis, in the card's unit."),
+                    STORAGE_T, RESULT_UNIT, BALANCE, EXTRAPOLATE)
+                    .shows("400.00").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
+            new FunctionInfo("adjustBatch", "MIX.ADJUST",
+                    "How much of each component to add to an existing batch to reach a target composition: the "
+                            + "least additions, the closest composition within a limit, or additions making up to a "
+                            + "final quantity; or the resulting volume, or a sentence saying whether the target is "
+                            + "reached.",
+                    "n'_k = n_k + a_k, a_k ≥ 0; least: N' = max_k n_k/x_k; otherwise the composition closest to the "
+                            + "target in mole fraction (least squares) at the limit's total",
+                    "=INDEX(MIX.ADJUST(card; {500; 500}; \"g\"; 0.4; \"mass fraction\"; 20); 1; 2)",
+                    CARD, required("amounts", "amounts", "The batch: the amount of each component in card order."),
+                    UNIT, required("target", "target", "The target composition on the basis (a lone number on a "
+                            + "two-component card is the first component's)."),
+                    required("basis", "basis", BASES),
+                    required("temperature", "temperature", "The temperature of the batch and of the basis, in the "
+                            + "card's unit."),
+                    optional("mode", "mode", "Optional. \"least\" additions (left out), \"within\" the limit "
+                            + "(the closest composition if the target does not fit), or \"make up\" to the limit."),
+                    optional("limit", "limit", "For within and make up: the largest, or the final, quantity."),
+                    optional("limitUnit", "limit unit", "The unit of the limit (a volume is at the temperature)."),
+                    optional("result", "result", "Optional. \"additions\" (left out), \"volume\" (of the batch "
+                            + "after the additions) or \"summary\"."),
+                    RESULT_UNIT, BALANCE, EXTRAPOLATE)
+                    .shows("0.2500").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
+            new FunctionInfo("additionVolume", "MIX.ADDVOLUME",
+                    "The volume change of a batch when an amount of one component is added: exact (the difference "
+                            + "of the two totals), to first order (partial molar volume × amount), or the difference "
+                            + "of the two, so one sees when the linear estimate is good enough.",
+                    "exact ΔV = V(n + Δn·e_k) − V(n); first order ΔV ≈ V̄_k(x)·Δn",
+                    "=MIX.ADDVOLUME(card; {50; 50}; \"g\"; \"ethanol\"; 10; 20; ; \"mL\")",
+                    CARD, required("amounts", "amounts", "The batch: the amount of each component in card order."),
+                    UNIT, COMPONENT, required("added", "added", "The amount added, in the unit of the amounts."),
+                    required("temperature", "temperature", "The temperature of the batch, in the card's unit."),
+                    optional("result", "result", "Optional. \"exact\" (left out), \"first order\" or "
+                            + "\"difference\" (first order minus exact)."),
+                    RESULT_UNIT, STORAGE_T, EXTRAPOLATE)
+                    .shows("12.302").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS)),
+            new FunctionInfo("compositionFromDensity", "MIX.FROMDENSITY",
+                    "The composition at which the card's density equals a measured density: the content of one "
+                            + "component on a chosen basis. Every composition with that density is searched for; "
+                            + "when there are several the call is refused, listing them, until a range is given.",
+                    "ρ(x(s), T) = ρ_measured along x(s) (component k at s, the others in the reference's ratios); "
+                            + "a scan in 256 cells, each root refined by Brent's method",
+                    "=MIX.FROMDENSITY(card; 913.771; 20; 1; \"mass fraction\")",
+                    CARD, required("density", "density", "The measured density in the card's unit: a value, or a "
+                            + "range for an array result."),
+                    required("temperature", "temperature", "The temperature of the measurement in the card's unit: "
+                            + "a value, or a range of the same shape."),
+                    optional("component", "component", "Optional. The component whose content is sought (left out: "
+                            + "the first)."),
+                    optional("basis", "basis", "Optional. The basis of the result (left out: mole fraction). " + BASES),
+                    optional("basisTemperature", "basis temperature", "Optional. The temperature of that basis "
+                            + "(left out: the measurement's)."),
+                    optional("reference", "reference", "For three or more components: a composition (mole "
+                            + "fractions) whose other components keep their ratios while the component varies."),
+                    optional("from", "from", "Optional. The lowest mole fraction of the component to consider."),
+                    optional("to", "to", "Optional. The highest mole fraction of the component to consider."),
+                    BALANCE, EXTRAPOLATE)
+                    .shows("0.5000").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS)),
+            new FunctionInfo("volumeCorrection", "MIX.VOLUMEFACTOR",
+                    "Temperature correction of a blend of known composition: the factor that turns a volume "
+                            + "measured at one temperature into the volume at a reference temperature (15 °C or "
+                            + "20 °C for quotes and custody transfer), or the blend's density at either temperature.",
+                    "factor = V(T_ref)/V(T) = ρ(T)/ρ(T_ref) at fixed composition",
+                    "=MIX.VOLUMEFACTOR(card; 0.5; \"mass fraction\"; 25; 20)",
+                    CARD, required("composition", "composition", "The blend's composition on the basis (a lone number "
+                            + "on a two-component card is the first component's; a block gives one factor per row)."),
+                    required("basis", "basis", BASES),
+                    required("temperature", "temperature", "The measured temperature in the card's unit (one, or "
+                            + "one per row of a block)."),
+                    required("referenceTemperature", "reference temperature", "The reference temperature in the "
+                            + "card's unit."),
+                    optional("result", "result", "Optional. \"factor\" (left out), \"density\" (at the measured "
+                            + "temperature) or \"reference density\"."),
+                    optional("basisTemperature", "basis temperature", "Optional. The temperature of the basis (left "
+                            + "out: the reference temperature)."),
+                    BALANCE, EXTRAPOLATE)
+                    .shows("0.99562").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS))));
 
     private FunctionCatalog() {
     }

@@ -147,6 +147,9 @@ public final class MetadataWriter {
         if (problem instanceof org.miscela.core.Problem) {
             return ((org.miscela.core.Problem) problem).pattern();
         }
+        if (problem instanceof org.miscela.core.blend.BlendProblem) {
+            return ((org.miscela.core.blend.BlendProblem) problem).pattern();
+        }
         return ((org.miscela.core.fit.FitProblem) problem).pattern();
     }
 

@@ -21,6 +21,7 @@ public enum BlendProblem {
     UNKNOWN_UNIT("The unit \"%s\" is not recognised; use one of: %s."),
     WRONG_DIMENSION("%s is a unit of %s, but the %s needs a unit of %s (%s)."),
     UNKNOWN_BASIS("The composition basis \"%s\" is not recognised; use one of: %s."),
+    UNKNOWN_RESULT("The choice \"%s\" is not recognised; use one of: %s."),
 
     // --- compositions
     FRACTION_SUM("The %s sum to %s; they must sum to 1 (within 1e-6)."),

@@ -49,6 +49,8 @@ class BlendProblemTest {
         Map<BlendProblem, Executable> m = new EnumMap<>(BlendProblem.class);
         Amounts half = Amounts.of(new double[] {500, 500}, AmountUnit.G);
         m.put(BlendProblem.BLANK_ARGUMENT, () -> CompositionBasis.volumeFraction(NAN));
+        m.put(BlendProblem.UNKNOWN_RESULT, () -> BlendFunctions.batch(EW, new double[] {1, 1}, "mol", null, 20,
+                "weight", null, E));
         m.put(BlendProblem.ARGUMENT_NOT_FINITE, () -> CompositionBasis.molarity(Double.POSITIVE_INFINITY, 1));
         m.put(BlendProblem.NOT_POSITIVE, () -> Quantity.of(-1, AmountUnit.G));
         m.put(BlendProblem.NO_SUCH_COMPONENT, () -> Compositions.toMoleFractions(EW, new double[] {1, NAN},
