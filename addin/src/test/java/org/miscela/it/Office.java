@@ -50,6 +50,24 @@ public final class Office implements AutoCloseable {
         return Paths.get(System.getProperty("office.program", "/usr/lib/libreoffice/program"));
     }
 
+    /**
+     * Library directories for the office's own processes, from the system property {@code office.library.path}:
+     * empty (the default) for an installed office, set by scripts/test-office-25 for an unpacked one. The test JVM
+     * and the build never see it.
+     */
+    static String libraryPath() {
+        String p = System.getProperty("office.library.path");
+        return p == null ? "" : p.trim();
+    }
+
+    /** Puts {@link #libraryPath()} into an office process's environment, when there is one. */
+    private static void officeEnvironment(ProcessBuilder pb) {
+        String lib = libraryPath();
+        if (!lib.isEmpty()) {
+            pb.environment().put("LD_LIBRARY_PATH", lib);
+        }
+    }
+
     static Path builtExtension() {
         String p = System.getProperty("miscela.oxt");
         if (p == null) {
@@ -91,6 +109,7 @@ public final class Office implements AutoCloseable {
                 .redirectOutput(base.resolve("soffice.log").toFile()).redirectInput(ProcessBuilder.Redirect.from(
                         new File("/dev/null")));
         pb.environment().put("HOME", base.resolve("home").toString());
+        officeEnvironment(pb);
         Process p = pb.start();
         try {
             XComponentContext local = Bootstrap.createInitialComponentContext(null);
@@ -247,6 +266,7 @@ public final class Office implements AutoCloseable {
                 .redirectInput(ProcessBuilder.Redirect.from(new File("/dev/null")));
         if (officeTool) {
             pb.environment().put("HOME", dir.resolve("home").toString());
+            officeEnvironment(pb);
         }
         Process p = pb.start();
         boolean done = p.waitFor(seconds, TimeUnit.SECONDS);
