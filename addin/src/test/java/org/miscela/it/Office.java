@@ -82,18 +82,34 @@ public final class Office implements AutoCloseable {
 
     /** A fresh profile with the extension installed, and an office running on it. */
     public static Office start() throws Exception {
-        Path base = Files.createTempDirectory("miscela-office-");
-        Path profile = base.resolve("profile");
-        Path home = base.resolve("home");
-        Files.createDirectories(profile);
-        Files.createDirectories(home);
-        Path oxt = base.resolve("miscela.oxt");
-        Files.copy(builtExtension(), oxt, StandardCopyOption.REPLACE_EXISTING);
-        handOver(base);
+        Path base = freshDirectory();
         // no --suppress-license and stdin from /dev/null: an install that asked anything would fail here
-        run(base, 180, program().resolve("unopkg").toString(), "add",
-                "-env:UserInstallation=" + profile.toUri(), oxt.toString());
-        return launch(base, profile);
+        unopkg(base, "add", base.resolve("miscela.oxt").toString());
+        return launch(base, base.resolve("profile"));
+    }
+
+    /**
+     * A throwaway directory for the office's user: an empty profile ({@code profile}), a HOME ({@code home}) and a
+     * copy of the built extension ({@code miscela.oxt}).
+     */
+    static Path freshDirectory() throws IOException, InterruptedException {
+        Path base = Files.createTempDirectory("miscela-office-");
+        Files.createDirectories(base.resolve("profile"));
+        Files.createDirectories(base.resolve("home"));
+        Files.copy(builtExtension(), base.resolve("miscela.oxt"), StandardCopyOption.REPLACE_EXISTING);
+        handOver(base);
+        return base;
+    }
+
+    /**
+     * Runs {@code unopkg command args…} on the profile of a {@link #freshDirectory()}, as the office's user, with
+     * standard input from /dev/null; fails on a non-zero exit or after three minutes. Returns what it printed.
+     */
+    static String unopkg(Path base, String command, String... args) throws IOException, InterruptedException {
+        List<String> cmd = new ArrayList<>(Arrays.asList(program().resolve("unopkg").toString(), command,
+                "-env:UserInstallation=" + base.resolve("profile").toUri()));
+        cmd.addAll(Arrays.asList(args));
+        return run(base, 180, cmd.toArray(new String[0]));
     }
 
     /** An office on an existing profile (used to reopen after a restart). */
