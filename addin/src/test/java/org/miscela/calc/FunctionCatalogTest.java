@@ -146,6 +146,13 @@ class FunctionCatalogTest {
                 "docs/functions.md is out of date: run scripts/regenerate-docs");
     }
 
+    @Test
+    void errorCatalogueIsUpToDate() throws IOException {
+        String committed = new String(Files.readAllBytes(Paths.get("../docs/errors.md")), StandardCharsets.UTF_8);
+        assertEquals(MetadataWriter.errorCatalogue(), committed,
+                "docs/errors.md is out of date: run scripts/regenerate-docs");
+    }
+
     /** Every problem a call (rather than a card) can raise is listed under at least one function in the reference. */
     @Test
     void everyCallProblemIsListedUnderAFunction() {
@@ -161,6 +168,11 @@ class FunctionCatalogTest {
             }
         }
         for (org.miscela.core.fit.FitProblem p : org.miscela.core.fit.FitProblem.values()) {
+            if (!listed.contains(p)) {
+                missing.add(p);
+            }
+        }
+        for (org.miscela.core.blend.BlendProblem p : org.miscela.core.blend.BlendProblem.values()) {
             if (!listed.contains(p)) {
                 missing.add(p);
             }
