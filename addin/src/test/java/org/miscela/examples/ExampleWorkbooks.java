@@ -4,10 +4,12 @@ import com.sun.star.beans.PropertyValue;
 import com.sun.star.beans.XPropertySet;
 import com.sun.star.container.XIndexAccess;
 import com.sun.star.container.XNameAccess;
+import com.sun.star.container.XNameContainer;
 import com.sun.star.container.XNamed;
 import com.sun.star.frame.XStorable;
 import com.sun.star.lang.Locale;
 import com.sun.star.lang.XComponent;
+import com.sun.star.lang.XMultiServiceFactory;
 import com.sun.star.sheet.XCalculatable;
 import com.sun.star.sheet.XNamedRanges;
 import com.sun.star.sheet.XSpreadsheet;
@@ -40,6 +42,13 @@ final class ExampleWorkbooks {
     static final int HEAD_COLOUR = 0xDCE9E4;
     /** Background of the cells a reader is meant to change. */
     static final int INPUT_COLOUR = 0xE8F0FB;
+    /** Background of cells holding values from a named outside source (not invented). */
+    static final int REFERENCE_COLOUR = 0xEDEDED;
+
+    /** The project's ethanol + water card fitted to the OIML R 22 densities (a test resource). */
+    static final String OIML_CARD = "ethanol-water-oiml.tsv";
+    /** Where that card lives in the repository, for the sheets that say where it comes from. */
+    static final String OIML_CARD_PATH = "addin/src/test/resources/cards/" + OIML_CARD;
 
     /** Fills a new, empty spreadsheet document; the office's context is there for services the document lacks. */
     interface Content {
@@ -135,6 +144,101 @@ final class ExampleWorkbooks {
         ps.setPropertyValue("CenterHorizontally", Boolean.TRUE);
     }
 
+    /**
+     * Writes the project's ethanol + water card fitted to the OIML R 22 densities ({@link #OIML_CARD_PATH}) onto
+     * sheet {@code s} (which must be named Card), says where it comes from, and names its range "card". Returns the
+     * card's cells as Calc hands them to the add-in.
+     */
+    static Object[][] writeOimlCard(XComponent doc, XSpreadsheet s) throws Exception {
+        Object[][] cells = org.miscela.core.TestCards.cells(OIML_CARD);
+        int top = 5;
+        int columns = 0;
+        for (Object[] row : cells) {
+            columns = Math.max(columns, row.length);
+        }
+        String last = col(columns - 1);
+        int width = 74 + 40 + 7 * 26;
+        text(s, 0, 0, "Miscela card: ethanol + water fitted to the OIML R 22 densities (reference data, not invented)");
+        bold(s, "A1", 13);
+        fitted(s, "A2:" + last + "2", 1, "NOT INVENTED. These rows are the project's reference card "
+                + OIML_CARD_PATH + ", written by org.miscela.reference.OimlCardFitter. The pure liquids' density "
+                + "polynomials come exactly from the density formula of OIML R 22 (1975), International "
+                + "Alcoholometric Tables; the Redlich–Kister coefficients A0…A15, each a quartic in (t − 20 °C), are "
+                + "this project's least-squares fit to that formula over 0–40 °C. Over the whole composition range "
+                + "and 0–40 °C the card reproduces the formula within 0.011 kg/m³ (checked by EthanolWaterCardTest). "
+                + "It is a fitted model of the formula: not the printed tables, and not a legal measurement standard.",
+                width);
+        band(s, "A2:" + last + "2", REFERENCE_COLOUR);
+        bold(s, "A2", 10);
+        fitted(s, "A3:" + last + "3", 2, "The named range 'card' covers A" + (top + 1) + ":" + last
+                + (top + cells.length) + ": labels in column A, values to their right; in keyed rows column B names "
+                + "the component or the pair. Every function on the other sheets reads these cells; change them only "
+                + "for a card whose source you know, and write that source in the 'source' row.", width);
+        text(s, 0, 3, "Card check (MIX.CHECK)");
+        bold(s, "A4", 10);
+        s.getCellByPosition(1, 3).setFormula("=MIX.CHECK(card)");
+        String[] heads = {"label", "subject / value"};
+        for (int c = 0; c < columns; c++) {
+            text(s, c, top - 1, c < heads.length ? heads[c] : "value");
+        }
+        head(s, "A" + top + ":" + last + top);
+        for (int r = 0; r < cells.length; r++) {
+            for (int c = 0; c < cells[r].length; c++) {
+                put(s, c, top + r, cells[r][c]);
+            }
+        }
+        band(s, "A" + (top + 1) + ":" + last + (top + cells.length), REFERENCE_COLOUR);
+        nameRange(doc, "card", "$Card.$A$" + (top + 1) + ":$" + last + "$" + (top + cells.length));
+        int[] mm = new int[columns];
+        mm[0] = 74;
+        mm[1] = 40;
+        for (int c = 2; c < columns; c++) {
+            mm[c] = 26;
+        }
+        widths(s, mm);
+        Object[][] padded = new Object[cells.length][columns];
+        for (int r = 0; r < cells.length; r++) {
+            for (int c = 0; c < columns; c++) {
+                padded[r][c] = c < cells[r].length ? cells[r][c] : "";
+            }
+        }
+        return padded;
+    }
+
+    /** Long, narrow tables print in portrait, scaled to the page width, on as many pages as they need. */
+    static void portraitFullWidth(XComponent doc, XSpreadsheet... tall) throws Exception {
+        XNameAccess families = UnoRuntime.queryInterface(XStyleFamiliesSupplier.class, doc).getStyleFamilies();
+        XNameContainer pages = UnoRuntime.queryInterface(XNameContainer.class, families.getByName("PageStyles"));
+        Object style = UnoRuntime.queryInterface(XMultiServiceFactory.class, doc)
+                .createInstance("com.sun.star.style.PageStyle");
+        pages.insertByName("Tall table", style);
+        XPropertySet ps = UnoRuntime.queryInterface(XPropertySet.class, style);
+        int w = (Integer) ps.getPropertyValue("Width");
+        int h = (Integer) ps.getPropertyValue("Height");
+        if (w > h) {
+            ps.setPropertyValue("Width", h);
+            ps.setPropertyValue("Height", w);
+        }
+        ps.setPropertyValue("IsLandscape", Boolean.FALSE);
+        for (String m : new String[] {"LeftMargin", "RightMargin", "TopMargin", "BottomMargin"}) {
+            ps.setPropertyValue(m, 1000);
+        }
+        ps.setPropertyValue("ScaleToPagesX", (short) 1);
+        ps.setPropertyValue("ScaleToPagesY", (short) 0);
+        ps.setPropertyValue("CenterHorizontally", Boolean.TRUE);
+        // the same header (sheet name) and footer (page number) as the other pages, and numbers that run on
+        XPropertySet standard = UnoRuntime.queryInterface(XPropertySet.class, pages.getByName("Default"));
+        for (String p : new String[] {"HeaderIsOn", "FooterIsOn", "RightPageHeaderContent", "RightPageFooterContent",
+            "LeftPageHeaderContent", "LeftPageFooterContent"}) {
+            ps.setPropertyValue(p, standard.getPropertyValue(p));
+        }
+        ps.setPropertyValue("FirstPageNumber", (short) 0);
+        standard.setPropertyValue("FirstPageNumber", (short) 0);
+        for (XSpreadsheet s : tall) {
+            UnoRuntime.queryInterface(XPropertySet.class, s).setPropertyValue("PageStyle", "Tall table");
+        }
+    }
+
     // --- cells
 
     static void text(XSpreadsheet s, int c, int r, String v) throws Exception {
@@ -147,6 +251,49 @@ final class ExampleWorkbooks {
         merge(s, range);
         prop(s, range, "IsTextWrapped", Boolean.TRUE);
         rowHeight(s, row, 900);
+    }
+
+    /**
+     * Writes text into the first cell of a one-row range, merges and wraps it, and makes the row tall enough for the
+     * number of lines the text needs at 10 pt in {@code widthMm} (about 2 mm a character).
+     */
+    static void fitted(XSpreadsheet s, String range, int row, String text, int widthMm) throws Exception {
+        String first = range.substring(0, range.indexOf(':'));
+        UnoRuntime.queryInterface(XText.class, s.getCellRangeByName(first).getCellByPosition(0, 0)).setString(text);
+        merge(s, range);
+        prop(s, range, "IsTextWrapped", Boolean.TRUE);
+        prop(s, range, "VertJustify", com.sun.star.table.CellVertJustify2.TOP);
+        rowHeight(s, row, textHeight(text, widthMm));
+    }
+
+    /** Writes text into a block of cells merged into one, wrapped and aligned to the top (row heights unchanged). */
+    static void block(XSpreadsheet s, String range, String text) throws Exception {
+        String first = range.substring(0, range.indexOf(':'));
+        UnoRuntime.queryInterface(XText.class, s.getCellRangeByName(first).getCellByPosition(0, 0)).setString(text);
+        merge(s, range);
+        prop(s, range, "IsTextWrapped", Boolean.TRUE);
+        prop(s, range, "VertJustify", com.sun.star.table.CellVertJustify2.TOP);
+    }
+
+    /** The row height, in 1/100 mm, for a text wrapped at 10 pt in {@code widthMm}. */
+    static int textHeight(String text, int widthMm) {
+        int lines = (int) Math.ceil(text.length() * 1.85 / widthMm);
+        return lines * 460 + 120;
+    }
+
+    /** Enters one array formula over a range, e.g. {@code array(s, "B5:C5", "=MIX.RECIPE(…)")}. */
+    static void array(XSpreadsheet s, String range, String formula) throws Exception {
+        UnoRuntime.queryInterface(com.sun.star.sheet.XArrayFormulaRange.class, s.getCellRangeByName(range))
+                .setArrayFormula(formula);
+    }
+
+    /** A number (Double) or a text (String) into a cell; anything else, or empty text, leaves the cell blank. */
+    static void put(XSpreadsheet s, int c, int r, Object v) throws Exception {
+        if (v instanceof Double) {
+            s.getCellByPosition(c, r).setValue((Double) v);
+        } else if (v instanceof String && !((String) v).isEmpty()) {
+            text(s, c, r, (String) v);
+        }
     }
 
     static void merge(XSpreadsheet s, String range) throws Exception {

@@ -185,41 +185,7 @@ public final class TernaryWorkbookBuilder {
         writePlot(sheet(sheets, "Plot"));
         addTriangleChart(sheet(sheets, "Overview"), context);
         pageSetup(doc);
-        portraitFullWidth(doc, sheet(sheets, "Grid"), sheet(sheets, "Plot"));
-    }
-
-    /** Long, narrow tables print in portrait, scaled to the page width, on as many pages as they need. */
-    private static void portraitFullWidth(XComponent doc, XSpreadsheet... tall) throws Exception {
-        XNameAccess families = UnoRuntime.queryInterface(XStyleFamiliesSupplier.class, doc).getStyleFamilies();
-        XNameContainer pages = UnoRuntime.queryInterface(XNameContainer.class, families.getByName("PageStyles"));
-        Object style = UnoRuntime.queryInterface(XMultiServiceFactory.class, doc)
-                .createInstance("com.sun.star.style.PageStyle");
-        pages.insertByName("Tall table", style);
-        XPropertySet ps = UnoRuntime.queryInterface(XPropertySet.class, style);
-        int w = (Integer) ps.getPropertyValue("Width");
-        int h = (Integer) ps.getPropertyValue("Height");
-        if (w > h) {
-            ps.setPropertyValue("Width", h);
-            ps.setPropertyValue("Height", w);
-        }
-        ps.setPropertyValue("IsLandscape", Boolean.FALSE);
-        for (String m : new String[] {"LeftMargin", "RightMargin", "TopMargin", "BottomMargin"}) {
-            ps.setPropertyValue(m, 1000);
-        }
-        ps.setPropertyValue("ScaleToPagesX", (short) 1);
-        ps.setPropertyValue("ScaleToPagesY", (short) 0);
-        ps.setPropertyValue("CenterHorizontally", Boolean.TRUE);
-        // the same header (sheet name) and footer (page number) as the other pages, and numbers that run on
-        XPropertySet standard = UnoRuntime.queryInterface(XPropertySet.class, pages.getByName("Default"));
-        for (String p : new String[] {"HeaderIsOn", "FooterIsOn", "RightPageHeaderContent", "RightPageFooterContent",
-            "LeftPageHeaderContent", "LeftPageFooterContent"}) {
-            ps.setPropertyValue(p, standard.getPropertyValue(p));
-        }
-        ps.setPropertyValue("FirstPageNumber", (short) 0);
-        standard.setPropertyValue("FirstPageNumber", (short) 0);
-        for (XSpreadsheet s : tall) {
-            UnoRuntime.queryInterface(XPropertySet.class, s).setPropertyValue("PageStyle", "Tall table");
-        }
+        ExampleWorkbooks.portraitFullWidth(doc, sheet(sheets, "Grid"), sheet(sheets, "Plot"));
     }
 
     // --- the card
