@@ -3,8 +3,6 @@ package org.miscela.calc;
 import com.sun.star.uno.Any;
 import com.sun.star.uno.AnyConverter;
 import com.sun.star.uno.Type;
-import java.util.ArrayList;
-import java.util.List;
 import org.miscela.core.AmountBasis;
 import org.miscela.core.Card;
 import org.miscela.core.CardCache;
@@ -15,11 +13,13 @@ import org.miscela.core.Problem;
 import org.miscela.core.PropertyKind;
 
 /**
- * Decoding of Calc's arguments and encoding of results. Calc passes an {@code any} argument as a Double, a String,
- * a Boolean, a {@code sequence<sequence<any>>} for a range, or void when the argument is left out.
+ * Decoding of Calc's single-value arguments (card, component, flags, words, numbers) and of ranges broadcast against
+ * each other, plus the cell helpers the other decoders share; {@link CompositionArguments} decodes compositions and
+ * batches, {@link DataArguments} lab data. Calc passes an {@code any} argument as a Double, a String, a Boolean, a
+ * {@code sequence<sequence<any>>} for a range, or void when the argument is left out.
  */
 final class Arguments {
-    private static final Type GRID = new Type(Object[][].class);
+    static final Type GRID = new Type(Object[][].class);
 
     private Arguments() {
     }
@@ -27,11 +27,6 @@ final class Arguments {
     /** A function of one point: the card and the point's numbers, in argument order. */
     interface PointFunction {
         double at(Card card, double[] point);
-    }
-
-    /** A function of one composition (or one batch's amounts) and a temperature. */
-    interface RowFunction {
-        double at(Card card, double[] row, double temperature);
     }
 
     static Card card(Object[][] cells) {
@@ -126,106 +121,9 @@ final class Arguments {
         return new Any(GRID, out);
     }
 
-    /**
-     * Evaluates f over compositions. For a two-component card a single value or a range that is not two columns wide
-     * holds values of x1 (broadcast against the temperature as in {@link #broadcast}); otherwise see
-     * {@link #overRows}.
-     */
-    static Object overCompositions(Card card, Object[][] composition, Object[][] temperature, RowFunction f) {
-        if (card.componentCount() == 2 && !(nonEmpty(composition) && composition[0].length == 2)) {
-            return broadcast(card, new String[] {"mole fraction", "temperature"},
-                    new Object[][][] {composition, temperature},
-                    (k, p) -> f.at(k, CardFunctions.binary(k, p[0]), p[1]));
-        }
-        return overRows(card, "composition", composition, temperature, f);
-    }
-
-    /**
-     * Evaluates f over rows of n values, one per component in card order: a row or a column of n cells is one row
-     * (a single result); a block of n columns is one row per line (a column of results). The temperature is a single
-     * value or a column with one value per line. A line that is entirely blank, or whose temperature is blank,
-     * gives a blank result.
-     */
-    static Object overRows(Card card, String what, Object[][] grid, Object[][] temperature, RowFunction f) {
-        Object[][] lines = lines(card, what, grid);
-        Object[] temperatures = temperatures(temperature, lines.length);
-        int n = card.componentCount();
-        Object[][] out = new Object[lines.length][1];
-        double[] row = new double[n];
-        for (int r = 0; r < lines.length; r++) {
-            if (allBlank(lines[r]) || isBlank(temperatures[r])) {
-                if (lines.length == 1) {
-                    throw Problem.ARG_BLANK.raise(allBlank(lines[r]) ? what : "temperature");
-                }
-                out[r][0] = "";
-                continue;
-            }
-            for (int k = 0; k < n; k++) {
-                String name = what + " of " + card.components().get(k).name()
-                        + (lines.length > 1 ? " in line " + (r + 1) : "");
-                row[k] = required(name, lines[r][k]);
-            }
-            out[r][0] = finite(f.at(card, row.clone(), required("temperature", temperatures[r])));
-        }
-        return lines.length == 1 ? out[0][0] : new Any(GRID, out);
-    }
-
-    /** One composition (or batch) given as a row or column of n cells, or x1 alone for a binary card. */
-    static double[] singleComposition(Card card, String what, Object[][] grid) {
-        if (card.componentCount() == 2 && nonEmpty(grid) && grid.length == 1 && grid[0].length == 1) {
-            return CardFunctions.binary(card, single(what, grid));
-        }
-        Object[][] lines = lines(card, what, grid);
-        if (lines.length != 1) {
-            throw Problem.ARG_NOT_SINGLE.raise(what);
-        }
-        double[] row = new double[card.componentCount()];
-        for (int k = 0; k < row.length; k++) {
-            row[k] = required(what + " of " + card.components().get(k).name(), lines[0][k]);
-        }
-        return row;
-    }
-
-    /** The lines of a row/column/block argument, each with one cell per component. */
-    private static Object[][] lines(Card card, String what, Object[][] grid) {
-        int n = card.componentCount();
-        if (!nonEmpty(grid)) {
-            throw Problem.ARG_BLANK.raise(what);
-        }
-        int rows = grid.length;
-        int cols = grid[0].length;
-        if (cols == n) {
-            return grid;
-        }
-        if (cols == 1 && rows == n) {
-            Object[] line = new Object[n];
-            for (int k = 0; k < n; k++) {
-                line[k] = grid[k][0];
-            }
-            return new Object[][] {line};
-        }
-        if (rows == 1 && cols == 1 && n > 2) {
-            throw Problem.NOT_BINARY.raise(n);
-        }
-        throw Problem.COMPOSITION_SHAPE.raise(rows, cols, n, n, n);
-    }
-
-    private static Object[] temperatures(Object[][] grid, int lines) {
-        if (!nonEmpty(grid)) {
-            throw Problem.ARG_BLANK.raise("temperature");
-        }
-        Object[] out = new Object[lines];
-        if (grid.length == 1 && grid[0].length == 1) {
-            java.util.Arrays.fill(out, grid[0][0]);
-            return out;
-        }
-        if (grid[0].length != 1 || grid.length != lines) {
-            throw Problem.ARG_SHAPE.raise("composition", lines, 1, "temperature", grid.length, grid[0].length);
-        }
-        for (int r = 0; r < lines; r++) {
-            out[r] = grid[r][0];
-        }
-        return out;
+    /** A component given by number or name, or {@code absent} (0-based) when left out. */
+    static int optionalComponent(Card card, Object value, int absent) {
+        return unwrap(value) == null ? absent : component(card, value);
     }
 
     /** The amount basis argument: "mol" when left out. */
@@ -273,119 +171,6 @@ final class Arguments {
             }
         }
         return new Any(GRID, rows);
-    }
-
-    /**
-     * Columns of lab data, one value per point in each: every range a single column or row of the same length (a
-     * single cell in a range marked {@code broadcast} is used for every point). Points blank in every range are
-     * left out, so a table may have room for more measurements; a point blank in some ranges only is refused.
-     *
-     * @param grids null for a range that was left out (its column is then null)
-     */
-    static double[][] dataColumns(String[] names, Object[][][] grids, boolean[] broadcast) {
-        int length = -1;
-        int lengthFrom = -1;
-        Object[][] vectors = new Object[grids.length][];
-        for (int i = 0; i < grids.length; i++) {
-            if (grids[i] == null) {
-                continue;
-            }
-            Object[] v = vector(names[i], grids[i]);
-            vectors[i] = v;
-            if (broadcast[i] && v.length == 1) {
-                continue;
-            }
-            if (length >= 0 && v.length != length) {
-                throw Problem.DATA_LENGTH.raise(names[lengthFrom], length, names[i], v.length);
-            }
-            length = v.length;
-            lengthFrom = i;
-        }
-        if (length < 0) {
-            length = 1;
-        }
-        List<double[]> points = new ArrayList<>();
-        for (int r = 0; r < length; r++) {
-            int present = -1;
-            int absent = -1;
-            for (int i = 0; i < grids.length; i++) {
-                if (vectors[i] == null || (broadcast[i] && vectors[i].length == 1)) {
-                    continue;
-                }
-                if (isBlank(vectors[i][r])) {
-                    absent = absent < 0 ? i : absent;
-                } else {
-                    present = present < 0 ? i : present;
-                }
-            }
-            if (present < 0) {
-                continue;
-            }
-            if (absent >= 0) {
-                throw Problem.DATA_PARTLY_BLANK.raise(r + 1, names[present], names[absent]);
-            }
-            double[] p = new double[grids.length];
-            for (int i = 0; i < grids.length; i++) {
-                if (vectors[i] != null) {
-                    Object cell = vectors[i].length == 1 && broadcast[i] ? vectors[i][0] : vectors[i][r];
-                    p[i] = required(names[i] + " of point " + (r + 1), cell);
-                }
-            }
-            points.add(p);
-        }
-        double[][] columns = new double[grids.length][];
-        for (int i = 0; i < grids.length; i++) {
-            if (vectors[i] == null) {
-                continue;
-            }
-            columns[i] = new double[points.size()];
-            for (int r = 0; r < points.size(); r++) {
-                columns[i][r] = points.get(r)[i];
-            }
-        }
-        return columns;
-    }
-
-    /** The cells of a single column or row. */
-    private static Object[] vector(String what, Object[][] g) {
-        if (!nonEmpty(g)) {
-            throw Problem.ARG_BLANK.raise(what);
-        }
-        if (g[0].length == 1) {
-            Object[] v = new Object[g.length];
-            for (int r = 0; r < g.length; r++) {
-                v[r] = g[r][0];
-            }
-            return v;
-        }
-        if (g.length == 1) {
-            return g[0].clone();
-        }
-        throw Problem.DATA_SHAPE.raise(what, g.length, g[0].length);
-    }
-
-    /** The numbers of a single column or row, none blank. */
-    static double[] values(String what, Object[][] g) {
-        Object[] v = vector(what, g);
-        double[] out = new double[v.length];
-        for (int i = 0; i < v.length; i++) {
-            out[i] = required(what + " " + (i + 1), v[i]);
-        }
-        return out;
-    }
-
-    /** A matrix of numbers (a design), rows as given; blank rows are refused. */
-    static double[][] numbers(String what, Object[][] g) {
-        if (!nonEmpty(g)) {
-            throw Problem.ARG_BLANK.raise(what);
-        }
-        double[][] out = new double[g.length][g[0].length];
-        for (int r = 0; r < g.length; r++) {
-            for (int c = 0; c < g[r].length; c++) {
-                out[r][c] = required(what + " (row " + (r + 1) + ", column " + (c + 1) + ")", g[r][c]);
-            }
-        }
-        return out;
     }
 
     /** An optional range argument: null when left out. A single cell arrives as a plain value. */
@@ -469,11 +254,11 @@ final class Arguments {
         throw Problem.UNKNOWN_PAIR_ARG.raise(text.trim(), names);
     }
 
-    private static boolean nonEmpty(Object[][] g) {
+    static boolean nonEmpty(Object[][] g) {
         return g != null && g.length > 0 && g[0] != null && g[0].length > 0;
     }
 
-    private static boolean allBlank(Object[] line) {
+    static boolean allBlank(Object[] line) {
         for (Object o : line) {
             if (!isBlank(o)) {
                 return false;
@@ -482,7 +267,7 @@ final class Arguments {
         return true;
     }
 
-    private static double required(String what, Object v) {
+    static double required(String what, Object v) {
         if (isBlank(v)) {
             throw Problem.ARG_BLANK.raise(what);
         }
@@ -499,12 +284,12 @@ final class Arguments {
         throw Problem.ARG_NOT_NUMBER.raise(what, describe(v));
     }
 
-    private static boolean isBlank(Object v) {
+    static boolean isBlank(Object v) {
         return v == null || (v instanceof String && ((String) v).trim().isEmpty());
     }
 
     /** The last line of defence: Calc must never receive NaN or infinity from us. */
-    private static Double finite(double v) {
+    static Double finite(double v) {
         if (Double.isNaN(v) || Double.isInfinite(v)) {
             throw new IllegalStateException("non-finite result " + v);
         }
@@ -523,7 +308,7 @@ final class Arguments {
         return v;
     }
 
-    private static String describe(Object v) {
+    static String describe(Object v) {
         if (v instanceof String) {
             return "the text \"" + v + "\"";
         }

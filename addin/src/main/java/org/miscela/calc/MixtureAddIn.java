@@ -9,6 +9,9 @@ import org.miscela.core.Card;
 import org.miscela.core.CardReader;
 import org.miscela.core.FitFunctions;
 import org.miscela.core.FitOutput;
+import org.miscela.core.blend.BlendException;
+import org.miscela.core.blend.BlendFunctions;
+import org.miscela.core.blend.CompositionBasis;
 import org.miscela.core.fit.FitException;
 import org.miscela.core.CardFunctions;
 import org.miscela.core.Extrapolation;
@@ -32,7 +35,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
         try {
             Card c = Arguments.card(card);
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return Arguments.overCompositions(c, moleFraction, temperature,
+            return CompositionArguments.overCompositions(c, moleFraction, temperature,
                     (k, x, t) -> CardFunctions.excessMolarVolume(k, x, t, e));
         } catch (MiscelaException ex) {
             throw refused(ex);
@@ -46,7 +49,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Card c = Arguments.card(card);
             int i = Arguments.component(c, component);
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return Arguments.overCompositions(c, moleFraction, temperature,
+            return CompositionArguments.overCompositions(c, moleFraction, temperature,
                     (k, x, t) -> CardFunctions.partialMolarVolume(k, i, x, t, e));
         } catch (MiscelaException ex) {
             throw refused(ex);
@@ -60,7 +63,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Card c = Arguments.card(card);
             int i = Arguments.component(c, component);
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return Arguments.overCompositions(c, moleFraction, temperature,
+            return CompositionArguments.overCompositions(c, moleFraction, temperature,
                     (k, x, t) -> CardFunctions.partialExcessMolarVolume(k, i, x, t, e));
         } catch (MiscelaException ex) {
             throw refused(ex);
@@ -73,7 +76,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
         try {
             Card c = Arguments.card(card);
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return Arguments.overCompositions(c, moleFraction, temperature,
+            return CompositionArguments.overCompositions(c, moleFraction, temperature,
                     (k, x, t) -> CardFunctions.molarVolume(k, x, t, e));
         } catch (MiscelaException ex) {
             throw refused(ex);
@@ -86,7 +89,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
         try {
             Card c = Arguments.card(card);
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return Arguments.overCompositions(c, moleFraction, temperature,
+            return CompositionArguments.overCompositions(c, moleFraction, temperature,
                     (k, x, t) -> CardFunctions.density(k, x, t, e));
         } catch (MiscelaException ex) {
             throw refused(ex);
@@ -120,7 +123,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     public String checkPoint(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object extrapolate) {
         try {
             Card c = Arguments.card(card);
-            return CardFunctions.check(c, Arguments.singleComposition(c, "composition", moleFraction),
+            return CardFunctions.check(c, CompositionArguments.singleComposition(c, "composition", moleFraction),
                     Arguments.single("temperature", temperature), Arguments.extrapolation(extrapolate));
         } catch (MiscelaException ex) {
             return ex.getMessage();
@@ -133,7 +136,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
         try {
             Card c = Arguments.card(card);
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return Arguments.overCompositions(c, moleFraction, temperature,
+            return CompositionArguments.overCompositions(c, moleFraction, temperature,
                     (k, x, t) -> CardFunctions.excessEnthalpy(k, x, t, e));
         } catch (MiscelaException ex) {
             throw refused(ex);
@@ -147,7 +150,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Card c = Arguments.card(card);
             int i = Arguments.component(c, component);
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return Arguments.overCompositions(c, moleFraction, temperature,
+            return CompositionArguments.overCompositions(c, moleFraction, temperature,
                     (k, x, t) -> CardFunctions.partialExcessEnthalpy(k, i, x, t, e));
         } catch (MiscelaException ex) {
             throw refused(ex);
@@ -161,7 +164,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Card c = Arguments.card(card);
             AmountBasis b = Arguments.basis(basis);
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return Arguments.overRows(c, "amount", amounts, temperature,
+            return CompositionArguments.overRows(c, "amount", amounts, temperature,
                     (k, n, t) -> CardFunctions.mixingHeat(k, n, b, t, e));
         } catch (MiscelaException ex) {
             throw refused(ex);
@@ -177,7 +180,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             double more = Arguments.number("amount added", added);
             AmountBasis b = Arguments.basis(basis);
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return Arguments.overRows(c, "amount", amounts, temperature,
+            return CompositionArguments.overRows(c, "amount", amounts, temperature,
                     (k, n, t) -> CardFunctions.additionHeat(k, n, i, more, b, t, e));
         } catch (MiscelaException ex) {
             throw refused(ex);
@@ -191,7 +194,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Card c = Arguments.card(card);
             AmountBasis b = Arguments.basis(basis);
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return Arguments.overRows(c, "amount", amounts, temperature,
+            return CompositionArguments.overRows(c, "amount", amounts, temperature,
                     (k, n, t) -> CardFunctions.adiabaticRise(k, n, b, t, e));
         } catch (MiscelaException ex) {
             throw refused(ex);
@@ -203,7 +206,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
-            return Arguments.overCompositions(c, moleFraction, temperature, CardFunctions::inside);
+            return CompositionArguments.overCompositions(c, moleFraction, temperature, CardFunctions::inside);
         } catch (MiscelaException ex) {
             throw refused(ex);
         }
@@ -214,7 +217,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Object extrapolate) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
-            return Arguments.table(CardFunctions.trace(c, Arguments.singleComposition(c, "composition", moleFraction),
+            return Arguments.table(CardFunctions.trace(c, CompositionArguments.singleComposition(c, "composition", moleFraction),
                     Arguments.single("temperature", temperature), Arguments.property(quantity),
                     Arguments.extrapolation(extrapolate)));
         } catch (MiscelaException ex) {
@@ -230,7 +233,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             FitOutput output = Arguments.fitOutput(result);
             int m = Arguments.count("order", order, MAX_ORDER_IN_X, -1);
             int mt = Arguments.count("order in T", orderInTemperature, MAX_ORDER_IN_T, 0);
-            double[][] d = Arguments.dataColumns(new String[] {"mole fraction", "excess volume", "temperature",
+            double[][] d = DataArguments.dataColumns(new String[] {"mole fraction", "excess volume", "temperature",
                 "weight"}, new Object[][][] {moleFraction, excessVolume, Arguments.optionalRange(temperature),
                     Arguments.optionalRange(weights)}, new boolean[] {false, false, false, false});
             return Arguments.table(FitFunctions.excess(d[0], d[1], m, d[2], mt,
@@ -250,7 +253,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             int[] p = Arguments.pair(c, pair);
             int m = Arguments.count("order", order, MAX_ORDER_IN_X, -1);
             int mt = Arguments.count("order in T", orderInTemperature, MAX_ORDER_IN_T, 0);
-            double[][] d = Arguments.dataColumns(new String[] {"mole fraction", "density", "temperature", "weight"},
+            double[][] d = DataArguments.dataColumns(new String[] {"mole fraction", "density", "temperature", "weight"},
                     new Object[][][] {moleFraction, density, temperature, Arguments.optionalRange(weights)},
                     new boolean[] {false, false, true, false});
             return Arguments.table(FitFunctions.density(c, p[0], p[1], d[0], d[1], d[2], m, mt,
@@ -265,8 +268,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             throws IllegalArgumentException {
         try {
             Object[][] w = Arguments.optionalRange(weights);
-            return Arguments.table(FitFunctions.leastSquares(Arguments.numbers("design", design),
-                    Arguments.values("response", response), w == null ? null : Arguments.values("weights", w),
+            return Arguments.table(FitFunctions.leastSquares(DataArguments.numbers("design", design),
+                    DataArguments.values("response", response), w == null ? null : DataArguments.values("weights", w),
                     Arguments.fitOutput(result)));
         } catch (MiscelaException | FitException ex) {
             throw refused(ex);
@@ -281,9 +284,152 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             String q = Arguments.text("quantity", quantity, "density");
             int i = Arguments.unwrap(component) == null ? -1 : Arguments.component(c, component);
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return Arguments.overCompositions(c, moleFraction, temperature,
+            return CompositionArguments.overCompositions(c, moleFraction, temperature,
                     (k, x, t) -> CardFunctions.uncertainty(k, q, i, x, t, e));
         } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object convertComposition(Object[][] card, Object[][] values, Object from, Object to, Object temperature,
+            Object targetTemperature, Object balance, Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int b = Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE);
+            double t = Arguments.optionalNumber("temperature", temperature);
+            double tTo = Arguments.optionalNumber("to temperature", targetTemperature);
+            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("from", from, ""), t, b);
+            CompositionBasis out = BlendFunctions.basis(c, Arguments.text("to", to, ""), Double.isNaN(tTo) ? t : tTo, b);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            // Each basis carries its own temperature, so the lines need none of their own (0 is never read).
+            return CompositionArguments.overValueLines(c, "values", values, new Object[][] {{0.0}},
+                    v -> BlendFunctions.binary(c, v, in), true,
+                    (v, unused) -> BlendFunctions.convert(c, v, in, out, e));
+        } catch (MiscelaException | BlendException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object batchTotals(Object[][] card, Object[][] amounts, Object unit, Object[][] temperature, Object result,
+            Object resultUnit, Object storageTemperatures, Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            String u = Arguments.text("unit", unit, null);
+            String r = Arguments.text("result", result, null);
+            String ru = Arguments.text("result unit", resultUnit, null);
+            double[] storage = CompositionArguments.optionalLine(c, "storage temperatures", storageTemperatures);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return CompositionArguments.overRows(c, "amount", amounts, temperature,
+                    (k, n, t) -> BlendFunctions.batch(k, n, u, storage, t, r, ru, e));
+        } catch (MiscelaException | BlendException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object recipe(Object[][] card, Object quantity, Object unit, Object[][] composition, Object basis,
+            Object temperature, Object storageTemperatures, Object resultUnit, Object balance, Object extrapolate)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            double q = Arguments.number("quantity", quantity);
+            String u = Arguments.text("unit", unit, null);
+            double t = Arguments.number("temperature", temperature);
+            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("basis", basis, ""), t,
+                    Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE));
+            double[] storage = CompositionArguments.optionalLine(c, "storage temperatures", storageTemperatures);
+            String ru = Arguments.text("result unit", resultUnit, null);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return CompositionArguments.overValueLines(c, "composition", composition, new Object[][] {{t}},
+                    v -> BlendFunctions.binary(c, v, in), false,
+                    (v, at) -> BlendFunctions.recipe(c, q, u, at, v, in, storage, ru, e));
+        } catch (MiscelaException | BlendException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object adjustBatch(Object[][] card, Object[][] amounts, Object unit, Object[][] target, Object basis,
+            Object temperature, Object mode, Object limit, Object limitUnit, Object result, Object resultUnit,
+            Object balance, Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            double t = Arguments.number("temperature", temperature);
+            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("basis", basis, ""), t,
+                    Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE));
+            double[] batch = CompositionArguments.singleComposition(c, "amounts", amounts);
+            double[] goal = CompositionArguments.optionalLine(c, "target", target);
+            if (goal.length == 1) {
+                goal = BlendFunctions.binary(c, goal[0], in);
+            }
+            Object r = BlendFunctions.adjust(c, batch, Arguments.text("unit", unit, null), null, goal, in, t,
+                    Arguments.text("mode", mode, null), Arguments.optionalNumber("limit", limit),
+                    Arguments.text("limit unit", limitUnit, null), Arguments.text("result", result, null),
+                    Arguments.text("result unit", resultUnit, null), Arguments.extrapolation(extrapolate));
+            return r instanceof double[] ? CompositionArguments.row((double[]) r) : r;
+        } catch (MiscelaException | BlendException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object additionVolume(Object[][] card, Object[][] amounts, Object unit, Object component, Object added,
+            Object temperature, Object result, Object resultUnit, Object storageTemperatures, Object extrapolate)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            String u = Arguments.text("unit", unit, null);
+            return BlendFunctions.additionVolume(c, CompositionArguments.singleComposition(c, "amounts", amounts), u,
+                    CompositionArguments.optionalLine(c, "storage temperatures", storageTemperatures),
+                    Arguments.component(c, component), Arguments.number("amount added", added), u,
+                    Arguments.number("temperature", temperature), Arguments.text("result", result, null),
+                    Arguments.text("result unit", resultUnit, null), Arguments.extrapolation(extrapolate));
+        } catch (MiscelaException | BlendException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object compositionFromDensity(Object[][] card, Object[][] density, Object[][] temperature,
+            Object component, Object basis, Object basisTemperature, Object reference, Object from, Object to,
+            Object balance, Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int k = Arguments.optionalComponent(c, component, 0);
+            int b = Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE);
+            String basisText = Arguments.text("basis", basis, "mole fraction");
+            double tb = Arguments.optionalNumber("basis temperature", basisTemperature);
+            double[] ref = CompositionArguments.optionalLine(c, "reference", reference);
+            double lo = Arguments.optionalNumber("from", from);
+            double hi = Arguments.optionalNumber("to", to);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return Arguments.broadcast(c, new String[] {"density", "temperature"},
+                    new Object[][][] {density, temperature}, (card1, p) -> BlendFunctions.fromDensity(card1, p[0],
+                            p[1], k, ref, lo, hi, BlendFunctions.basis(card1, basisText, Double.isNaN(tb) ? p[1] : tb,
+                                    b), e));
+        } catch (MiscelaException | BlendException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object volumeCorrection(Object[][] card, Object[][] composition, Object basis, Object[][] temperature,
+            Object referenceTemperature, Object result, Object basisTemperature, Object balance, Object extrapolate)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            double tRef = Arguments.number("reference temperature", referenceTemperature);
+            double tb = Arguments.optionalNumber("basis temperature", basisTemperature);
+            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("basis", basis, ""), Double.isNaN(tb) ? tRef
+                    : tb, Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE));
+            String r = Arguments.text("result", result, null);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return CompositionArguments.overValueLines(c, "composition", composition, temperature,
+                    v -> BlendFunctions.binary(c, v, in), true,
+                    (v, t) -> new double[] {BlendFunctions.volumeCorrection(c, v, in, t, tRef, r, e)});
+        } catch (MiscelaException | BlendException ex) {
             throw refused(ex);
         }
     }

@@ -295,6 +295,11 @@ public final class CardFunctions {
      * because Calc shows an add-in's boolean result as 0 whatever its value; 1 and 0 work as TRUE and FALSE in IF.
      */
     public static double inside(Card card, double[] x, double t) {
+        return isInside(card, x, t) ? 1.0 : 0.0;
+    }
+
+    /** Whether the point lies inside every limit of the card (extrapolation is not considered). */
+    public static boolean isInside(Card card, double[] x, double t) {
         double[] z = moleFractions(card, x);
         if (Double.isNaN(t) || Double.isInfinite(t)) {
             throw Problem.ARG_NOT_FINITE.raise("temperature");
@@ -303,7 +308,7 @@ public final class CardFunctions {
         if (!(kelvin > 0.0)) {
             throw Problem.BELOW_ABSOLUTE_ZERO.raise(Numbers.show(t), card.units().temperature().symbol());
         }
-        return violations(card, z, kelvin, t).isEmpty() ? 1.0 : 0.0;
+        return violations(card, z, kelvin, t).isEmpty();
     }
 
     /**

@@ -296,19 +296,27 @@ public final class CardReader {
         }
 
         private boolean missingPairsIdeal() {
-            Row r = global.get(MISSING_PAIRS);
+            return choice(MISSING_PAIRS, "ideal", "refuse");
+        }
+
+        /**
+         * A global yes/no row: true for the word {@code yes}, false for {@code no} or when the row is absent (both
+         * words compared as labels are).
+         */
+        private boolean choice(String label, String yes, String no) {
+            Row r = global.get(label);
             if (r == null) {
                 return false;
             }
             r.atMost(1);
             String v = normalise(r.text(0));
-            if (v.equals("ideal")) {
+            if (v.equals(yes)) {
                 return true;
             }
-            if (v.equals("refuse")) {
+            if (v.equals(no)) {
                 return false;
             }
-            throw Problem.BAD_KEYWORD.raise(r.number, r.label, r.text(0).trim(), "refuse, ideal");
+            throw Problem.BAD_KEYWORD.raise(r.number, r.label, r.text(0).trim(), no + ", " + yes);
         }
 
         /** Every keyed row must name a declared component (or, for excess rows, a pair of them). */
@@ -726,19 +734,7 @@ public final class CardReader {
         }
 
         private boolean extrapolation() {
-            Row r = global.get(EXTRAPOLATION);
-            if (r == null) {
-                return false;
-            }
-            r.atMost(1);
-            String v = normalise(r.text(0));
-            if (v.equals("allow")) {
-                return true;
-            }
-            if (v.equals("refuse")) {
-                return false;
-            }
-            throw Problem.BAD_KEYWORD.raise(r.number, r.label, r.text(0).trim(), "refuse, allow");
+            return choice(EXTRAPOLATION, "allow", "refuse");
         }
 
         private <E extends Enum<E> & Units.Spelled> E unit(String label, Class<E> type) {

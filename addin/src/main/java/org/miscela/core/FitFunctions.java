@@ -98,6 +98,19 @@ public final class FitFunctions {
             residuals[i] = u.density().fromKgPerM3(rho[i] - 1000.0 * m / vm);
         }
         double volumeScale = 1.0 / u.molarVolume().toCm3PerMol(1.0);
+        if (output == FitOutput.STATISTICS) {
+            // The least squares run on weighted excess volumes; their largest raw residual is a volume, so the
+            // largest deviation is taken from the density residuals, like the standard deviation beside it.
+            int worst = -1;
+            for (int i = 0; i < n; i++) {
+                if ((weights == null || weights[i] > 0)
+                        && (worst < 0 || Math.abs(residuals[i]) > Math.abs(residuals[worst]))) {
+                    worst = i;
+                }
+            }
+            return statistics(fit.leastSquares(), u.density().fromKgPerM3(1.0), " [" + densityUnit + "]",
+                    "densities (deviations in density)", residuals[worst], worst);
+        }
         return rkOutput(fit, output, volumeScale, residuals, u.density().fromKgPerM3(1.0),
                 " [" + densityUnit + "]", "densities (deviations in density)");
     }
@@ -142,6 +155,13 @@ public final class FitFunctions {
     }
 
     private static Object[][] statistics(LeastSquaresFit fit, double deviationScale, String unit, String fittedTo) {
+        return statistics(fit, deviationScale, unit, fittedTo, fit.largestResidual() * deviationScale,
+                fit.largestResidualIndex());
+    }
+
+    /** The statistics table, with the largest residual (in the output's unit) and its 0-based point given. */
+    private static Object[][] statistics(LeastSquaresFit fit, double deviationScale, String unit, String fittedTo,
+            double largest, int worst) {
         List<Object[]> rows = new ArrayList<>();
         rows.add(new Object[] {"fitted to", fittedTo});
         rows.add(new Object[] {"points", (double) fit.pointCount()});
@@ -150,8 +170,7 @@ public final class FitFunctions {
         double s = fit.residualStandardDeviation();
         rows.add(new Object[] {"standard deviation of the fit" + unit,
             Double.isNaN(s) ? "none: as many parameters as points" : finiteOr(s * deviationScale, OVERFLOW)});
-        int worst = fit.largestResidualIndex();
-        rows.add(new Object[] {"largest residual" + unit, finiteOr(fit.largestResidual() * deviationScale, OVERFLOW)});
+        rows.add(new Object[] {"largest residual" + unit, finiteOr(largest, OVERFLOW)});
         rows.add(new Object[] {"largest residual at point", (double) (worst + 1)});
         double r2 = fit.rSquared();
         // R² = 1 − RSS/TSS is undefined when the data do not vary (TSS = 0), whatever RSS rounds to.

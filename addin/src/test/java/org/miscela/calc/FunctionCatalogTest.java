@@ -145,4 +145,38 @@ class FunctionCatalogTest {
         assertEquals(MetadataWriter.functionReference(), committed,
                 "docs/functions.md is out of date: run scripts/regenerate-docs");
     }
+
+    @Test
+    void errorCatalogueIsUpToDate() throws IOException {
+        String committed = new String(Files.readAllBytes(Paths.get("../docs/errors.md")), StandardCharsets.UTF_8);
+        assertEquals(MetadataWriter.errorCatalogue(), committed,
+                "docs/errors.md is out of date: run scripts/regenerate-docs");
+    }
+
+    /** Every problem a call (rather than a card) can raise is listed under at least one function in the reference. */
+    @Test
+    void everyCallProblemIsListedUnderAFunction() {
+        java.util.Set<Enum<?>> listed = new java.util.HashSet<>();
+        for (FunctionInfo f : FunctionCatalog.functions()) {
+            listed.addAll(f.errors());
+        }
+        java.util.List<Enum<?>> missing = new java.util.ArrayList<>();
+        for (org.miscela.core.Problem p : java.util.EnumSet.range(org.miscela.core.Problem.NOT_BINARY,
+                org.miscela.core.Problem.NON_PHYSICAL)) {
+            if (!listed.contains(p)) {
+                missing.add(p);
+            }
+        }
+        for (org.miscela.core.fit.FitProblem p : org.miscela.core.fit.FitProblem.values()) {
+            if (!listed.contains(p)) {
+                missing.add(p);
+            }
+        }
+        for (org.miscela.core.blend.BlendProblem p : org.miscela.core.blend.BlendProblem.values()) {
+            if (!listed.contains(p)) {
+                missing.add(p);
+            }
+        }
+        assertTrue(missing.isEmpty(), "problems no function lists: " + missing);
+    }
 }

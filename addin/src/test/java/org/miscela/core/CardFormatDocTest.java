@@ -138,7 +138,7 @@ class CardFormatDocTest {
     @Test
     void examplesBehaveAsDescribed() throws IOException {
         List<Example> examples = examples(lines());
-        assertEquals(5, examples.size());
+        assertEquals(7, examples.size());
         Card one = CardReader.read(examples.get(0).cells);
         // "the functions refuse x1 above 0.9 unless extrapolation is allowed"
         assertEquals(CardFunctions.OK, CardFunctions.check(one, 0.0, T, Extrapolation.AS_CARD));
@@ -182,6 +182,18 @@ class CardFormatDocTest {
         assertEquals(0.2 * 0.8 * 0.05 * 1000, five.mixture().excessHeatCapacity(x, 298.15), 1e-9);
         assertEquals(0.2 * 0.8 * (-55 + 33 * -0.6 + 14 * 0.36),
                 CardFunctions.excessEnthalpy(five, x, 25, Extrapolation.AS_CARD), 1e-12);
+
+        // Example 6: u(V^E) at x = 0.5 is x1·x2·√C00 since (x1 − x2) = 0 there: 0.25·0.02 = 0.005 cm³/mol.
+        Card six = CardReader.read(examples.get(5).cells);
+        assertEquals(0.005, CardFunctions.uncertainty(six, "excess volume", -1, new double[] {0.5, 0.5}, 20,
+                Extrapolation.AS_CARD), 1e-12);
+
+        // Example 7: with the X + Y pair ideal, V^E is the two water pairs alone (Kohler's d matters only for A1+).
+        Card seven = CardReader.read(examples.get(6).cells);
+        double[] z = {0.3, 0.2, 0.5};
+        assertEquals(0.3 * 0.5 * -1.8 + 0.2 * 0.5 * -0.9,
+                CardFunctions.excessMolarVolume(seven, z, 298.15, Extrapolation.AS_CARD), 1e-14);
+        assertEquals(null, seven.excessVolume(0, 1));
     }
 
     /** The document's table of problems names every card problem of the catalogue. */

@@ -49,6 +49,40 @@ class FitFunctionsTest {
                 FitOutput.COEFFICIENTS).length);
     }
 
+    /**
+     * The statistics of a density fit state the largest residual in density, as the "residuals" output gives it:
+     * OIML R 22 densities at 15 and 25 °C with seeded noise of 0.05 kg/m³ (the least squares themselves run on
+     * weighted excess volumes, whose raw residuals are volumes a thousand times smaller).
+     */
+    @Test
+    void densityFitStatisticsGiveTheLargestDensityResidual() {
+        Card pure = CardReader.readPureComponents(CARD);
+        Random r = new Random(5);
+        int n = 30;
+        double[] xs = new double[n];
+        double[] rho = new double[n];
+        double[] t = new double[n];
+        for (int i = 0; i < n; i++) {
+            double p = (i % 15 + 0.5) / 15;
+            t[i] = i < 15 ? 15 : 25;
+            xs[i] = x(p);
+            rho[i] = Oiml22.density(p, t[i]) + 0.05 * r.nextGaussian();
+        }
+        Object[][] res = FitFunctions.density(pure, 0, 1, xs, rho, t, 4, 1, 20, null, FitOutput.RESIDUALS);
+        int worst = 0;
+        for (int i = 1; i < n; i++) {
+            if (Math.abs((Double) res[i][0]) > Math.abs((Double) res[worst][0])) {
+                worst = i;
+            }
+        }
+        Object[][] stats = FitFunctions.density(pure, 0, 1, xs, rho, t, 4, 1, 20, null, FitOutput.STATISTICS);
+        assertEquals("largest residual [kg/m³]", stats[5][0]);
+        assertEquals((Double) res[worst][0], (Double) stats[5][1], 0.0);
+        assertEquals(worst + 1.0, stats[6][1]);
+        double s = (Double) stats[4][1];
+        assertTrue(Math.abs((Double) stats[5][1]) > s, "largest |residual| " + stats[5][1] + " against SD " + s);
+    }
+
     static double worstBetween(Card pure, double[] xs, double[] rho, double[] t, int order) {
         Object[][] a = FitFunctions.density(pure, 0, 1, xs, rho, t, order, 0, Double.NaN, null, FitOutput.COEFFICIENTS);
         double[][] c = new double[order + 1][1];

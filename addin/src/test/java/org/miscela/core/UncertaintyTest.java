@@ -35,6 +35,18 @@ class UncertaintyTest {
             }
         }
         rows.set(0, new Object[] {"Miscela card", 2.0});
+        for (int i = 0; i < rows.size(); i++) {
+            String label = String.valueOf(rows.get(i)[0]);
+            if (label.equals("title")) {
+                rows.set(i, new Object[] {"title", "Ethanol + water at 20 °C with coefficient covariance (test card)"});
+            } else if (label.equals("source")) {
+                rows.set(i, new Object[] {"source", "pure liquids: OIML R 22 formula; A0..A4 and their covariance: "
+                        + "least-squares fit to OIML R 22 densities at 20 C with invented noise (sigma 0.05 kg/m3, "
+                        + "seeded), for tests of uncertainty propagation"});
+            } else if (label.equals("valid temperature")) {
+                rows.set(i, new Object[] {"valid temperature", 19.5, 20.5});
+            }
+        }
         String pair = reversed ? "water + ethanol" : "ethanol + water";
         for (int k = 0; k <= ORDER; k++) {
             double sign = reversed && k % 2 == 1 ? -1 : 1;
@@ -144,6 +156,22 @@ class UncertaintyTest {
         }
         System.out.printf("card uncertainty: Monte Carlo vs linear u(ρ), worst relative difference %.4f%n",
                 worstMonteCarlo);
+    }
+
+    /** The committed card cards/ethanol-water-covariance.tsv is this fit (it feeds the spreadsheet examples). */
+    @Test
+    void theCommittedCovarianceCardIsThisFit() {
+        Object[][][] f = fit();
+        Card made = CardReader.read(fittedCard(false, numbers(f[0]), numbers(f[1])));
+        Card committed = TestCards.card("ethanol-water-covariance.tsv");
+        for (double x : XS) {
+            double[] z = {x, 1 - x};
+            assertEquals(CardFunctions.density(made, z, 20, Extrapolation.AS_CARD),
+                    CardFunctions.density(committed, z, 20, Extrapolation.AS_CARD), 1e-9);
+            double u = CardFunctions.uncertainty(made, "density", -1, z, 20, Extrapolation.AS_CARD);
+            assertEquals(u, CardFunctions.uncertainty(committed, "density", -1, z, 20, Extrapolation.AS_CARD),
+                    1e-9 * u);
+        }
     }
 
     @Test

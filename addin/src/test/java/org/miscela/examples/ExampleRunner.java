@@ -28,10 +28,11 @@ import org.miscela.it.Office;
 
 /**
  * The examples' main job: installs the built extension into a fresh private office profile, opens every
- * examples/*.ods, recalculates it, and writes a PDF of each workbook and a CSV of each of its sheets into the output
- * folder (first argument, else system property miscela.examples.out, else out/examples under the repository
- * root). It then checks that no formula cell shows an error and that every MIX.CHECK / MIX.CHECKPOINT cell says OK,
- * and exits non-zero when one does not.
+ * examples/*.ods (the builders' five workbooks must be among them, see {@link #EXPECTED}), recalculates it, and
+ * writes a PDF of each workbook and a CSV of each of its sheets into the output folder (first argument, else system
+ * property miscela.examples.out, else out/examples under the repository root). It then checks that no formula cell
+ * shows an error and that every check cell (MIX.CHECK, MIX.CHECKPOINT, a fit's result "check") says OK, and exits
+ * non-zero when one does not.
  *
  * <p>Run: {@code mvn -q -B test-compile exec:java -pl addin -Dexec.classpathScope=test
  * -Dexec.mainClass=org.miscela.examples.ExampleRunner -Dmiscela.oxt=$PWD/addin/target/miscela.oxt}. To choose the
@@ -45,6 +46,10 @@ public final class ExampleRunner {
      */
     static final String CSV_OPTIONS = "44,34,76,1,,0,false,true,true,false,false,";
 
+    /** The workbooks the builders write: the job fails when one of them is missing. */
+    static final String[] EXPECTED = {ExampleWorkbookBuilder.FILE, TernaryWorkbookBuilder.FILE,
+        QuoteWorkbookBuilder.FILE, PlantWorkbookBuilder.FILE, LabFitWorkbookBuilder.FILE};
+
     /** Error cells listed per sheet before the rest are only counted. */
     private static final int SHOWN = 12;
 
@@ -52,7 +57,7 @@ public final class ExampleRunner {
     }
 
     public static void main(String[] args) throws Exception {
-        Path root = ExampleWorkbookBuilder.repoRoot();
+        Path root = ExampleWorkbooks.repoRoot();
         String chosen = args.length > 0 ? args[0] : System.getProperty("miscela.examples.out");
         Path out = chosen != null ? Paths.get(chosen).toAbsolutePath() : root.resolve("out").resolve("examples");
         List<Path> workbooks = new ArrayList<>();
@@ -60,9 +65,12 @@ public final class ExampleRunner {
             ds.forEach(workbooks::add);
         }
         workbooks.sort(null);
-        if (workbooks.isEmpty()) {
-            System.err.println("no workbooks in " + root.resolve("examples"));
-            System.exit(2);
+        for (String expected : EXPECTED) {
+            if (!Files.exists(root.resolve("examples").resolve(expected))) {
+                System.err.println("missing example workbook " + root.resolve("examples").resolve(expected)
+                        + " (its builder writes it)");
+                System.exit(2);
+            }
         }
         Files.createDirectories(out);
         int failures = 0;
@@ -131,7 +139,8 @@ public final class ExampleRunner {
         int notOk = 0;
         for (XCell c : formulas) {
             String f = c.getFormula().toUpperCase(java.util.Locale.ROOT);
-            if (f.contains("MIX.CHECK") || f.contains("CHECKCARD") || f.contains("CHECKPOINT")) {
+            if (f.contains("MIX.CHECK") || f.contains("CHECKCARD") || f.contains("CHECKPOINT")
+                    || f.contains("\"CHECK\")")) {
                 checks++;
                 String shown = UnoRuntime.queryInterface(XText.class, c).getString();
                 if (!"OK".equals(shown)) {

@@ -1,7 +1,24 @@
 package org.miscela.examples;
 
+import static org.miscela.examples.ExampleWorkbooks.CAUTION_COLOUR;
+import static org.miscela.examples.ExampleWorkbooks.HEAD_COLOUR;
+import static org.miscela.examples.ExampleWorkbooks.INPUT_COLOUR;
+import static org.miscela.examples.ExampleWorkbooks.INVENTED_COLOUR;
+import static org.miscela.examples.ExampleWorkbooks.band;
+import static org.miscela.examples.ExampleWorkbooks.bold;
+import static org.miscela.examples.ExampleWorkbooks.col;
+import static org.miscela.examples.ExampleWorkbooks.head;
+import static org.miscela.examples.ExampleWorkbooks.merge;
+import static org.miscela.examples.ExampleWorkbooks.nameRange;
+import static org.miscela.examples.ExampleWorkbooks.pageSetup;
+import static org.miscela.examples.ExampleWorkbooks.prop;
+import static org.miscela.examples.ExampleWorkbooks.rowHeight;
+import static org.miscela.examples.ExampleWorkbooks.sheet;
+import static org.miscela.examples.ExampleWorkbooks.text;
+import static org.miscela.examples.ExampleWorkbooks.widths;
+import static org.miscela.examples.ExampleWorkbooks.wrapped;
+
 import com.sun.star.awt.Rectangle;
-import com.sun.star.beans.PropertyValue;
 import com.sun.star.beans.XPropertySet;
 import com.sun.star.chart.ChartAxisAssign;
 import com.sun.star.chart.ChartLegendPosition;
@@ -13,33 +30,16 @@ import com.sun.star.chart.XDiagram;
 import com.sun.star.container.XIndexAccess;
 import com.sun.star.container.XNameAccess;
 import com.sun.star.document.XEmbeddedObjectSupplier;
-import com.sun.star.frame.XStorable;
-import com.sun.star.lang.Locale;
 import com.sun.star.lang.XComponent;
 import com.sun.star.sheet.XArrayFormulaRange;
-import com.sun.star.sheet.XCalculatable;
-import com.sun.star.sheet.XNamedRanges;
 import com.sun.star.sheet.XSpreadsheet;
-import com.sun.star.sheet.XSpreadsheetDocument;
 import com.sun.star.sheet.XSpreadsheets;
-import com.sun.star.style.XStyleFamiliesSupplier;
-import com.sun.star.table.CellAddress;
 import com.sun.star.table.CellRangeAddress;
-import com.sun.star.table.XCell;
 import com.sun.star.table.XCellRange;
-import com.sun.star.table.XColumnRowRange;
 import com.sun.star.table.XTableChartsSupplier;
 import com.sun.star.table.XTableCharts;
-import com.sun.star.text.XText;
 import com.sun.star.uno.UnoRuntime;
-import com.sun.star.util.XMergeable;
-import com.sun.star.util.XNumberFormats;
-import com.sun.star.util.XNumberFormatsSupplier;
-import java.nio.file.Files;
-import java.nio.file.Path;
-import java.nio.file.Paths;
-import java.nio.file.StandardCopyOption;
-import org.miscela.it.Office;
+import org.miscela.examples.ExampleWorkbooks.Formats;
 
 /**
  * Builds the example workbook examples/coolant-blend.ods from nothing, through a real office with the built
@@ -62,11 +62,6 @@ public final class ExampleWorkbookBuilder {
     private static final int TABLE_ROWS = 21;
     private static final int TABLE_COL = 5; // column F
 
-    private static final int INVENTED_COLOUR = 0xFCE4D6;
-    private static final int CAUTION_COLOUR = 0xFFF2B3;
-    private static final int HEAD_COLOUR = 0xDCE9E4;
-    private static final int INPUT_COLOUR = 0xE8F0FB;
-
     /** The number formats of the document being built. */
     private static Formats formats;
 
@@ -74,47 +69,18 @@ public final class ExampleWorkbookBuilder {
     }
 
     public static void main(String[] args) throws Exception {
-        Path target = args.length > 0 ? Paths.get(args[0]).toAbsolutePath()
-                : repoRoot().resolve("examples").resolve(FILE);
-        Office office = Office.start();
-        try {
-            XComponent doc = office.newSpreadsheet();
-            build(doc);
-            UnoRuntime.queryInterface(XCalculatable.class, doc).calculateAll();
-            Path scratch = office.scratch(FILE);
-            UnoRuntime.queryInterface(XStorable.class, doc).storeToURL(scratch.toUri().toString(),
-                    new PropertyValue[] {Office.property("FilterName", "calc8")});
-            doc.dispose();
-            Files.createDirectories(target.getParent());
-            Files.copy(scratch, target, StandardCopyOption.REPLACE_EXISTING);
-            System.out.println("wrote " + target);
-        } finally {
-            office.dispose();
-        }
+        ExampleWorkbooks.buildAndSave(FILE, args, (doc, context) -> build(doc));
     }
 
     static void build(XComponent doc) throws Exception {
-        XSpreadsheetDocument sd = UnoRuntime.queryInterface(XSpreadsheetDocument.class, doc);
-        XSpreadsheets sheets = sd.getSheets();
-        XIndexAccess index = UnoRuntime.queryInterface(XIndexAccess.class, sheets);
-        // a new document has one sheet; rename it Blend and add Card after it
-        com.sun.star.container.XNamed named = UnoRuntime.queryInterface(com.sun.star.container.XNamed.class,
-                index.getByIndex(0));
-        named.setName("Blend");
-        sheets.insertNewByName("Card", (short) 1);
-        while (index.getCount() > 2) {
-            sheets.removeByName(UnoRuntime.queryInterface(com.sun.star.container.XNamed.class,
-                    index.getByIndex(2)).getName());
-        }
+        XSpreadsheets sheets = ExampleWorkbooks.nameSheets(doc, "Blend", "Card");
         XSpreadsheet blend = sheet(sheets, "Blend");
         XSpreadsheet card = sheet(sheets, "Card");
         formats = new Formats(doc);
         int cardRows = writeCard(card);
-        XPropertySet dp = UnoRuntime.queryInterface(XPropertySet.class, doc);
-        XNamedRanges ranges = UnoRuntime.queryInterface(XNamedRanges.class, dp.getPropertyValue("NamedRanges"));
         String area = "$Card.$A$" + (CARD_TOP + 1) + ":$" + (char) ('A' + CARD_COLUMNS - 1) + "$"
                 + (CARD_TOP + cardRows);
-        ranges.addNewByName("card", area, new CellAddress((short) 0, 0, 0), 0);
+        nameRange(doc, "card", area);
         writeBlend(blend, formats);
         addCharts(blend);
         pageSetup(doc);
@@ -213,7 +179,7 @@ public final class ExampleWorkbookBuilder {
             int row = 2 + i;
             text(s, 0, row, cautions[i]);
             String a = "A" + (row + 1) + ":N" + (row + 1);
-            UnoRuntime.queryInterface(XMergeable.class, s.getCellRangeByName(a)).merge(true);
+            merge(s, a);
             band(s, a, CAUTION_COLOUR);
             prop(s, a, "IsTextWrapped", Boolean.TRUE);
         }
@@ -267,7 +233,7 @@ public final class ExampleWorkbookBuilder {
         text(s, 0, noteRow, "A cell showing Err:502 means the add-in refused: the point check above says why "
                 + "(for example a temperature outside 5..35 °C).");
         String note = "A" + (noteRow + 1) + ":C" + (noteRow + 2);
-        UnoRuntime.queryInterface(XMergeable.class, s.getCellRangeByName(note)).merge(true);
+        merge(s, note);
         prop(s, note, "IsTextWrapped", Boolean.TRUE);
         prop(s, note, "VertJustify", com.sun.star.table.CellVertJustify.TOP);
         prop(s, note, "CharPosture", com.sun.star.awt.FontSlant.ITALIC);
@@ -314,13 +280,10 @@ public final class ExampleWorkbookBuilder {
                 + "Vm = molar volume of the blend; w1 = ethanol mass fraction.");
         prop(s, col(TABLE_COL) + (end + 1), "CharPosture", com.sun.star.awt.FontSlant.ITALIC);
         // rows
-        XColumnRowRange crr = UnoRuntime.queryInterface(XColumnRowRange.class, s);
-        XIndexAccess rowsAccess = UnoRuntime.queryInterface(XIndexAccess.class, crr.getRows());
         for (int r = 2; r <= 4; r++) {
-            UnoRuntime.queryInterface(XPropertySet.class, rowsAccess.getByIndex(r)).setPropertyValue("Height", 900);
+            rowHeight(s, r, 900);
         }
-        UnoRuntime.queryInterface(XPropertySet.class, rowsAccess.getByIndex(TABLE_HEAD))
-                .setPropertyValue("Height", 900);
+        rowHeight(s, TABLE_HEAD, 900);
         widths(s, 100, 24, 19, 3, 3, 19, 20, 19, 18, 21, 19, 20, 18, 19);
     }
 
@@ -410,35 +373,7 @@ public final class ExampleWorkbookBuilder {
         return formats.key(code);
     }
 
-    private static void pageSetup(XComponent doc) throws Exception {
-        XNameAccess families = UnoRuntime.queryInterface(XStyleFamiliesSupplier.class, doc).getStyleFamilies();
-        XNameAccess pages = UnoRuntime.queryInterface(XNameAccess.class, families.getByName("PageStyles"));
-        XPropertySet ps = UnoRuntime.queryInterface(XPropertySet.class, pages.getByName("Default"));
-        int w = (Integer) ps.getPropertyValue("Width");
-        int h = (Integer) ps.getPropertyValue("Height");
-        if (w < h) {
-            ps.setPropertyValue("IsLandscape", Boolean.TRUE);
-            ps.setPropertyValue("Width", h);
-            ps.setPropertyValue("Height", w);
-        }
-        for (String m : new String[] {"LeftMargin", "RightMargin", "TopMargin", "BottomMargin"}) {
-            ps.setPropertyValue(m, 1000);
-        }
-        ps.setPropertyValue("ScaleToPagesX", (short) 1);
-        ps.setPropertyValue("ScaleToPagesY", (short) 1);
-        ps.setPropertyValue("CenterHorizontally", Boolean.TRUE);
-    }
-
     // --- small helpers
-
-    private static XSpreadsheet sheet(XSpreadsheets sheets, String name) throws Exception {
-        return UnoRuntime.queryInterface(XSpreadsheet.class, sheets.getByName(name));
-    }
-
-    private static void text(XSpreadsheet s, int c, int r, String v) throws Exception {
-        XCell cell = s.getCellByPosition(c, r);
-        UnoRuntime.queryInterface(XText.class, cell).setString(v);
-    }
 
     private static void label(XSpreadsheet s, int r, String label, String unit) throws Exception {
         text(s, 0, r, label);
@@ -447,79 +382,8 @@ public final class ExampleWorkbookBuilder {
         }
     }
 
-    /** Merges a one-row range, wraps its text and gives the row room for two lines. */
-    private static void wrapped(XSpreadsheet s, String range, int row) throws Exception {
-        UnoRuntime.queryInterface(XMergeable.class, s.getCellRangeByName(range)).merge(true);
-        prop(s, range, "IsTextWrapped", Boolean.TRUE);
-        XIndexAccess rows = UnoRuntime.queryInterface(XIndexAccess.class,
-                UnoRuntime.queryInterface(XColumnRowRange.class, s).getRows());
-        UnoRuntime.queryInterface(XPropertySet.class, rows.getByIndex(row)).setPropertyValue("Height", 900);
-    }
-
-    private static void head(XSpreadsheet s, String range) throws Exception {
-        band(s, range, HEAD_COLOUR);
-        bold(s, range, 10);
-    }
-
-    private static void bold(XSpreadsheet s, String range, float size) throws Exception {
-        prop(s, range, "CharWeight", com.sun.star.awt.FontWeight.BOLD);
-        prop(s, range, "CharHeight", size);
-    }
-
-    private static void band(XSpreadsheet s, String range, int colour) throws Exception {
-        prop(s, range, "CellBackColor", colour);
-    }
-
-    private static void prop(XSpreadsheet s, String range, String name, Object value) throws Exception {
-        UnoRuntime.queryInterface(XPropertySet.class, s.getCellRangeByName(range)).setPropertyValue(name, value);
-    }
-
-    /** Column widths in mm, from column A. */
-    private static void widths(XSpreadsheet s, int... mm) throws Exception {
-        XIndexAccess cols = UnoRuntime.queryInterface(XIndexAccess.class,
-                UnoRuntime.queryInterface(XColumnRowRange.class, s).getColumns());
-        for (int i = 0; i < mm.length; i++) {
-            UnoRuntime.queryInterface(XPropertySet.class, cols.getByIndex(i)).setPropertyValue("Width", mm[i] * 100);
-        }
-    }
-
-    private static String col(int c) {
-        return String.valueOf((char) ('A' + c));
-    }
-
     /** The table's data cells in column c, as an absolute range. */
     private static String column(int c) {
         return "$" + col(c) + "$" + (TABLE_FIRST + 1) + ":$" + col(c) + "$" + (TABLE_FIRST + TABLE_ROWS);
-    }
-
-
-    /** The repository root: system property miscela.repo, else the nearest directory up with addin/ and pom.xml. */
-    static Path repoRoot() {
-        String p = System.getProperty("miscela.repo");
-        if (p != null) {
-            return Paths.get(p).toAbsolutePath().normalize();
-        }
-        Path d = Paths.get("").toAbsolutePath();
-        for (Path at = d; at != null; at = at.getParent()) {
-            if (Files.isDirectory(at.resolve("addin")) && Files.exists(at.resolve("pom.xml"))) {
-                return at;
-            }
-        }
-        return d;
-    }
-
-    /** Number format keys by format code, added to the document when missing. */
-    private static final class Formats {
-        private final XNumberFormats formats;
-        private final Locale locale = new Locale("en", "GB", "");
-
-        Formats(XComponent doc) {
-            formats = UnoRuntime.queryInterface(XNumberFormatsSupplier.class, doc).getNumberFormats();
-        }
-
-        int key(String code) throws Exception {
-            int k = formats.queryKey(code, locale, false);
-            return k >= 0 ? k : formats.addNew(code, locale);
-        }
     }
 }

@@ -50,6 +50,24 @@ public final class Office implements AutoCloseable {
         return Paths.get(System.getProperty("office.program", "/usr/lib/libreoffice/program"));
     }
 
+    /**
+     * Library directories for the office's own processes, from the system property {@code office.library.path}:
+     * empty (the default) for an installed office, set by scripts/test-office-25 for an unpacked one. The test JVM
+     * and the build never see it.
+     */
+    static String libraryPath() {
+        String p = System.getProperty("office.library.path");
+        return p == null ? "" : p.trim();
+    }
+
+    /** Puts {@link #libraryPath()} into an office process's environment, when there is one. */
+    private static void officeEnvironment(ProcessBuilder pb) {
+        String lib = libraryPath();
+        if (!lib.isEmpty()) {
+            pb.environment().put("LD_LIBRARY_PATH", lib);
+        }
+    }
+
     static Path builtExtension() {
         String p = System.getProperty("miscela.oxt");
         if (p == null) {
@@ -64,18 +82,34 @@ public final class Office implements AutoCloseable {
 
     /** A fresh profile with the extension installed, and an office running on it. */
     public static Office start() throws Exception {
-        Path base = Files.createTempDirectory("miscela-office-");
-        Path profile = base.resolve("profile");
-        Path home = base.resolve("home");
-        Files.createDirectories(profile);
-        Files.createDirectories(home);
-        Path oxt = base.resolve("miscela.oxt");
-        Files.copy(builtExtension(), oxt, StandardCopyOption.REPLACE_EXISTING);
-        handOver(base);
+        Path base = freshDirectory();
         // no --suppress-license and stdin from /dev/null: an install that asked anything would fail here
-        run(base, 180, program().resolve("unopkg").toString(), "add",
-                "-env:UserInstallation=" + profile.toUri(), oxt.toString());
-        return launch(base, profile);
+        unopkg(base, "add", base.resolve("miscela.oxt").toString());
+        return launch(base, base.resolve("profile"));
+    }
+
+    /**
+     * A throwaway directory for the office's user: an empty profile ({@code profile}), a HOME ({@code home}) and a
+     * copy of the built extension ({@code miscela.oxt}).
+     */
+    static Path freshDirectory() throws IOException, InterruptedException {
+        Path base = Files.createTempDirectory("miscela-office-");
+        Files.createDirectories(base.resolve("profile"));
+        Files.createDirectories(base.resolve("home"));
+        Files.copy(builtExtension(), base.resolve("miscela.oxt"), StandardCopyOption.REPLACE_EXISTING);
+        handOver(base);
+        return base;
+    }
+
+    /**
+     * Runs {@code unopkg command args…} on the profile of a {@link #freshDirectory()}, as the office's user, with
+     * standard input from /dev/null; fails on a non-zero exit or after three minutes. Returns what it printed.
+     */
+    static String unopkg(Path base, String command, String... args) throws IOException, InterruptedException {
+        List<String> cmd = new ArrayList<>(Arrays.asList(program().resolve("unopkg").toString(), command,
+                "-env:UserInstallation=" + base.resolve("profile").toUri()));
+        cmd.addAll(Arrays.asList(args));
+        return run(base, 180, cmd.toArray(new String[0]));
     }
 
     /** An office on an existing profile (used to reopen after a restart). */
@@ -91,6 +125,7 @@ public final class Office implements AutoCloseable {
                 .redirectOutput(base.resolve("soffice.log").toFile()).redirectInput(ProcessBuilder.Redirect.from(
                         new File("/dev/null")));
         pb.environment().put("HOME", base.resolve("home").toString());
+        officeEnvironment(pb);
         Process p = pb.start();
         try {
             XComponentContext local = Bootstrap.createInitialComponentContext(null);
@@ -247,6 +282,7 @@ public final class Office implements AutoCloseable {
                 .redirectInput(ProcessBuilder.Redirect.from(new File("/dev/null")));
         if (officeTool) {
             pb.environment().put("HOME", dir.resolve("home").toString());
+            officeEnvironment(pb);
         }
         Process p = pb.start();
         boolean done = p.waitFor(seconds, TimeUnit.SECONDS);

@@ -12,6 +12,8 @@ public final class FunctionInfo {
     private final String formula;
     private final String example;
     private final List<ArgumentInfo> arguments;
+    private String exampleResult = "";
+    private List<Enum<?>> errors = Collections.emptyList();
 
     FunctionInfo(String method, String displayName, String summary, String formula, String example,
             ArgumentInfo... arguments) {
@@ -21,6 +23,26 @@ public final class FunctionInfo {
         this.formula = formula;
         this.example = example;
         this.arguments = Collections.unmodifiableList(Arrays.asList(arguments));
+    }
+
+    /** The value the example shows in Calc (as text, rounded), checked in a real office by a test. */
+    FunctionInfo shows(String result) {
+        this.exampleResult = result;
+        return this;
+    }
+
+    /** The problems this function reports besides those of the card itself (Problem or FitProblem entries). */
+    FunctionInfo refuses(List<Enum<?>> problems) {
+        this.errors = Collections.unmodifiableList(problems);
+        return this;
+    }
+
+    public String exampleResult() {
+        return exampleResult;
+    }
+
+    public List<Enum<?>> errors() {
+        return errors;
     }
 
     /** The IDL method name, permanent: saved workbooks refer to it. */

@@ -17,6 +17,8 @@ public final class MetadataWriter {
     public static void main(String[] args) throws IOException {
         if (args.length == 2 && args[0].equals("--docs")) {
             write(Paths.get(args[1]), functionReference());
+        } else if (args.length == 2 && args[0].equals("--errors")) {
+            write(Paths.get(args[1]), errorCatalogue());
         } else if (args.length == 1) {
             write(Paths.get(args[0]), calcAddInsXcu());
         } else {
@@ -86,6 +88,21 @@ public final class MetadataWriter {
                 + "shape (enter the formula as an array formula), and blank input cells give blank results. "
                 + "Bad input shows Err:502; `MIX.CHECK` tells why. Outside the card's validity range results "
                 + "are refused unless extrapolation is allowed (per call or on the card).\n\n");
+        m.append("**Examples.** Each function's example is entered in a real office by a test "
+                + "(`ReferenceExamplesIT`), which checks that Calc shows the value printed here. The examples use "
+                + "these cards (test resources in `addin/src/test/resources/cards/`): `card`, ethanol + water "
+                + "fitted to the OIML R 22 densities (`ethanol-water-oiml.tsv`); `tern`, three invented liquids P, Q "
+                + "and R (`ternary-invented.tsv`, invented values); `acid`, sulfuric acid + water fitted to the NBS "
+                + "heats of solution (`sulfuric-acid-water-nbs.tsv`); `cov`, ethanol + water at 20 °C with a "
+                + "coefficient covariance (`ethanol-water-covariance.tsv`, fitted to OIML densities with invented "
+                + "noise). Formulas are written with `;` between arguments and, inside inline arrays, `;` between "
+                + "columns and `|` between rows (the form the office's API and ODF files use; in the English "
+                + "user interface type `,` between the columns of an inline array and `;` between its rows).\n\n"
+                + "**Errors.** A refused call shows Err:502; the message below (with `…` for the details the "
+                + "actual message fills in) says why, and `MIX.CHECK` / `MIX.CHECKPOINT` (or a fit's result "
+                + "`\"check\"`) show it in a cell. Every function that reads a card also reports the card's own "
+                + "problems (docs/card-format.md). Calc itself shows Err:504 for a missing required argument or "
+                + "an error cell inside a range argument.\n\n");
         m.append("| function | what it returns |\n|---|---|\n");
         for (FunctionInfo f : FunctionCatalog.functions()) {
             m.append("| [`").append(f.displayName()).append("`](#").append(anchor(f.displayName())).append(") | ")
@@ -101,7 +118,16 @@ public final class MetadataWriter {
                         .append(" |\n");
             }
             m.append("\nFormula: ").append(f.formula()).append("\n\n");
-            m.append("Example: `").append(f.example()).append("`\n\n");
+            m.append("Example: `").append(f.example()).append("` shows **").append(f.exampleResult())
+                    .append("**.\n\n");
+            if (!f.errors().isEmpty()) {
+                m.append("Refused (Err:502) when:\n\n");
+                for (Enum<?> e : f.errors()) {
+                    m.append("- `").append(e.name()).append("`: ").append(pattern(e).replaceAll("%[sd]", "…"))
+                            .append('\n');
+                }
+                m.append('\n');
+            }
             m.append("Saved in ODF files as `").append(FunctionCatalog.SERVICE).append('.').append(f.method())
                     .append("`.\n");
         }
@@ -116,6 +142,76 @@ public final class MetadataWriter {
             b.append(i > 0 ? "; " : "").append(a.optional() ? "[" + a.displayName() + "]" : a.displayName());
         }
         return b.append(')').toString();
+    }
+
+    /** docs/errors.md: every message the add-in can produce, where it occurs and what Calc shows. */
+    public static String errorCatalogue() {
+        StringBuilder m = new StringBuilder();
+        m.append("# Error catalogue\n\n");
+        m.append("<!-- Generated from the message catalogues (org.miscela.core.Problem, org.miscela.core.fit.FitProblem, "
+                + "org.miscela.core.blend.BlendProblem) and the function catalogue; a test fails when this file is "
+                + "out of date. Regenerate with scripts/regenerate-docs. -->\n\n");
+        m.append("Every message names what was wrong and how to put it right; `…` stands for the details the actual "
+                + "message fills in (a row number, a value, a name).\n\n");
+        m.append("## What Calc shows\n\n");
+        m.append("| Calc shows | Meaning | Where the words are |\n|---|---|---|\n");
+        m.append("| Err:502 | The add-in refused the call: one of the messages below. | `MIX.CHECK(card)` for the "
+                + "card's problems, `MIX.CHECKPOINT(card; x; temperature)` for a point's, a fit's result "
+                + "`\"check\"` for a fit's. |\n");
+        m.append("| Err:504 | Calc's own parameter error: a required argument left out, too many arguments, or an "
+                + "error value inside a range argument (for example a card whose fitted cells show Err:502). Calc "
+                + "does not call the add-in. | Look at the arguments' cells. |\n");
+        m.append("| the argument's own error (#DIV/0!, #N/A, …) | An argument that is an error value; Calc passes it "
+                + "through without calling the add-in. | The argument's cell. |\n");
+        m.append("| #NAME? | The extension is not installed in this LibreOffice, or the function name is "
+                + "misspelt. | Tools ▸ Extension Manager. |\n");
+        m.append("| text | `MIX.CHECK`, `MIX.CHECKPOINT`, `MIX.TRACE` labels, a fit's `\"check\"` and "
+                + "`MIX.ADJUST`'s `\"summary\"` return text by design. | — |\n\n");
+        m.append("The add-in never returns NaN or an infinity (Calc would show #NUM!) and an unexpected failure "
+                + "inside it would show #VALUE!; the tests (`CalcFuzzIT`, the core fuzzers) check that neither "
+                + "occurs.\n\n");
+        m.append("## Problems with a card\n\n");
+        m.append("Reported by every function given the card (Err:502) and, in words, by `MIX.CHECK(card)`; each "
+                + "names the card row. The layout rules behind them are in [card-format.md](card-format.md).\n\n");
+        table(m, java.util.EnumSet.range(org.miscela.core.Problem.CARD_EMPTY,
+                org.miscela.core.Problem.NO_COMPOSITION_LIMIT), false);
+        m.append("\n## Problems with a call\n\n");
+        table(m, java.util.EnumSet.range(org.miscela.core.Problem.NOT_BINARY,
+                org.miscela.core.Problem.NON_PHYSICAL), true);
+        m.append("\n## Problems with a fit\n\n");
+        table(m, java.util.Arrays.asList(org.miscela.core.fit.FitProblem.values()), true);
+        m.append("\n## Problems with a blending calculation\n\n");
+        table(m, java.util.Arrays.asList(org.miscela.core.blend.BlendProblem.values()), true);
+        return m.toString();
+    }
+
+    private static void table(StringBuilder m, java.util.Collection<? extends Enum<?>> problems, boolean where) {
+        m.append(where ? "| Problem | Message | Reported by |\n|---|---|---|\n" : "| Problem | Message |\n|---|---|\n");
+        for (Enum<?> p : problems) {
+            m.append("| `").append(p.name()).append("` | ")
+                    .append(pattern(p).replaceAll("%[sd]", "…").replace("|", "\\|"));
+            if (where) {
+                StringBuilder fs = new StringBuilder();
+                for (FunctionInfo f : FunctionCatalog.functions()) {
+                    if (f.errors().contains(p)) {
+                        fs.append(fs.length() == 0 ? "" : ", ").append(f.displayName());
+                    }
+                }
+                m.append(" | ").append(fs.length() == 0 ? "—" : fs);
+            }
+            m.append(" |\n");
+        }
+    }
+
+    /** The message pattern of a Problem or FitProblem entry. */
+    static String pattern(Enum<?> problem) {
+        if (problem instanceof org.miscela.core.Problem) {
+            return ((org.miscela.core.Problem) problem).pattern();
+        }
+        if (problem instanceof org.miscela.core.blend.BlendProblem) {
+            return ((org.miscela.core.blend.BlendProblem) problem).pattern();
+        }
+        return ((org.miscela.core.fit.FitProblem) problem).pattern();
     }
 
     private static String anchor(String displayName) {
