@@ -288,10 +288,14 @@ final class Arguments {
         return v == null || (v instanceof String && ((String) v).trim().isEmpty());
     }
 
-    /** The last line of defence: Calc must never receive NaN or infinity from us. */
+    /**
+     * The last line of defence: Calc must never receive NaN or infinity from us. A result that is not finite (numbers
+     * near the limits of double precision on a card, say) is refused as not physical, the designed error, rather than
+     * escaping as an exception no caller expects.
+     */
     static Double finite(double v) {
         if (Double.isNaN(v) || Double.isInfinite(v)) {
-            throw new IllegalStateException("non-finite result " + v);
+            throw Problem.NON_PHYSICAL.raise("the point", "asked for", "result", Double.toString(v));
         }
         return v;
     }

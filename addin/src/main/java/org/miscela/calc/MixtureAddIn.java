@@ -368,7 +368,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
                     Arguments.text("mode", mode, null), Arguments.optionalNumber("limit", limit),
                     Arguments.text("limit unit", limitUnit, null), Arguments.text("result", result, null),
                     Arguments.text("result unit", resultUnit, null), Arguments.extrapolation(extrapolate));
-            return r instanceof double[] ? CompositionArguments.row((double[]) r) : r;
+            return r instanceof double[] ? CompositionArguments.row((double[]) r)
+                    : r instanceof Double ? Arguments.finite((Double) r) : r;
         } catch (MiscelaException | BlendException ex) {
             throw refused(ex);
         }
@@ -381,11 +382,12 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
         try {
             Card c = Arguments.card(card);
             String u = Arguments.text("unit", unit, null);
-            return BlendFunctions.additionVolume(c, CompositionArguments.singleComposition(c, "amounts", amounts), u,
+            return Arguments.finite(BlendFunctions.additionVolume(c,
+                    CompositionArguments.singleComposition(c, "amounts", amounts), u,
                     CompositionArguments.optionalLine(c, "storage temperatures", storageTemperatures),
                     Arguments.component(c, component), Arguments.number("amount added", added), u,
                     Arguments.number("temperature", temperature), Arguments.text("result", result, null),
-                    Arguments.text("result unit", resultUnit, null), Arguments.extrapolation(extrapolate));
+                    Arguments.text("result unit", resultUnit, null), Arguments.extrapolation(extrapolate)));
         } catch (MiscelaException | BlendException ex) {
             throw refused(ex);
         }

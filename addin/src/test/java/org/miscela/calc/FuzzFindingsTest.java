@@ -157,4 +157,49 @@ class FuzzFindingsTest {
         table(addIn.traceEvaluation(range(heatCard().toArray(new Object[0][])), one(0.5), one(300.0), "enthalpy",
                 Any.VOID));
     }
+
+    /** The binary card of {@link #heatCard} with the first molar mass 1e300 g/mol (still a valid card). */
+    private static Object[][] heavyCard() {
+        List<Object[]> rows = heatCard();
+        rows.set(9, row("component", "alpha", 1e300));
+        return range(rows.toArray(new Object[0][]));
+    }
+
+    /**
+     * Found by the adapter fuzzer once the blending functions were merged (MIX.BATCH of an extreme card): the mass of
+     * 10⁹ mol of a component of 1e300 g/mol overflows, and the adapter's last-line check threw IllegalStateException.
+     * Fix: that check raises the designed NON_PHYSICAL error.
+     */
+    @Test
+    void batchTotalThatOverflowsIsRefusedByDesign() throws Exception {
+        Object[][] card = heavyCard();
+        assertTrue((Double) addIn.batchTotals(card, range(row(1.0, 1.0)), "mol", one(300.0), "mass", Any.VOID,
+                Any.VOID, Any.VOID) > 0, "an ordinary batch of the same card");
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> addIn.batchTotals(card,
+                range(row(1e6, 1.0)), "kmol", one(300.0), "mass", Any.VOID, Any.VOID, Any.VOID));
+        assertEquals("Problem.NON_PHYSICAL", Catalogue.entryOf(e.getMessage()), e.getMessage());
+    }
+
+    /**
+     * Found by the adapter fuzzer (MIX.ADDVOLUME, MIX.ADJUST on a card with a density of 1e-300 kg/m³): these return
+     * one number without passing it through the adapter's check, so a volume that overflows (10 kmol of a liquid of
+     * molar volume 2·10³⁰⁴ cm³/mol) reached Calc as NaN (∞ − ∞) or infinity. Fix: both go through the check.
+     */
+    @Test
+    void additionVolumeAndAdjustmentThatOverflowAreRefusedByDesign() throws Exception {
+        List<Object[]> rows = heatCard();
+        rows.set(14, row("density coefficients", "beta", 1e-300));
+        Object[][] card = range(rows.toArray(new Object[0][]));
+        assertEquals("OK", addIn.checkCard(card), "the card reads");
+        IllegalArgumentException add = assertThrows(IllegalArgumentException.class, () -> addIn.additionVolume(card,
+                range(row(10.0, 10.0)), "kmol", 2.0, 2.0, 300.0, Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+        assertEquals("Problem.NON_PHYSICAL", Catalogue.entryOf(add.getMessage()), add.getMessage());
+        IllegalArgumentException adjust = assertThrows(IllegalArgumentException.class, () -> addIn.adjustBatch(card,
+                range(row(10.0, 10.0)), "kmol", range(row(0.4, 0.6)), "mole fraction", 300.0, Any.VOID, Any.VOID,
+                Any.VOID, "volume", Any.VOID, Any.VOID, Any.VOID));
+        assertEquals("Problem.NON_PHYSICAL", Catalogue.entryOf(adjust.getMessage()), adjust.getMessage());
+        Object[][] ordinary = range(heatCard().toArray(new Object[0][]));
+        assertTrue(Double.isFinite((Double) addIn.additionVolume(ordinary, range(row(10.0, 10.0)), "kmol", 2.0, 2.0,
+                300.0, Any.VOID, Any.VOID, Any.VOID, Any.VOID)), "the same addition on an ordinary card");
+    }
 }

@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.exception.NoBracketingException;
+import org.apache.commons.math3.exception.TooManyEvaluationsException;
 
 /**
  * Every root of a function on an interval, found by scanning and bracketing: the interval is cut into equal cells, a
@@ -41,22 +43,40 @@ final class Roots {
                 continue;
             }
             if (Math.signum(v[i]) != Math.signum(v[i + 1])) {
-                roots.add(solver.solve(MAX_EVALUATIONS, f, s[i], s[i + 1]));
+                solve(solver, f, s[i], s[i + 1], roots);
             } else if (slope != null) {
                 double d0 = slope.value(s[i]);
                 double d1 = slope.value(s[i + 1]);
                 if (Double.isFinite(d0) && Double.isFinite(d1) && Math.signum(d0) * Math.signum(d1) < 0) {
-                    double extremum = solver.solve(MAX_EVALUATIONS, slope, s[i], s[i + 1]);
+                    List<Double> found = new ArrayList<>();
+                    solve(solver, slope, s[i], s[i + 1], found);
+                    if (found.isEmpty()) {
+                        continue;
+                    }
+                    double extremum = found.get(0);
                     double fe = f.value(extremum);
                     if (fe == 0.0) {
                         roots.add(extremum);
                     } else if (Double.isFinite(fe) && Math.signum(fe) != Math.signum(v[i])) {
-                        roots.add(solver.solve(MAX_EVALUATIONS, f, s[i], extremum));
-                        roots.add(solver.solve(MAX_EVALUATIONS, f, extremum, s[i + 1]));
+                        solve(solver, f, s[i], extremum, roots);
+                        solve(solver, f, extremum, s[i + 1], roots);
                     }
                 }
             }
         }
         return roots;
+    }
+
+    /**
+     * Brent's method on a cell whose ends differ in sign. The solver also evaluates inside the cell; where the function
+     * is NaN there (a non-physical point the scan stepped over) it finds no bracket or no convergence, and the cell is
+     * skipped like a cell touching such a point.
+     */
+    private static void solve(BrentSolver solver, UnivariateFunction f, double a, double b, List<Double> roots) {
+        try {
+            roots.add(solver.solve(MAX_EVALUATIONS, f, a, b));
+        } catch (NoBracketingException | TooManyEvaluationsException e) {
+            // skipped: see above
+        }
     }
 }
