@@ -32,7 +32,7 @@ import org.miscela.core.FuzzCards;
  * JVMs) can be compared.
  */
 class DeterminismTest {
-    private static final int CALLS = 400;
+    private static final int CALLS = 300;
     private static final List<FuzzCall> CALL_LIST = new ArrayList<>();
     /** Each call's outcome in the first, sequential evaluation. */
     private static final List<String> REFERENCE = new ArrayList<>();

@@ -23,7 +23,13 @@ final class FuzzCall {
     enum Method {
         EXCESS_VOLUME, PARTIAL_VOLUME, PARTIAL_EXCESS_VOLUME, MOLAR_VOLUME, DENSITY, PURE_DENSITY, CHECK_CARD,
         CHECK_POINT, EXCESS_ENTHALPY, PARTIAL_EXCESS_ENTHALPY, MIXING_HEAT, ADDITION_HEAT, ADIABATIC_RISE, INSIDE,
-        TRACE, FIT_EXCESS, FIT_DENSITY, LEAST_SQUARES, UNCERTAINTY
+        TRACE, FIT_EXCESS, FIT_DENSITY, LEAST_SQUARES, UNCERTAINTY, CONVERT, BATCH, RECIPE, ADJUST, ADDITION_VOLUME,
+        FROM_DENSITY, VOLUME_FACTOR;
+
+        /** The blending functions, whose array results hold one value per component. */
+        boolean blending() {
+            return ordinal() >= CONVERT.ordinal();
+        }
     }
 
     final Method method;
@@ -86,6 +92,22 @@ final class FuzzCall {
                 return a.leastSquares(grid(p[0]), grid(p[1]), p[2], p[3]);
             case UNCERTAINTY:
                 return a.uncertainty(c, grid(p[0]), grid(p[1]), p[2], p[3], p[4]);
+            case CONVERT:
+                return a.convertComposition(c, grid(p[0]), p[1], p[2], p[3], p[4], p[5], p[6]);
+            case BATCH:
+                return a.batchTotals(c, grid(p[0]), p[1], grid(p[2]), p[3], p[4], p[5], p[6]);
+            case RECIPE:
+                return a.recipe(c, p[0], p[1], grid(p[2]), p[3], p[4], p[5], p[6], p[7], p[8]);
+            case ADJUST:
+                return a.adjustBatch(c, grid(p[0]), p[1], grid(p[2]), p[3], p[4], p[5], p[6], p[7], p[8], p[9], p[10],
+                        p[11]);
+            case ADDITION_VOLUME:
+                return a.additionVolume(c, grid(p[0]), p[1], p[2], p[3], p[4], p[5], p[6], p[7], p[8]);
+            case FROM_DENSITY:
+                return a.compositionFromDensity(c, grid(p[0]), grid(p[1]), p[2], p[3], p[4], p[5], p[6], p[7], p[8],
+                        p[9]);
+            case VOLUME_FACTOR:
+                return a.volumeCorrection(c, grid(p[0]), p[1], grid(p[2]), p[3], p[4], p[5], p[6], p[7]);
             default:
                 throw new AssertionError(method);
         }
@@ -229,6 +251,67 @@ final class FuzzCall {
                 case LEAST_SQUARES:
                     a = leastSquares();
                     break;
+                case CONVERT: {
+                    Object from = basisWord();
+                    a = new Object[] {basisValues(from), from, basisWord(), temperatureOrVoid(),
+                        r.nextBoolean() ? Any.VOID : temperatureValue(), balance(), extrapolate()};
+                    break;
+                }
+                case BATCH: {
+                    Object[][] amounts = amounts();
+                    a = new Object[] {amounts, amountUnit(), temperature(amounts), pick(Any.VOID, "volume", "mass",
+                        "moles", "density", "pure volume", "contraction", "contraction %", clean ? "volume" : "weight"),
+                        r.nextBoolean() ? Any.VOID : amountUnit(), storageTemperatures(), extrapolate()};
+                    break;
+                }
+                case RECIPE: {
+                    Object basis = basisWord();
+                    a = new Object[] {quantity(), amountUnit(), basisValues(basis), basis, temperatureValue(),
+                        storageTemperatures(), r.nextBoolean() ? Any.VOID : amountUnit(), balance(), extrapolate()};
+                    break;
+                }
+                case ADJUST: {
+                    Object basis = basisWord();
+                    Object[][] batch = amounts();
+                    a = new Object[] {batch.length > 1 && r.nextBoolean() ? new Object[][] {batch[0]} : batch,
+                        amountUnit(), basisValues(basis), basis, temperatureValue(),
+                        pick(Any.VOID, "least", "within", "make up", clean ? "least" : "most"),
+                        r.nextBoolean() ? Any.VOID : quantity(), r.nextBoolean() ? Any.VOID : amountUnit(),
+                        pick(Any.VOID, "additions", "volume", "summary", clean ? "summary" : "all"),
+                        r.nextBoolean() ? Any.VOID : amountUnit(), balance(), extrapolate()};
+                    break;
+                }
+                case ADDITION_VOLUME: {
+                    Object[][] batch = amounts();
+                    a = new Object[] {batch.length > 1 && r.nextBoolean() ? new Object[][] {batch[0]} : batch,
+                        amountUnit(), component(), added(), temperatureValue(),
+                        pick(Any.VOID, "exact", "first order", "difference", clean ? "exact" : "second order"),
+                        r.nextBoolean() ? Any.VOID : amountUnit(), storageTemperatures(), extrapolate()};
+                    break;
+                }
+                case FROM_DENSITY: {
+                    Object[][] t = new Object[][] {{temperatureValue()}};
+                    double tValue = t[0][0] instanceof Double ? (Double) t[0][0] : card.lowest;
+                    Object[][] densities = r.nextInt(4) == 0
+                            ? new Object[][] {{plausibleMixtureDensity(tValue)}, {plausibleMixtureDensity(tValue)}}
+                            : new Object[][] {{plausibleMixtureDensity(tValue)}};
+                    if (densities.length > 1 && r.nextBoolean()) {
+                        t = new Object[][] {{tValue}, {temperatureValue()}};
+                    }
+                    a = new Object[] {densities, t, r.nextBoolean() ? Any.VOID : component(), basisWord(),
+                        temperatureOrVoid(), r.nextInt(3) == 0 ? composition() : Any.VOID,
+                        r.nextBoolean() ? Any.VOID : (Object) (0.3 * r.nextDouble()),
+                        r.nextBoolean() ? Any.VOID : (Object) (0.7 + 0.3 * r.nextDouble()), balance(), extrapolate()};
+                    break;
+                }
+                case VOLUME_FACTOR: {
+                    Object basis = basisWord();
+                    Object[][] x = basisValues(basis);
+                    a = new Object[] {x, basis, temperature(x), temperatureValue(),
+                        pick(Any.VOID, "factor", "density", "reference density", clean ? "factor" : "ratio"),
+                        temperatureOrVoid(), balance(), extrapolate()};
+                    break;
+                }
                 default:
                     throw new AssertionError(m);
             }
@@ -495,6 +578,89 @@ final class FuzzCall {
                     return -1.0;
                 default:
                     return r.nextInt(2) == 0 ? junk() : (Object) (1 + r.nextInt(5) * 1.0);
+            }
+        }
+
+        // --- blending
+
+        /** A composition basis by one of its spellings, or (not clean) a word that is none. */
+        Object basisWord() {
+            if (!clean && r.nextInt(8) == 0) {
+                return pick("ppm", "", Any.VOID, 1.0, "mole  fraction");
+            }
+            return pick("mole fraction", "mass fraction", "volume fraction", "%vol", "mol/L", "g/L", "mol/kg", "x",
+                    "w", "phi", " % vol ", "Mass Fraction");
+        }
+
+        private boolean concentration(Object basis) {
+            String b = basis instanceof String ? ((String) basis).trim().toLowerCase(java.util.Locale.ROOT) : "";
+            return b.contains("vol") && !b.contains("fraction") || b.contains("/l") || b.contains("/kg");
+        }
+
+        /** Values on a basis: fractions as compositions; concentrations per component with the balance blank. */
+        Object[][] basisValues(Object basis) {
+            if (!concentration(basis)) {
+                return composition();
+            }
+            String b = ((String) basis).toLowerCase(java.util.Locale.ROOT);
+            double top = b.contains("vol") ? 100 : b.contains("g/l") ? 800 : b.contains("mol/l") ? 15 : 40;
+            if (n == 2 && r.nextBoolean()) {
+                return new Object[][] {{maybeJunk(top * r.nextDouble())}};
+            }
+            Object[][] g = new Object[1][n];
+            for (int k = 0; k < n; k++) {
+                g[0][k] = k == n - 1 && r.nextInt(4) > 0 ? "" : maybeJunk(top / n * r.nextDouble());
+            }
+            return g;
+        }
+
+        Object amountUnit() {
+            if (!clean && r.nextInt(8) == 0) {
+                return pick("lb", "", Any.VOID, 3.0, "KG");
+            }
+            return pick("mol", "kmol", "g", "kg", "mL", "L", "m3", "cm³", "dm3");
+        }
+
+        Object balance() {
+            return r.nextBoolean() ? Any.VOID : component();
+        }
+
+        Object temperatureOrVoid() {
+            return r.nextInt(3) == 0 ? Any.VOID : temperatureValue();
+        }
+
+        /** Storage temperatures: left out, one for all, one per component, or (not clean) the wrong count. */
+        Object storageTemperatures() {
+            int p = r.nextInt(clean ? 3 : 4);
+            if (p == 0) {
+                return Any.VOID;
+            }
+            if (p == 1) {
+                return temperatureValue();
+            }
+            int count = p == 2 ? n : n + 1;
+            Object[][] g = new Object[1][count];
+            for (int k = 0; k < count; k++) {
+                g[0][k] = temperatureValue();
+            }
+            return g;
+        }
+
+        Object quantity() {
+            int p = r.nextInt(clean ? 8 : 10);
+            return p < 8 ? (Object) (1000 * r.nextDouble()) : pick(0.0, -5.0, Double.NaN, 1e300, "ten", Any.VOID);
+        }
+
+        /** A density the card can have at t (the mixture at a random composition), or any number if it cannot. */
+        double plausibleMixtureDensity(double t) {
+            try {
+                Card c = CardReader.read(card.cells);
+                double[] x = new double[c.componentCount()];
+                x[0] = r.nextDouble();
+                x[c.componentCount() - 1] += 1 - x[0];
+                return org.miscela.core.CardFunctions.density(c, x, t, org.miscela.core.Extrapolation.ALLOW);
+            } catch (MiscelaException e) {
+                return 500 + 1000 * r.nextDouble();
             }
         }
 

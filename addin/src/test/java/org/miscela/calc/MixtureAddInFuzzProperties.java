@@ -29,8 +29,11 @@ import org.miscela.core.FuzzTally;
  *   <li>MIX.TRACE returns (label, value) rows: a non-empty text label and a finite number or a text;</li>
  *   <li>a fit returns a rectangular table of finite Doubles and Strings, or (for the "check" result) "OK" or a
  *       catalogued message;</li>
+ *   <li>a blending function returns a finite Double or an array of finite Doubles and "" with one value per
+ *       component (a row, a column, or a row per line) or the shape of an argument; MIX.ADJUST may also return its
+ *       summary sentence;</li>
  *   <li>anything else ends in com.sun.star.lang.IllegalArgumentException (Calc's Err:502) carrying a message of the
- *       catalogue ({@code Problem} or {@code FitProblem});</li>
+ *       catalogue ({@code Problem}, {@code FitProblem} or {@code BlendProblem});</li>
  * </ul>
  *
  * never another exception, never NaN or infinity, and each call within {@link FuzzTally#CALL_BOUND_NANOS}.
@@ -50,7 +53,7 @@ class MixtureAddInFuzzProperties {
     }
 
     @Property(shrinking = ShrinkingMode.OFF)
-    @FuzzProfile.Tries(ci = 9_000, full = 700_000)
+    @FuzzProfile.Tries(ci = 7_000, full = 700_000)
     @AddLifecycleHook(FuzzProfile.class)
     void everyCallKeepsTheContract(@ForAll("calls") FuzzCall call) {
         try {
@@ -97,8 +100,46 @@ class MixtureAddInFuzzProperties {
             case LEAST_SQUARES:
                 return result instanceof String ? text(call, result) : table(call, result);
             default:
+                if (call.method.blending()) {
+                    if (call.method == FuzzCall.Method.ADJUST && result instanceof String) {
+                        if (((String) result).trim().isEmpty()) {
+                            unexpected("returned an empty summary", call, null);
+                        }
+                        return "text summary";
+                    }
+                    return blending(call, result);
+                }
                 return number(call, result);
         }
+    }
+
+    /** A blending result: one number, or finite numbers and blanks, one per component or shaped like an argument. */
+    private static String blending(FuzzCall call, Object result) {
+        if (result instanceof Double) {
+            finite(call, (Double) result);
+            return "number";
+        }
+        Object[][] grid = grid(call, result);
+        int n = org.miscela.core.CardReader.read(call.cardCells()).componentCount(); // it read: the call succeeded
+        int rows = grid.length;
+        int cols = grid[0].length;
+        boolean shaped = (rows == 1 && cols == n) || (rows == n && cols == 1);
+        for (Object[][] range : call.ranges()) {
+            shaped |= rows == range.length && (cols == n || cols == 1 || cols == range[0].length);
+        }
+        if (!shaped) {
+            unexpected("returned a " + rows + "×" + cols + " array for a card of " + n + " components", call, null);
+        }
+        for (Object[] row : grid) {
+            for (Object v : row) {
+                if (v instanceof Double) {
+                    finite(call, (Double) v);
+                } else if (!"".equals(v)) {
+                    unexpected("returned the cell " + v + " in an array of numbers", call, null);
+                }
+            }
+        }
+        return "array";
     }
 
     private static String text(FuzzCall call, Object result) {

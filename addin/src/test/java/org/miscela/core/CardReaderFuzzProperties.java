@@ -35,7 +35,7 @@ class CardReaderFuzzProperties {
     }
 
     @Property(shrinking = ShrinkingMode.OFF)
-    @FuzzProfile.Tries(ci = 6_000, full = 500_000)
+    @FuzzProfile.Tries(ci = 5_000, full = 500_000)
     @AddLifecycleHook(FuzzProfile.class)
     void everyRangeReadsOrFailsByDesign(@ForAll("cards") FuzzCards.Blueprint card) {
         try {

@@ -2,10 +2,12 @@ package org.miscela.core;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.miscela.core.blend.BlendProblem;
 import org.miscela.core.fit.FitProblem;
 
 /**
- * Recognises a message as an instance of one catalogue entry ({@link Problem} or {@link FitProblem}): the entry's
+ * Recognises a message as an instance of one catalogue entry ({@link Problem}, {@link FitProblem} or
+ * {@link BlendProblem}): the entry's
  * literal text, in order, with anything in its blanks. Literal matching rather than a regular expression per entry,
  * because messages quote cell text of any length and a pattern with several wildcards would backtrack over it.
  */
@@ -58,6 +60,9 @@ public final class Catalogue {
         }
         for (FitProblem p : FitProblem.values()) {
             ENTRIES.add(new Entry("FitProblem." + p.name(), p.pattern()));
+        }
+        for (BlendProblem p : BlendProblem.values()) {
+            ENTRIES.add(new Entry("BlendProblem." + p.name(), p.pattern()));
         }
     }
 
