@@ -202,4 +202,25 @@ class FuzzFindingsTest {
         assertTrue(Double.isFinite((Double) addIn.additionVolume(ordinary, range(row(10.0, 10.0)), "kmol", 2.0, 2.0,
                 300.0, Any.VOID, Any.VOID, Any.VOID, Any.VOID)), "the same addition on an ordinary card");
     }
+
+    /**
+     * Found by the full fuzz profile (MIX.ADJUST "make up" on an extreme card): the batch's own volume is not physical
+     * (its molar volume is negative: a large negative A0 at x1 = 0.5) while the made-up composition's is, so the
+     * search started from a NaN and Commons Math's solver threw NoBracketingException. Fix: a measure that is NaN at
+     * the batch, or where the solver looks, ends the search with LIMIT_UNREACHABLE.
+     */
+    @Test
+    void makeUpFromABatchThatIsNotPhysicalIsRefusedByDesign() throws Exception {
+        List<Object[]> rows = heatCard();
+        rows.set(18, row("excess volume A0", "alpha + beta", -400.0));
+        Object[][] card = range(rows.toArray(new Object[0][]));
+        IllegalArgumentException batch = assertThrows(IllegalArgumentException.class,
+                () -> addIn.batchTotals(card, range(row(1.0, 1.0)), "mol", one(300.0), "volume", "mL", Any.VOID,
+                        Any.VOID));
+        assertEquals("Problem.NON_PHYSICAL", Catalogue.entryOf(batch.getMessage()), "the batch itself is refused");
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> addIn.adjustBatch(card,
+                range(row(1.0, 1.0)), "mol", range(row(0.05, 0.95)), "mole fraction", 300.0, "make up", 10.0, "mL",
+                Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+        assertEquals("BlendProblem.LIMIT_UNREACHABLE", Catalogue.entryOf(e.getMessage()), e.getMessage());
+    }
 }

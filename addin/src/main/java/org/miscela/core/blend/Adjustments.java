@@ -4,6 +4,8 @@ import java.util.Arrays;
 import java.util.Comparator;
 import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.exception.NoBracketingException;
+import org.apache.commons.math3.exception.TooManyEvaluationsException;
 import org.miscela.core.Card;
 import org.miscela.core.Extrapolation;
 
@@ -161,8 +163,12 @@ public final class Adjustments {
         double wanted = limit.base();
         UnivariateFunction excess = total -> limit.measureOf(card, closest(n, goal, total), kelvin) - wanted;
         double lo = Checks.sum(n);
-        if (excess.value(lo) >= 0.0) {
+        double atBatch = excess.value(lo);
+        if (atBatch >= 0.0) {
             return lo;
+        }
+        if (Double.isNaN(atBatch)) {
+            throw unreachable(limit, fill);
         }
         double hi = Double.isNaN(exactTotal) || fill ? 2.0 * lo : exactTotal;
         if (!Double.isNaN(exactTotal) && fill) {
@@ -172,13 +178,22 @@ public final class Adjustments {
         double value = excess.value(hi);
         while (!(value >= 0.0)) {
             if (Double.isNaN(value) || ++doublings > MAX_DOUBLINGS) {
-                throw BlendProblem.LIMIT_UNREACHABLE.raise(fill ? "final quantity" : "largest final quantity",
-                        Show.number(limit.value()), limit.unit().symbol());
+                throw unreachable(limit, fill);
             }
             lo = hi;
             hi *= 2.0;
             value = excess.value(hi);
         }
-        return new BrentSolver(ACCURACY, ACCURACY * hi).solve(1000, excess, lo, hi);
+        try {
+            return new BrentSolver(ACCURACY, ACCURACY * hi).solve(1000, excess, lo, hi);
+        } catch (NoBracketingException | TooManyEvaluationsException e) {
+            // the measure is NaN (not physical) somewhere between the ends, where the solver looked
+            throw unreachable(limit, fill);
+        }
+    }
+
+    private static BlendException unreachable(Quantity limit, boolean fill) {
+        return BlendProblem.LIMIT_UNREACHABLE.raise(fill ? "final quantity" : "largest final quantity",
+                Show.number(limit.value()), limit.unit().symbol());
     }
 }
