@@ -342,6 +342,45 @@ final class ExampleWorkbooks {
         return String.valueOf((char) ('A' + c));
     }
 
+    // --- labelled rows of the blending examples: label in A, value in B, unit in C
+
+    /** A section title over A..C. */
+    static void section(XSpreadsheet s, int row, String title) throws Exception {
+        text(s, 0, row, title);
+        head(s, "A" + (row + 1) + ":C" + (row + 1));
+    }
+
+    /** An input the reader may change: a value in the input colour. */
+    static void input(Formats formats, XSpreadsheet s, int row, String label, double value, String unit,
+            String format) throws Exception {
+        text(s, 0, row, label);
+        s.getCellByPosition(1, row).setValue(value);
+        if (!unit.isEmpty()) {
+            text(s, 2, row, unit);
+        }
+        band(s, "B" + (row + 1), INPUT_COLOUR);
+        prop(s, "B" + (row + 1), "NumberFormat", formats.key(format));
+    }
+
+    /** A computed value, right-aligned (a formula may return text). */
+    static void result(Formats formats, XSpreadsheet s, int row, String label, String formula, String unit,
+            String format) throws Exception {
+        text(s, 0, row, label);
+        s.getCellByPosition(1, row).setFormula(formula);
+        if (!unit.isEmpty()) {
+            text(s, 2, row, unit);
+        }
+        prop(s, "B" + (row + 1), "NumberFormat", formats.key(format));
+        prop(s, "B" + (row + 1), "HoriJustify", com.sun.star.table.CellHoriJustify.RIGHT);
+    }
+
+    /** The sum of a two-component row B:C in D, with its unit in E. */
+    static void total(Formats formats, XSpreadsheet s, int row, String unit, String format) throws Exception {
+        s.getCellByPosition(3, row).setFormula("=SUM(B" + (row + 1) + ":C" + (row + 1) + ")");
+        prop(s, "D" + (row + 1), "NumberFormat", formats.key(format));
+        text(s, 4, row, unit);
+    }
+
     /** Number format keys by format code, added to the document when missing. */
     static final class Formats {
         private final XNumberFormats formats;

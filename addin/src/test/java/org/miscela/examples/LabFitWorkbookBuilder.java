@@ -4,6 +4,7 @@ import static org.miscela.examples.ExampleWorkbooks.INPUT_COLOUR;
 import static org.miscela.examples.ExampleWorkbooks.INVENTED_COLOUR;
 import static org.miscela.examples.ExampleWorkbooks.REFERENCE_COLOUR;
 import static org.miscela.examples.ExampleWorkbooks.array;
+import static org.miscela.examples.ExampleWorkbooks.section;
 import static org.miscela.examples.ExampleWorkbooks.band;
 import static org.miscela.examples.ExampleWorkbooks.block;
 import static org.miscela.examples.ExampleWorkbooks.bold;
@@ -665,10 +666,6 @@ public final class LabFitWorkbookBuilder {
 
     // --- small helpers
 
-    private static void section(XSpreadsheet s, int row, String title) throws Exception {
-        text(s, 0, row, title);
-        head(s, "A" + (row + 1) + ":C" + (row + 1));
-    }
 
     private static void result(XSpreadsheet s, int row, String label, String formula, String unit, String format)
             throws Exception {

@@ -4,6 +4,10 @@ import static org.miscela.examples.ExampleWorkbooks.CAUTION_COLOUR;
 import static org.miscela.examples.ExampleWorkbooks.INPUT_COLOUR;
 import static org.miscela.examples.ExampleWorkbooks.INVENTED_COLOUR;
 import static org.miscela.examples.ExampleWorkbooks.array;
+import static org.miscela.examples.ExampleWorkbooks.input;
+import static org.miscela.examples.ExampleWorkbooks.result;
+import static org.miscela.examples.ExampleWorkbooks.section;
+import static org.miscela.examples.ExampleWorkbooks.total;
 import static org.miscela.examples.ExampleWorkbooks.band;
 import static org.miscela.examples.ExampleWorkbooks.block;
 import static org.miscela.examples.ExampleWorkbooks.bold;
@@ -149,53 +153,53 @@ public final class PlantWorkbookBuilder {
             s.getCellByPosition(1 + k, RECORD_ROW).setValue(RECORD_KG[k]);
         }
         band(s, "B" + (RECORD_ROW + 1) + ":C" + (RECORD_ROW + 1), INPUT_COLOUR);
-        total(s, RECORD_ROW, "kg", "#,##0.0");
+        total(formats, s, RECORD_ROW, "kg", "#,##0.0");
         prop(s, "B" + (RECORD_ROW + 1) + ":C" + (RECORD_ROW + 1), "NumberFormat", formats.key("#,##0.0"));
-        input(s, TANK_T_ROW, "Temperature of the batch in the tank", TANK_T, "°C", "0.0");
-        input(s, BRIM_ROW, "Tank capacity to the brim (invented)", BRIM_L, "L", "#,##0");
-        input(s, WORKING_ROW, "Working volume: the fill limit of the site's procedure (invented)", WORKING_L, "L",
+        input(formats, s, TANK_T_ROW, "Temperature of the batch in the tank", TANK_T, "°C", "0.0");
+        input(formats, s, BRIM_ROW, "Tank capacity to the brim (invented)", BRIM_L, "L", "#,##0");
+        input(formats, s, WORKING_ROW, "Working volume: the fill limit of the site's procedure (invented)", WORKING_L, "L",
                 "#,##0");
-        input(s, BASIS_T_ROW, "Temperature strengths are stated at", 20.0, "°C", "0.0");
-        result(s, RECORD_STRENGTH_ROW, "Strength from the batch record (MIX.CONVERT)",
+        input(formats, s, BASIS_T_ROW, "Temperature strengths are stated at", 20.0, "°C", "0.0");
+        result(formats, s, RECORD_STRENGTH_ROW, "Strength from the batch record (MIX.CONVERT)",
                 "=MIX.CONVERT(card;$B$" + (RECORD_ROW + 1) + "/$D$" + (RECORD_ROW + 1) + ";\"mass fraction\";\"%vol\";"
                         + b(BASIS_T_ROW) + ")", "%vol", "0.00");
-        result(s, 13, "Card check (MIX.CHECK)", "=MIX.CHECK(card)", "", "@");
+        result(formats, s, 13, "Card check (MIX.CHECK)", "=MIX.CHECK(card)", "", "@");
 
         // the lab check
         section(s, 15, "Lab check: densitometer reading of a sample (invented)");
-        input(s, DENSITY_ROW, "Density measured", DENSITY, "kg/m³", "0.00");
-        input(s, SAMPLE_T_ROW, "Temperature of the sample in the densitometer", SAMPLE_T, "°C", "0.0");
+        input(formats, s, DENSITY_ROW, "Density measured", DENSITY, "kg/m³", "0.00");
+        input(formats, s, SAMPLE_T_ROW, "Temperature of the sample in the densitometer", SAMPLE_T, "°C", "0.0");
         band(s, "B" + (DENSITY_ROW + 1) + ":B" + (SAMPLE_T_ROW + 1), INVENTED_COLOUR);
         String reading = "card;" + b(DENSITY_ROW) + ";" + b(SAMPLE_T_ROW) + ";1;";
-        result(s, LAB_STRENGTH_ROW, "Strength from the density (MIX.FROMDENSITY)",
+        result(formats, s, LAB_STRENGTH_ROW, "Strength from the density (MIX.FROMDENSITY)",
                 "=MIX.FROMDENSITY(" + reading + "\"%vol\";" + b(BASIS_T_ROW) + ")", "%vol", "0.00");
-        result(s, LAB_W_ROW, "Ethanol mass fraction from the density (MIX.FROMDENSITY)",
+        result(formats, s, LAB_W_ROW, "Ethanol mass fraction from the density (MIX.FROMDENSITY)",
                 "=MIX.FROMDENSITY(" + reading + "\"mass fraction\")", "kg/kg", "0.0000");
-        result(s, 20, "Lab minus batch record", "=" + b(LAB_STRENGTH_ROW) + "-" + b(RECORD_STRENGTH_ROW), "%vol",
+        result(formats, s, 20, "Lab minus batch record", "=" + b(LAB_STRENGTH_ROW) + "-" + b(RECORD_STRENGTH_ROW), "%vol",
                 "+0.00;-0.00;0.00");
         text(s, 0, LAB_AMOUNTS_ROW, "In the tank: the recorded total at the lab's strength");
         s.getCellByPosition(1, LAB_AMOUNTS_ROW).setFormula("=$D$" + (RECORD_ROW + 1) + "*" + b(LAB_W_ROW));
         s.getCellByPosition(2, LAB_AMOUNTS_ROW).setFormula("=$D$" + (RECORD_ROW + 1) + "*(1-" + b(LAB_W_ROW) + ")");
         prop(s, "B" + (LAB_AMOUNTS_ROW + 1) + ":C" + (LAB_AMOUNTS_ROW + 1), "NumberFormat", formats.key("#,##0.0"));
-        total(s, LAB_AMOUNTS_ROW, "kg", "#,##0.0");
+        total(formats, s, LAB_AMOUNTS_ROW, "kg", "#,##0.0");
         String amounts = pair(LAB_AMOUNTS_ROW) + ";\"kg\"";
         String tankT = b(TANK_T_ROW);
-        result(s, VOLUME_NOW_ROW, "Volume in the tank now, at its temperature (MIX.BATCH)",
+        result(formats, s, VOLUME_NOW_ROW, "Volume in the tank now, at its temperature (MIX.BATCH)",
                 "=MIX.BATCH(card;" + amounts + ";" + tankT + ")", "L", "#,##0");
-        result(s, 23, "Point check in the tank (MIX.CHECKPOINT)",
+        result(formats, s, 23, "Point check in the tank (MIX.CHECKPOINT)",
                 "=MIX.CHECKPOINT(card;MIX.FROMDENSITY(" + reading + "\"mole fraction\");" + tankT + ")", "", "@");
 
         // the adjustment
         tableHead(s, 25, "Adjust to the target strength (MIX.ADJUST)");
-        input(s, TARGET_ROW, "Target strength", TARGET, "%vol", "0.0");
-        result(s, TARGET_W_ROW, "The target as an ethanol mass fraction (MIX.CONVERT)",
+        input(formats, s, TARGET_ROW, "Target strength", TARGET, "%vol", "0.0");
+        result(formats, s, TARGET_W_ROW, "The target as an ethanol mass fraction (MIX.CONVERT)",
                 "=MIX.CONVERT(card;" + b(TARGET_ROW) + ";\"%vol\";\"mass fraction\";" + b(BASIS_T_ROW) + ")", "kg/kg",
                 "0.0000");
         String adjust = "=MIX.ADJUST(card;" + amounts + ";" + b(TARGET_W_ROW) + ";\"mass fraction\";" + tankT;
         pairRow(s, LEAST_ROW, "Least additions that reach the target", adjust + ")", "kg", "#,##0.0");
-        result(s, LEAST_VOLUME_ROW, "Volume after them, at the tank's temperature",
+        result(formats, s, LEAST_VOLUME_ROW, "Volume after them, at the tank's temperature",
                 adjust + ";;;;\"volume\";\"L\")", "L", "#,##0");
-        result(s, ROOM_ROW, "Room left below the working volume",
+        result(formats, s, ROOM_ROW, "Room left below the working volume",
                 "=" + b(WORKING_ROW) + "-" + b(LEAST_VOLUME_ROW), "L", "#,##0;-#,##0");
         s.getCellByPosition(0, ROOM_ROW + 1).setFormula("=IF(" + b(ROOM_ROW) + ">=0;\"fits within the working "
                 + "volume\";\"EXCEEDS the working volume by \"&TEXT(-" + b(ROOM_ROW) + ";\"#,##0\")&\" L: do not "
@@ -205,9 +209,9 @@ public final class PlantWorkbookBuilder {
         prop(s, "A" + (ROOM_ROW + 2), "HoriJustify", CellHoriJustify.RIGHT);
         String within = adjust + ";\"within\";" + b(WORKING_ROW) + ";\"L\"";
         pairRow(s, WITHIN_ROW, "Additions within the working volume (\"within\")", within + ")", "kg", "#,##0.0");
-        result(s, WITHIN_VOLUME_ROW, "Volume after them, at the tank's temperature",
+        result(formats, s, WITHIN_VOLUME_ROW, "Volume after them, at the tank's temperature",
                 within + ";\"volume\";\"L\")", "L", "#,##0");
-        result(s, WITHIN_STRENGTH_ROW, "Strength they reach (MIX.CONVERT)",
+        result(formats, s, WITHIN_STRENGTH_ROW, "Strength they reach (MIX.CONVERT)",
                 "=MIX.CONVERT(card;($B$" + (LAB_AMOUNTS_ROW + 1) + "+$B$" + (WITHIN_ROW + 1) + ")/($D$"
                         + (LAB_AMOUNTS_ROW + 1) + "+$D$" + (WITHIN_ROW + 1) + ");\"mass fraction\";\"%vol\";"
                         + b(BASIS_T_ROW) + ")", "%vol", "0.00");
@@ -218,11 +222,11 @@ public final class PlantWorkbookBuilder {
         prop(s, summary, "IsTextWrapped", Boolean.TRUE);
         prop(s, summary, "VertJustify", com.sun.star.table.CellVertJustify2.TOP);
         prop(s, "A" + (SUMMARY_ROW + 2), "CharPosture", com.sun.star.awt.FontSlant.ITALIC);
-        result(s, KEEP_ROW, "Part of the batch that can stay, so that the target fits",
+        result(formats, s, KEEP_ROW, "Part of the batch that can stay, so that the target fits",
                 "=MIN(1;" + b(WORKING_ROW) + "/" + b(LEAST_VOLUME_ROW) + ")", "", "0.0%");
-        result(s, TRANSFER_ROW, "Transfer out first (to another tank)", "=(1-" + b(KEEP_ROW) + ")*$D$"
+        result(formats, s, TRANSFER_ROW, "Transfer out first (to another tank)", "=(1-" + b(KEEP_ROW) + ")*$D$"
                 + (LAB_AMOUNTS_ROW + 1), "kg", "#,##0");
-        result(s, TRANSFER_ROW + 1, "… which is, at the tank's temperature",
+        result(formats, s, TRANSFER_ROW + 1, "… which is, at the tank's temperature",
                 "=(1-" + b(KEEP_ROW) + ")*" + b(VOLUME_NOW_ROW), "L", "#,##0");
         text(s, 0, KEPT_ROW, "What stays in T-3");
         for (int k = 0; k < 2; k++) {
@@ -230,11 +234,11 @@ public final class PlantWorkbookBuilder {
             s.getCellByPosition(1 + k, KEPT_ROW).setFormula("=" + b(KEEP_ROW) + "*" + c + (LAB_AMOUNTS_ROW + 1));
         }
         prop(s, "B" + (KEPT_ROW + 1) + ":C" + (KEPT_ROW + 1), "NumberFormat", formats.key("#,##0.0"));
-        total(s, KEPT_ROW, "kg", "#,##0.0");
+        total(formats, s, KEPT_ROW, "kg", "#,##0.0");
         String keptAdjust = "=MIX.ADJUST(card;" + pair(KEPT_ROW) + ";\"kg\";" + b(TARGET_W_ROW) + ";\"mass fraction\";"
                 + tankT;
         pairRow(s, KEPT_ADD_ROW, "Least additions to what stays (MIX.ADJUST)", keptAdjust + ")", "kg", "#,##0.0");
-        result(s, KEPT_VOLUME_ROW, "Volume after them, at the tank's temperature", keptAdjust
+        result(formats, s, KEPT_VOLUME_ROW, "Volume after them, at the tank's temperature", keptAdjust
                 + ";;;;\"volume\";\"L\")", "L", "#,##0");
 
         writeTopUp(s, amounts, tankT);
@@ -303,10 +307,6 @@ public final class PlantWorkbookBuilder {
 
     // --- small helpers
 
-    private static void section(XSpreadsheet s, int row, String title) throws Exception {
-        text(s, 0, row, title);
-        head(s, "A" + (row + 1) + ":C" + (row + 1));
-    }
 
     /** A section head with the per-component column names over B..D. */
     private static void tableHead(XSpreadsheet s, int row, String title) throws Exception {
@@ -318,27 +318,7 @@ public final class PlantWorkbookBuilder {
         prop(s, "B" + (row + 1) + ":D" + (row + 1), "HoriJustify", CellHoriJustify.RIGHT);
     }
 
-    private static void input(XSpreadsheet s, int row, String label, double value, String unit, String format)
-            throws Exception {
-        text(s, 0, row, label);
-        s.getCellByPosition(1, row).setValue(value);
-        if (!unit.isEmpty()) {
-            text(s, 2, row, unit);
-        }
-        band(s, "B" + (row + 1), INPUT_COLOUR);
-        prop(s, "B" + (row + 1), "NumberFormat", formats.key(format));
-    }
 
-    private static void result(XSpreadsheet s, int row, String label, String formula, String unit, String format)
-            throws Exception {
-        text(s, 0, row, label);
-        s.getCellByPosition(1, row).setFormula(formula);
-        if (!unit.isEmpty()) {
-            text(s, 2, row, unit);
-        }
-        prop(s, "B" + (row + 1), "NumberFormat", formats.key(format));
-        prop(s, "B" + (row + 1), "HoriJustify", CellHoriJustify.RIGHT);
-    }
 
     /** One value per component: an array formula over B:C and its total in D. */
     private static void pairRow(XSpreadsheet s, int row, String label, String formula, String unit, String format)
@@ -346,12 +326,7 @@ public final class PlantWorkbookBuilder {
         text(s, 0, row, label);
         array(s, "B" + (row + 1) + ":C" + (row + 1), formula);
         prop(s, "B" + (row + 1) + ":C" + (row + 1), "NumberFormat", formats.key(format));
-        total(s, row, unit, format);
+        total(formats, s, row, unit, format);
     }
 
-    private static void total(XSpreadsheet s, int row, String unit, String format) throws Exception {
-        s.getCellByPosition(3, row).setFormula("=SUM(B" + (row + 1) + ":C" + (row + 1) + ")");
-        prop(s, "D" + (row + 1), "NumberFormat", formats.key(format));
-        text(s, 4, row, unit);
-    }
 }

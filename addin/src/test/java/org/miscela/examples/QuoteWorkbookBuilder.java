@@ -4,6 +4,10 @@ import static org.miscela.examples.ExampleWorkbooks.CAUTION_COLOUR;
 import static org.miscela.examples.ExampleWorkbooks.INPUT_COLOUR;
 import static org.miscela.examples.ExampleWorkbooks.INVENTED_COLOUR;
 import static org.miscela.examples.ExampleWorkbooks.array;
+import static org.miscela.examples.ExampleWorkbooks.input;
+import static org.miscela.examples.ExampleWorkbooks.result;
+import static org.miscela.examples.ExampleWorkbooks.section;
+import static org.miscela.examples.ExampleWorkbooks.total;
 import static org.miscela.examples.ExampleWorkbooks.band;
 import static org.miscela.examples.ExampleWorkbooks.block;
 import static org.miscela.examples.ExampleWorkbooks.bold;
@@ -147,31 +151,31 @@ public final class QuoteWorkbookBuilder {
         text(s, 0, 7, "Customer");
         text(s, 1, 7, "Calder Lane Liqueurs (invented)");
         merge(s, "B8:D8");
-        input(s, VOLUME_ROW, "Volume to deliver (at the delivery temperature)", VOLUME, "L", "#,##0");
-        input(s, STRENGTH_ROW, "Strength ordered", STRENGTH, "%vol", "0.0");
-        input(s, BASIS_T_ROW, "Temperature the strength is stated at", BASIS_T, "°C",
+        input(formats, s, VOLUME_ROW, "Volume to deliver (at the delivery temperature)", VOLUME, "L", "#,##0");
+        input(formats, s, STRENGTH_ROW, "Strength ordered", STRENGTH, "%vol", "0.0");
+        input(formats, s, BASIS_T_ROW, "Temperature the strength is stated at", BASIS_T, "°C",
                 "0.0");
-        input(s, DELIVERY_T_ROW, "Temperature of the blend at delivery", DELIVERY_T, "°C", "0.0");
-        input(s, REFERENCE_T_ROW, "Reference temperature of the quote", REFERENCE_T, "°C", "0.0");
-        result(s, CHECK_ROW, "Card check (MIX.CHECK)", "=MIX.CHECK(card)", "", "@");
-        result(s, CHECK_ROW + 1, "Point check at delivery (MIX.CHECKPOINT)", "=MIX.CHECKPOINT(card;"
+        input(formats, s, DELIVERY_T_ROW, "Temperature of the blend at delivery", DELIVERY_T, "°C", "0.0");
+        input(formats, s, REFERENCE_T_ROW, "Reference temperature of the quote", REFERENCE_T, "°C", "0.0");
+        result(formats, s, CHECK_ROW, "Card check (MIX.CHECK)", "=MIX.CHECK(card)", "", "@");
+        result(formats, s, CHECK_ROW + 1, "Point check at delivery (MIX.CHECKPOINT)", "=MIX.CHECKPOINT(card;"
                 + convertRange(MOLE_FRACTION_ROW) + ";" + b(DELIVERY_T_ROW) + ")", "", "@");
 
         // temperature correction
         section(s, 16, "The delivered volume at other temperatures (MIX.VOLUMEFACTOR)");
         String strength = b(STRENGTH_ROW) + ";\"%vol\"";
-        result(s, FACTOR_ROW, "Volume factor, delivery → reference temperature",
+        result(formats, s, FACTOR_ROW, "Volume factor, delivery → reference temperature",
                 "=MIX.VOLUMEFACTOR(card;" + strength + ";" + b(DELIVERY_T_ROW) + ";" + b(REFERENCE_T_ROW) + ";;"
                         + b(BASIS_T_ROW) + ")", "", "0.00000");
-        result(s, REFERENCE_VOLUME_ROW, "Volume at the reference temperature (quoted)",
+        result(formats, s, REFERENCE_VOLUME_ROW, "Volume at the reference temperature (quoted)",
                 "=" + b(VOLUME_ROW) + "*" + b(FACTOR_ROW), "L", "#,##0.0");
-        result(s, DELIVERY_DENSITY_ROW, "Density at the delivery temperature",
+        result(formats, s, DELIVERY_DENSITY_ROW, "Density at the delivery temperature",
                 "=MIX.VOLUMEFACTOR(card;" + strength + ";" + b(DELIVERY_T_ROW) + ";" + b(REFERENCE_T_ROW)
                         + ";\"density\";" + b(BASIS_T_ROW) + ")", "kg/m³", "0.00");
-        result(s, REFERENCE_DENSITY_ROW, "Density at the reference temperature",
+        result(formats, s, REFERENCE_DENSITY_ROW, "Density at the reference temperature",
                 "=MIX.VOLUMEFACTOR(card;" + strength + ";" + b(DELIVERY_T_ROW) + ";" + b(REFERENCE_T_ROW)
                         + ";\"reference density\";" + b(BASIS_T_ROW) + ")", "kg/m³", "0.00");
-        result(s, BASIS_VOLUME_ROW, "Volume at the strength's temperature (for MIX.RECIPE)",
+        result(formats, s, BASIS_VOLUME_ROW, "Volume at the strength's temperature (for MIX.RECIPE)",
                 "=" + b(VOLUME_ROW) + "*MIX.VOLUMEFACTOR(card;" + strength + ";" + b(DELIVERY_T_ROW) + ";"
                         + b(BASIS_T_ROW) + ")", "L", "#,##0.0");
 
@@ -203,7 +207,7 @@ public final class QuoteWorkbookBuilder {
             s.getCellByPosition(1 + k, COST_ROW).setFormula("=" + c + (MASS_ROW + 1) + "*" + c + (PRICE_ROW + 1));
         }
         prop(s, "B" + (COST_ROW + 1) + ":C" + (COST_ROW + 1), "NumberFormat", formats.key("#,##0.00"));
-        total(s, COST_ROW, "€", "#,##0.00");
+        total(formats, s, COST_ROW, "€", "#,##0.00");
         tableRow(s, DRAW_ROW, "Volume to draw, at the tank's temperature (MIX.RECIPE)",
                 recipe + ";$B$" + (TANK_T_ROW + 1) + ":$C$" + (TANK_T_ROW + 1) + ";\"L\")", true, "L", "#,##0.0");
         tableRow(s, PURE_ROW, "Unmixed volume at the strength's temperature (MIX.RECIPE)",
@@ -212,33 +216,33 @@ public final class QuoteWorkbookBuilder {
         // contraction
         section(s, 31, "Contraction on mixing (MIX.BATCH)");
         String masses = "$B$" + (MASS_ROW + 1) + ":$C$" + (MASS_ROW + 1) + ";\"kg\"";
-        result(s, BATCH_VOLUME_ROW, "Blend volume at the strength's temperature",
+        result(formats, s, BATCH_VOLUME_ROW, "Blend volume at the strength's temperature",
                 "=MIX.BATCH(card;" + masses + ";" + b(BASIS_T_ROW) + ")", "L", "#,##0.0");
-        result(s, PURE_VOLUME_ROW, "The same liquids before mixing, at that temperature",
+        result(formats, s, PURE_VOLUME_ROW, "The same liquids before mixing, at that temperature",
                 "=MIX.BATCH(card;" + masses + ";" + b(BASIS_T_ROW) + ";\"pure volume\")", "L", "#,##0.0");
-        result(s, CONTRACTION_ROW, "Contraction (MIX.BATCH \"contraction\")",
+        result(formats, s, CONTRACTION_ROW, "Contraction (MIX.BATCH \"contraction\")",
                 "=MIX.BATCH(card;" + masses + ";" + b(BASIS_T_ROW) + ";\"contraction\")", "L", "#,##0.0");
-        result(s, CONTRACTION_PERCENT_ROW, "Contraction (MIX.BATCH \"contraction %\")",
+        result(formats, s, CONTRACTION_PERCENT_ROW, "Contraction (MIX.BATCH \"contraction %\")",
                 "=MIX.BATCH(card;" + masses + ";" + b(BASIS_T_ROW) + ";\"contraction %\")", "%", "0.00");
-        result(s, DELIVERY_CHECK_ROW, "Check: blend volume at the delivery temperature",
+        result(formats, s, DELIVERY_CHECK_ROW, "Check: blend volume at the delivery temperature",
                 "=MIX.BATCH(card;" + masses + ";" + b(DELIVERY_T_ROW) + ")", "L", "#,##0.0");
 
         // price
         section(s, 38, "Price");
-        result(s, MATERIALS_COST_ROW, "Raw materials", "=D" + (COST_ROW + 1), "€", "#,##0.00");
-        input(s, CHARGE_RATE_ROW, "Blending and delivery charge (invented)", CHARGE_RATE, "€/L",
+        result(formats, s, MATERIALS_COST_ROW, "Raw materials", "=D" + (COST_ROW + 1), "€", "#,##0.00");
+        input(formats, s, CHARGE_RATE_ROW, "Blending and delivery charge (invented)", CHARGE_RATE, "€/L",
                 "0.000");
-        input(s, MARGIN_ROW, "Margin (invented)", MARGIN, "", "0%");
+        input(formats, s, MARGIN_ROW, "Margin (invented)", MARGIN, "", "0%");
         band(s, "B" + (CHARGE_RATE_ROW + 1) + ":B" + (MARGIN_ROW + 1), INVENTED_COLOUR);
-        result(s, 42, "Blending and delivery charge", "=" + b(CHARGE_RATE_ROW) + "*" + b(VOLUME_ROW), "€",
+        result(formats, s, 42, "Blending and delivery charge", "=" + b(CHARGE_RATE_ROW) + "*" + b(VOLUME_ROW), "€",
                 "#,##0.00");
-        result(s, 43, "Cost before margin", "=" + b(MATERIALS_COST_ROW) + "+B43", "€", "#,##0.00");
-        result(s, QUOTE_ROW, "Quoted price, before duty and taxes", "=B44*(1+" + b(MARGIN_ROW) + ")", "€",
+        result(formats, s, 43, "Cost before margin", "=" + b(MATERIALS_COST_ROW) + "+B43", "€", "#,##0.00");
+        result(formats, s, QUOTE_ROW, "Quoted price, before duty and taxes", "=B44*(1+" + b(MARGIN_ROW) + ")", "€",
                 "#,##0.00");
         bold(s, "A" + (QUOTE_ROW + 1) + ":C" + (QUOTE_ROW + 1), 11);
-        result(s, QUOTE_ROW + 1, "Per litre delivered (at the delivery temperature)",
+        result(formats, s, QUOTE_ROW + 1, "Per litre delivered (at the delivery temperature)",
                 "=" + b(QUOTE_ROW) + "/" + b(VOLUME_ROW), "€/L", "0.0000");
-        result(s, QUOTE_ROW + 2, "Per litre at the reference temperature",
+        result(formats, s, QUOTE_ROW + 2, "Per litre at the reference temperature",
                 "=" + b(QUOTE_ROW) + "/" + b(REFERENCE_VOLUME_ROW), "€/L", "0.0000");
         fitted(s, "A" + (QUOTE_ROW + 4) + ":E" + (QUOTE_ROW + 4), QUOTE_ROW + 3, "Duty, taxes and freight are not "
                 + "included; they follow the rules where the blend is made, moved and sold. The invented prices are "
@@ -331,32 +335,8 @@ public final class QuoteWorkbookBuilder {
 
     // --- small helpers
 
-    private static void section(XSpreadsheet s, int row, String title) throws Exception {
-        text(s, 0, row, title);
-        head(s, "A" + (row + 1) + ":C" + (row + 1));
-    }
 
-    private static void input(XSpreadsheet s, int row, String label, double value, String unit, String format)
-            throws Exception {
-        text(s, 0, row, label);
-        s.getCellByPosition(1, row).setValue(value);
-        if (!unit.isEmpty()) {
-            text(s, 2, row, unit);
-        }
-        band(s, "B" + (row + 1), INPUT_COLOUR);
-        prop(s, "B" + (row + 1), "NumberFormat", formats.key(format));
-    }
 
-    private static void result(XSpreadsheet s, int row, String label, String formula, String unit, String format)
-            throws Exception {
-        text(s, 0, row, label);
-        s.getCellByPosition(1, row).setFormula(formula);
-        if (!unit.isEmpty()) {
-            text(s, 2, row, unit);
-        }
-        prop(s, "B" + (row + 1), "NumberFormat", formats.key(format));
-        prop(s, "B" + (row + 1), "HoriJustify", CellHoriJustify.RIGHT);
-    }
 
     /** A row of the raw-materials table: an array formula over B:C (one value per component) and its total in D. */
     private static void tableRow(XSpreadsheet s, int row, String label, String formula, boolean total, String unit,
@@ -365,13 +345,8 @@ public final class QuoteWorkbookBuilder {
         array(s, "B" + (row + 1) + ":C" + (row + 1), formula);
         prop(s, "B" + (row + 1) + ":C" + (row + 1), "NumberFormat", formats.key(format));
         if (total) {
-            total(s, row, unit, format);
+            total(formats, s, row, unit, format);
         }
     }
 
-    private static void total(XSpreadsheet s, int row, String unit, String format) throws Exception {
-        s.getCellByPosition(3, row).setFormula("=SUM(B" + (row + 1) + ":C" + (row + 1) + ")");
-        prop(s, "D" + (row + 1), "NumberFormat", formats.key(format));
-        text(s, 4, row, unit);
-    }
 }
