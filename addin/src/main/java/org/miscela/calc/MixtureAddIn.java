@@ -6,6 +6,7 @@ import com.sun.star.lib.uno.helper.WeakBase;
 import org.miscela.calc.meta.FunctionCatalog;
 import org.miscela.core.AmountBasis;
 import org.miscela.core.Card;
+import org.miscela.core.CardCache;
 import org.miscela.core.CardReader;
 import org.miscela.core.FitFunctions;
 import org.miscela.core.FitOutput;
@@ -16,6 +17,7 @@ import org.miscela.core.fit.FitException;
 import org.miscela.core.CardFunctions;
 import org.miscela.core.Extrapolation;
 import org.miscela.core.MiscelaException;
+import org.miscela.core.Problem;
 
 /**
  * The UNO face of the add-in: each method decodes Calc's arguments, calls the core, and encodes the result.
@@ -448,6 +450,25 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             return ex.getMessage();
         }
         throw refused(ex);
+    }
+
+    @Override
+    public Object addInInfo(Object item) throws IllegalArgumentException {
+        try {
+            String what = Arguments.text("item", item, "version").trim().toLowerCase(java.util.Locale.ROOT);
+            switch (what) {
+                case "version":
+                    return FunctionCatalog.VERSION;
+                case "card reads":
+                    return (double) CardCache.shared().parseCount();
+                case "cards kept":
+                    return (double) CardCache.shared().size();
+                default:
+                    throw Problem.UNKNOWN_INFO_ITEM.raise(what, "version, card reads, cards kept");
+            }
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
     }
 
     /** The fit engine's limits on the orders (beyond them the power basis is too ill-conditioned). */

@@ -72,6 +72,7 @@ public enum Problem {
     NO_COVARIANCE("The card gives no 'excess volume covariance' rows for the pair %s, so the uncertainty cannot be propagated (fit the pair with MIX.FITDENSITY or MIX.FITEXCESS and result \"covariance\")."),
     UNKNOWN_QUANTITY("The quantity \"%s\" is not recognised; use one of: %s."),
     UNKNOWN_PROPERTY("The property \"%s\" is not recognised; use one of: %s."),
+    UNKNOWN_INFO_ITEM("The item \"%s\" is not recognised; use one of: %s."),
     ARG_BLANK("The %s is blank."),
     ARG_NOT_NUMBER("The %s must be a number; found %s."),
     ARG_NOT_FINITE("The %s must be a finite number."),

@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.sun.star.lang.IllegalArgumentException;
 import com.sun.star.uno.Any;
 import org.junit.jupiter.api.Test;
+import org.miscela.calc.meta.FunctionCatalog;
 import org.miscela.core.CardFunctions;
 import org.miscela.core.Extrapolation;
 import org.miscela.core.TestCards;
@@ -81,6 +82,25 @@ class MixtureAddInTest {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> addIn.mixtureDensity(CARD, one("abc"), one(20.0), Any.VOID));
         assertTrue(e.getMessage().contains("mole fraction"), e.getMessage());
+    }
+
+    @Test
+    void infoReportsTheBuildVersionAndCountsEachDistinctCardOnce() throws Exception {
+        // the build passes its own version (the pom's) to the tests: MIX.INFO must report that one
+        assertEquals(System.getProperty("miscela.version"), addIn.addInInfo(null));
+        assertEquals(FunctionCatalog.VERSION, addIn.addInInfo(" Version "));
+        Object[][] fresh = TestCards.cells("ethanol-water-oiml.tsv");
+        fresh[1] = new Object[] {"title", "a title no other test uses " + System.nanoTime()};
+        double before = (Double) addIn.addInInfo("card reads");
+        for (int i = 0; i < 50; i++) {
+            addIn.mixtureDensity(fresh, one(0.3), one(20.0), null);
+        }
+        assertEquals(before + 1, (Double) addIn.addInInfo("card reads"), "fifty calls on one new card parse it once");
+        assertTrue((Double) addIn.addInInfo("cards kept") >= 1);
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> addIn.addInInfo("colour"));
+        assertEquals("The item \"colour\" is not recognised; use one of: version, card reads, cards kept.",
+                e.getMessage());
+        assertThrows(IllegalArgumentException.class, () -> addIn.addInInfo(3.0));
     }
 
     @Test

@@ -14,6 +14,8 @@ import org.miscela.core.fit.FitProblem;
 public final class FunctionCatalog {
     /** The UNO service: permanent, written into every saved workbook. */
     public static final String SERVICE = "org.miscela.calc.MixtureFunctions";
+    /** The add-in's version, as MIX.INFO reports it; a test keeps it equal to the build's version. */
+    public static final String VERSION = "0.1.0";
     /** Calc's fixed category names allow no category of our own; "Add-In" is where extension functions belong. */
     static final String CATEGORY = "Add-In";
 
@@ -389,7 +391,15 @@ public final class FunctionCatalog {
                     optional("basisTemperature", "basis temperature", "Optional. The temperature of the basis (left "
                             + "out: the reference temperature)."),
                     BALANCE, EXTRAPOLATE)
-                    .shows("0.99562").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS))));
+                    .shows("0.99562").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
+            new FunctionInfo("addInInfo", "MIX.INFO",
+                    "Facts about the add-in itself: its version (for audit records), or how many cards it has "
+                            + "parsed and holds (each distinct card content is parsed once).",
+                    "—",
+                    "=MIX.INFO(\"version\")",
+                    optional("item", "item", "Optional. \"version\" (left out), \"card reads\" (cards parsed since "
+                            + "the office started) or \"cards kept\" (parsed cards held now)."))
+                    .shows(VERSION).refuses(list(Problem.ARG_NOT_TEXT, Problem.UNKNOWN_INFO_ITEM))));
 
     private FunctionCatalog() {
     }

@@ -1,0 +1,49 @@
+package org.miscela.probe;
+
+import com.sun.star.beans.XPropertySet;
+import com.sun.star.lib.uno.helper.WeakBase;
+import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
+
+/** Functions that do next to nothing (see XBridgeProbe.idl); registered for Calc by the probe's CalcAddIns.xcu. */
+public final class BridgeProbe extends WeakBase implements XBridgeProbe {
+    public static final String SERVICE = "org.miscela.probe.BridgeProbe";
+
+    /** Identity of every thread seen by countThreads; a thread object stays alive only as long as the set holds it. */
+    private static final Set<Thread> THREADS = ConcurrentHashMap.newKeySet();
+
+    @Override
+    public double echoNumber(double value) {
+        return value;
+    }
+
+    @Override
+    public Object echoAny(Object value) {
+        return value;
+    }
+
+    @Override
+    public double echoRange(Object[][] cells, double value) {
+        int touched = 0;
+        for (Object[] row : cells) {
+            for (Object cell : row) {
+                if (cell != null) {
+                    touched++;
+                }
+            }
+        }
+        // the sum keeps the loop from being optimised away; it is zero for any range Calc passes
+        return value + (touched < 0 ? 1 : 0);
+    }
+
+    @Override
+    public double echoWithDocument(XPropertySet document, double value) {
+        return value;
+    }
+
+    @Override
+    public double countThreads(double value) {
+        THREADS.add(Thread.currentThread());
+        return THREADS.size();
+    }
+}
