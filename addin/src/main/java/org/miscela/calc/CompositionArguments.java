@@ -54,13 +54,18 @@ final class CompositionArguments {
                 continue;
             }
             for (int k = 0; k < n; k++) {
-                String name = what + " of " + card.components().get(k).name()
-                        + (lines.length > 1 ? " in line " + (r + 1) : "");
-                row[k] = Arguments.required(name, lines[r][k]);
+                Object v = lines[r][k];
+                // the common case costs no message text; the name is written only for a cell that needs one
+                row[k] = v instanceof Double ? (Double) v : Arguments.required(valueName(card, what, k, r, lines.length), v);
             }
             out[r][0] = Arguments.finite(f.at(card, row.clone(), Arguments.required("temperature", temperatures[r])));
         }
         return lines.length == 1 ? out[0][0] : new Any(Arguments.GRID, out);
+    }
+
+    /** How a message names value k of line r: "composition of water", "… in line 3" for a block. */
+    private static String valueName(Card card, String what, int k, int r, int lines) {
+        return what + " of " + card.components().get(k).name() + (lines > 1 ? " in line " + (r + 1) : "");
     }
 
     /** One composition (or batch) given as a row or column of n cells, or x1 alone for a binary card. */

@@ -12,7 +12,9 @@ import java.util.concurrent.atomic.AtomicLong;
  * most {@code capacity} entries and at most {@code cellBudget} cells kept in the keys, the least recently used entry
  * going first. A key keeps only the card's extent: trailing blank rows and cells, which the reader ignores, are
  * dropped, so a card named as whole columns costs what its filled cells cost. A card larger than the whole budget is
- * parsed on every call and never kept.
+ * parsed on every call and never kept. The entry found last is also kept aside and checked first, in place: a call
+ * with the same card as the one before costs one comparison of its cells and allocates nothing (that entry may
+ * outlive its eviction from the map by one lookup's time, so the bounds hold to within one card).
  */
 public final class CardCache {
     /**
@@ -44,8 +46,18 @@ public final class CardCache {
         return SHARED;
     }
 
+    /**
+     * The entry the last lookup found or made. A sheet's formulas nearly always name the same card, so most calls
+     * end here: the cells are compared with this entry's key in place, without a copy, a hash or the lock.
+     */
+    private volatile Recent recent;
+
     /** The card these cells hold, parsed at most once per distinct content; throws the parse failure otherwise. */
     public Card get(Object[][] cells) {
+        Recent r = recent;
+        if (r != null && r.key.sameContent(cells)) {
+            return r.card();
+        }
         ContentKey key = new ContentKey(cells);
         Object hit;
         // Parsing under the lock keeps "at most once per content" true when threads miss together; a parse is
@@ -66,10 +78,28 @@ public final class CardCache {
                 }
             }
         }
-        if (hit instanceof MiscelaException) {
-            throw (MiscelaException) hit;
+        if (key.cellCount <= cellBudget) {
+            recent = new Recent(key, hit);
         }
-        return (Card) hit;
+        return new Recent(key, hit).card();
+    }
+
+    /** A key with its card or its parse failure. Immutable. */
+    private static final class Recent {
+        final ContentKey key;
+        final Object value;
+
+        Recent(ContentKey key, Object value) {
+            this.key = key;
+            this.value = value;
+        }
+
+        Card card() {
+            if (value instanceof MiscelaException) {
+                throw (MiscelaException) value;
+            }
+            return (Card) value;
+        }
     }
 
     /** Drops least recently used entries until both bounds hold (the newest entry fits the budget alone). */
@@ -135,6 +165,38 @@ public final class CardCache {
                 last--;
             }
             return last;
+        }
+
+        /**
+         * Whether these cells hold this key's content: the same cells as {@link #equals} compares, with every cell
+         * beyond the key's extent blank.
+         */
+        boolean sameContent(Object[][] range) {
+            Object[][] in = range == null ? new Object[0][] : range;
+            if (in.length < cells.length) {
+                return false;
+            }
+            for (int i = 0; i < cells.length; i++) {
+                Object[] row = in[i] == null ? new Object[0] : in[i];
+                Object[] kept = cells[i];
+                if (row.length < kept.length) {
+                    return false;
+                }
+                for (int c = 0; c < kept.length; c++) {
+                    if (!java.util.Objects.equals(kept[c], row[c])) {
+                        return false;
+                    }
+                }
+                if (extent(row) != kept.length) {
+                    return false;
+                }
+            }
+            for (int i = cells.length; i < in.length; i++) {
+                if (extent(in[i]) != 0) {
+                    return false;
+                }
+            }
+            return true;
         }
 
         @Override

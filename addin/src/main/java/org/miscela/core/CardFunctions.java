@@ -308,7 +308,7 @@ public final class CardFunctions {
         if (!(kelvin > 0.0)) {
             throw Problem.BELOW_ABSOLUTE_ZERO.raise(Numbers.show(t), card.units().temperature().symbol());
         }
-        return violations(card, z, kelvin, t).isEmpty();
+        return within(card, z, kelvin);
     }
 
     /**
@@ -371,16 +371,36 @@ public final class CardFunctions {
     /** Checks temperature and composition limits (unless extrapolation is allowed) and the pure densities. */
     static double checkPoint(Card card, double[] x, double t, Extrapolation e) {
         double kelvin = checkTemperature(card, t, e);
-        if (!card.mayExtrapolate(e)) {
-            List<MiscelaException> outside = violations(card, x, kelvin, t);
-            if (!outside.isEmpty()) {
-                throw outside.get(0);
-            }
+        if (!card.mayExtrapolate(e) && !within(card, x, kelvin)) {
+            throw violations(card, x, kelvin, t).get(0);
         }
         for (int k = 0; k < x.length; k++) {
             pureDensityAt(card, k, kelvin, t);
         }
         return kelvin;
+    }
+
+    /**
+     * Whether the point exceeds no validity limit: the same answer as {@code violations(…).isEmpty()}, without
+     * writing the messages (this runs on every call).
+     */
+    static boolean within(Card card, double[] x, double kelvin) {
+        Validity v = card.validity();
+        if (!v.containsTemperature(kelvin)) {
+            return false;
+        }
+        for (int k = 0; k < x.length; k++) {
+            if (!v.containsFraction(k, x[k])) {
+                return false;
+            }
+        }
+        for (Validity.PairLimit p : v.pairLimits()) {
+            boolean present = x[p.first()] > 0.0 && x[p.second()] > 0.0;
+            if (present && !p.containsTemperature(kelvin) || !p.containsRatio(x)) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** Every validity limit the point exceeds, in the order: temperature, components, pairs. */

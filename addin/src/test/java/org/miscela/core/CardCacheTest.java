@@ -183,4 +183,54 @@ class CardCacheTest {
         assertTrue(cache.parseCount() <= DISTINCT,
                 "parsed " + cache.parseCount() + " times for " + DISTINCT + " distinct cards");
     }
+
+    /** The cells widened by blank columns and followed by blank rows, as a card named generously arrives. */
+    private static Object[][] padded(Object[][] cells, int extraColumns, int extraRows) {
+        int width = 0;
+        for (Object[] row : cells) {
+            width = Math.max(width, row.length);
+        }
+        Object[][] out = new Object[cells.length + extraRows][width + extraColumns];
+        for (int r = 0; r < out.length; r++) {
+            java.util.Arrays.fill(out[r], "");
+            if (r < cells.length) {
+                System.arraycopy(cells[r], 0, out[r], 0, cells[r].length);
+            }
+        }
+        return out;
+    }
+
+    @Test
+    void theRecentEntryIsComparedByContentAndIgnoresOnlyBlanks() {
+        CardCache cache = new CardCache(8);
+        Card first = cache.get(card(-4.0));
+        // the same content with blank margins: a hit in place, no parse
+        assertSame(first, cache.get(padded(card(-4.0), 3, 5)));
+        assertEquals(1, cache.parseCount());
+        // a text in what was a blank margin cell is other content (and this one a faulty card)
+        Object[][] noted = padded(card(-4.0), 3, 5);
+        noted[2][noted[2].length - 1] = "a note";
+        assertThrows(MiscelaException.class, () -> cache.get(noted));
+        assertEquals(2, cache.parseCount());
+        // back to the first content: found in the map (not the recent entry), still no new parse
+        assertSame(first, cache.get(card(-4.0)));
+        assertEquals(2, cache.parseCount());
+        // a text in a blank row below the card is other content too
+        Object[][] below = padded(card(-4.0), 0, 2);
+        below[below.length - 1][0] = "stray";
+        assertThrows(MiscelaException.class, () -> cache.get(below));
+        assertEquals(3, cache.parseCount());
+        // a remembered failure is thrown again from the recent entry, without a parse
+        assertThrows(MiscelaException.class, () -> cache.get(below));
+        assertEquals(3, cache.parseCount());
+        // a row cut short loses a value: other content
+        Object[][] cut = card(-4.0);
+        cut[16] = java.util.Arrays.copyOf(cut[16], 2);
+        assertThrows(MiscelaException.class, () -> cache.get(cut));
+        assertEquals(4, cache.parseCount());
+        // a number that only looks equal is not: -0.0 and 0.0 differ in their bits, as in the map's key
+        Card zero = cache.get(card(0.0));
+        assertNotSame(zero, cache.get(card(-0.0)));
+        assertEquals(6, cache.parseCount());
+    }
 }

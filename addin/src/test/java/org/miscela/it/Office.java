@@ -82,9 +82,31 @@ public final class Office implements AutoCloseable {
 
     /** A fresh profile with the extension installed, and an office running on it. */
     public static Office start() throws Exception {
+        return start(new Path[0]);
+    }
+
+    /** A fresh profile with the extension and these other extensions (e.g. the benchmark's probe) installed. */
+    public static Office start(Path... otherExtensions) throws Exception {
+        return start(java.util.Collections.emptyList(), otherExtensions);
+    }
+
+    /**
+     * As {@link #start(Path...)}, with options for the office's JVM written into the profile's Java settings (what
+     * Tools ▸ Options ▸ Advanced ▸ Parameters does), for the benchmark's look at the bridge floor.
+     */
+    public static Office start(List<String> jvmOptions, Path... otherExtensions) throws Exception {
         Path base = freshDirectory();
         // no --suppress-license and stdin from /dev/null: an install that asked anything would fail here
         unopkg(base, "add", base.resolve("miscela.oxt").toString());
+        for (Path other : otherExtensions) {
+            Path copy = base.resolve(other.getFileName().toString());
+            Files.copy(other, copy, StandardCopyOption.REPLACE_EXISTING);
+            handOver(copy);
+            unopkg(base, "add", copy.toString());
+        }
+        if (!jvmOptions.isEmpty()) {
+            javaParameters(base.resolve("profile"), jvmOptions);
+        }
         return launch(base, base.resolve("profile"));
     }
 
@@ -110,6 +132,29 @@ public final class Office implements AutoCloseable {
                 "-env:UserInstallation=" + base.resolve("profile").toUri()));
         cmd.addAll(Arrays.asList(args));
         return run(base, 180, cmd.toArray(new String[0]));
+    }
+
+    /** Puts JVM options into the Java settings unopkg wrote when it registered the Java components. */
+    private static void javaParameters(Path profile, List<String> options) throws IOException, InterruptedException {
+        Path config = profile.resolve("user").resolve("config");
+        Path settings;
+        try (Stream<Path> s = Files.list(config)) {
+            settings = s.filter(p -> p.getFileName().toString().startsWith("javasettings_")).findFirst()
+                    .orElseThrow(() -> new IllegalStateException("no Java settings in " + config));
+        }
+        String xml = new String(Files.readAllBytes(settings), java.nio.charset.StandardCharsets.UTF_8);
+        StringBuilder params = new StringBuilder("<vmParameters xsi:nil=\"false\">");
+        for (String o : options) {
+            params.append("<param>").append(o.replace("&", "&amp;").replace("<", "&lt;")).append("</param>");
+        }
+        params.append("</vmParameters>");
+        String changed = xml.replaceFirst("<vmParameters[^>]*/>|<vmParameters[^>]*>.*?</vmParameters>",
+                java.util.regex.Matcher.quoteReplacement(params.toString()));
+        if (changed.equals(xml)) {
+            throw new IllegalStateException("no vmParameters element in " + settings);
+        }
+        Files.write(settings, changed.getBytes(java.nio.charset.StandardCharsets.UTF_8));
+        handOver(settings);
     }
 
     /** An office on an existing profile (used to reopen after a restart). */
@@ -150,6 +195,12 @@ public final class Office implements AutoCloseable {
             kill(p);
             throw e;
         }
+    }
+
+    /** The office's own process (soffice.bin, which also hosts the office's JVM), among those this class started. */
+    public ProcessHandle officeProcess() {
+        return process.descendants().filter(h -> h.info().command().map(c -> c.endsWith("soffice.bin")).orElse(false))
+                .findFirst().orElseThrow(() -> new IllegalStateException("no soffice.bin among the started processes"));
     }
 
     public XComponentContext context() {

@@ -14,27 +14,27 @@ import com.sun.star.uno.UnoRuntime;
 import com.sun.star.util.XCloseable;
 
 /** Small conveniences over the spreadsheet API for the integration tests. */
-final class Sheets {
+public final class Sheets {
     private Sheets() {
     }
 
-    static XSpreadsheet sheet(XComponent doc, int index) throws Exception {
+    public static XSpreadsheet sheet(XComponent doc, int index) throws Exception {
         XSpreadsheetDocument sd = UnoRuntime.queryInterface(XSpreadsheetDocument.class, doc);
         return UnoRuntime.queryInterface(XSpreadsheet.class,
                 UnoRuntime.queryInterface(XIndexAccess.class, sd.getSheets()).getByIndex(index));
     }
 
-    static XSpreadsheet sheet(XComponent doc, String name) throws Exception {
+    public static XSpreadsheet sheet(XComponent doc, String name) throws Exception {
         XSpreadsheetDocument sd = UnoRuntime.queryInterface(XSpreadsheetDocument.class, doc);
         return UnoRuntime.queryInterface(XSpreadsheet.class, sd.getSheets().getByName(name));
     }
 
-    static XCell cell(XSpreadsheet sheet, int col, int row) throws Exception {
+    public static XCell cell(XSpreadsheet sheet, int col, int row) throws Exception {
         return sheet.getCellByPosition(col, row);
     }
 
     /** Writes a Double as a number, anything else as text. */
-    static void put(XSpreadsheet sheet, int col, int row, Object value) throws Exception {
+    public static void put(XSpreadsheet sheet, int col, int row, Object value) throws Exception {
         XCell c = sheet.getCellByPosition(col, row);
         if (value instanceof Double) {
             c.setValue((Double) value);
@@ -46,12 +46,12 @@ final class Sheets {
         }
     }
 
-    static String text(XCell c) {
+    public static String text(XCell c) {
         return UnoRuntime.queryInterface(XText.class, c).getString();
     }
 
     /** Writes a card's cells at (col, row) and names the range. */
-    static void putCard(XComponent doc, XSpreadsheet sheet, String sheetName, String name, Object[][] cells, int col,
+    public static void putCard(XComponent doc, XSpreadsheet sheet, String sheetName, String name, Object[][] cells, int col,
             int row) throws Exception {
         int width = 0;
         for (int r = 0; r < cells.length; r++) {
@@ -60,14 +60,18 @@ final class Sheets {
             }
             width = Math.max(width, cells[r].length);
         }
+        nameRange(doc, name, "$'" + sheetName + "'.$" + column(col) + "$" + (row + 1) + ":$" + column(col + width - 1)
+                + "$" + (row + cells.length));
+    }
+
+    /** Names a range given by its absolute address (e.g. "$Card.$A$1:$H$40") for the whole document. */
+    public static void nameRange(XComponent doc, String name, String address) throws Exception {
         XPropertySet dp = UnoRuntime.queryInterface(XPropertySet.class, doc);
         XNamedRanges ranges = UnoRuntime.queryInterface(XNamedRanges.class, dp.getPropertyValue("NamedRanges"));
-        String address = "$'" + sheetName + "'.$" + column(col) + "$" + (row + 1) + ":$" + column(col + width - 1) + "$"
-                + (row + cells.length);
         ranges.addNewByName(name, address, new CellAddress((short) 0, 0, 0), 0);
     }
 
-    static String column(int index) {
+    public static String column(int index) {
         StringBuilder b = new StringBuilder();
         int i = index + 1;
         while (i > 0) {
@@ -78,11 +82,11 @@ final class Sheets {
         return b.toString();
     }
 
-    static void recalculate(XComponent doc) {
+    public static void recalculate(XComponent doc) {
         UnoRuntime.queryInterface(XCalculatable.class, doc).calculateAll();
     }
 
-    static void close(XComponent doc) {
+    public static void close(XComponent doc) {
         try {
             UnoRuntime.queryInterface(XCloseable.class, doc).close(true);
         } catch (Exception e) {

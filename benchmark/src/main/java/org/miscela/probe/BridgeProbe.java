@@ -1,6 +1,10 @@
 package org.miscela.probe;
 
 import com.sun.star.beans.XPropertySet;
+import com.sun.star.sheet.XCellRangeAddressable;
+import com.sun.star.table.CellRangeAddress;
+import com.sun.star.table.XCellRange;
+import com.sun.star.uno.UnoRuntime;
 import com.sun.star.lib.uno.helper.WeakBase;
 import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
@@ -39,6 +43,23 @@ public final class BridgeProbe extends WeakBase implements XBridgeProbe {
     @Override
     public double echoWithDocument(XPropertySet document, double value) {
         return value;
+    }
+
+    @Override
+    public Object echoDensityArguments(Object[][] card, Object[][] moleFraction, Object[][] temperature,
+            Object extrapolate) {
+        return temperature[0][0];
+    }
+
+    @Override
+    public double echoCellRange(XCellRange cells, double value) {
+        return value;
+    }
+
+    @Override
+    public double echoCellRangeAddress(XCellRange cells, double value) {
+        CellRangeAddress a = UnoRuntime.queryInterface(XCellRangeAddressable.class, cells).getRangeAddress();
+        return value + (a.EndRow < 0 ? 1 : 0);
     }
 
     @Override
