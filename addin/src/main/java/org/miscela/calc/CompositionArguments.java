@@ -42,25 +42,31 @@ final class CompositionArguments {
     static Object overRows(Card card, String what, Object[][] grid, Object[][] temperature, RowFunction f) {
         Object[][] lines = lines(card, what, grid);
         Object[] temperatures = temperatures(temperature, lines.length);
-        int n = card.componentCount();
-        Object[][] out = new Object[lines.length][1];
-        double[] row = new double[n];
-        for (int r = 0; r < lines.length; r++) {
-            if (Arguments.allBlank(lines[r]) || Arguments.isBlank(temperatures[r])) {
-                if (lines.length == 1) {
-                    throw Problem.ARG_BLANK.raise(Arguments.allBlank(lines[r]) ? what : "temperature");
-                }
-                out[r][0] = "";
-                continue;
-            }
-            for (int k = 0; k < n; k++) {
-                Object v = lines[r][k];
-                // the common case costs no message text; the name is written only for a cell that needs one
-                row[k] = v instanceof Double ? (Double) v : Arguments.required(valueName(card, what, k, r, lines.length), v);
-            }
-            out[r][0] = Arguments.finite(f.at(card, row.clone(), Arguments.required("temperature", temperatures[r])));
+        if (lines.length == 1) {
+            return Arguments.finite(lineAt(card, what, lines, temperatures, 0, f));
         }
-        return lines.length == 1 ? out[0][0] : new Any(Arguments.GRID, out);
+        Object[][] out = new Object[lines.length][1];
+        for (int r = 0; r < lines.length; r++) {
+            boolean blank = Arguments.allBlank(lines[r]) || Arguments.isBlank(temperatures[r]);
+            out[r][0] = blank ? "" : (Object) Arguments.finite(lineAt(card, what, lines, temperatures, r, f));
+        }
+        return new Any(Arguments.GRID, out);
+    }
+
+    /** f at line r, given its own array of values (a blank line is refused: only a block may hold one). */
+    private static double lineAt(Card card, String what, Object[][] lines, Object[] temperatures, int r,
+            RowFunction f) {
+        if (Arguments.allBlank(lines[r]) || Arguments.isBlank(temperatures[r])) {
+            throw Problem.ARG_BLANK.raise(Arguments.allBlank(lines[r]) ? what : "temperature");
+        }
+        int n = card.componentCount();
+        double[] row = new double[n];
+        for (int k = 0; k < n; k++) {
+            Object v = lines[r][k];
+            // the common case costs no message text; the name is written only for a cell that needs one
+            row[k] = v instanceof Double ? (Double) v : Arguments.required(valueName(card, what, k, r, lines.length), v);
+        }
+        return f.at(card, row, Arguments.required("temperature", temperatures[r]));
     }
 
     /** How a message names value k of line r: "composition of water", "… in line 3" for a block. */

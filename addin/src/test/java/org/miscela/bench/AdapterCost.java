@@ -37,6 +37,39 @@ public final class AdapterCost {
         return measure(calls, (card, x, t) -> addIn.partialMolarVolume(card, 1.0, x, t, null));
     }
 
+    /** One array call over a block of {@code rows} compositions: time and bytes per row. */
+    static Cost densityBlock(int rows) throws Exception {
+        MixtureAddIn addIn = new MixtureAddIn();
+        Object[][] card = new BenchmarkCard().cells();
+        Object[][] data = CalcBenchmark.data(rows);
+        com.sun.management.ThreadMXBean threads = (com.sun.management.ThreadMXBean) ManagementFactory.getThreadMXBean();
+        long id = Thread.currentThread().getId();
+        long nanos = 0;
+        long bytes = 0;
+        for (int pass = 0; pass < 4; pass++) {
+            Object[][] x = new Object[rows][];
+            Object[][] t = new Object[rows][];
+            for (int r = 0; r < rows; r++) {
+                x[r] = new Object[] {fresh(data[r][0]), fresh(data[r][1]), fresh(data[r][2])};
+                t[r] = new Object[] {fresh(data[r][3])};
+            }
+            Object[][] c = fresh(card);
+            long b0 = threads.getThreadAllocatedBytes(id);
+            long t0 = System.nanoTime();
+            Object result = addIn.mixtureDensity(c, x, t, null);
+            long t1 = System.nanoTime();
+            long b1 = threads.getThreadAllocatedBytes(id);
+            if (result == null) {
+                throw new IllegalStateException("no result");
+            }
+            if (pass > 0) {
+                nanos += t1 - t0;
+                bytes += b1 - b0;
+            }
+        }
+        return new Cost(nanos / 1e3 / (3.0 * rows), bytes / (3.0 * rows));
+    }
+
     interface Call {
         Object at(Object[][] card, Object[][] x, Object[][] t) throws Exception;
     }
@@ -101,8 +134,10 @@ public final class AdapterCost {
         for (int i = 0; i < 3; i++) {
             Cost d = density(calls);
             Cost p = partialVolume(calls);
+            Cost b = densityBlock(100_000);
             System.out.printf(Locale.ROOT, "density: %.2f µs, %.0f bytes per call; partial volume: %.2f µs, %.0f bytes"
-                    + " per call%n", d.microsPerCall, d.bytesPerCall, p.microsPerCall, p.bytesPerCall);
+                    + " per call; density over a 100,000-row block: %.3f µs, %.0f bytes per row%n", d.microsPerCall,
+                    d.bytesPerCall, p.microsPerCall, p.bytesPerCall, b.microsPerCall, b.bytesPerCall);
         }
     }
 }

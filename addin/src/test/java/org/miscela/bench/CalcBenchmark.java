@@ -51,8 +51,11 @@ public final class CalcBenchmark {
     static final String CARD_NAME = "bench";
     static final String MACRO = "BENCHDENSITY";
 
-    /** How a kind's cells are written: one formula per cell (filled down) or one array formula over the column. */
-    enum Layout { PER_CELL, ARRAY }
+    /**
+     * How a kind's cells are written: one formula per cell (filled down), one array formula over the column, or a
+     * single formula cell (for the probes that split an array call into its halves).
+     */
+    enum Layout { PER_CELL, ARRAY, ONE_CELL }
 
     /** One kind of formula cell the benchmark times. */
     static final class Kind {
@@ -76,6 +79,8 @@ public final class CalcBenchmark {
         final List<Double> seconds = new ArrayList<>();
         long firstGrowthKb;
         final List<Long> growthKb = new ArrayList<>();
+        double firstHeapGrowthMb;
+        final List<Double> heapGrowthMb = new ArrayList<>();
         double[] values;
         int errors;
         /** Calc's error code of the first cell that shows one. */
@@ -94,6 +99,11 @@ public final class CalcBenchmark {
             long[] s = growthKb.stream().mapToLong(Long::longValue).sorted().toArray();
             return s[s.length / 2];
         }
+
+        double medianHeapGrowthMb() {
+            double[] s = heapGrowthMb.stream().mapToDouble(Double::doubleValue).sorted().toArray();
+            return s[s.length / 2];
+        }
     }
 
     /** The result of a whole run. */
@@ -106,6 +116,8 @@ public final class CalcBenchmark {
         double distinctThreads;
         long officeRssStartKb;
         long officeRssEndKb;
+        double heapStartMb;
+        double heapEndMb;
         String officeVersion;
         String addInVersion;
         double worstDensityDifference;
@@ -204,6 +216,12 @@ public final class CalcBenchmark {
                 r -> "MIX.DENSITY(" + CARD_NAME + ";A1:C" + last + ";D1:D" + last + ")"));
         k.add(new Kind("e2", "MIX.PARTIALVOLUME, one array formula over the column", Layout.ARRAY,
                 r -> "MIX.PARTIALVOLUME(" + CARD_NAME + ";1;A1:C" + last + ";D1:D" + last + ")"));
+        k.add(new Kind("e-args", "probe: PROBE.ECHODENSITYBLOCK over the column, e1's arguments and result and no "
+                + "work", Layout.ARRAY, r -> "PROBE.ECHODENSITYBLOCK(" + CARD_NAME + ";A1:C" + last + ";D1:D" + last + ")"));
+        k.add(new Kind("e-in", "probe: PROBE.ECHODENSITYARGS over the whole block in one cell, e1's arguments only",
+                Layout.ONE_CELL, r -> "=PROBE.ECHODENSITYARGS(" + CARD_NAME + ";A1:C" + last + ";D1:D" + last + ")"));
+        k.add(new Kind("e-out", "probe: PROBE.COLUMN over the column, e1's result only", Layout.ARRAY,
+                r -> "PROBE.COLUMN(" + last + ")"));
         return k;
     }
 
@@ -246,28 +264,37 @@ public final class CalcBenchmark {
                 docs.put(k.key, document(office, card, data, k, cells));
                 report.measured.put(k.key, new Measured(k));
             }
+            XComponent heapDoc = office.newSpreadsheet();
+            Sheets.cell(Sheets.sheet(heapDoc, 0), 0, 0).setFormula("=PROBE.HEAP(0)");
+            report.heapStartMb = heap(heapDoc);
             report.officeRssStartKb = rssKb(soffice);
             for (int round = 0; round <= repeats; round++) {
                 for (Kind k : kinds) {
                     Measured m = report.measured.get(k.key);
+                    double heapBefore = heap(heapDoc);
                     long before = rssKb(soffice);
                     long t0 = System.nanoTime();
                     UnoRuntime.queryInterface(XCalculatable.class, docs.get(k.key)).calculateAll();
                     double s = (System.nanoTime() - t0) / 1e9;
                     long growth = rssKb(soffice) - before;
+                    double heapGrowth = heap(heapDoc) - heapBefore;
                     if (round == 0) {
                         m.firstSeconds = s;
                         m.firstGrowthKb = growth;
+                        m.firstHeapGrowthMb = heapGrowth;
                     } else {
                         m.seconds.add(s);
                         m.growthKb.add(growth);
+                        m.heapGrowthMb.add(heapGrowth);
                     }
                 }
             }
             report.officeRssEndKb = rssKb(soffice);
+            report.heapEndMb = heap(heapDoc);
+            Sheets.close(heapDoc);
             for (Kind k : kinds) {
                 Measured m = report.measured.get(k.key);
-                m.values = column(docs.get(k.key), cells);
+                m.values = column(docs.get(k.key), k.layout == Layout.ONE_CELL ? 1 : cells);
                 for (int i = 0; i < m.values.length; i++) {
                     if (Double.isNaN(m.values[i])) {
                         if (m.errors++ == 0) {
@@ -331,7 +358,9 @@ public final class CalcBenchmark {
         UnoRuntime.queryInterface(XNamed.class, sheet).setName("Data");
         UnoRuntime.queryInterface(XCellRangeData.class, sheet.getCellRangeByName("A1:D" + cells)).setDataArray(data);
         XCellRange column = sheet.getCellRangeByName("E1:E" + cells);
-        if (kind.layout == Layout.ARRAY) {
+        if (kind.layout == Layout.ONE_CELL) {
+            sheet.getCellByPosition(4, 0).setFormula(kind.formula.apply(1));
+        } else if (kind.layout == Layout.ARRAY) {
             UnoRuntime.queryInterface(XArrayFormulaRange.class, column).setArrayFormula(kind.formula.apply(1));
         } else {
             sheet.getCellByPosition(4, 0).setFormula(kind.formula.apply(1));
@@ -411,6 +440,12 @@ public final class CalcBenchmark {
         return w;
     }
 
+    /** The office JVM's committed heap in MB, through the probe's cell in its own document. */
+    private static double heap(XComponent heapDoc) throws Exception {
+        Sheets.recalculate(heapDoc);
+        return Sheets.cell(Sheets.sheet(heapDoc, 0), 0, 0).getValue();
+    }
+
     /** Resident memory of a process, in kB, from /proc (Linux). */
     static long rssKb(ProcessHandle p) throws IOException {
         for (String line : Files.readAllLines(Paths.get("/proc", String.valueOf(p.pid()), "status"))) {
@@ -443,8 +478,15 @@ public final class CalcBenchmark {
         } catch (IOException e) {
             // not Linux: the CPU stays unnamed
         }
+        String load = "";
+        try {
+            String[] avg = new String(Files.readAllBytes(Paths.get("/proc/loadavg")), StandardCharsets.UTF_8).split(" ");
+            load = ", load average " + avg[0] + " at the end (other work on the machine slows every kind alike)";
+        } catch (IOException e) {
+            // not Linux: no load figure
+        }
         return cpu + ", " + Runtime.getRuntime().availableProcessors() + " cores available, "
-                + System.getProperty("os.name") + " " + System.getProperty("os.version");
+                + System.getProperty("os.name") + " " + System.getProperty("os.version") + load;
     }
 
     static String table(Report r) {
@@ -464,22 +506,24 @@ public final class CalcBenchmark {
                 .append(" columns, 3 components, temperature-dependent densities and coefficients, ternary term "
                         + "(invented values)\n\n");
         s.append("| kind | formula | median s | µs per cell | × native (a) | × bridge floor (c) | first run s "
-                + "| memory growth, first run MB | memory growth, median run MB | cells with errors |\n");
-        s.append("|---|---|---|---|---|---|---|---|---|---|\n");
+                + "| memory growth, first run MB | memory growth, median run MB | of which JVM heap, first / median MB "
+                + "| cells with errors |\n");
+        s.append("|---|---|---|---|---|---|---|---|---|---|---|\n");
         for (Measured m : r.measured.values()) {
             double med = m.median();
-            s.append(String.format(Locale.ROOT, "| %s | %s | %.3f | %.2f | %.2f | %.2f | %.3f | %.1f | %.1f | %s |%n",
+            s.append(String.format(Locale.ROOT, "| %s | %s | %.3f | %.2f | %.2f | %.2f | %.3f | %.1f | %.1f | %.0f / %.0f | %s |%n",
                     m.kind.key, m.kind.label, med, med / r.cells * 1e6, med / nat.median(), med / floor.median(),
                     m.firstSeconds, m.firstGrowthKb / 1024.0, m.medianGrowthKb() / 1024.0,
-                    m.errors == 0 ? "0" : m.errors + " (first: error code " + m.firstError + ")"));
+                    m.firstHeapGrowthMb, m.medianHeapGrowthMb(), m.errors == 0 ? "0" : m.errors + " (first: error code " + m.firstError + ")"));
         }
         s.append('\n');
         s.append(String.format(Locale.ROOT, "- card reads (parses) during the run: %.0f; cards kept: %.0f%n",
                 r.cardReads, r.cardsKept));
         s.append(String.format(Locale.ROOT, "- distinct Java threads seen by %,d scalar calls: %.0f%n", r.cells,
                 r.distinctThreads));
-        s.append(String.format(Locale.ROOT, "- office memory (VmRSS): %.0f MB before the timed runs, %.0f MB after%n",
-                r.officeRssStartKb / 1024.0, r.officeRssEndKb / 1024.0));
+        s.append(String.format(Locale.ROOT, "- office memory (VmRSS): %.0f MB before the timed runs, %.0f MB after; "
+                + "the office JVM's committed heap: %.0f MB before, %.0f MB after%n", r.officeRssStartKb / 1024.0,
+                r.officeRssEndKb / 1024.0, r.heapStartMb, r.heapEndMb));
         s.append(String.format(Locale.ROOT, "- agreement: density, native (a), Basic (d) and array (e1) vs scalar (b1): "
                 + "worst relative difference %.1e; partial volume, array (e2) vs scalar (b2): %.1e%n",
                 r.worstDensityDifference, r.worstPartialDifference));

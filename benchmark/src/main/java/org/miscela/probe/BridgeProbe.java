@@ -4,6 +4,8 @@ import com.sun.star.beans.XPropertySet;
 import com.sun.star.sheet.XCellRangeAddressable;
 import com.sun.star.table.CellRangeAddress;
 import com.sun.star.table.XCellRange;
+import com.sun.star.uno.Any;
+import com.sun.star.uno.Type;
 import com.sun.star.uno.UnoRuntime;
 import com.sun.star.lib.uno.helper.WeakBase;
 import java.util.Set;
@@ -52,6 +54,25 @@ public final class BridgeProbe extends WeakBase implements XBridgeProbe {
     }
 
     @Override
+    public Object echoDensityBlock(Object[][] card, Object[][] moleFraction, Object[][] temperature,
+            Object extrapolate) {
+        Object[][] out = new Object[temperature.length][1];
+        for (int r = 0; r < out.length; r++) {
+            out[r][0] = temperature[r][0];
+        }
+        return new Any(new Type(Object[][].class), out);
+    }
+
+    @Override
+    public Object makeColumn(double rows) {
+        Object[][] out = new Object[(int) rows][1];
+        for (Object[] row : out) {
+            row[0] = 1.0;
+        }
+        return new Any(new Type(Object[][].class), out);
+    }
+
+    @Override
     public double echoCellRange(XCellRange cells, double value) {
         return value;
     }
@@ -60,6 +81,13 @@ public final class BridgeProbe extends WeakBase implements XBridgeProbe {
     public double echoCellRangeAddress(XCellRange cells, double value) {
         CellRangeAddress a = UnoRuntime.queryInterface(XCellRangeAddressable.class, cells).getRangeAddress();
         return value + (a.EndRow < 0 ? 1 : 0);
+    }
+
+    @Override
+    public double javaHeap(double what) {
+        Runtime r = Runtime.getRuntime();
+        long bytes = what == 0 ? r.totalMemory() : r.totalMemory() - r.freeMemory();
+        return bytes / (1024.0 * 1024.0);
     }
 
     @Override
