@@ -33,9 +33,19 @@ final class Arguments {
         return CardCache.shared().get(cells);
     }
 
-    /** A component given by number or name. */
+    /** A component given by number or name (a one-cell range holding one counts as that cell). */
     static int component(Card card, Object value) {
         Object v = unwrap(value);
+        if (v instanceof Object[][]) {
+            Object[][] g = (Object[][]) v;
+            if (g.length != 1 || g[0].length != 1) {
+                throw Problem.ARG_NOT_SINGLE.raise("component");
+            }
+            v = g[0][0];
+        }
+        if (v instanceof Boolean) {
+            v = ((Boolean) v) ? 1.0 : 0.0;
+        }
         if (v instanceof Number) {
             return CardFunctions.componentByNumber(card, ((Number) v).doubleValue());
         }
@@ -53,7 +63,7 @@ final class Arguments {
         if (v instanceof Boolean) {
             return ((Boolean) v) ? Extrapolation.ALLOW : Extrapolation.REFUSE;
         }
-        if (v instanceof Number) {
+        if (v instanceof Number && Double.isFinite(((Number) v).doubleValue())) {
             return ((Number) v).doubleValue() != 0.0 ? Extrapolation.ALLOW : Extrapolation.REFUSE;
         }
         throw Problem.ARG_NOT_FLAG.raise("extrapolate argument", describe(v));

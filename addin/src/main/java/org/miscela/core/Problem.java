@@ -52,6 +52,7 @@ public enum Problem {
     COMPOSITION_SHAPE("The composition range is %d×%d, but the card has %d components: give a row or a column of %d cells, or a block of %d columns with one composition per row."),
     AMOUNT_NEGATIVE("The amount of %s is %s; amounts cannot be negative."),
     AMOUNT_ZERO("The amounts add up to nothing; give a positive amount of at least one component."),
+    AMOUNT_TOO_LARGE("The amounts come to more moles than a number can hold (over 1.8e308 in all); check the amounts and their basis."),
     UNKNOWN_BASIS("The amount basis \"%s\" is not recognised; use one of: %s."),
     NO_ENTHALPY("The card holds no excess enthalpy data: add an 'enthalpy unit' row and 'excess enthalpy A0' rows (see docs/card-format.md)."),
     NO_VOLUME("The card holds no excess volume data (it describes enthalpy only), so it gives no volumes or densities: add 'excess volume A0' rows (see docs/card-format.md)."),

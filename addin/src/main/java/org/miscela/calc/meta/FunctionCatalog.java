@@ -78,10 +78,10 @@ public final class FunctionCatalog {
             Problem.OUTSIDE_TEMPERATURE, Problem.OUTSIDE_COMPOSITION, Problem.OUTSIDE_PAIR_TEMPERATURE,
             Problem.OUTSIDE_PAIR_COMPOSITION, Problem.NON_PHYSICAL);
     private static final List<Enum<?>> VOLUME_PROBLEMS = list(Problem.NO_VOLUME);
-    private static final List<Enum<?>> COMPONENT_PROBLEMS = list(Problem.UNKNOWN_COMPONENT_ARG);
+    private static final List<Enum<?>> COMPONENT_PROBLEMS = list(Problem.UNKNOWN_COMPONENT_ARG, Problem.ARG_NOT_SINGLE);
     private static final List<Enum<?>> AMOUNT_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
             Problem.ARG_NOT_FINITE, Problem.ARG_SHAPE, Problem.COMPOSITION_LENGTH, Problem.COMPOSITION_SHAPE,
-            Problem.AMOUNT_NEGATIVE, Problem.AMOUNT_ZERO, Problem.UNKNOWN_BASIS);
+            Problem.AMOUNT_NEGATIVE, Problem.AMOUNT_ZERO, Problem.AMOUNT_TOO_LARGE, Problem.UNKNOWN_BASIS);
     private static final List<Enum<?>> DATA_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
             Problem.DATA_SHAPE, Problem.DATA_LENGTH, Problem.DATA_PARTLY_BLANK, Problem.NOT_A_COUNT,
             Problem.UNKNOWN_FIT_OUTPUT);

@@ -86,6 +86,8 @@ class BlendProblemTest {
                 new double[] {0.5, 0.5}, MASS, null, E).amounts(AmountUnit.L));
         m.put(BlendProblem.AMOUNT_ZERO, () -> Batches.totals(EW, Amounts.of(new double[] {0, 0}, AmountUnit.G), 20,
                 E));
+        m.put(BlendProblem.AMOUNT_TOO_LARGE, () -> Batches.totals(EW, Amounts.of(new double[] {1e308, 1e308},
+                AmountUnit.KG), 20, E));
         m.put(BlendProblem.NEEDS_REMOVAL, () -> Adjustments.leastAdditions(EW, half, new double[] {1, 0}, MASS, 20,
                 null, E));
         m.put(BlendProblem.LIMIT_BELOW_BATCH, () -> Adjustments.within(EW, half, new double[] {0.4, 0.6}, MASS,
