@@ -436,6 +436,15 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
         }
     }
 
+    @Override
+    public String explainCall(Object functionName, Object[] arguments) {
+        try {
+            return Explanations.explain(this, functionName, arguments);
+        } catch (MiscelaException ex) {
+            return ex.getMessage();
+        }
+    }
+
     /** A fit's problem: the message itself when the "check" result was asked for, Err:502 otherwise. */
     private static Object checkOrRefuse(Object result, RuntimeException ex) throws IllegalArgumentException {
         boolean check;

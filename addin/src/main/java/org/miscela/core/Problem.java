@@ -86,7 +86,11 @@ public enum Problem {
     OUTSIDE_TEMPERATURE("The temperature %s %s is outside the card's validity range %s to %s %s. Extrapolation is refused; to accept it, pass TRUE as 'extrapolate' or write 'extrapolation | allow' on the card."),
     OUTSIDE_COMPOSITION("The mole fraction of %s, %s, is outside the card's validity range %s to %s. Extrapolation is refused; to accept it, pass TRUE as 'extrapolate' or write 'extrapolation | allow' on the card."),
     CHECK_NEEDS_BOTH("To check a point, give both the mole fraction and the temperature."),
-    NON_PHYSICAL("At %s %s the card gives a %s of %s, which is not physical; the card is being used where its models do not hold.");
+    NON_PHYSICAL("At %s %s the card gives a %s of %s, which is not physical; the card is being used where its models do not hold."),
+
+    // --- what MIX.EXPLAIN answers about a call it cannot run (its answers, never a refusal)
+    EXPLAIN_UNKNOWN_FUNCTION("%s names no function that MIX.EXPLAIN can explain; give one of these names, with or without 'MIX.': %s."),
+    EXPLAIN_ARGUMENT_COUNT("%s takes %s (%s), not %d: Calc shows Err:504 for such a call without calling the function.");
 
     private final String pattern;
 

@@ -389,7 +389,18 @@ public final class FunctionCatalog {
                     optional("basisTemperature", "basis temperature", "Optional. The temperature of the basis (left "
                             + "out: the reference temperature)."),
                     BALANCE, EXTRAPOLATE)
-                    .shows("0.99562").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS))));
+                    .shows("0.99562").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
+            new FunctionInfo("explainCall", "MIX.EXPLAIN",
+                    "The words for a refused call: \"OK\" when the named function gives a result for these "
+                            + "arguments, otherwise the message of its refusal (why its cell shows Err:502). It runs "
+                            + "that function on them, so it always agrees with the call; it never refuses itself.",
+                    "—",
+                    "=MIX.EXPLAIN(\"MIX.BATCH\"; card; {50; 50}; \"lb\"; 20)",
+                    required("functionName", "function", "The function's name as text: \"MIX.DENSITY\" or "
+                            + "\"density\" (case does not matter)."),
+                    optional("arguments", "arguments", "The same arguments as the call, in its order (one per "
+                            + "argument box); leave out here what the call leaves out."))
+                    .shows("The unit \"lb\" is not recognised").refuses(list())));
 
     private FunctionCatalog() {
     }
