@@ -124,7 +124,7 @@ public final class MetadataWriter {
             if (!f.errors().isEmpty()) {
                 m.append("Refused (Err:502) when:\n\n");
                 for (Enum<?> e : f.errors()) {
-                    m.append("- `").append(e.name()).append("`: ").append(pattern(e).replaceAll("%[sd]", "…"))
+                    m.append("- `").append(e.name()).append("`: ").append(pattern(e).replaceAll("%[sd]", "…").replace("%%", "%"))
                             .append('\n');
                 }
                 m.append('\n');
@@ -190,7 +190,7 @@ public final class MetadataWriter {
         m.append("| Answer | Message |\n|---|---|\n");
         for (org.miscela.core.Problem p : java.util.EnumSet.range(org.miscela.core.Problem.EXPLAIN_UNKNOWN_FUNCTION,
                 org.miscela.core.Problem.EXPLAIN_ARGUMENT_COUNT)) {
-            m.append("| `").append(p.name()).append("` | ").append(pattern(p).replaceAll("%[sd]", "…")
+            m.append("| `").append(p.name()).append("` | ").append(pattern(p).replaceAll("%[sd]", "…").replace("%%", "%")
                     .replace("|", "\\|")).append(" |\n");
         }
         return m.toString();
@@ -200,7 +200,7 @@ public final class MetadataWriter {
         m.append(where ? "| Problem | Message | Reported by |\n|---|---|---|\n" : "| Problem | Message |\n|---|---|\n");
         for (Enum<?> p : problems) {
             m.append("| `").append(p.name()).append("` | ")
-                    .append(pattern(p).replaceAll("%[sd]", "…").replace("|", "\\|"));
+                    .append(pattern(p).replaceAll("%[sd]", "…").replace("%%", "%").replace("|", "\\|"));
             if (where) {
                 StringBuilder fs = new StringBuilder();
                 for (FunctionInfo f : FunctionCatalog.functions()) {

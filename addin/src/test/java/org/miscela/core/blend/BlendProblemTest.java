@@ -12,6 +12,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.function.Executable;
 import org.miscela.core.Card;
 import org.miscela.core.CardReader;
+import org.miscela.core.Catalogue;
 import org.miscela.core.Extrapolation;
 
 /**
@@ -120,6 +121,7 @@ class BlendProblemTest {
         cases.forEach((problem, call) -> {
             BlendException ex = assertThrows(BlendException.class, call, problem.name());
             assertEquals(problem, ex.problem(), ex.getMessage());
+            assertTrue(Catalogue.isInstance(problem.pattern(), ex.getMessage()), "the test's matcher: " + ex.getMessage());
             assertFalse(ex.getMessage().matches("(?s).*%[sdf].*"), "unfilled placeholder: " + ex.getMessage());
             assertFalse(ex.getMessage().contains("null") || ex.getMessage().contains("NaN"), ex.getMessage());
             b.append(problem).append(": ").append(ex.getMessage()).append('\n');
