@@ -208,6 +208,14 @@ final class Arguments {
         return (int) d;
     }
 
+    /** A whole number from 0 to {@code highest} that must be given. */
+    static int requiredCount(String what, Object value, int highest) {
+        if (unwrap(value) == null) {
+            throw Problem.ARG_BLANK.raise(what);
+        }
+        return count(what, value, highest, 0);
+    }
+
     /** An optional number: NaN when left out. */
     static double optionalNumber(String what, Object value) {
         Object v = unwrap(value);

@@ -231,7 +231,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             throws IllegalArgumentException {
         try {
             FitOutput output = Arguments.fitOutput(result);
-            int m = Arguments.count("order", order, MAX_ORDER_IN_X, -1);
+            int m = Arguments.requiredCount("order", order, MAX_ORDER_IN_X);
             int mt = Arguments.count("order in T", orderInTemperature, MAX_ORDER_IN_T, 0);
             double[][] d = DataArguments.dataColumns(new String[] {"mole fraction", "excess volume", "temperature",
                 "weight"}, new Object[][][] {moleFraction, excessVolume, Arguments.optionalRange(temperature),
@@ -251,7 +251,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             FitOutput output = Arguments.fitOutput(result);
             Card c = CardReader.readPureComponents(pure);
             int[] p = Arguments.pair(c, pair);
-            int m = Arguments.count("order", order, MAX_ORDER_IN_X, -1);
+            int m = Arguments.requiredCount("order", order, MAX_ORDER_IN_X);
             int mt = Arguments.count("order in T", orderInTemperature, MAX_ORDER_IN_T, 0);
             double[][] d = DataArguments.dataColumns(new String[] {"mole fraction", "density", "temperature", "weight"},
                     new Object[][][] {moleFraction, density, temperature, Arguments.optionalRange(weights)},

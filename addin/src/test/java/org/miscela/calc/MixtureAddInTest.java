@@ -204,4 +204,22 @@ class MixtureAddInTest {
                         Any.VOID));
         assertTrue(e.getMessage().contains("volume, enthalpy"), e.getMessage());
     }
+
+    /** A fit whose order is left out says so (it used to say "found -1", a number nobody wrote). */
+    @Test
+    void aFitWithoutItsOrderSaysTheOrderIsBlank() throws Exception {
+        Object[][] x = {{0.2}, {0.4}, {0.6}, {0.8}};
+        Object[][] v = {{-0.736}, {-1.008}, {-0.912}, {-0.544}};
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> addIn.fitExcessVolume(x, v, Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+        assertEquals("The order is blank.", e.getMessage());
+        assertEquals("The order is blank.", addIn.fitExcessVolume(x, v, Any.VOID, Any.VOID, Any.VOID, Any.VOID,
+                Any.VOID, "check"));
+        IllegalArgumentException d = assertThrows(IllegalArgumentException.class, () -> addIn.fitDensity(CARD,
+                Any.VOID, x, new Object[][] {{960.0}, {930.0}, {890.0}, {850.0}}, one(20.0), Any.VOID, Any.VOID,
+                Any.VOID, Any.VOID, Any.VOID));
+        assertEquals("The order is blank.", d.getMessage());
+        Object ok = addIn.fitExcessVolume(x, v, 1.0, Any.VOID, Any.VOID, Any.VOID, Any.VOID, "check");
+        assertEquals("OK", ((Object[][]) ((Any) ok).getObject())[0][0], "with the order given");
+    }
 }
