@@ -129,6 +129,18 @@ class BlendProblemTest {
         System.out.print(b);
     }
 
+    /**
+     * Molarities whose moles per litre add up beyond the double range (found by the error catalogue's sheet, 1E+308
+     * mol/L of two components) are too concentrated; they were refused as "The mole fractions sum to 0".
+     */
+    @Test
+    void molaritiesBeyondTheDoubleRangeAreTooConcentrated() {
+        BlendException ex = assertThrows(BlendException.class, () -> Compositions.toMoleFractions(Cards.TERNARY,
+                new double[] {1e308, 1e308, NAN}, CompositionBasis.molarity(20, 2), E));
+        assertEquals(BlendProblem.TOO_CONCENTRATED, ex.problem(), ex.getMessage());
+        assertTrue(ex.getMessage().contains("reach only 0 %"), ex.getMessage());
+    }
+
     /** The pair's two compositions at 17 mol/L are each a true root (checked with the forward conversion). */
     @Test
     void severalCompositionsAreRealRoots() {
