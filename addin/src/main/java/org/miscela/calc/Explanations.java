@@ -15,7 +15,9 @@ import org.miscela.core.Problem;
  * the words of its refusal, or "OK". The arguments arrive as Calc's variable argument list: a single cell as its
  * value, a range as {@code Object[][]}, a left-out argument as void. Each method's parameters are either ranges
  * (IDL {@code sequence<sequence<any>>}, here 'R') or single values ({@code any}, here 'V'); a value given for a range
- * parameter becomes a one-cell range, as Calc itself would pass it.
+ * parameter becomes a one-cell range, as Calc itself would pass it. A range parameter left out is refused by Calc
+ * itself (Err:502, the add-in is not called), and so is a call with too few or too many arguments (Err:504): for
+ * those MIX.EXPLAIN says so rather than run the method.
  */
 final class Explanations {
     /** One method called with the decoded arguments. */
@@ -101,7 +103,7 @@ final class Explanations {
     /**
      * "OK" when the call of the named function with these arguments gives a result, otherwise the message of its
      * refusal. Throws {@link org.miscela.core.MiscelaException} only when there is no such function or Calc itself
-     * would refuse the call for its number of arguments (Err:504).
+     * would refuse the call: for its number of arguments (Err:504) or a range argument left out (Err:502).
      */
     static String explain(MixtureAddIn addIn, Object name, Object[] arguments) {
         FunctionInfo f = function(name);
@@ -114,6 +116,10 @@ final class Explanations {
         Object[] p = new Object[t.kinds.length()];
         for (int i = 0; i < p.length; i++) {
             Object v = i < given.length ? Arguments.unwrap(given[i]) : null;
+            if (t.kinds.charAt(i) == 'R' && v == null) {
+                throw Problem.EXPLAIN_RANGE_LEFT_OUT.raise(f.arguments().get(i).displayName(), i + 1,
+                        f.displayName());
+            }
             p[i] = t.kinds.charAt(i) == 'R' ? asRange(v) : v == null ? Any.VOID : v;
         }
         try {
@@ -146,16 +152,12 @@ final class Explanations {
                 : v == null ? "A left-out name" : Arguments.describe(v), names);
     }
 
-    /**
-     * A range parameter's cells: a range as given, a single value as a one-cell range (as Calc passes a single cell),
-     * and a left-out argument as one blank cell (Calc itself refuses such a call, Err:502, without calling the add-in;
-     * a blank says why in the function's own words).
-     */
+    /** A range parameter's cells: a range as given, a single value as a one-cell range (as Calc passes a cell). */
     private static Object[][] asRange(Object v) {
         if (v instanceof Object[][]) {
             return (Object[][]) v;
         }
-        return new Object[][] {{v == null ? "" : v}};
+        return new Object[][] {{v}};
     }
 
     private static String count(int fewest, int most) {

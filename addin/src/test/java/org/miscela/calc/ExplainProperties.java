@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Random;
 import net.jqwik.api.Arbitraries;
+import net.jqwik.api.Assume;
 import net.jqwik.api.Arbitrary;
 import net.jqwik.api.Combinators;
 import net.jqwik.api.ForAll;
@@ -71,7 +72,12 @@ class ExplainProperties {
         }
         String method = METHODS.get(call.method);
         String name = FunctionCatalog.byMethod(method).displayName();
-        Object[] arguments = calcForms(call, Explanations.targets().get(method), new Random(generated.get2()));
+        Explanations.Target target = Explanations.targets().get(method);
+        Object[] arguments = calcForms(call, target, new Random(generated.get2()));
+        for (int i = 0; i < arguments.length; i++) {
+            // Calc never calls with a range argument missing (it shows Err:502 itself)
+            Assume.that(target.kinds.charAt(i) != 'R' || arguments[i] != null);
+        }
         assertEquals(expected, addIn.explainCall(name, arguments), () -> "MIX.EXPLAIN(\"" + name + "\"; …) of " + call
                 + "\n  as " + Arrays.deepToString(arguments));
     }

@@ -110,15 +110,20 @@ class ExplanationsTest {
         assertTrue(Catalogue.entryOf(noOrder) != null && !noOrder.contains("Err:504"), noOrder);
     }
 
-    /** A single value for a range parameter is a one-cell range; a left-out one a blank; trailing ones are void. */
+    /**
+     * A single value for a range parameter is a one-cell range; trailing value arguments left out are void; a range
+     * argument left out is refused by Calc itself (Err:502), even for MIX.CHECKPOINT, which never refuses.
+     */
     @Test
     void argumentsArriveInCalcsForms() throws Exception {
         assertEquals(explain("MIX.DENSITY", CARD, one(0.3), one(45.0)), explain("MIX.DENSITY", CARD, 0.3, 45.0));
         assertEquals(explain("MIX.DENSITY", CARD, 0.3, 45.0), explain("MIX.DENSITY", CARD, 0.3, 45.0, Any.VOID));
-        String blank = explain("MIX.DENSITY", CARD, Any.VOID, 20.0);
-        assertEquals("Problem.ARG_BLANK", Catalogue.entryOf(blank), blank);
-        assertEquals("The card is empty: the range must hold a card whose first row is 'Miscela card | 1'.",
-                explain("MIX.DENSITY", Any.VOID, 0.3, 20.0));
+        assertEquals("The x, argument 2 of MIX.CHECKPOINT, is left out; a range argument cannot be, so Calc shows "
+                + "Err:502 for the call without calling the function: give a value, a cell or a range.",
+                explain("MIX.CHECKPOINT", CARD, Any.VOID, 20.0));
+        String card = explain("MIX.DENSITY", Any.VOID, 0.3, 20.0);
+        assertEquals("Problem.EXPLAIN_RANGE_LEFT_OUT", Catalogue.entryOf(card), card);
+        assertTrue(card.startsWith("The card, argument 1 of MIX.DENSITY"), card);
         assertEquals("OK", explain("MIX.ADDVOLUME", CARD, new Object[][] {{50.0, 50.0}}, "g", "ethanol", 10.0, 20.0,
                 Any.VOID, "mL"), "a value argument left out in the middle");
     }

@@ -402,12 +402,42 @@ public final class FunctionCatalog {
                             + "argument box); leave out here what the call leaves out."))
                     .shows("The unit \"lb\" is not recognised").refuses(list())));
 
+    private static final java.util.Map<Enum<?>, String> NOT_FROM_A_CELL = Collections.unmodifiableMap(
+            new java.util.LinkedHashMap<>());
+
     private FunctionCatalog() {
     }
 
     /** Every function, in the order of the IDL interface. */
     public static List<FunctionInfo> functions() {
         return FUNCTIONS;
+    }
+
+    /**
+     * The problems of a call rather than of a card, in the error catalogue's order: the call entries of
+     * {@link Problem}, then {@link FitProblem}, then {@link BlendProblem}.
+     */
+    public static List<Enum<?>> callProblems() {
+        List<Enum<?>> all = new java.util.ArrayList<>(java.util.EnumSet.range(Problem.NOT_BINARY,
+                Problem.NON_PHYSICAL));
+        all.addAll(Arrays.asList(FitProblem.values()));
+        all.addAll(Arrays.asList(BlendProblem.values()));
+        return Collections.unmodifiableList(all);
+    }
+
+    /** What MIX.EXPLAIN answers for a call it cannot run (never a refusal). */
+    public static List<Enum<?>> explainAnswers() {
+        return Collections.unmodifiableList(new java.util.ArrayList<>(java.util.EnumSet.range(
+                Problem.EXPLAIN_UNKNOWN_FUNCTION, Problem.EXPLAIN_RANGE_LEFT_OUT)));
+    }
+
+    /**
+     * The call problems no cell can produce, each with the reason: checks that guard the library's own callers, or a
+     * path the add-in never takes. No function lists them; the error catalogue says so, and a plain-JVM test
+     * (UnreachableProblemsTest) produces each through the core.
+     */
+    public static java.util.Map<Enum<?>, String> notFromACell() {
+        return NOT_FROM_A_CELL;
     }
 
     /** The function with this IDL method name. */

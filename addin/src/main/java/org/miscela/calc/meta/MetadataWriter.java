@@ -166,9 +166,8 @@ public final class MetadataWriter {
                 + "misspelt. | Tools ▸ Extension Manager. |\n");
         m.append("| text | `MIX.EXPLAIN`, `MIX.CHECK`, `MIX.CHECKPOINT`, `MIX.TRACE` labels, a fit's `\"check\"` "
                 + "and `MIX.ADJUST`'s `\"summary\"` return text by design. | — |\n\n");
-        m.append("A range argument left out in the middle of a call (`;;` where a range belongs) makes Calc show "
-                + "Err:502 without calling the add-in; `MIX.EXPLAIN` treats it as a blank cell and says what is "
-                + "missing.\n\n");
+        m.append("A range argument left out (`;;`, or `;` at the end, where a range belongs) makes Calc show "
+                + "Err:502 itself, without calling the add-in; `MIX.EXPLAIN` says which argument it is.\n\n");
         m.append("The add-in never returns NaN or an infinity (Calc would show #NUM!) and an unexpected failure "
                 + "inside it would show #VALUE!; the tests (`CalcFuzzIT`, the core fuzzers) check that neither "
                 + "occurs.\n\n");
@@ -188,8 +187,7 @@ public final class MetadataWriter {
         m.append("`MIX.EXPLAIN` never refuses: for a call it cannot run it answers one of these instead of "
                 + "\"OK\" or the call's refusal.\n\n");
         m.append("| Answer | Message |\n|---|---|\n");
-        for (org.miscela.core.Problem p : java.util.EnumSet.range(org.miscela.core.Problem.EXPLAIN_UNKNOWN_FUNCTION,
-                org.miscela.core.Problem.EXPLAIN_ARGUMENT_COUNT)) {
+        for (Enum<?> p : FunctionCatalog.explainAnswers()) {
             m.append("| `").append(p.name()).append("` | ").append(pattern(p).replaceAll("%[sd]", "…").replace("%%", "%")
                     .replace("|", "\\|")).append(" |\n");
         }
