@@ -337,6 +337,9 @@ final class Arguments {
         if (v instanceof Object[][]) {
             return "a range";
         }
+        if (v instanceof Number) {
+            return org.miscela.core.Numbers.show(((Number) v).doubleValue());
+        }
         return String.valueOf(v);
     }
 }

@@ -273,7 +273,8 @@ public final class CardFunctions {
                 step *= 2.0;
                 far = start + direction * step;
                 if (step > SEARCH_SPAN || far <= 1.0) {
-                    throw Problem.NO_TEMPERATURE_ROOT.raise(Numbers.show(Math.min(start, far)),
+                    // (the search may have stepped below 0 K; the range worth naming starts at 0 K)
+                    throw Problem.NO_TEMPERATURE_ROOT.raise(Numbers.show(Math.max(0.0, Math.min(start, far))),
                             Numbers.show(Math.max(start, far)));
                 }
             }
