@@ -168,6 +168,14 @@ public final class MetadataWriter {
                 + "and `MIX.ADJUST`'s `\"summary\"` return text by design. | — |\n\n");
         m.append("A range argument left out (`;;`, or `;` at the end, where a range belongs) makes Calc show "
                 + "Err:502 itself, without calling the add-in; `MIX.EXPLAIN` says which argument it is.\n\n");
+        m.append("Every message of the tables of a call, a fit and a blending calculation below, and every answer of "
+                + "`MIX.EXPLAIN` itself, is produced in a real office by a spreadsheet test "
+                + "(`addin/src/test/resources/sheets/errors.spec`, checked by `ErrorCatalogueIT`): the call shows "
+                + "its error code and `MIX.EXPLAIN` of the same call the message. The exceptions are marked *not "
+                + "reachable from a cell*, with the reason: they guard the library's own callers or paths the cell "
+                + "functions never take, and `UnreachableProblemsTest` produces each through the library (all but "
+                + "one, for which no input is known). Every card problem is shown by `MIX.CHECK` in a real office "
+                + "(`CardProblemsIT`).\n\n");
         m.append("The add-in never returns NaN or an infinity (Calc would show #NUM!) and an unexpected failure "
                 + "inside it would show #VALUE!; the tests (`CalcFuzzIT`, the core fuzzers) check that neither "
                 + "occurs.\n\n");
@@ -206,7 +214,9 @@ public final class MetadataWriter {
                         fs.append(fs.length() == 0 ? "" : ", ").append(f.displayName());
                     }
                 }
-                m.append(" | ").append(fs.length() == 0 ? "—" : fs);
+                String unreachable = FunctionCatalog.notFromACell().get(p);
+                m.append(" | ").append(unreachable != null ? "not reachable from a cell: " + unreachable
+                        : fs.length() == 0 ? "—" : fs);
             }
             m.append(" |\n");
         }
