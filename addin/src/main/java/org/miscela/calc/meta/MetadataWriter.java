@@ -163,7 +163,7 @@ public final class MetadataWriter {
         m.append("| the argument's own error (#DIV/0!, #N/A, …) | An argument that is an error value; Calc passes it "
                 + "through without calling the add-in. | The argument's cell. |\n");
         m.append("| #NAME? | The extension is not installed in this LibreOffice, or the function name is "
-                + "misspelt. | Tools ▸ Extension Manager. |\n");
+                + "misspelt. | Tools ▸ Extension Manager; `MIX.EXPLAIN(\"the name\")` lists the names there are. |\n");
         m.append("| text | `MIX.EXPLAIN`, `MIX.CHECK`, `MIX.CHECKPOINT`, `MIX.TRACE` labels, a fit's `\"check\"` "
                 + "and `MIX.ADJUST`'s `\"summary\"` return text by design. | — |\n\n");
         m.append("A range argument left out (`;;`, or `;` at the end, where a range belongs) makes Calc show "
