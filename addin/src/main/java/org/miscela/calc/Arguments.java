@@ -33,9 +33,19 @@ final class Arguments {
         return CardCache.shared().get(cells);
     }
 
-    /** A component given by number or name. */
+    /** A component given by number or name (a one-cell range holding one counts as that cell). */
     static int component(Card card, Object value) {
         Object v = unwrap(value);
+        if (v instanceof Object[][]) {
+            Object[][] g = (Object[][]) v;
+            if (g.length != 1 || g[0].length != 1) {
+                throw Problem.ARG_NOT_SINGLE.raise("component");
+            }
+            v = g[0][0];
+        }
+        if (v instanceof Boolean) {
+            v = ((Boolean) v) ? 1.0 : 0.0;
+        }
         if (v instanceof Number) {
             return CardFunctions.componentByNumber(card, ((Number) v).doubleValue());
         }
@@ -53,7 +63,7 @@ final class Arguments {
         if (v instanceof Boolean) {
             return ((Boolean) v) ? Extrapolation.ALLOW : Extrapolation.REFUSE;
         }
-        if (v instanceof Number) {
+        if (v instanceof Number && Double.isFinite(((Number) v).doubleValue())) {
             return ((Number) v).doubleValue() != 0.0 ? Extrapolation.ALLOW : Extrapolation.REFUSE;
         }
         throw Problem.ARG_NOT_FLAG.raise("extrapolate argument", describe(v));
@@ -198,6 +208,14 @@ final class Arguments {
         return (int) d;
     }
 
+    /** A whole number from 0 to {@code highest} that must be given. */
+    static int requiredCount(String what, Object value, int highest) {
+        if (unwrap(value) == null) {
+            throw Problem.ARG_BLANK.raise(what);
+        }
+        return count(what, value, highest, 0);
+    }
+
     /** An optional number: NaN when left out. */
     static double optionalNumber(String what, Object value) {
         Object v = unwrap(value);
@@ -318,6 +336,9 @@ final class Arguments {
         }
         if (v instanceof Object[][]) {
             return "a range";
+        }
+        if (v instanceof Number) {
+            return org.miscela.core.Numbers.show(((Number) v).doubleValue());
         }
         return String.valueOf(v);
     }

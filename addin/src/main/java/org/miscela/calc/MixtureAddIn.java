@@ -233,7 +233,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             throws IllegalArgumentException {
         try {
             FitOutput output = Arguments.fitOutput(result);
-            int m = Arguments.count("order", order, MAX_ORDER_IN_X, -1);
+            int m = Arguments.requiredCount("order", order, MAX_ORDER_IN_X);
             int mt = Arguments.count("order in T", orderInTemperature, MAX_ORDER_IN_T, 0);
             double[][] d = DataArguments.dataColumns(new String[] {"mole fraction", "excess volume", "temperature",
                 "weight"}, new Object[][][] {moleFraction, excessVolume, Arguments.optionalRange(temperature),
@@ -253,7 +253,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             FitOutput output = Arguments.fitOutput(result);
             Card c = CardReader.readPureComponents(pure);
             int[] p = Arguments.pair(c, pair);
-            int m = Arguments.count("order", order, MAX_ORDER_IN_X, -1);
+            int m = Arguments.requiredCount("order", order, MAX_ORDER_IN_X);
             int mt = Arguments.count("order in T", orderInTemperature, MAX_ORDER_IN_T, 0);
             double[][] d = DataArguments.dataColumns(new String[] {"mole fraction", "density", "temperature", "weight"},
                     new Object[][][] {moleFraction, density, temperature, Arguments.optionalRange(weights)},
@@ -435,6 +435,15 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
                     (v, t) -> new double[] {BlendFunctions.volumeCorrection(c, v, in, t, tRef, r, e)});
         } catch (MiscelaException | BlendException ex) {
             throw refused(ex);
+        }
+    }
+
+    @Override
+    public String explainCall(Object functionName, Object[] arguments) {
+        try {
+            return Explanations.explain(this, functionName, arguments);
+        } catch (MiscelaException ex) {
+            return ex.getMessage();
         }
     }
 

@@ -66,7 +66,9 @@ public final class CardCache {
             hit = entries.get(key);
             if (hit == null) {
                 try {
-                    hit = CardReader.read(cells);
+                    // The key's cells are the card's extent: the reader ignores what was trimmed, so it reads the
+                    // same card without scanning the blank rest of a range named as whole columns a second time.
+                    hit = CardReader.read(key.cells);
                 } catch (MiscelaException e) {
                     hit = e;
                 }

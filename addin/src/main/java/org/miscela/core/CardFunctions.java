@@ -84,7 +84,10 @@ public final class CardFunctions {
             moles[k] = basis.toMoles(amounts[k], c.molarMass());
             total += moles[k];
         }
-        if (!(total > 0.0) || Double.isInfinite(total)) {
+        if (Double.isInfinite(total)) {
+            throw Problem.AMOUNT_TOO_LARGE.raise();
+        }
+        if (!(total > 0.0)) {
             throw Problem.AMOUNT_ZERO.raise();
         }
         return moles;
@@ -219,7 +222,11 @@ public final class CardFunctions {
         double[] before = amountsToMoles(card, amounts, basis);
         double[] addition = new double[amounts.length];
         addition[component] = added;
-        double[] after = amountsToMoles(card, sum(amounts, addition), basis);
+        double[] more = sum(amounts, addition);
+        if (Double.isInfinite(more[component])) {
+            throw Problem.AMOUNT_TOO_LARGE.raise();
+        }
+        double[] after = amountsToMoles(card, more, basis);
         return enthalpyOut(card, batchExcessEnthalpy(card, after, t, e) - batchExcessEnthalpy(card, before, t, e), t);
     }
 
@@ -266,7 +273,8 @@ public final class CardFunctions {
                 step *= 2.0;
                 far = start + direction * step;
                 if (step > SEARCH_SPAN || far <= 1.0) {
-                    throw Problem.NO_TEMPERATURE_ROOT.raise(Numbers.show(Math.min(start, far)),
+                    // (the search may have stepped below 0 K; the range worth naming starts at 0 K)
+                    throw Problem.NO_TEMPERATURE_ROOT.raise(Numbers.show(Math.max(0.0, Math.min(start, far))),
                             Numbers.show(Math.max(start, far)));
                 }
             }

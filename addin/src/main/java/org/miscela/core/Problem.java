@@ -52,6 +52,7 @@ public enum Problem {
     COMPOSITION_SHAPE("The composition range is %d×%d, but the card has %d components: give a row or a column of %d cells, or a block of %d columns with one composition per row."),
     AMOUNT_NEGATIVE("The amount of %s is %s; amounts cannot be negative."),
     AMOUNT_ZERO("The amounts add up to nothing; give a positive amount of at least one component."),
+    AMOUNT_TOO_LARGE("The amounts come to more moles than a number can hold (over 1.8e308 in all); check the amounts and their basis."),
     UNKNOWN_BASIS("The amount basis \"%s\" is not recognised; use one of: %s."),
     NO_ENTHALPY("The card holds no excess enthalpy data: add an 'enthalpy unit' row and 'excess enthalpy A0' rows (see docs/card-format.md)."),
     NO_VOLUME("The card holds no excess volume data (it describes enthalpy only), so it gives no volumes or densities: add 'excess volume A0' rows (see docs/card-format.md)."),
@@ -86,7 +87,12 @@ public enum Problem {
     OUTSIDE_TEMPERATURE("The temperature %s %s is outside the card's validity range %s to %s %s. Extrapolation is refused; to accept it, pass TRUE as 'extrapolate' or write 'extrapolation | allow' on the card."),
     OUTSIDE_COMPOSITION("The mole fraction of %s, %s, is outside the card's validity range %s to %s. Extrapolation is refused; to accept it, pass TRUE as 'extrapolate' or write 'extrapolation | allow' on the card."),
     CHECK_NEEDS_BOTH("To check a point, give both the mole fraction and the temperature."),
-    NON_PHYSICAL("At %s %s the card gives a %s of %s, which is not physical; the card is being used where its models do not hold.");
+    NON_PHYSICAL("At %s %s the card gives a %s of %s, which is not physical; the card is being used where its models do not hold."),
+
+    // --- what MIX.EXPLAIN answers about a call it cannot run (its answers, never a refusal)
+    EXPLAIN_UNKNOWN_FUNCTION("%s names no function that MIX.EXPLAIN can explain; give one of these names, with or without 'MIX.': %s."),
+    EXPLAIN_ARGUMENT_COUNT("%s takes %s (%s), not %d: Calc shows Err:504 for such a call without calling the function."),
+    EXPLAIN_RANGE_LEFT_OUT("The %s, argument %d of %s, is left out; a range argument cannot be, so Calc shows Err:502 for the call without calling the function: give a value, a cell or a range.");
 
     private final String pattern;
 

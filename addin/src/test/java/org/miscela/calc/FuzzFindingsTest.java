@@ -223,4 +223,68 @@ class FuzzFindingsTest {
                 Any.VOID, Any.VOID, Any.VOID, Any.VOID));
         assertEquals("BlendProblem.LIMIT_UNREACHABLE", Catalogue.entryOf(e.getMessage()), e.getMessage());
     }
+
+    /**
+     * Found by the adapter fuzzer (MIX.MIXINGHEAT and MIX.BATCH of 1e308 kg of each component): the moles overflow to
+     * infinity, and the check "the amounts add up to a positive, finite number" reported them as adding up to
+     * nothing. Fix: a total beyond the double range has a message of its own, AMOUNT_TOO_LARGE.
+     */
+    @Test
+    void amountsWhoseTotalOverflowsAreNotCalledNothing() throws Exception {
+        Object[][] card = range(heatCard().toArray(new Object[0][]));
+        assertTrue(Double.isFinite((Double) addIn.mixingHeat(card, range(row(1.0, 1.0)), one(300.0), "kg",
+                Any.VOID)), "an ordinary batch of the same card");
+        IllegalArgumentException heat = assertThrows(IllegalArgumentException.class,
+                () -> addIn.mixingHeat(card, range(row(1e308, 1e308)), one(300.0), "kg", Any.VOID));
+        assertEquals("Problem.AMOUNT_TOO_LARGE", Catalogue.entryOf(heat.getMessage()), heat.getMessage());
+        IllegalArgumentException added = assertThrows(IllegalArgumentException.class,
+                () -> addIn.additionHeat(card, range(row(1e308, 1.0)), 1.0, 1e308, one(300.0), "mol", Any.VOID));
+        assertEquals("Problem.AMOUNT_TOO_LARGE", Catalogue.entryOf(added.getMessage()), added.getMessage());
+        IllegalArgumentException batch = assertThrows(IllegalArgumentException.class, () -> addIn.batchTotals(card,
+                range(row(1e308, 1e308)), "kg", one(300.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+        assertEquals("BlendProblem.AMOUNT_TOO_LARGE", Catalogue.entryOf(batch.getMessage()), batch.getMessage());
+        IllegalArgumentException zero = assertThrows(IllegalArgumentException.class,
+                () -> addIn.mixingHeat(card, range(row(0.0, 0.0)), one(300.0), "kg", Any.VOID));
+        assertEquals("Problem.AMOUNT_ZERO", Catalogue.entryOf(zero.getMessage()), "nothing is still nothing");
+    }
+
+    /**
+     * Found by the adapter fuzzer (a component argument given as a range of two cells): it was refused as "The
+     * component is blank.". Fix: a range of more than one cell is refused as ARG_NOT_SINGLE; a one-cell range is its
+     * cell, as a single cell is.
+     */
+    @Test
+    void componentGivenAsARangeMustBeASingleValue() throws Exception {
+        Object[][] card = range(heatCard().toArray(new Object[0][]));
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> addIn.partialMolarVolume(card, range(row(1.0, 2.0)), one(0.5), one(300.0), Any.VOID));
+        assertEquals("Problem.ARG_NOT_SINGLE", Catalogue.entryOf(e.getMessage()), e.getMessage());
+        assertTrue(e.getMessage().contains("component"), e.getMessage());
+        assertEquals(addIn.partialMolarVolume(card, 2.0, one(0.5), one(300.0), Any.VOID),
+                addIn.partialMolarVolume(card, one(2.0), one(0.5), one(300.0), Any.VOID), "a one-cell range");
+        assertEquals(addIn.partialMolarVolume(card, "beta", one(0.5), one(300.0), Any.VOID),
+                addIn.partialMolarVolume(card, one("beta"), one(0.5), one(300.0), Any.VOID), "a one-cell name");
+    }
+
+    /**
+     * Found by the adapter fuzzer (extrapolate = NaN): a flag that is not a finite number counted as TRUE, so the
+     * call extrapolated. Fix: NaN and infinities are refused as ARG_NOT_FLAG; 0 and other numbers keep Calc's meaning.
+     */
+    @Test
+    void extrapolateFlagThatIsNotFiniteIsRefused() throws Exception {
+        List<Object[]> rows = heatCard();
+        rows.removeIf(r -> "extrapolation".equals(r[0]));
+        Object[][] card = range(rows.toArray(new Object[0][]));
+        assertThrows(IllegalArgumentException.class,
+                () -> addIn.mixtureDensity(card, one(0.5), one(330.0), Any.VOID), "330 K is outside 280–320 K");
+        assertTrue((Double) addIn.mixtureDensity(card, one(0.5), one(330.0), 1.0) > 0, "1 allows extrapolation");
+        for (double flag : new double[] {Double.NaN, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY}) {
+            IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                    () -> addIn.mixtureDensity(card, one(0.5), one(330.0), flag), "flag " + flag);
+            assertEquals("Problem.ARG_NOT_FLAG", Catalogue.entryOf(e.getMessage()), e.getMessage());
+            IllegalArgumentException inside = assertThrows(IllegalArgumentException.class,
+                    () -> addIn.mixtureDensity(card, one(0.5), one(300.0), flag), "flag " + flag);
+            assertEquals("Problem.ARG_NOT_FLAG", Catalogue.entryOf(inside.getMessage()), "refused inside too");
+        }
+    }
 }

@@ -224,4 +224,45 @@ class MixtureAddInTest {
                         Any.VOID));
         assertTrue(e.getMessage().contains("volume, enthalpy"), e.getMessage());
     }
+
+    /** A fit whose order is left out says so (it used to say "found -1", a number nobody wrote). */
+    @Test
+    void aFitWithoutItsOrderSaysTheOrderIsBlank() throws Exception {
+        Object[][] x = {{0.2}, {0.4}, {0.6}, {0.8}};
+        Object[][] v = {{-0.736}, {-1.008}, {-0.912}, {-0.544}};
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> addIn.fitExcessVolume(x, v, Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+        assertEquals("The order is blank.", e.getMessage());
+        assertEquals("The order is blank.", addIn.fitExcessVolume(x, v, Any.VOID, Any.VOID, Any.VOID, Any.VOID,
+                Any.VOID, "check"));
+        IllegalArgumentException d = assertThrows(IllegalArgumentException.class, () -> addIn.fitDensity(CARD,
+                Any.VOID, x, new Object[][] {{960.0}, {930.0}, {890.0}, {850.0}}, one(20.0), Any.VOID, Any.VOID,
+                Any.VOID, Any.VOID, Any.VOID));
+        assertEquals("The order is blank.", d.getMessage());
+        Object ok = addIn.fitExcessVolume(x, v, 1.0, Any.VOID, Any.VOID, Any.VOID, Any.VOID, "check");
+        assertEquals("OK", ((Object[][]) ((Any) ok).getObject())[0][0], "with the order given");
+    }
+
+    /** Numbers a message quotes from an argument are written as a person writes them ("31", not "31.0"). */
+    @Test
+    void messagesQuoteNumbersAsWritten() {
+        Object[][] x = {{0.2}, {0.4}, {0.6}, {0.8}};
+        Object[][] v = {{-0.736}, {-1.008}, {-0.912}, {-0.544}};
+        IllegalArgumentException order = assertThrows(IllegalArgumentException.class,
+                () -> addIn.fitExcessVolume(x, v, 31.0, Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+        assertEquals("The order must be a whole number from 0 to 30; found 31.", order.getMessage());
+        IllegalArgumentException unit = assertThrows(IllegalArgumentException.class, () -> addIn.batchTotals(CARD,
+                new Object[][] {{50.0, 50.0}}, 5.0, one(20.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+        assertEquals("The unit must be text; found 5.", unit.getMessage());
+    }
+
+    /** A batch that would cool below absolute zero: the range searched is named from 0 K (it said "-0.85 K"). */
+    @Test
+    void aTemperatureRiseWithNoRootNamesNoNegativeKelvin() {
+        Object[][] endothermic = TestCards.cells("invented-endothermic.tsv");
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> addIn.adiabaticRise(
+                endothermic, new Object[][] {{1.0, 1.0}}, one(-272.0), Any.VOID, Boolean.TRUE));
+        assertEquals("No temperature between 0 and 1.15 K balances the heat of mixing; the card's heat capacities or "
+                + "excess enthalpy are not physical there.", e.getMessage());
+    }
 }

@@ -70,6 +70,29 @@ class CardCacheBoundsTest {
         assertEquals(kept, cache.retainedCells(), "the million blank rows are not kept");
     }
 
+    /**
+     * A card named as whole columns is cheap for the add-in: the key looks at each cell once, the reader reads only
+     * the key's extent (not the million blank rows again), and a hit compares the filled cells only. The bound is
+     * the fuzzers' per-call bound, far above what this takes (the time is printed), so it only catches a cost that
+     * grows out of proportion. (In Calc the same range costs seconds per call: Calc converts every cell of a range
+     * argument before calling the add-in; DEVELOPERS.md has the measurement.)
+     */
+    @Test
+    void aWholeColumnCardCostsLittleToReadAndToFindAgain() {
+        Object[][] card = card(-4.0);
+        CardCache cache = new CardCache(8);
+        long start = System.nanoTime();
+        Card first = cache.get(asWholeColumns(card, 1_048_576, 6));
+        for (int i = 0; i < 10; i++) {
+            assertSame(first, cache.get(asWholeColumns(card, 1_048_576, 6)));
+        }
+        long millis = TimeUnit.NANOSECONDS.toMillis(System.nanoTime() - start);
+        assertEquals(1, cache.parseCount());
+        assertEquals(-4.0, a0(first), 0.0);
+        System.out.printf("11 reads of a 1,048,576 × 6 whole-column card (arrays built each time): %d ms%n", millis);
+        assertTrue(millis < 2000 * 11, "11 reads of a whole-column card took " + millis + " ms");
+    }
+
     @Test
     void aCardLargerThanTheBudgetIsParsedEveryTimeAndNeverKept() {
         Object[][] small = card(-4.0);

@@ -88,6 +88,11 @@ public final class Catalogue {
 
     /** Whether the message is an instance of this very problem's pattern. */
     public static boolean isInstanceOf(Problem problem, String message) {
-        return message != null && new Entry(problem.name(), problem.pattern()).matches(message);
+        return isInstance(problem.pattern(), message);
+    }
+
+    /** Whether the message is an instance of a message pattern (its literal text in order, anything in its blanks). */
+    public static boolean isInstance(String pattern, String message) {
+        return message != null && new Entry("", pattern).matches(message);
     }
 }

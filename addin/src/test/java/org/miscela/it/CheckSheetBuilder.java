@@ -18,6 +18,8 @@ import org.miscela.core.TestCards;
  * Builds a spreadsheet test file (.fods) from a check list (.spec): sheet "Summary" holds one cell that is TRUE when
  * every check passes; sheet "Checks" has per row the formula's result, the expected value, the tolerance, a pass
  * cell, the formula as text and the source of the expected value; sheet "Cards" holds the named card ranges.
+ * A "refused" row (see {@link ErrorSheet}) has its expected error code in the expected column and, in three more
+ * columns, MIX.EXPLAIN of the same call, the catalogue message as a wildcard pattern, and the catalogue entry.
  * The office writes the file itself, so it is valid ODF. Usage: CheckSheetBuilder SPEC... (writes SPEC → .fods).
  */
 public final class CheckSheetBuilder {
@@ -58,6 +60,8 @@ public final class CheckSheetBuilder {
                 doc);
         settings.setPropertyValue("RegularExpressions", false);
         settings.setPropertyValue("Wildcards", true);
+        // A refused row's pattern must match the whole explanation, in its case.
+        settings.setPropertyValue("MatchWholeCell", true);
         XSpreadsheetDocument sd = UnoRuntime.queryInterface(XSpreadsheetDocument.class, doc);
         sd.getSheets().insertNewByName("Checks", (short) 1);
         sd.getSheets().insertNewByName("Cards", (short) 2);
@@ -75,6 +79,12 @@ public final class CheckSheetBuilder {
         String[] headers = {"result", "expected", "tolerance", "pass", "formula", "kind", "source of the expected value"};
         for (int i = 0; i < headers.length; i++) {
             Sheets.put(sheet, i, 0, headers[i]);
+        }
+        if (checks.stream().anyMatch(c -> c[0].equals("refused"))) {
+            String[] more = {"MIX.EXPLAIN of the same call", "catalogue message (wildcards)", "catalogue entry"};
+            for (int i = 0; i < more.length; i++) {
+                Sheets.put(sheet, 7 + i, 0, more[i]);
+            }
         }
         for (int i = 0; i < checks.size(); i++) {
             String[] c = checks.get(i);
@@ -102,6 +112,17 @@ public final class CheckSheetBuilder {
                     Sheets.put(sheet, 1, r, c[2]);
                     pass = "=IFERROR(ISNUMBER(FIND(" + b + ";" + a + "));FALSE())";
                     break;
+                case "refused": {
+                    // c[2] the catalogue entry, c[3] the error code the call shows (Err:502 when empty)
+                    Sheets.cell(sheet, 1, r).setValue(c[3].isEmpty() ? 502 : Double.parseDouble(c[3]));
+                    Sheets.cell(sheet, 7, r).setFormula(ErrorSheet.explanation(c[1]));
+                    Sheets.put(sheet, 8, r, ErrorSheet.wildcards(ErrorSheet.pattern(c[2])));
+                    Sheets.put(sheet, 9, r, c[2]);
+                    String h = "H" + (r + 1);
+                    String p = "I" + (r + 1);
+                    pass = "=IFERROR(AND(ERRORTYPE(" + a + ")=" + b + ";COUNTIF(" + h + ";" + p + ")=1);FALSE())";
+                    break;
+                }
                 default:
                     throw new IllegalArgumentException("unknown check kind " + c[0]);
             }

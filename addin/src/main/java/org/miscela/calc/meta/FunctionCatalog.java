@@ -71,24 +71,66 @@ public final class FunctionCatalog {
             "Optional. The unit of the amounts: \"mol\" (left out), \"kmol\", \"g\" or \"kg\"; masses are "
                     + "converted with the card's molar masses.");
 
+    // --- call problems that no cell can produce (see notFromACell), with the reason; no function lists them
+    private static final String UNCERTAINTY_OF_A_FIT = "raised only by the library's uncertainty of a fitted "
+            + "expansion (ExcessVolumeUncertainty), which no cell function calls: MIX.UNCERTAINTY propagates the "
+            + "card's own covariance, whose problems are the card's";
+    private static final java.util.Map<Enum<?>, String> NOT_FROM_A_CELL = notFromACell(
+            Problem.ARG_NOT_FINITE, "Calc never passes NaN or an infinity (a cell that computes one shows an error, "
+                    + "and Calc does not call a function with an error argument); the check guards the library's "
+                    + "own callers",
+            Problem.CHECK_NEEDS_BOTH, "MIX.CHECKPOINT always passes a composition and a temperature (leaving one "
+                    + "out is Calc's own Err:502) and MIX.CHECK neither; the check guards the library's own callers",
+            FitProblem.RAGGED_DESIGN, "a range or an inline array is rectangular, so every row of a design has as "
+                    + "many columns as the first",
+            FitProblem.NO_PARAMETERS, "a range has at least one column, and a Redlich–Kister fit at least one "
+                    + "coefficient",
+            FitProblem.BAD_ORDER, "the fit functions refuse an order outside 0 to 30, or an order in T outside 0 to "
+                    + "10, first (NOT_A_COUNT), and a left-out order as blank (ARG_BLANK)",
+            FitProblem.BAD_SIGNIFICANCE, "the order table's F-tests always use the 5 % level",
+            FitProblem.NOT_NESTED, "the order table compares the fits of order 0, 1, 2, …, each with more "
+                    + "coefficients than the one before",
+            FitProblem.NOT_SAME_POINTS, "the order table fits every order to the same points",
+            FitProblem.COVARIANCE_SHAPE, UNCERTAINTY_OF_A_FIT,
+            FitProblem.COVARIANCE_NOT_FINITE, UNCERTAINTY_OF_A_FIT,
+            FitProblem.COVARIANCE_NOT_SYMMETRIC, UNCERTAINTY_OF_A_FIT,
+            FitProblem.COVARIANCE_NEGATIVE_VARIANCE, UNCERTAINTY_OF_A_FIT,
+            FitProblem.MOLE_FRACTION, UNCERTAINTY_OF_A_FIT,
+            FitProblem.TEMPERATURE, UNCERTAINTY_OF_A_FIT,
+            FitProblem.BAD_COMPONENT, UNCERTAINTY_OF_A_FIT,
+            BlendProblem.ARGUMENT_NOT_FINITE, "Calc never passes an infinity, and the blending functions compute no "
+                    + "temperature of their own",
+            BlendProblem.NO_SUCH_COMPONENT, "every component argument is checked against the card first "
+                    + "(UNKNOWN_COMPONENT_ARG)",
+            BlendProblem.VALUE_NOT_FINITE, "Calc never passes an infinity, and the values are checked as given",
+            BlendProblem.NEEDS_BALANCE, "the cell functions always name a balance: the card's last component when "
+                    + "the argument is left out",
+            BlendProblem.NEEDS_SOLVENT, "the cell functions always name a solvent: the card's last component when "
+                    + "the balance is left out",
+            BlendProblem.NO_COMPOSITION, "the concentration search's last fallback, for a card whose molar volume "
+                    + "is not physical between two of the 257 points the search looks at while physical at all of "
+                    + "them; no card or input is known that reaches it, and no test produces it (values too large "
+                    + "to add up are TOO_CONCENTRATED)",
+            BlendProblem.NEEDS_TEMPERATURE, "every cell function that takes a quantity also takes the temperature "
+                    + "it is measured at, as a required argument");
+
     // --- the problems functions report, by kind (card problems come on top for every function but the fits)
     private static final List<Enum<?>> COMPOSITION_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
-            Problem.ARG_NOT_FINITE, Problem.ARG_SHAPE, Problem.NOT_BINARY, Problem.MOLE_FRACTION_OUTSIDE_UNIT,
-            Problem.COMPOSITION_LENGTH, Problem.COMPOSITION_NEGATIVE, Problem.COMPOSITION_SUM,
-            Problem.COMPOSITION_SHAPE);
+            Problem.ARG_SHAPE, Problem.NOT_BINARY, Problem.MOLE_FRACTION_OUTSIDE_UNIT, Problem.COMPOSITION_NEGATIVE,
+            Problem.COMPOSITION_SUM, Problem.COMPOSITION_SHAPE);
     private static final List<Enum<?>> POINT_PROBLEMS = list(Problem.ARG_NOT_FLAG, Problem.BELOW_ABSOLUTE_ZERO,
             Problem.OUTSIDE_TEMPERATURE, Problem.OUTSIDE_COMPOSITION, Problem.OUTSIDE_PAIR_TEMPERATURE,
             Problem.OUTSIDE_PAIR_COMPOSITION, Problem.NON_PHYSICAL);
     private static final List<Enum<?>> VOLUME_PROBLEMS = list(Problem.NO_VOLUME);
-    private static final List<Enum<?>> COMPONENT_PROBLEMS = list(Problem.UNKNOWN_COMPONENT_ARG);
+    private static final List<Enum<?>> COMPONENT_PROBLEMS = list(Problem.UNKNOWN_COMPONENT_ARG, Problem.ARG_NOT_SINGLE);
     private static final List<Enum<?>> AMOUNT_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
-            Problem.ARG_NOT_FINITE, Problem.ARG_SHAPE, Problem.COMPOSITION_LENGTH, Problem.COMPOSITION_SHAPE,
-            Problem.AMOUNT_NEGATIVE, Problem.AMOUNT_ZERO, Problem.UNKNOWN_BASIS);
+            Problem.ARG_SHAPE, Problem.COMPOSITION_SHAPE,
+            Problem.AMOUNT_NEGATIVE, Problem.AMOUNT_ZERO, Problem.AMOUNT_TOO_LARGE, Problem.UNKNOWN_BASIS);
     private static final List<Enum<?>> DATA_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
             Problem.DATA_SHAPE, Problem.DATA_LENGTH, Problem.DATA_PARTLY_BLANK, Problem.NOT_A_COUNT,
             Problem.UNKNOWN_FIT_OUTPUT);
-    private static final List<Enum<?>> FIT_ENGINE_PROBLEMS = list(FitProblem.values());
-    private static final List<Enum<?>> BLEND_PROBLEMS = union(list(BlendProblem.values()), list(Problem.ARG_BLANK,
+    private static final List<Enum<?>> FIT_ENGINE_PROBLEMS = fromACell(FitProblem.values());
+    private static final List<Enum<?>> BLEND_PROBLEMS = union(fromACell(BlendProblem.values()), list(Problem.ARG_BLANK,
             Problem.ARG_NOT_NUMBER, Problem.ARG_NOT_TEXT, Problem.ARG_NOT_SINGLE, Problem.COMPOSITION_SHAPE,
             Problem.UNKNOWN_COMPONENT_ARG));
 
@@ -134,7 +176,7 @@ public final class FunctionCatalog {
                     CARD, COMPONENT, required("temperature", "temperature",
                             "Temperature in the card's temperature unit. A single value, or a range for an array "
                                     + "result."), EXTRAPOLATE)
-                    .shows("998.201").refuses(union(COMPONENT_PROBLEMS, list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER, Problem.ARG_NOT_FINITE, Problem.ARG_NOT_FLAG, Problem.BELOW_ABSOLUTE_ZERO, Problem.OUTSIDE_TEMPERATURE, Problem.NON_PHYSICAL))),
+                    .shows("998.201").refuses(union(COMPONENT_PROBLEMS, list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER, Problem.ARG_NOT_FLAG, Problem.BELOW_ABSOLUTE_ZERO, Problem.OUTSIDE_TEMPERATURE, Problem.NON_PHYSICAL))),
             new FunctionInfo("checkCard", "MIX.CHECK",
                     "\"OK\" when the card can be read and used; otherwise its first problem, naming the row.",
                     "—",
@@ -147,7 +189,7 @@ public final class FunctionCatalog {
                     "—",
                     "=MIX.CHECKPOINT(card; 0.3; 45)",
                     CARD, MOLE_FRACTION_ONE, TEMPERATURE_ONE, EXTRAPOLATE)
-                    .shows("The temperature 45 °C is outside the card's validity range 0 to 40 °C.").refuses(list(Problem.CHECK_NEEDS_BOTH, Problem.ARG_NOT_SINGLE)),
+                    .shows("The temperature 45 °C is outside the card's validity range 0 to 40 °C.").refuses(list(Problem.ARG_NOT_SINGLE)),
             new FunctionInfo("excessEnthalpy", "MIX.EXCESSENTHALPY",
                     "Excess molar enthalpy (heat of mixing per mole of mixture) from the card's excess enthalpy "
                             + "coefficients, in the card's enthalpy unit; negative when mixing releases heat.",
@@ -372,7 +414,8 @@ public final class FunctionCatalog {
                     optional("from", "from", "Optional. The lowest mole fraction of the component to consider."),
                     optional("to", "to", "Optional. The highest mole fraction of the component to consider."),
                     BALANCE, EXTRAPOLATE)
-                    .shows("0.5000").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS)),
+                    .shows("0.5000").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS,
+                            list(Problem.COMPOSITION_LENGTH))),
             new FunctionInfo("volumeCorrection", "MIX.VOLUMEFACTOR",
                     "Temperature correction of a blend of known composition: the factor that turns a volume "
                             + "measured at one temperature into the volume at a reference temperature (15 °C or "
@@ -399,7 +442,18 @@ public final class FunctionCatalog {
                     "=MIX.INFO(\"version\")",
                     optional("item", "item", "Optional. \"version\" (left out), \"card reads\" (cards parsed since "
                             + "the office started) or \"cards kept\" (parsed cards held now)."))
-                    .shows(VERSION).refuses(list(Problem.ARG_NOT_TEXT, Problem.UNKNOWN_INFO_ITEM))));
+                    .shows(VERSION).refuses(list(Problem.ARG_NOT_TEXT, Problem.UNKNOWN_INFO_ITEM)),
+            new FunctionInfo("explainCall", "MIX.EXPLAIN",
+                    "The words for a refused call: \"OK\" when the named function gives a result for these "
+                            + "arguments, otherwise the message of its refusal (why its cell shows Err:502). It runs "
+                            + "that function on them, so it always agrees with the call; it never refuses itself.",
+                    "—",
+                    "=MIX.EXPLAIN(\"MIX.BATCH\"; card; {50; 50}; \"lb\"; 20)",
+                    required("functionName", "function", "The function's name as text: \"MIX.DENSITY\" or "
+                            + "\"density\" (case does not matter)."),
+                    optional("arguments", "arguments", "The same arguments as the call, in its order (one per "
+                            + "argument box); leave out here what the call leaves out."))
+                    .shows("The unit \"lb\" is not recognised").refuses(list())));
 
     private FunctionCatalog() {
     }
@@ -407,6 +461,33 @@ public final class FunctionCatalog {
     /** Every function, in the order of the IDL interface. */
     public static List<FunctionInfo> functions() {
         return FUNCTIONS;
+    }
+
+    /**
+     * The problems of a call rather than of a card, in the error catalogue's order: the call entries of
+     * {@link Problem}, then {@link FitProblem}, then {@link BlendProblem}.
+     */
+    public static List<Enum<?>> callProblems() {
+        List<Enum<?>> all = new java.util.ArrayList<>(java.util.EnumSet.range(Problem.NOT_BINARY,
+                Problem.NON_PHYSICAL));
+        all.addAll(Arrays.asList(FitProblem.values()));
+        all.addAll(Arrays.asList(BlendProblem.values()));
+        return Collections.unmodifiableList(all);
+    }
+
+    /** What MIX.EXPLAIN answers for a call it cannot run (never a refusal). */
+    public static List<Enum<?>> explainAnswers() {
+        return Collections.unmodifiableList(new java.util.ArrayList<>(java.util.EnumSet.range(
+                Problem.EXPLAIN_UNKNOWN_FUNCTION, Problem.EXPLAIN_RANGE_LEFT_OUT)));
+    }
+
+    /**
+     * The call problems no cell can produce, each with the reason: checks that guard the library's own callers, or a
+     * path the add-in never takes. No function lists them; the error catalogue says so, and a plain-JVM test
+     * (UnreachableProblemsTest) produces each through the core.
+     */
+    public static java.util.Map<Enum<?>, String> notFromACell() {
+        return NOT_FROM_A_CELL;
     }
 
     /** The function with this IDL method name. */
@@ -421,6 +502,26 @@ public final class FunctionCatalog {
 
     private static List<Enum<?>> list(Enum<?>... problems) {
         return Arrays.asList(problems);
+    }
+
+    /** The problems a cell can produce, of those given (all but those declared in NOT_FROM_A_CELL). */
+    private static List<Enum<?>> fromACell(Enum<?>... problems) {
+        List<Enum<?>> out = new java.util.ArrayList<>();
+        for (Enum<?> p : problems) {
+            if (!NOT_FROM_A_CELL.containsKey(p)) {
+                out.add(p);
+            }
+        }
+        return out;
+    }
+
+    /** Pairs of (problem, reason) as an ordered map. */
+    private static java.util.Map<Enum<?>, String> notFromACell(Object... pairs) {
+        java.util.Map<Enum<?>, String> m = new java.util.LinkedHashMap<>();
+        for (int i = 0; i < pairs.length; i += 2) {
+            m.put((Enum<?>) pairs[i], (String) pairs[i + 1]);
+        }
+        return Collections.unmodifiableMap(m);
     }
 
     @SafeVarargs

@@ -71,6 +71,16 @@ public final class FunctionInfo {
         return arguments;
     }
 
+    /** How a call is written, optional arguments in brackets: {@code MIX.DENSITY(card; x; temperature; [extrapolate])}. */
+    public String syntax() {
+        StringBuilder b = new StringBuilder(displayName).append('(');
+        for (int i = 0; i < arguments.size(); i++) {
+            ArgumentInfo a = arguments.get(i);
+            b.append(i > 0 ? "; " : "").append(a.optional() ? "[" + a.displayName() + "]" : a.displayName());
+        }
+        return b.append(')').toString();
+    }
+
     /** Calc's own category (one of its fixed English names). */
     public String category() {
         return FunctionCatalog.CATEGORY;

@@ -86,7 +86,7 @@ public final class MetadataWriter {
         m.append("All functions take the card (a named range) first. Numbers are in the units the card states. "
                 + "A composition or temperature argument may be a range: the result is then an array of the same "
                 + "shape (enter the formula as an array formula), and blank input cells give blank results. "
-                + "Bad input shows Err:502; `MIX.CHECK` tells why. Outside the card's validity range results "
+                + "Bad input shows Err:502; `MIX.EXPLAIN` with the same arguments tells why. Outside the card's validity range results "
                 + "are refused unless extrapolation is allowed (per call or on the card).\n\n");
         m.append("**Examples.** Each function's example is entered in a real office by a test "
                 + "(`ReferenceExamplesIT`), which checks that Calc shows the value printed here. The examples use "
@@ -99,8 +99,9 @@ public final class MetadataWriter {
                 + "columns and `|` between rows (the form the office's API and ODF files use; in the English "
                 + "user interface type `,` between the columns of an inline array and `;` between its rows).\n\n"
                 + "**Errors.** A refused call shows Err:502; the message below (with `…` for the details the "
-                + "actual message fills in) says why, and `MIX.CHECK` / `MIX.CHECKPOINT` (or a fit's result "
-                + "`\"check\"`) show it in a cell. Every function that reads a card also reports the card's own "
+                + "actual message fills in) says why, and `MIX.EXPLAIN(\"MIX.…\"; the same arguments)` shows it "
+                + "in a cell (so do `MIX.CHECK` / `MIX.CHECKPOINT` for a card or a point, and a fit's result "
+                + "`\"check\"`). Every function that reads a card also reports the card's own "
                 + "problems (docs/card-format.md). Calc itself shows Err:504 for a missing required argument or "
                 + "an error cell inside a range argument.\n\n");
         m.append("| function | what it returns |\n|---|---|\n");
@@ -123,7 +124,7 @@ public final class MetadataWriter {
             if (!f.errors().isEmpty()) {
                 m.append("Refused (Err:502) when:\n\n");
                 for (Enum<?> e : f.errors()) {
-                    m.append("- `").append(e.name()).append("`: ").append(pattern(e).replaceAll("%[sd]", "…"))
+                    m.append("- `").append(e.name()).append("`: ").append(pattern(e).replaceAll("%[sd]", "…").replace("%%", "%"))
                             .append('\n');
                 }
                 m.append('\n');
@@ -136,12 +137,7 @@ public final class MetadataWriter {
 
     /** How a call is written, optional arguments in brackets: {@code MIX.DENSITY(card; x1; temperature; [extrapolate])}. */
     public static String syntax(FunctionInfo f) {
-        StringBuilder b = new StringBuilder(f.displayName()).append('(');
-        for (int i = 0; i < f.arguments().size(); i++) {
-            ArgumentInfo a = f.arguments().get(i);
-            b.append(i > 0 ? "; " : "").append(a.optional() ? "[" + a.displayName() + "]" : a.displayName());
-        }
-        return b.append(')').toString();
+        return f.syntax();
     }
 
     /** docs/errors.md: every message the add-in can produce, where it occurs and what Calc shows. */
@@ -155,18 +151,31 @@ public final class MetadataWriter {
                 + "message fills in (a row number, a value, a name).\n\n");
         m.append("## What Calc shows\n\n");
         m.append("| Calc shows | Meaning | Where the words are |\n|---|---|---|\n");
-        m.append("| Err:502 | The add-in refused the call: one of the messages below. | `MIX.CHECK(card)` for the "
-                + "card's problems, `MIX.CHECKPOINT(card; x; temperature)` for a point's, a fit's result "
+        m.append("| Err:502 | The add-in refused the call: one of the messages below. | "
+                + "`MIX.EXPLAIN(\"MIX.…\"; the same arguments)` for any refused call: put the function's name "
+                + "first and then the call's own arguments (copy them from the formula). Also `MIX.CHECK(card)` "
+                + "for the card's problems, `MIX.CHECKPOINT(card; x; temperature)` for a point's, a fit's result "
                 + "`\"check\"` for a fit's. |\n");
         m.append("| Err:504 | Calc's own parameter error: a required argument left out, too many arguments, or an "
                 + "error value inside a range argument (for example a card whose fitted cells show Err:502). Calc "
-                + "does not call the add-in. | Look at the arguments' cells. |\n");
+                + "does not call the add-in. | `MIX.EXPLAIN` says when the number of arguments is wrong; otherwise "
+                + "look at the arguments' cells. |\n");
         m.append("| the argument's own error (#DIV/0!, #N/A, …) | An argument that is an error value; Calc passes it "
                 + "through without calling the add-in. | The argument's cell. |\n");
         m.append("| #NAME? | The extension is not installed in this LibreOffice, or the function name is "
-                + "misspelt. | Tools ▸ Extension Manager. |\n");
-        m.append("| text | `MIX.CHECK`, `MIX.CHECKPOINT`, `MIX.TRACE` labels, a fit's `\"check\"` and "
-                + "`MIX.ADJUST`'s `\"summary\"` return text by design. | — |\n\n");
+                + "misspelt. | Tools ▸ Extension Manager; `MIX.EXPLAIN(\"the name\")` lists the names there are. |\n");
+        m.append("| text | `MIX.EXPLAIN`, `MIX.CHECK`, `MIX.CHECKPOINT`, `MIX.TRACE` labels, a fit's `\"check\"` "
+                + "and `MIX.ADJUST`'s `\"summary\"` return text by design. | — |\n\n");
+        m.append("A range argument left out (`;;`, or `;` at the end, where a range belongs) makes Calc show "
+                + "Err:502 itself, without calling the add-in; `MIX.EXPLAIN` says which argument it is.\n\n");
+        m.append("Every message of the tables of a call, a fit and a blending calculation below, and every answer of "
+                + "`MIX.EXPLAIN` itself, is produced in a real office by a spreadsheet test "
+                + "(`addin/src/test/resources/sheets/errors.spec`, checked by `ErrorCatalogueIT`): the call shows "
+                + "its error code and `MIX.EXPLAIN` of the same call the message. The exceptions are marked *not "
+                + "reachable from a cell*, with the reason: they guard the library's own callers or paths the cell "
+                + "functions never take, and `UnreachableProblemsTest` produces each through the library (all but "
+                + "one, for which no input is known). Every card problem is shown by `MIX.CHECK` in a real office "
+                + "(`CardProblemsIT`).\n\n");
         m.append("The add-in never returns NaN or an infinity (Calc would show #NUM!) and an unexpected failure "
                 + "inside it would show #VALUE!; the tests (`CalcFuzzIT`, the core fuzzers) check that neither "
                 + "occurs.\n\n");
@@ -182,6 +191,14 @@ public final class MetadataWriter {
         table(m, java.util.Arrays.asList(org.miscela.core.fit.FitProblem.values()), true);
         m.append("\n## Problems with a blending calculation\n\n");
         table(m, java.util.Arrays.asList(org.miscela.core.blend.BlendProblem.values()), true);
+        m.append("\n## What MIX.EXPLAIN answers about a call it cannot run\n\n");
+        m.append("`MIX.EXPLAIN` never refuses: for a call it cannot run it answers one of these instead of "
+                + "\"OK\" or the call's refusal.\n\n");
+        m.append("| Answer | Message |\n|---|---|\n");
+        for (Enum<?> p : FunctionCatalog.explainAnswers()) {
+            m.append("| `").append(p.name()).append("` | ").append(pattern(p).replaceAll("%[sd]", "…").replace("%%", "%")
+                    .replace("|", "\\|")).append(" |\n");
+        }
         return m.toString();
     }
 
@@ -189,7 +206,7 @@ public final class MetadataWriter {
         m.append(where ? "| Problem | Message | Reported by |\n|---|---|---|\n" : "| Problem | Message |\n|---|---|\n");
         for (Enum<?> p : problems) {
             m.append("| `").append(p.name()).append("` | ")
-                    .append(pattern(p).replaceAll("%[sd]", "…").replace("|", "\\|"));
+                    .append(pattern(p).replaceAll("%[sd]", "…").replace("%%", "%").replace("|", "\\|"));
             if (where) {
                 StringBuilder fs = new StringBuilder();
                 for (FunctionInfo f : FunctionCatalog.functions()) {
@@ -197,7 +214,9 @@ public final class MetadataWriter {
                         fs.append(fs.length() == 0 ? "" : ", ").append(f.displayName());
                     }
                 }
-                m.append(" | ").append(fs.length() == 0 ? "—" : fs);
+                String unreachable = FunctionCatalog.notFromACell().get(p);
+                m.append(" | ").append(unreachable != null ? "not reachable from a cell: " + unreachable
+                        : fs.length() == 0 ? "—" : fs);
             }
             m.append(" |\n");
         }

@@ -56,7 +56,10 @@ public final class Batches {
 
     static double[] positiveTotal(Card card, double[] moles, String what) {
         double total = Checks.sum(moles);
-        if (!(total > 0.0) || Double.isInfinite(total)) {
+        if (Double.isInfinite(total)) {
+            throw BlendProblem.AMOUNT_TOO_LARGE.raise(what);
+        }
+        if (!(total > 0.0)) {
             throw BlendProblem.AMOUNT_ZERO.raise(what);
         }
         return moles;

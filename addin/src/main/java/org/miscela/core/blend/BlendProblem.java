@@ -46,6 +46,8 @@ public enum BlendProblem {
     NO_STORAGE_TEMPERATURES("No storage temperatures were given, so the volumes of the pure components to draw are "
             + "not known; give one temperature per component."),
     AMOUNT_ZERO("The %s add up to nothing; give a positive amount of at least one component."),
+    AMOUNT_TOO_LARGE("The %s come to more moles than a number can hold (over 1.8e308 in all); check them and their "
+            + "unit."),
     NEEDS_REMOVAL("The target cannot be reached by additions alone: the batch holds %s, which the target excludes. "
             + "Give a final quantity, or the largest the vessel can take, to get the closest composition within it."),
     LIMIT_BELOW_BATCH("The batch already amounts to %s %s, more than the %s of %s %s; additions can only increase "

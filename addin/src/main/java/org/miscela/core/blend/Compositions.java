@@ -169,6 +169,11 @@ public final class Compositions {
             checkBalance(card, v, pure, basis, e);
             return pure;
         }
+        if (Double.isInfinite(total)) {
+            // Entries whose moles per litre add up beyond the double range: no liquid holds a fraction of that.
+            throw BlendProblem.TOO_CONCENTRATED.raise(basis.plural(), Show.number(t),
+                    card.units().temperature().symbol(), Checks.name(card, b), Show.number(0.0));
+        }
         double[] r = Checks.scaled(u, 1.0 / total);
         final double molesPerLitre = total;
         UnivariateFunction excess = s -> {

@@ -1,21 +1,15 @@
 package org.miscela.core.blend;
 
-import java.math.BigDecimal;
-import java.math.MathContext;
-
-/** Numbers inside messages: ten significant digits at most, never in exponent form, so a user can find the cell. */
+/**
+ * Numbers inside messages: ten significant digits at most, in plain form so a user can find the cell; only numbers of
+ * 10^15 and more, or below 10^-9, in exponent form as Calc writes them (see {@link org.miscela.core.Numbers}).
+ */
 final class Show {
     private Show() {
     }
 
     static String number(double v) {
-        if (Double.isNaN(v) || Double.isInfinite(v)) {
-            return Double.toString(v);
-        }
-        if (v == Math.rint(v) && Math.abs(v) < 1e15) {
-            return Long.toString((long) v);
-        }
-        return new BigDecimal(v).round(new MathContext(10)).stripTrailingZeros().toPlainString();
+        return org.miscela.core.Numbers.show(v);
     }
 
     /** Numbers joined by "; " for lists in messages. */

@@ -12,6 +12,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.function.Executable;
 import org.miscela.core.Card;
 import org.miscela.core.CardReader;
+import org.miscela.core.Catalogue;
 import org.miscela.core.Extrapolation;
 
 /**
@@ -86,6 +87,8 @@ class BlendProblemTest {
                 new double[] {0.5, 0.5}, MASS, null, E).amounts(AmountUnit.L));
         m.put(BlendProblem.AMOUNT_ZERO, () -> Batches.totals(EW, Amounts.of(new double[] {0, 0}, AmountUnit.G), 20,
                 E));
+        m.put(BlendProblem.AMOUNT_TOO_LARGE, () -> Batches.totals(EW, Amounts.of(new double[] {1e308, 1e308},
+                AmountUnit.KG), 20, E));
         m.put(BlendProblem.NEEDS_REMOVAL, () -> Adjustments.leastAdditions(EW, half, new double[] {1, 0}, MASS, 20,
                 null, E));
         m.put(BlendProblem.LIMIT_BELOW_BATCH, () -> Adjustments.within(EW, half, new double[] {0.4, 0.6}, MASS,
@@ -118,11 +121,24 @@ class BlendProblemTest {
         cases.forEach((problem, call) -> {
             BlendException ex = assertThrows(BlendException.class, call, problem.name());
             assertEquals(problem, ex.problem(), ex.getMessage());
+            assertTrue(Catalogue.isInstance(problem.pattern(), ex.getMessage()), "the test's matcher: " + ex.getMessage());
             assertFalse(ex.getMessage().matches("(?s).*%[sdf].*"), "unfilled placeholder: " + ex.getMessage());
             assertFalse(ex.getMessage().contains("null") || ex.getMessage().contains("NaN"), ex.getMessage());
             b.append(problem).append(": ").append(ex.getMessage()).append('\n');
         });
         System.out.print(b);
+    }
+
+    /**
+     * Molarities whose moles per litre add up beyond the double range (found by the error catalogue's sheet, 1E+308
+     * mol/L of two components) are too concentrated; they were refused as "The mole fractions sum to 0".
+     */
+    @Test
+    void molaritiesBeyondTheDoubleRangeAreTooConcentrated() {
+        BlendException ex = assertThrows(BlendException.class, () -> Compositions.toMoleFractions(Cards.TERNARY,
+                new double[] {1e308, 1e308, NAN}, CompositionBasis.molarity(20, 2), E));
+        assertEquals(BlendProblem.TOO_CONCENTRATED, ex.problem(), ex.getMessage());
+        assertTrue(ex.getMessage().contains("reach only 0 %"), ex.getMessage());
     }
 
     /** The pair's two compositions at 17 mol/L are each a true root (checked with the forward conversion). */
