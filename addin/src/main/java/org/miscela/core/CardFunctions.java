@@ -402,7 +402,9 @@ public final class CardFunctions {
                 return false;
             }
         }
-        for (Validity.PairLimit p : v.pairLimits()) {
+        List<Validity.PairLimit> limits = v.pairLimits();
+        for (int i = 0; i < limits.size(); i++) {
+            Validity.PairLimit p = limits.get(i);
             boolean present = x[p.first()] > 0.0 && x[p.second()] > 0.0;
             if (present && !p.containsTemperature(kelvin) || !p.containsRatio(x)) {
                 return false;

@@ -169,9 +169,7 @@ public final class ExcessFunction {
 
     /** Pair p's contribution x_i·x_j·S(d). */
     public double pairContribution(int p, double[] x, double kelvin) {
-        double[] s = new double[3];
-        expansion[p].series(pairCoordinate(p, x), kelvin, false, s);
-        return x[first[p]] * x[second[p]] * s[0];
+        return x[first[p]] * x[second[p]] * expansion[p].sum(pairCoordinate(p, x), kelvin, false);
     }
 
     /** Ternary term t's contribution. */
@@ -198,7 +196,8 @@ public final class ExcessFunction {
                 java.util.Arrays.fill(row, 0.0);
             }
         }
-        double[] s = new double[3];
+        // the value alone needs no scratch array: a call per cell then allocates nothing here
+        double[] s = gradient == null && hessian == null ? null : new double[3];
         double total = 0.0;
         for (int p = 0; p < expansion.length; p++) {
             total += accumulatePair(p, x, kelvin, temperatureSlope, s, gradient, hessian);
@@ -281,8 +280,11 @@ public final class ExcessFunction {
             djj = 4.0 * xi / sum3;
             dij = 2.0 * (xi - xj) / sum3;
         }
-        expansion[p].series(d, kelvin, temperatureSlope, s);
         double u = xi * xj;
+        if (s == null) {
+            return u * expansion[p].sum(d, kelvin, temperatureSlope);
+        }
+        expansion[p].series(d, kelvin, temperatureSlope, s);
         if (gradient != null) {
             gradient[i] += xj * s[0] + u * s[1] * di;
             gradient[j] += xi * s[0] + u * s[1] * dj;

@@ -95,6 +95,16 @@ public final class RedlichKister {
         out[2] = 2.0 * dds;
     }
 
+    /** S(d) = Σ_k A_k(T)·d^k alone (or its temperature slope): what {@link #series} puts first, with no array. */
+    public double sum(double d, double kelvin, boolean temperatureSlope) {
+        int last = a.length - 1;
+        double s = temperatureSlope ? coefficientSlopeAt(last, kelvin) : coefficientAt(last, kelvin);
+        for (int k = last - 1; k >= 0; k--) {
+            s = s * d + (temperatureSlope ? coefficientSlopeAt(k, kelvin) : coefficientAt(k, kelvin));
+        }
+        return s;
+    }
+
     /** The same expansion written for the components in the other order: A_k → (−1)^k A_k. */
     public RedlichKister swapped() {
         double[][] b = new double[a.length][];
