@@ -579,8 +579,4 @@ public final class CalcBenchmark {
     private static String target(String what, String measured, boolean met) {
         return "| " + what + " | " + measured + " | " + (met ? "yes" : "no") + " |\n";
     }
-
-    static List<String> keys(Report r) {
-        return new ArrayList<>(Arrays.asList(r.measured.keySet().toArray(new String[0])));
-    }
 }
