@@ -43,6 +43,10 @@ final class CompositionArguments {
         Object[][] lines = lines(card, what, grid);
         Object[] temperatures = temperatures(temperature, lines.length);
         if (lines.length == 1) {
+            // a lone line must be there: only a block may hold a blank line
+            if (Arguments.allBlank(lines[0]) || Arguments.isBlank(temperatures[0])) {
+                throw Problem.ARG_BLANK.raise(Arguments.allBlank(lines[0]) ? what : "temperature");
+            }
             return Arguments.finite(lineAt(card, what, lines, temperatures, 0, f));
         }
         Object[][] out = new Object[lines.length][1];
@@ -53,12 +57,9 @@ final class CompositionArguments {
         return new Any(Arguments.GRID, out);
     }
 
-    /** f at line r, given its own array of values (a blank line is refused: only a block may hold one). */
+    /** f at line r, which is not blank, given its own array of values. */
     private static double lineAt(Card card, String what, Object[][] lines, Object[] temperatures, int r,
             RowFunction f) {
-        if (Arguments.allBlank(lines[r]) || Arguments.isBlank(temperatures[r])) {
-            throw Problem.ARG_BLANK.raise(Arguments.allBlank(lines[r]) ? what : "temperature");
-        }
         int n = card.componentCount();
         double[] row = new double[n];
         for (int k = 0; k < n; k++) {

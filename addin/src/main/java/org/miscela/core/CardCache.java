@@ -80,10 +80,11 @@ public final class CardCache {
                 }
             }
         }
+        Recent found = new Recent(key, hit);
         if (key.cellCount <= cellBudget) {
-            recent = new Recent(key, hit);
+            recent = found;
         }
-        return new Recent(key, hit).card();
+        return found.card();
     }
 
     /** A key with its card or its parse failure. Immutable. */

@@ -23,6 +23,8 @@ public final class AdapterCost {
     }
 
     private static final int BATCH = 2_000;
+    private static final com.sun.management.ThreadMXBean THREADS =
+            (com.sun.management.ThreadMXBean) ManagementFactory.getThreadMXBean();
 
     private AdapterCost() {
     }
@@ -42,8 +44,6 @@ public final class AdapterCost {
         MixtureAddIn addIn = new MixtureAddIn();
         Object[][] card = new BenchmarkCard().cells();
         Object[][] data = CalcBenchmark.data(rows);
-        com.sun.management.ThreadMXBean threads = (com.sun.management.ThreadMXBean) ManagementFactory.getThreadMXBean();
-        long id = Thread.currentThread().getId();
         long nanos = 0;
         long bytes = 0;
         for (int pass = 0; pass < 4; pass++) {
@@ -54,11 +54,11 @@ public final class AdapterCost {
                 t[r] = new Object[] {fresh(data[r][3])};
             }
             Object[][] c = fresh(card);
-            long b0 = threads.getThreadAllocatedBytes(id);
+            long b0 = allocated();
             long t0 = System.nanoTime();
             Object result = addIn.mixtureDensity(c, x, t, null);
             long t1 = System.nanoTime();
-            long b1 = threads.getThreadAllocatedBytes(id);
+            long b1 = allocated();
             if (result == null) {
                 throw new IllegalStateException("no result");
             }
@@ -77,8 +77,6 @@ public final class AdapterCost {
     private static Cost measure(int calls, Call call) throws Exception {
         Object[][] card = new BenchmarkCard().cells();
         Object[][] data = CalcBenchmark.data(BATCH);
-        com.sun.management.ThreadMXBean threads = (com.sun.management.ThreadMXBean) ManagementFactory.getThreadMXBean();
-        long id = Thread.currentThread().getId();
         double sink = 0;
         // warm up the JIT on one batch, then measure whole batches
         long nanos = 0;
@@ -93,13 +91,13 @@ public final class AdapterCost {
                 xs[i] = new Object[][] {{fresh(data[i][0]), fresh(data[i][1]), fresh(data[i][2])}};
                 ts[i] = new Object[][] {{fresh(data[i][3])}};
             }
-            long b0 = threads.getThreadAllocatedBytes(id);
+            long b0 = allocated();
             long t0 = System.nanoTime();
             for (int i = 0; i < BATCH; i++) {
                 sink += (Double) call.at(cards[i], xs[i], ts[i]);
             }
             long t1 = System.nanoTime();
-            long b1 = threads.getThreadAllocatedBytes(id);
+            long b1 = allocated();
             if (pass >= 0) {
                 nanos += t1 - t0;
                 bytes += b1 - b0;
@@ -110,6 +108,11 @@ public final class AdapterCost {
             throw new IllegalStateException("the calls gave no densities");
         }
         return new Cost(nanos / 1e3 / done, (double) bytes / done);
+    }
+
+    /** Bytes this thread has allocated so far. */
+    private static long allocated() {
+        return THREADS.getThreadAllocatedBytes(Thread.currentThread().getId());
     }
 
     /** A copy with new cell objects, as the bridge delivers them on every call. */
