@@ -1,0 +1,225 @@
+package org.miscela.core.blend;
+
+import org.miscela.core.card.Card;
+import org.miscela.core.card.Extrapolation;
+
+/**
+ * The blending cell functions' arithmetic, with arguments as a sheet gives them: bases and units as text,
+ * components 0-based, NaN for a blank cell. Each returns numbers in the card's units (or the unit asked for).
+ *
+ * <p>Compositions on a concentration basis (%vol, mol/L, g/L, mol/kg) name a balance component, the one that makes
+ * up the rest; when none is named it is the card's last component (list the solvent last). For a card of two
+ * components a single number stands for the first component's value: on a fraction basis the second is the rest,
+ * on a concentration basis the second is the balance.
+ *
+ * <p>Model estimates: where results feed custody transfer, invoicing, duty or filling decisions, defer to calibrated
+ * measurement, the prescribed tables, local codes and licensed practice.
+ */
+public final class BlendFunctions {
+    /** Balance left out: the card's last component. */
+    public static final int DEFAULT_BALANCE = -1;
+
+    private BlendFunctions() {
+    }
+
+    /** The basis spelled {@code text}, at temperature t (card unit; NaN when it needs none), with a balance. */
+    public static CompositionBasis basis(Card card, String text, double t, int balance) {
+        CompositionBasis.Kind kind = CompositionBasis.Kind.lookup(text);
+        int b = balance == DEFAULT_BALANCE ? card.componentCount() - 1 : balance;
+        if (kind.needsTemperature() && Double.isNaN(t)) {
+            throw BlendProblem.BLANK_ARGUMENT.raise("temperature of the basis '" + kind.label() + "'");
+        }
+        return CompositionBasis.of(kind, kind.needsTemperature() ? t : Double.NaN, kind.isConcentration() ? b : -1);
+    }
+
+    /** The full composition a single number stands for on a two-component card (see the class comment). */
+    public static double[] binary(Card card, double first, CompositionBasis basis) {
+        if (card.componentCount() != 2) {
+            throw BlendProblem.LENGTH.raise(basis.plural(), 1, card.componentCount(), Checks.names(card));
+        }
+        if (basis.kind().isConcentration()) {
+            double[] v = {Double.NaN, Double.NaN};
+            v[basis.balance() == 0 ? 1 : 0] = first;
+            return v;
+        }
+        return new double[] {first, 1.0 - first};
+    }
+
+    /** A composition from one basis to another (each with its own temperature). */
+    public static double[] convert(Card card, double[] values, CompositionBasis from, CompositionBasis to,
+            Extrapolation e) {
+        return Compositions.convert(card, values, from, to, e);
+    }
+
+    /**
+     * One total of the batch made of {@code amounts}, brought to temperature t: "volume" (default), "mass",
+     * "moles", "density" (card unit), "pure volume" (Σ of the unmixed pure volumes at t), "contraction" (pure
+     * volume − volume) or "contraction %"; volumes, masses and moles in {@code resultUnit} (L, kg, mol by default).
+     */
+    public static double batch(Card card, double[] amounts, String unit, double[] storageTemperatures, double t,
+            String result, String resultUnit, Extrapolation e) {
+        BatchTotals b = Batches.totals(card, amounts(card, amounts, unit, storageTemperatures), t, e);
+        String r = result == null ? "volume" : result.trim().toLowerCase(java.util.Locale.ROOT);
+        switch (r) {
+            case "volume":
+                return b.volume(unit(resultUnit, AmountUnit.L, AmountUnit.Dimension.VOLUME, "volume"));
+            case "pure volume":
+                return b.pureVolume(unit(resultUnit, AmountUnit.L, AmountUnit.Dimension.VOLUME, "pure volume"));
+            case "contraction":
+                return b.contraction(unit(resultUnit, AmountUnit.L, AmountUnit.Dimension.VOLUME, "contraction"));
+            case "contraction %":
+                return b.contractionPercent();
+            case "mass":
+                return b.mass(unit(resultUnit, AmountUnit.KG, AmountUnit.Dimension.MASS, "mass"));
+            case "moles":
+                return b.totalMoles(unit(resultUnit, AmountUnit.MOL, AmountUnit.Dimension.AMOUNT, "moles"));
+            case "density":
+                return b.density();
+            default:
+                throw BlendProblem.UNKNOWN_RESULT.raise(result.trim(),
+                        "volume, mass, moles, density, pure volume, contraction, contraction %");
+        }
+    }
+
+    /**
+     * What to charge of each component to make {@code quantity} (a volume at t, a mass, or moles) of the target
+     * composition: amounts in {@code resultUnit} (kg by default; a volume unit gives each pure liquid's volume at its
+     * storage temperature, which {@code storageTemperatures} then must give).
+     */
+    public static double[] recipe(Card card, double quantity, String unit, double t, double[] composition,
+            CompositionBasis basis, double[] storageTemperatures, String resultUnit, Extrapolation e) {
+        AmountUnit u = AmountUnit.lookup(unit);
+        Quantity target = Quantity.of(quantity, u, t);
+        AmountUnit out = resultUnit == null ? AmountUnit.KG : AmountUnit.lookup(resultUnit);
+        double[] storage = perComponent(card, storageTemperatures);
+        if (out.dimension() != AmountUnit.Dimension.VOLUME) {
+            storage = null;
+        } else if (storage == null) {
+            throw BlendProblem.NO_STORAGE_TEMPERATURES.raise();
+        }
+        return Recipes.forTarget(card, target, composition, basis, storage, e).amounts(out);
+    }
+
+    /**
+     * How much of each component to add to the batch to reach the target composition: "least" additions (the
+     * default), "within" a ceiling quantity (the closest composition when the target does not fit), or "make up" to
+     * exactly that quantity. Returns the additions in {@code resultUnit} (kg by default), or with result "volume" the
+     * resulting batch volume in L at t, or with "summary" a sentence saying whether the target is reached.
+     */
+    public static Object adjust(Card card, double[] amounts, String unit, double[] storageTemperatures,
+            double[] target, CompositionBasis basis, double t, String mode, double limit, String limitUnit,
+            String result, String resultUnit, Extrapolation e) {
+        Amounts batch = amounts(card, amounts, unit, storageTemperatures);
+        String m = mode == null ? "least" : mode.trim().toLowerCase(java.util.Locale.ROOT);
+        Adjustment a;
+        switch (m) {
+            case "least":
+                a = Adjustments.leastAdditions(card, batch, target, basis, t, perComponent(card, storageTemperatures),
+                        e);
+                break;
+            case "within":
+            case "make up":
+                if (Double.isNaN(limit) || limitUnit == null) {
+                    throw BlendProblem.BLANK_ARGUMENT.raise("limit and its unit (needed for '" + m + "')");
+                }
+                Quantity q = Quantity.of(limit, AmountUnit.lookup(limitUnit), t);
+                double[] storage = perComponent(card, storageTemperatures);
+                a = m.equals("within") ? Adjustments.within(card, batch, target, basis, q, t, storage, e)
+                        : Adjustments.makeUpTo(card, batch, target, basis, q, t, storage, e);
+                break;
+            default:
+                throw BlendProblem.UNKNOWN_RESULT.raise(mode.trim(), "least, within, make up");
+        }
+        String r = result == null ? "additions" : result.trim().toLowerCase(java.util.Locale.ROOT);
+        switch (r) {
+            case "additions":
+                return a.additions().amounts(resultUnit == null ? AmountUnit.KG : AmountUnit.lookup(resultUnit));
+            case "volume":
+                return a.result().volume(unit(resultUnit, AmountUnit.L, AmountUnit.Dimension.VOLUME, "volume"));
+            case "summary":
+                return a.summary();
+            default:
+                throw BlendProblem.UNKNOWN_RESULT.raise(result.trim(), "additions, volume, summary");
+        }
+    }
+
+    /**
+     * The volume change at t when {@code added} (in {@code addedUnit}) of component k is stirred into the batch:
+     * "exact" (the difference of the totals, default), "first order" (partial molar volume × amount) or
+     * "difference" (first order − exact), in {@code resultUnit} (L by default).
+     */
+    public static double additionVolume(Card card, double[] amounts, String unit, double[] storageTemperatures,
+            int component, double added, String addedUnit, double t, String result, String resultUnit,
+            Extrapolation e) {
+        Amounts batch = amounts(card, amounts, unit, storageTemperatures);
+        AmountUnit au = AmountUnit.lookup(addedUnit == null ? unit : addedUnit);
+        double addedAt = storageTemperatures == null ? t
+                : storageTemperatures.length == 1 ? storageTemperatures[0] : storageTemperatures[component];
+        AdditionVolume v = Batches.addition(card, batch, component, Quantity.of(added, au, addedAt), t, e);
+        AmountUnit out = unit(resultUnit, AmountUnit.L, AmountUnit.Dimension.VOLUME, "volume change");
+        String r = result == null ? "exact" : result.trim().toLowerCase(java.util.Locale.ROOT);
+        switch (r) {
+            case "exact":
+                return v.exact(out);
+            case "first order":
+                return v.firstOrder(out);
+            case "difference":
+                return v.linearError(out);
+            default:
+                throw BlendProblem.UNKNOWN_RESULT.raise(result.trim(), "exact, first order, difference");
+        }
+    }
+
+    /**
+     * The composition at which the card's density equals {@code density} at t, as the value of component k on the
+     * output basis; the varied component is k, the others keep the reference's ratios (none needed for a binary).
+     */
+    public static double fromDensity(Card card, double density, double t, int component, double[] reference,
+            double from, double to, CompositionBasis out, Extrapolation e) {
+        double[] x = DensityInversion.composition(card, density, t, component, reference, from, to, e);
+        return Compositions.fromMoleFractions(card, x, out, e)[component];
+    }
+
+    /**
+     * Temperature correction of a blend of the given composition from t to tRef: "factor" V(tRef)/V(t) (default),
+     * "density" at t, or "reference density" at tRef (card unit).
+     */
+    public static double volumeCorrection(Card card, double[] composition, CompositionBasis basis, double t,
+            double tRef, String result, Extrapolation e) {
+        TemperatureCorrection c = TemperatureCorrection.between(card, composition, basis, t, tRef, e);
+        String r = result == null ? "factor" : result.trim().toLowerCase(java.util.Locale.ROOT);
+        switch (r) {
+            case "factor":
+                return c.volumeFactor();
+            case "density":
+                return c.density();
+            case "reference density":
+                return c.referenceDensity();
+            default:
+                throw BlendProblem.UNKNOWN_RESULT.raise(result.trim(), "factor, density, reference density");
+        }
+    }
+
+    /** Temperatures one per component; a single value stands for all. */
+    private static double[] perComponent(Card card, double[] temperatures) {
+        if (temperatures == null || temperatures.length != 1) {
+            return temperatures;
+        }
+        double[] t = new double[card.componentCount()];
+        java.util.Arrays.fill(t, temperatures[0]);
+        return t;
+    }
+
+    private static Amounts amounts(Card card, double[] values, String unit, double[] storageTemperatures) {
+        AmountUnit u = AmountUnit.lookup(unit == null ? "" : unit);
+        double[] t = perComponent(card, storageTemperatures);
+        return u.dimension() == AmountUnit.Dimension.VOLUME ? Amounts.of(values, u, t) : Amounts.of(values, u);
+    }
+
+    private static AmountUnit unit(String text, AmountUnit absent, AmountUnit.Dimension dimension, String what) {
+        if (text == null) {
+            return absent;
+        }
+        return AmountUnit.lookup(text).require(dimension, what);
+    }
+}

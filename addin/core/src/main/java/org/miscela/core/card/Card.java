@@ -1,0 +1,155 @@
+package org.miscela.core.card;
+
+import org.miscela.core.model.Component;
+import org.miscela.core.model.ExcessFunction;
+import org.miscela.core.model.GeometricModel;
+import org.miscela.core.model.RedlichKister;
+import org.miscela.core.model.TernaryTerm;
+import org.miscela.core.problem.Problem;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.Locale;
+
+/**
+ * A parsed card: components with their pure-liquid data, the excess volume (and optionally excess enthalpy) of the
+ * mixture as binary Redlich–Kister sets combined by a geometric model, units, validity range and source. Immutable;
+ * build one with {@link CardReader}.
+ */
+public final class Card {
+    private final String title;
+    private final String source;
+    private final Units units;
+    private final List<Component> components;
+    private final ExcessFunction excessVolume;
+    private final ExcessFunction excessEnthalpy;
+    private final Validity validity;
+    private final boolean extrapolationAllowed;
+    private final boolean missingPairsIdeal;
+    private final Mixture mixture;
+    private final BinaryMixture binary;
+
+    /** A volumetric card combined by Muggianu's model; {@code excessVolume[i][j]} for i &lt; j, written i then j. */
+    Card(String title, String source, Units units, List<Component> components, RedlichKister[][] excessVolume,
+            Validity validity, boolean extrapolationAllowed) {
+        this(title, source, units, components, new ExcessFunction(components.size(), GeometricModel.MUGGIANU, -1,
+                excessVolume, Collections.<TernaryTerm>emptyList()), null, validity, extrapolationAllowed, false);
+    }
+
+    /**
+     * @param excessVolume null for a card that describes enthalpy only
+     * @param excessEnthalpy null when the card holds no enthalpy data
+     */
+    Card(String title, String source, Units units, List<Component> components, ExcessFunction excessVolume,
+            ExcessFunction excessEnthalpy, Validity validity, boolean extrapolationAllowed,
+            boolean missingPairsIdeal) {
+        this.title = title;
+        this.source = source;
+        this.units = units;
+        this.components = Collections.unmodifiableList(new ArrayList<>(components));
+        this.excessVolume = excessVolume;
+        this.excessEnthalpy = excessEnthalpy;
+        this.validity = validity;
+        this.extrapolationAllowed = extrapolationAllowed;
+        this.missingPairsIdeal = missingPairsIdeal;
+        this.mixture = new Mixture(this);
+        this.binary = components.size() == 2 ? new BinaryMixture(mixture) : null;
+    }
+
+    public String title() {
+        return title;
+    }
+
+    public String source() {
+        return source;
+    }
+
+    public Units units() {
+        return units;
+    }
+
+    public List<Component> components() {
+        return components;
+    }
+
+    public int componentCount() {
+        return components.size();
+    }
+
+    /** Index (0-based) of the component with this name, ignoring case, or −1. */
+    public int indexOf(String name) {
+        String n = name.trim();
+        for (int i = 0; i < components.size(); i++) {
+            if (components.get(i).name().equalsIgnoreCase(n)) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    /**
+     * The excess-volume expansion of components i and j, written in that order (internal units, cm³/mol), or null
+     * when the card treats the pair as ideal.
+     */
+    public RedlichKister excessVolume(int i, int j) {
+        return excessVolume == null ? null : excessVolume.pair(i, j);
+    }
+
+    /** The multicomponent excess volume (cm³/mol), or null for a card that describes enthalpy only. */
+    public ExcessFunction excessVolume() {
+        return excessVolume;
+    }
+
+    /** The multicomponent excess enthalpy (J/mol), or null when the card holds none. */
+    public ExcessFunction excessEnthalpy() {
+        return excessEnthalpy;
+    }
+
+    /** Whether pairs without coefficient rows are ideal (the card's 'missing pairs | ideal'). */
+    public boolean missingPairsIdeal() {
+        return missingPairsIdeal;
+    }
+
+    /** The calculator for any number of components. */
+    public Mixture mixture() {
+        return mixture;
+    }
+
+    public Validity validity() {
+        return validity;
+    }
+
+    public boolean extrapolationAllowed() {
+        return extrapolationAllowed;
+    }
+
+    /** Whether this evaluation may leave the validity range. */
+    public boolean mayExtrapolate(Extrapolation e) {
+        return e == Extrapolation.ALLOW || (e == Extrapolation.AS_CARD && extrapolationAllowed);
+    }
+
+    /** The binary calculator; fails with a readable message when the card does not have exactly two components. */
+    public BinaryMixture binary() {
+        if (binary == null) {
+            throw Problem.NOT_BINARY.raise(components.size());
+        }
+        return binary;
+    }
+
+    /** Component names joined for messages. */
+    public String componentNames() {
+        StringBuilder b = new StringBuilder();
+        for (Component c : components) {
+            if (b.length() > 0) {
+                b.append(", ");
+            }
+            b.append(c.name());
+        }
+        return b.toString();
+    }
+
+    @Override
+    public String toString() {
+        return String.format(Locale.ROOT, "Card[%s; %s]", title, componentNames());
+    }
+}

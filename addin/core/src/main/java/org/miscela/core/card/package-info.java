@@ -1,0 +1,6 @@
+/**
+ * The card: reading a named range's cells (format versions 1 and 2, docs/card-format.md) into an immutable
+ * {@link org.miscela.core.card.Card}, the card's units and validity range, the mixture view of its pure liquids and
+ * excess functions, and the cache that parses each distinct card content once.
+ */
+package org.miscela.core.card;

@@ -1,0 +1,543 @@
+package org.miscela.core.catalog;
+
+import java.util.Arrays;
+import java.util.Collections;
+import java.util.List;
+import org.miscela.core.problem.Problem;
+import org.miscela.core.blend.BlendProblem;
+import org.miscela.core.fit.FitProblem;
+
+/**
+ * The single source of truth for every cell function's user-facing metadata. The wizard's CalcAddIns.xcu and
+ * docs/functions.md are generated from this list; tests check it against the IDL and the implementation.
+ */
+public final class FunctionCatalog {
+    /** The UNO service: permanent, written into every saved workbook. */
+    public static final String SERVICE = "org.miscela.calc.MixtureFunctions";
+    /** The add-in's version, as MIX.INFO reports it; a test keeps it equal to the build's version. */
+    public static final String VERSION = "0.1.0";
+    /** Calc's fixed category names allow no category of our own; "Add-In" is where extension functions belong. */
+    static final String CATEGORY = "Add-In";
+
+    private static final ArgumentInfo CARD = required("card", "card",
+            "The named range holding the mixture's card: labels in the first column, values to their right.");
+    private static final ArgumentInfo MOLE_FRACTION = required("moleFraction", "x",
+            "Composition: the mole fractions of all components in card order, as a row or column; or a block with "
+                    + "one composition per row (the result is a column). For a two-component card, x1 alone, "
+                    + "or a range of x1 values.");
+    private static final ArgumentInfo TEMPERATURE = required("temperature", "temperature",
+            "Temperature in the card's temperature unit: a single value, or one per composition (a column for a "
+                    + "block, the same shape for a range of x1).");
+    private static final ArgumentInfo EXTRAPOLATE = optional("extrapolate", "extrapolate",
+            "Optional. TRUE accepts a result outside the card's validity range; FALSE refuses it; "
+                    + "left out, the card's 'extrapolation' row decides (refuse when absent).");
+    private static final ArgumentInfo MOLE_FRACTION_ONE = required("moleFraction", "x",
+            "One composition: the mole fractions of all components in card order, as a row or column; "
+                    + "for a two-component card, x1 alone.");
+    private static final ArgumentInfo TEMPERATURE_ONE = required("temperature", "temperature",
+            "Temperature in the card's temperature unit (one value).");
+    private static final ArgumentInfo COMPONENT = required("component", "component",
+            "The component: its number on the card (1 for the first) or its name as written on the card.");
+    private static final ArgumentInfo AMOUNTS = required("amounts", "amounts",
+            "Amount of each component in card order, as a row or column (one batch); or a block with one batch "
+                    + "per row (the result is a column).");
+    private static final ArgumentInfo BATCH_TEMPERATURE = required("temperature", "temperature",
+            "Temperature of the components and of the mixture, in the card's temperature unit: a single value, "
+                    + "or a column with one per batch.");
+    private static final String BASES = "One of: \"mole fraction\" (\"x\"), \"mass fraction\" (\"w\"), "
+            + "\"volume fraction\" (\"phi\"), \"%vol\", \"mol/L\", \"g/L\", \"mol/kg\".";
+    private static final ArgumentInfo BALANCE = optional("balance", "balance",
+            "Optional. For %vol, mol/L, g/L and mol/kg: the component that makes up the rest (the solvent), by "
+                    + "number or name; left out, the card's last component.");
+    private static final ArgumentInfo UNIT = required("unit", "unit",
+            "The unit of the amounts: mol, kmol, g, kg, or mL, L, m³ for volumes of the pure liquids.");
+    private static final ArgumentInfo RESULT_UNIT = optional("resultUnit", "result unit",
+            "Optional. The unit of the result (left out: L for volumes, kg for masses, mol for moles).");
+    private static final ArgumentInfo STORAGE_T = optional("storageTemperatures", "storage temperatures",
+            "Optional. For volumes of the pure liquids: the temperature of each, in card order (or one for all).");
+    private static final ArgumentInfo ORDER = required("order", "order",
+            "The highest k of the coefficients A0..Ak to fit, 0 to 30.");
+    private static final ArgumentInfo ORDER_IN_T = optional("orderInTemperature", "order in T",
+            "Optional. The highest power j of (T − T_ref) in each A_k (left out: 0, constant coefficients).");
+    private static final ArgumentInfo REFERENCE_T = optional("referenceTemperature", "reference temperature",
+            "Optional. T_ref of the temperature polynomials; needed when the order in T is above 0.");
+    private static final ArgumentInfo WEIGHTS = optional("weights", "weights",
+            "Optional. A weight per point, zero or positive (left out: 1 each); a zero weight leaves the point out.");
+    private static final ArgumentInfo RESULT = optional("result", "result",
+            "Optional. \"coefficients\" (left out), \"standard errors\", \"statistics\", \"covariance\", "
+                    + "\"residuals\", \"orders\" (fits of order 0 to the order given, with F-tests, AIC and BIC) or "
+                    + "\"check\" (\"OK\", or why the fit is refused, in words).");
+    private static final ArgumentInfo BASIS = optional("basis", "basis",
+            "Optional. The unit of the amounts: \"mol\" (left out), \"kmol\", \"g\" or \"kg\"; masses are "
+                    + "converted with the card's molar masses.");
+
+    // --- call problems that no cell can produce (see notFromACell), with the reason; no function lists them
+    private static final String UNCERTAINTY_OF_A_FIT = "raised only by the library's uncertainty of a fitted "
+            + "expansion (ExcessVolumeUncertainty), which no cell function calls: MIX.UNCERTAINTY propagates the "
+            + "card's own covariance, whose problems are the card's";
+    private static final java.util.Map<Enum<?>, String> NOT_FROM_A_CELL = notFromACell(
+            Problem.ARG_NOT_FINITE, "Calc never passes NaN or an infinity (a cell that computes one shows an error, "
+                    + "and Calc does not call a function with an error argument); the check guards the library's "
+                    + "own callers",
+            Problem.CHECK_NEEDS_BOTH, "MIX.CHECKPOINT always passes a composition and a temperature (leaving one "
+                    + "out is Calc's own Err:502) and MIX.CHECK neither; the check guards the library's own callers",
+            FitProblem.RAGGED_DESIGN, "a range or an inline array is rectangular, so every row of a design has as "
+                    + "many columns as the first",
+            FitProblem.NO_PARAMETERS, "a range has at least one column, and a Redlich–Kister fit at least one "
+                    + "coefficient",
+            FitProblem.BAD_ORDER, "the fit functions refuse an order outside 0 to 30, or an order in T outside 0 to "
+                    + "10, first (NOT_A_COUNT), and a left-out order as blank (ARG_BLANK)",
+            FitProblem.BAD_SIGNIFICANCE, "the order table's F-tests always use the 5 % level",
+            FitProblem.NOT_NESTED, "the order table compares the fits of order 0, 1, 2, …, each with more "
+                    + "coefficients than the one before",
+            FitProblem.NOT_SAME_POINTS, "the order table fits every order to the same points",
+            FitProblem.COVARIANCE_SHAPE, UNCERTAINTY_OF_A_FIT,
+            FitProblem.COVARIANCE_NOT_FINITE, UNCERTAINTY_OF_A_FIT,
+            FitProblem.COVARIANCE_NOT_SYMMETRIC, UNCERTAINTY_OF_A_FIT,
+            FitProblem.COVARIANCE_NEGATIVE_VARIANCE, UNCERTAINTY_OF_A_FIT,
+            FitProblem.MOLE_FRACTION, UNCERTAINTY_OF_A_FIT,
+            FitProblem.TEMPERATURE, UNCERTAINTY_OF_A_FIT,
+            FitProblem.BAD_COMPONENT, UNCERTAINTY_OF_A_FIT,
+            BlendProblem.ARGUMENT_NOT_FINITE, "Calc never passes an infinity, and the blending functions compute no "
+                    + "temperature of their own",
+            BlendProblem.NO_SUCH_COMPONENT, "every component argument is checked against the card first "
+                    + "(UNKNOWN_COMPONENT_ARG)",
+            BlendProblem.VALUE_NOT_FINITE, "Calc never passes an infinity, and the values are checked as given",
+            BlendProblem.NEEDS_BALANCE, "the cell functions always name a balance: the card's last component when "
+                    + "the argument is left out",
+            BlendProblem.NEEDS_SOLVENT, "the cell functions always name a solvent: the card's last component when "
+                    + "the balance is left out",
+            BlendProblem.NO_COMPOSITION, "the concentration search's last fallback, for a card whose molar volume "
+                    + "is not physical between two of the 257 points the search looks at while physical at all of "
+                    + "them; no card or input is known that reaches it, and no test produces it (values too large "
+                    + "to add up are TOO_CONCENTRATED)",
+            BlendProblem.NEEDS_TEMPERATURE, "every cell function that takes a quantity also takes the temperature "
+                    + "it is measured at, as a required argument");
+
+    // --- the problems functions report, by kind (card problems come on top for every function but the fits)
+    private static final List<Enum<?>> COMPOSITION_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
+            Problem.ARG_SHAPE, Problem.NOT_BINARY, Problem.MOLE_FRACTION_OUTSIDE_UNIT, Problem.COMPOSITION_NEGATIVE,
+            Problem.COMPOSITION_SUM, Problem.COMPOSITION_SHAPE);
+    private static final List<Enum<?>> POINT_PROBLEMS = list(Problem.ARG_NOT_FLAG, Problem.BELOW_ABSOLUTE_ZERO,
+            Problem.OUTSIDE_TEMPERATURE, Problem.OUTSIDE_COMPOSITION, Problem.OUTSIDE_PAIR_TEMPERATURE,
+            Problem.OUTSIDE_PAIR_COMPOSITION, Problem.NON_PHYSICAL);
+    private static final List<Enum<?>> VOLUME_PROBLEMS = list(Problem.NO_VOLUME);
+    private static final List<Enum<?>> COMPONENT_PROBLEMS = list(Problem.UNKNOWN_COMPONENT_ARG, Problem.ARG_NOT_SINGLE);
+    private static final List<Enum<?>> AMOUNT_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
+            Problem.ARG_SHAPE, Problem.COMPOSITION_SHAPE,
+            Problem.AMOUNT_NEGATIVE, Problem.AMOUNT_ZERO, Problem.AMOUNT_TOO_LARGE, Problem.UNKNOWN_BASIS);
+    private static final List<Enum<?>> DATA_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
+            Problem.DATA_SHAPE, Problem.DATA_LENGTH, Problem.DATA_PARTLY_BLANK, Problem.NOT_A_COUNT,
+            Problem.UNKNOWN_FIT_OUTPUT);
+    private static final List<Enum<?>> FIT_ENGINE_PROBLEMS = fromACell(FitProblem.values());
+    private static final List<Enum<?>> BLEND_PROBLEMS = union(fromACell(BlendProblem.values()), list(Problem.ARG_BLANK,
+            Problem.ARG_NOT_NUMBER, Problem.ARG_NOT_TEXT, Problem.ARG_NOT_SINGLE, Problem.COMPOSITION_SHAPE,
+            Problem.UNKNOWN_COMPONENT_ARG));
+
+    private static final List<FunctionInfo> FUNCTIONS = Collections.unmodifiableList(Arrays.asList(
+            new FunctionInfo("excessMolarVolume", "MIX.EXCESSVOLUME",
+                    "Excess molar volume of the mixture from the card's Redlich–Kister coefficients, "
+                            + "in the card's molar volume unit.",
+                    "V^E = Σ_i<j x_i·x_j·Σ_k A_k^ij(T)·d_ij^k + ternary terms; binary: d = x1 − x2 (Redlich & Kister "
+                            + "1948); d_ij by the card's model: Muggianu x_i − x_j, Kohler (x_i − x_j)/(x_i + x_j), "
+                            + "Toop 2x_a − 1 for pairs with the asymmetric component a",
+                    "=MIX.EXCESSVOLUME(card; 0.3; 20)",
+                    CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE)
+                    .shows("-1.0567").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS)),
+            new FunctionInfo("partialMolarVolume", "MIX.PARTIALVOLUME",
+                    "Partial molar volume of one component in the mixture, in the card's molar volume unit.",
+                    "V̄_k = V_k* + V^E + ∂V^E/∂x_k − Σ_j x_j·∂V^E/∂x_j (binary: V̄_1 = V_1* + V^E + x2·dV^E/dx1)",
+                    "=MIX.PARTIALVOLUME(card; 1; 0.3; 20)",
+                    CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE)
+                    .shows("56.670").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, COMPONENT_PROBLEMS)),
+            new FunctionInfo("partialExcessMolarVolume", "MIX.PARTIALEXCESS",
+                    "Partial molar excess volume of one component "
+                            + "(its partial molar volume less its pure molar volume), in the card's molar volume unit.",
+                    "V̄_k^E = V^E + ∂V^E/∂x_k − Σ_j x_j·∂V^E/∂x_j (binary: V̄_1^E = V^E + x2·dV^E/dx1)",
+                    "=MIX.PARTIALEXCESS(card; \"water\"; 0.3; 20)",
+                    CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE)
+                    .shows("-0.7808").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, COMPONENT_PROBLEMS)),
+            new FunctionInfo("mixtureMolarVolume", "MIX.MOLARVOLUME",
+                    "Molar volume of the mixture (volume per mole of mixture), in the card's molar volume unit.",
+                    "V_m = Σ_k x_k·V_k* + V^E, V_k* = M_k / ρ_k(T)",
+                    "=MIX.MOLARVOLUME(card; 0.3; 20)",
+                    CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE)
+                    .shows("29.088").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS)),
+            new FunctionInfo("mixtureDensity", "MIX.DENSITY",
+                    "Density of the mixture, in the card's density unit.",
+                    "ρ = Σ_k x_k·M_k / V_m",
+                    "=MIX.DENSITY(card; 0.3; 20)",
+                    CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE)
+                    .shows("908.667").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS)),
+            new FunctionInfo("pureDensity", "MIX.PUREDENSITY",
+                    "Density of one pure component from its model on the card, in the card's density unit.",
+                    "constant: ρ = c0; polynomial: ρ = Σ_j c_j·(T − T_ref)^j; Tanaka 2001: the CIPM water formula",
+                    "=MIX.PUREDENSITY(card; \"water\"; 20)",
+                    CARD, COMPONENT, required("temperature", "temperature",
+                            "Temperature in the card's temperature unit. A single value, or a range for an array "
+                                    + "result."), EXTRAPOLATE)
+                    .shows("998.201").refuses(union(COMPONENT_PROBLEMS, list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER, Problem.ARG_NOT_FLAG, Problem.BELOW_ABSOLUTE_ZERO, Problem.OUTSIDE_TEMPERATURE, Problem.NON_PHYSICAL))),
+            new FunctionInfo("checkCard", "MIX.CHECK",
+                    "\"OK\" when the card can be read and used; otherwise its first problem, naming the row.",
+                    "—",
+                    "=MIX.CHECK(card)",
+                    CARD)
+                    .shows("OK").refuses(list()),
+            new FunctionInfo("checkPoint", "MIX.CHECKPOINT",
+                    "\"OK\" when the functions can answer at this composition and temperature; otherwise why they "
+                            + "refuse (for example the validity limit that is exceeded).",
+                    "—",
+                    "=MIX.CHECKPOINT(card; 0.3; 45)",
+                    CARD, MOLE_FRACTION_ONE, TEMPERATURE_ONE, EXTRAPOLATE)
+                    .shows("The temperature 45 °C is outside the card's validity range 0 to 40 °C.").refuses(list(Problem.ARG_NOT_SINGLE)),
+            new FunctionInfo("excessEnthalpy", "MIX.EXCESSENTHALPY",
+                    "Excess molar enthalpy (heat of mixing per mole of mixture) from the card's excess enthalpy "
+                            + "coefficients, in the card's enthalpy unit; negative when mixing releases heat.",
+                    "H^E = Σ_i<j x_i·x_j·Σ_k A_k^ij(T)·d_ij^k + ternary terms, combined as for V^E",
+                    "=MIX.EXCESSENTHALPY(tern; {0.3; 0.5; 0.2}; 25)",
+                    CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE)
+                    .shows("-719.5").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, list(Problem.NO_ENTHALPY))),
+            new FunctionInfo("partialExcessEnthalpy", "MIX.PARTIALENTHALPY",
+                    "Partial molar excess enthalpy of one component (its partial molar enthalpy less its pure molar "
+                            + "enthalpy), in the card's enthalpy unit.",
+                    "H̄_k^E = H^E + ∂H^E/∂x_k − Σ_j x_j·∂H^E/∂x_j",
+                    "=MIX.PARTIALENTHALPY(tern; \"Q\"; {0.3; 0.5; 0.2}; 25)",
+                    CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE)
+                    .shows("-773.5").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS, list(Problem.NO_ENTHALPY))),
+            new FunctionInfo("mixingHeat", "MIX.MIXINGHEAT",
+                    "Enthalpy change when the given amounts of the pure components, all at one temperature, are mixed "
+                            + "and kept at that temperature: J or kJ as the card's enthalpy unit; negative means heat "
+                            + "is released and must be removed.",
+                    "ΔH = N·H^E(x, T), N = Σ n_k, x_k = n_k/N",
+                    "=MIX.MIXINGHEAT(acid; {1; 10}; 25)",
+                    CARD, AMOUNTS, BATCH_TEMPERATURE, BASIS, EXTRAPOLATE)
+                    .shows("-66.50").refuses(union(AMOUNT_PROBLEMS, POINT_PROBLEMS, list(Problem.NO_ENTHALPY))),
+            new FunctionInfo("additionHeat", "MIX.ADDITIONHEAT",
+                    "Enthalpy change when an amount of one component is added to an existing batch, all at one "
+                            + "temperature: J or kJ as the card's enthalpy unit; negative means heat is released.",
+                    "ΔH = (N + Δn)·H^E(x') − N·H^E(x)",
+                    "=MIX.ADDITIONHEAT(acid; {1; 1}; \"water\"; 9; 25)",
+                    CARD, AMOUNTS, COMPONENT, required("added", "added",
+                            "The amount of the component added, in the same basis as the amounts."),
+                    BATCH_TEMPERATURE, BASIS, EXTRAPOLATE)
+                    .shows("-38.70").refuses(union(AMOUNT_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS, list(Problem.NO_ENTHALPY))),
+            new FunctionInfo("adiabaticRise", "MIX.TEMPERATURERISE",
+                    "Estimated temperature rise, in K (the same in °C), of a batch mixed from pure components all at "
+                            + "one temperature with no heat exchanged. An estimate for planning, not a safety "
+                            + "rating: it ignores the vessel, losses, evaporation and reaction.",
+                    "Σ_k n_k·∫_T^T_f Cp_k dT + N·H^E(x, T_f) = 0, solved for T_f (Brent); result T_f − T",
+                    "=MIX.TEMPERATURERISE(acid; {1; 10}; 25; \"mol\"; TRUE())",
+                    CARD, AMOUNTS, required("temperature", "temperature",
+                            "Starting temperature of every component, in the card's temperature unit: a single "
+                                    + "value, or a column with one per batch."), BASIS, EXTRAPOLATE)
+                    .shows("74.57").refuses(union(AMOUNT_PROBLEMS, POINT_PROBLEMS, list(Problem.NO_ENTHALPY, Problem.NO_HEAT_CAPACITY, Problem.NO_TEMPERATURE_ROOT, Problem.OUTSIDE_FINAL_TEMPERATURE))),
+            new FunctionInfo("insideValidity", "MIX.INSIDE",
+                    "1 (TRUE) when the composition and temperature lie inside every validity limit the card states "
+                            + "(temperature, each component's mole fraction, each pair's limits); 0 (FALSE) otherwise.",
+                    "—",
+                    "=MIX.INSIDE(tern; {0.1; 0.3; 0.6}; 20)",
+                    CARD, MOLE_FRACTION, TEMPERATURE)
+                    .shows("0").refuses(union(COMPOSITION_PROBLEMS, list(Problem.BELOW_ABSOLUTE_ZERO))),
+            new FunctionInfo("traceEvaluation", "MIX.TRACE",
+                    "Every intermediate number of one evaluation, as a two-column array of labels and values, so the "
+                            + "result can be re-derived by hand (see docs/trace.md).",
+                    "—",
+                    "=MIX.TRACE(card; 0.3; 20)",
+                    CARD, MOLE_FRACTION_ONE, TEMPERATURE_ONE, optional("quantity", "property",
+                            "Optional. \"volume\" (left out) or \"enthalpy\": which of the card's properties to "
+                                    + "trace."), EXTRAPOLATE)
+                    .shows("card").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, list(Problem.NO_ENTHALPY, Problem.UNKNOWN_PROPERTY, Problem.ARG_NOT_SINGLE))),
+            new FunctionInfo("fitExcessVolume", "MIX.FITEXCESS",
+                    "Redlich–Kister coefficients fitted by least squares to excess volumes: an array of A0..Am "
+                            + "(one row each, one column per power of T − T_ref) to enter over a card's coefficient "
+                            + "cells, or the fit's standard errors, statistics, covariance, residuals or order table.",
+                    "min Σ w_i (V^E_i − x1·x2·Σ_k Σ_j a_kj (x1 − x2)^k (T_i − T_ref)^j)², Householder QR with column "
+                            + "scaling and iterative refinement",
+                    "=INDEX(MIX.FITEXCESS({0.2|0.4|0.6|0.8}; {-0.736|-1.008|-0.912|-0.544}; 1); 2; 1)",
+                    required("moleFraction", "x1", "Mole fraction of the first component at each point: a column "
+                            + "(or row). Points left blank in every data range are skipped."),
+                    required("excessVolume", "excess volume", "The excess molar volume at each point, in any unit: "
+                            + "the coefficients come out in the same unit."),
+                    ORDER,
+                    optional("temperature", "temperature", "Optional. The temperature of each point, needed for "
+                            + "temperature-dependent coefficients; any scale (only differences from T_ref are used)."),
+                    ORDER_IN_T, REFERENCE_T, WEIGHTS, RESULT)
+                    .shows("1.0000").refuses(union(DATA_PROBLEMS, FIT_ENGINE_PROBLEMS, list(Problem.FIT_NEEDS_TEMPERATURE, Problem.FIT_NEEDS_REFERENCE))),
+            new FunctionInfo("fitDensity", "MIX.FITDENSITY",
+                    "Redlich–Kister coefficients of one pair fitted to measured densities, with the pure liquids' "
+                            + "molar masses and densities taken from a card: an array to enter over the card's "
+                            + "coefficient cells (in its molar volume unit), or the fit's statistics.",
+                    "V^E_i = Σ x M / ρ_i − x1·V_1*(T_i) − x2·V_2*(T_i); min Σ w_i (ρ_i − ρ_fit,i)² to first order "
+                            + "(each V^E residual weighted by (ρ_i²/M_i)²)",
+                    "=INDEX(MIX.FITDENSITY(card; \"ethanol + water\"; {0.1|0.3|0.5|0.7|0.9}; {965.728|908.666|863.096|829.229|801.749}; 20; 2); 1; 1)",
+                    required("pure", "pure data", "The cells of a card's pure-component part: header, units, "
+                            + "components and density models (put the coefficient rows, which hold this formula, "
+                            + "below it)."),
+                    optional("pair", "pair", "The pair as \"first + second\"; may be left out for a card of two "
+                            + "components."),
+                    required("moleFraction", "x", "Mole fraction of the pair's first component at each point (a "
+                            + "column). Points left blank in every data range are skipped."),
+                    required("density", "density", "The measured density at each point, in the card's density "
+                            + "unit."),
+                    required("temperature", "temperature", "The temperature of each point, or one value for all, in "
+                            + "the card's temperature unit."),
+                    ORDER, ORDER_IN_T, REFERENCE_T, WEIGHTS, RESULT)
+                    .shows("-4.400").refuses(union(DATA_PROBLEMS, FIT_ENGINE_PROBLEMS, list(Problem.FIT_NEEDS_REFERENCE, Problem.UNKNOWN_PAIR_ARG, Problem.NON_PHYSICAL))),
+            new FunctionInfo("leastSquares", "MIX.LEASTSQUARES",
+                    "General weighted linear least squares y ≈ X·b, by the same engine as the card fits: the "
+                            + "coefficients b as a column, or their standard errors, the statistics, the covariance "
+                            + "or the residuals.",
+                    "min Σ w_i (y_i − Σ_j X_ij b_j)², Householder QR with column scaling and iterative refinement",
+                    "=INDEX(MIX.LEASTSQUARES({1;1|1;2|1;3}; {2.1|3.9|6.0}); 2; 1)",
+                    required("design", "X", "The design matrix: one row per point, one column per parameter "
+                            + "(include a column of 1s for an intercept)."),
+                    required("response", "y", "The observed values, one per point (a column)."),
+                    WEIGHTS, optional("result", "result", "Optional. \"coefficients\" (left out), \"standard "
+                            + "errors\", \"statistics\", \"covariance\", \"residuals\" or \"check\"."))
+                    .shows("1.95").refuses(union(list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER, Problem.DATA_SHAPE, Problem.UNKNOWN_FIT_OUTPUT, Problem.FIT_OUTPUT_NOT_HERE), FIT_ENGINE_PROBLEMS)),
+            new FunctionInfo("uncertainty", "MIX.UNCERTAINTY",
+                    "Standard uncertainty of the density, excess volume, molar volume or a partial molar volume, "
+                            + "propagated linearly from the coefficient covariance the card holds (the pure liquids "
+                            + "taken as exact), in the result's unit.",
+                    "u²(Q) = Σ_pairs gᵀ·C·g, g = ∂Q/∂a (GUM, JCGM 100:2008, law of propagation of uncertainty)",
+                    "=MIX.UNCERTAINTY(cov; 0.3; 20)",
+                    CARD, MOLE_FRACTION, TEMPERATURE, optional("quantity", "quantity",
+                            "Optional. \"density\" (left out), \"excess volume\", \"molar volume\" or "
+                                    + "\"partial volume\" (then give the component)."),
+                    optional("component", "component", "For a partial volume: the component's number on the card "
+                            + "or its name."), EXTRAPOLATE)
+                    .shows("0.178").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, COMPONENT_PROBLEMS, list(Problem.NO_COVARIANCE, Problem.UNKNOWN_QUANTITY, Problem.ARG_NOT_TEXT))),
+            new FunctionInfo("convertComposition", "MIX.CONVERT",
+                    "A composition written on one basis, written on another: mole fraction, mass fraction, volume "
+                            + "fraction of the unmixed liquids, strength (%vol), molarity (mol/L), mass concentration "
+                            + "(g/L) or molality (mol/kg of the balance component).",
+                    "x_k ↔ w_k = x_k M_k/Σ x M; φ_k = x_k V_k*(T)/Σ x V*; %vol_k = 100 x_k V_k*(T)/V_m(T); "
+                            + "c_k = x_k/V_m(T); ρ_k = x_k M_k/V_m(T); b_k = x_k/(x_s M_s); concentrations read back by "
+                            + "Brent's method on the balance's mole fraction",
+                    "=MIX.CONVERT(card; 0.5; \"mass fraction\"; \"%vol\"; 20)",
+                    CARD, required("values", "values", "The composition on the from basis: one value per component in "
+                            + "card order (a row or column, or a block with one composition per row). On a "
+                            + "concentration basis the balance's own entry may be blank. A lone number on a "
+                            + "two-component card is the first component's value."),
+                    required("from", "from", BASES), required("to", "to", BASES),
+                    optional("temperature", "temperature", "The temperature of the from basis, and of the to basis "
+                            + "unless the next argument gives one, in the card's unit; needed for volume fraction, "
+                            + "%vol, mol/L and g/L."),
+                    optional("targetTemperature", "to temperature", "Optional. The temperature of the to basis."),
+                    BALANCE, EXTRAPOLATE)
+                    .shows("57.889").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
+            new FunctionInfo("batchTotals", "MIX.BATCH",
+                    "One total of the batch made from the given amounts of the components, mixed and brought to a "
+                            + "temperature: its volume, mass, moles, density, the pure liquids' volume before mixing, "
+                            + "or the contraction on mixing (absolute or %).",
+                    "V = N·V_m(x, T); contraction = Σ n_k V_k*(T) − V (positive when the mixture shrinks)",
+                    "=MIX.BATCH(card; {50; 50}; \"g\"; 20; \"contraction\"; \"mL\")",
+                    CARD, AMOUNTS, UNIT, required("temperature", "temperature",
+                            "The temperature of the mixed batch, in the card's unit: one value, or a column with one "
+                                    + "per batch."),
+                    optional("result", "result", "Optional. \"volume\" (left out), \"mass\", \"moles\", "
+                            + "\"density\", \"pure volume\", \"contraction\" or \"contraction %\"."),
+                    RESULT_UNIT, STORAGE_T, EXTRAPOLATE)
+                    .shows("4.006").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
+            new FunctionInfo("recipe", "MIX.RECIPE",
+                    "What to charge of each component to make a quantity (a volume at a temperature, a mass or moles) "
+                            + "of a target composition: a row of amounts in card order, masses in kg unless another "
+                            + "unit is asked for (a volume unit gives each pure liquid's volume at its storage "
+                            + "temperature).",
+                    "N = Q (moles), Q/Σ x M (mass) or V/V_m(x, T) (volume); n_k = N·x_k; m_k = n_k M_k; "
+                            + "V_k = n_k V_k*(T_k)",
+                    "=INDEX(MIX.RECIPE(card; 1; \"L\"; 40; \"%vol\"; 20; 20; \"mL\"); 1; 1)",
+                    CARD, required("quantity", "quantity", "The quantity to make."),
+                    required("unit", "unit", "Its unit: mol, kmol, g, kg, mL, L or m³ (a volume of the mixture at the "
+                            + "temperature)."),
+                    required("composition", "composition", "The target composition on the basis, one value per "
+                            + "component (a lone number on a two-component card is the first component's); a block "
+                            + "gives one recipe per row."),
+                    required("basis", "basis", BASES),
+                    required("temperature", "temperature", "The temperature of the quantity (when a volume) and of "
+                            + "the basis, in the card's unit."),
+                    STORAGE_T, RESULT_UNIT, BALANCE, EXTRAPOLATE)
+                    .shows("400.00").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
+            new FunctionInfo("adjustBatch", "MIX.ADJUST",
+                    "How much of each component to add to an existing batch to reach a target composition: the "
+                            + "least additions, the closest composition within a limit, or additions making up to a "
+                            + "final quantity; or the resulting volume, or a sentence saying whether the target is "
+                            + "reached.",
+                    "n'_k = n_k + a_k, a_k ≥ 0; least: N' = max_k n_k/x_k; otherwise the composition closest to the "
+                            + "target in mole fraction (least squares) at the limit's total",
+                    "=INDEX(MIX.ADJUST(card; {500; 500}; \"g\"; 0.4; \"mass fraction\"; 20); 1; 2)",
+                    CARD, required("amounts", "amounts", "The batch: the amount of each component in card order."),
+                    UNIT, required("target", "target", "The target composition on the basis (a lone number on a "
+                            + "two-component card is the first component's)."),
+                    required("basis", "basis", BASES),
+                    required("temperature", "temperature", "The temperature of the batch and of the basis, in the "
+                            + "card's unit."),
+                    optional("mode", "mode", "Optional. \"least\" additions (left out), \"within\" the limit "
+                            + "(the closest composition if the target does not fit), or \"make up\" to the limit."),
+                    optional("limit", "limit", "For within and make up: the largest, or the final, quantity."),
+                    optional("limitUnit", "limit unit", "The unit of the limit (a volume is at the temperature)."),
+                    optional("result", "result", "Optional. \"additions\" (left out), \"volume\" (of the batch "
+                            + "after the additions) or \"summary\"."),
+                    RESULT_UNIT, BALANCE, EXTRAPOLATE)
+                    .shows("0.2500").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
+            new FunctionInfo("additionVolume", "MIX.ADDVOLUME",
+                    "The volume change of a batch when an amount of one component is added: exact (the difference "
+                            + "of the two totals), to first order (partial molar volume × amount), or the difference "
+                            + "of the two, so one sees when the linear estimate is good enough.",
+                    "exact ΔV = V(n + Δn·e_k) − V(n); first order ΔV ≈ V̄_k(x)·Δn",
+                    "=MIX.ADDVOLUME(card; {50; 50}; \"g\"; \"ethanol\"; 10; 20; ; \"mL\")",
+                    CARD, required("amounts", "amounts", "The batch: the amount of each component in card order."),
+                    UNIT, COMPONENT, required("added", "added", "The amount added, in the unit of the amounts."),
+                    required("temperature", "temperature", "The temperature of the batch, in the card's unit."),
+                    optional("result", "result", "Optional. \"exact\" (left out), \"first order\" or "
+                            + "\"difference\" (first order minus exact)."),
+                    RESULT_UNIT, STORAGE_T, EXTRAPOLATE)
+                    .shows("12.302").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS)),
+            new FunctionInfo("compositionFromDensity", "MIX.FROMDENSITY",
+                    "The composition at which the card's density equals a measured density: the content of one "
+                            + "component on a chosen basis. Every composition with that density is searched for; "
+                            + "when there are several the call is refused, listing them, until a range is given.",
+                    "ρ(x(s), T) = ρ_measured along x(s) (component k at s, the others in the reference's ratios); "
+                            + "a scan in 256 cells, each root refined by Brent's method",
+                    "=MIX.FROMDENSITY(card; 913.771; 20; 1; \"mass fraction\")",
+                    CARD, required("density", "density", "The measured density in the card's unit: a value, or a "
+                            + "range for an array result."),
+                    required("temperature", "temperature", "The temperature of the measurement in the card's unit: "
+                            + "a value, or a range of the same shape."),
+                    optional("component", "component", "Optional. The component whose content is sought (left out: "
+                            + "the first)."),
+                    optional("basis", "basis", "Optional. The basis of the result (left out: mole fraction). " + BASES),
+                    optional("basisTemperature", "basis temperature", "Optional. The temperature of that basis "
+                            + "(left out: the measurement's)."),
+                    optional("reference", "reference", "For three or more components: a composition (mole "
+                            + "fractions) whose other components keep their ratios while the component varies."),
+                    optional("from", "from", "Optional. The lowest mole fraction of the component to consider."),
+                    optional("to", "to", "Optional. The highest mole fraction of the component to consider."),
+                    BALANCE, EXTRAPOLATE)
+                    .shows("0.5000").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS,
+                            list(Problem.COMPOSITION_LENGTH))),
+            new FunctionInfo("volumeCorrection", "MIX.VOLUMEFACTOR",
+                    "Temperature correction of a blend of known composition: the factor that turns a volume "
+                            + "measured at one temperature into the volume at a reference temperature (15 °C or "
+                            + "20 °C for quotes and custody transfer), or the blend's density at either temperature.",
+                    "factor = V(T_ref)/V(T) = ρ(T)/ρ(T_ref) at fixed composition",
+                    "=MIX.VOLUMEFACTOR(card; 0.5; \"mass fraction\"; 25; 20)",
+                    CARD, required("composition", "composition", "The blend's composition on the basis (a lone number "
+                            + "on a two-component card is the first component's; a block gives one factor per row)."),
+                    required("basis", "basis", BASES),
+                    required("temperature", "temperature", "The measured temperature in the card's unit (one, or "
+                            + "one per row of a block)."),
+                    required("referenceTemperature", "reference temperature", "The reference temperature in the "
+                            + "card's unit."),
+                    optional("result", "result", "Optional. \"factor\" (left out), \"density\" (at the measured "
+                            + "temperature) or \"reference density\"."),
+                    optional("basisTemperature", "basis temperature", "Optional. The temperature of the basis (left "
+                            + "out: the reference temperature)."),
+                    BALANCE, EXTRAPOLATE)
+                    .shows("0.99562").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
+            new FunctionInfo("addInInfo", "MIX.INFO",
+                    "Facts about the add-in itself: its version (for audit records), or how many cards it has "
+                            + "parsed and holds (each distinct card content is parsed once).",
+                    "—",
+                    "=MIX.INFO(\"version\")",
+                    optional("item", "item", "Optional. \"version\" (left out), \"card reads\" (cards parsed since "
+                            + "the office started) or \"cards kept\" (parsed cards held now)."))
+                    .shows(VERSION).refuses(list(Problem.ARG_NOT_TEXT, Problem.UNKNOWN_INFO_ITEM)),
+            new FunctionInfo("explainCall", "MIX.EXPLAIN",
+                    "The words for a refused call: \"OK\" when the named function gives a result for these "
+                            + "arguments, otherwise the message of its refusal (why its cell shows Err:502). It runs "
+                            + "that function on them, so it always agrees with the call; it never refuses itself.",
+                    "—",
+                    "=MIX.EXPLAIN(\"MIX.BATCH\"; card; {50; 50}; \"lb\"; 20)",
+                    required("functionName", "function", "The function's name as text: \"MIX.DENSITY\" or "
+                            + "\"density\" (case does not matter)."),
+                    optional("arguments", "arguments", "The same arguments as the call, in its order (one per "
+                            + "argument box); leave out here what the call leaves out."))
+                    .shows("The unit \"lb\" is not recognised").refuses(list())));
+
+    private FunctionCatalog() {
+    }
+
+    /** Every function, in the order of the IDL interface. */
+    public static List<FunctionInfo> functions() {
+        return FUNCTIONS;
+    }
+
+    /**
+     * The problems of a call rather than of a card, in the error catalogue's order: the call entries of
+     * {@link Problem}, then {@link FitProblem}, then {@link BlendProblem}.
+     */
+    public static List<Enum<?>> callProblems() {
+        List<Enum<?>> all = new java.util.ArrayList<>(java.util.EnumSet.range(Problem.NOT_BINARY,
+                Problem.NON_PHYSICAL));
+        all.addAll(Arrays.asList(FitProblem.values()));
+        all.addAll(Arrays.asList(BlendProblem.values()));
+        return Collections.unmodifiableList(all);
+    }
+
+    /** What MIX.EXPLAIN answers for a call it cannot run (never a refusal). */
+    public static List<Enum<?>> explainAnswers() {
+        return Collections.unmodifiableList(new java.util.ArrayList<>(java.util.EnumSet.range(
+                Problem.EXPLAIN_UNKNOWN_FUNCTION, Problem.EXPLAIN_RANGE_LEFT_OUT)));
+    }
+
+    /**
+     * The call problems no cell can produce, each with the reason: checks that guard the library's own callers, or a
+     * path the add-in never takes. No function lists them; the error catalogue says so, and a plain-JVM test
+     * (UnreachableProblemsTest) produces each through the core.
+     */
+    public static java.util.Map<Enum<?>, String> notFromACell() {
+        return NOT_FROM_A_CELL;
+    }
+
+    /** The function with this IDL method name. */
+    public static FunctionInfo byMethod(String method) {
+        for (FunctionInfo f : FUNCTIONS) {
+            if (f.method().equals(method)) {
+                return f;
+            }
+        }
+        throw new IllegalArgumentException("no function " + method);
+    }
+
+    private static List<Enum<?>> list(Enum<?>... problems) {
+        return Arrays.asList(problems);
+    }
+
+    /** The problems a cell can produce, of those given (all but those declared in NOT_FROM_A_CELL). */
+    private static List<Enum<?>> fromACell(Enum<?>... problems) {
+        List<Enum<?>> out = new java.util.ArrayList<>();
+        for (Enum<?> p : problems) {
+            if (!NOT_FROM_A_CELL.containsKey(p)) {
+                out.add(p);
+            }
+        }
+        return out;
+    }
+
+    /** Pairs of (problem, reason) as an ordered map. */
+    private static java.util.Map<Enum<?>, String> notFromACell(Object... pairs) {
+        java.util.Map<Enum<?>, String> m = new java.util.LinkedHashMap<>();
+        for (int i = 0; i < pairs.length; i += 2) {
+            m.put((Enum<?>) pairs[i], (String) pairs[i + 1]);
+        }
+        return Collections.unmodifiableMap(m);
+    }
+
+    @SafeVarargs
+    private static List<Enum<?>> union(List<Enum<?>>... lists) {
+        java.util.LinkedHashSet<Enum<?>> all = new java.util.LinkedHashSet<>();
+        for (List<Enum<?>> l : lists) {
+            all.addAll(l);
+        }
+        return new java.util.ArrayList<>(all);
+    }
+
+    private static ArgumentInfo required(String name, String displayName, String description) {
+        return new ArgumentInfo(name, displayName, description, false);
+    }
+
+    private static ArgumentInfo optional(String name, String displayName, String description) {
+        return new ArgumentInfo(name, displayName, description, true);
+    }
+}

@@ -1,0 +1,261 @@
+package org.miscela.core.functions;
+
+import org.miscela.core.card.Card;
+import org.miscela.core.card.Units;
+import org.miscela.core.model.Component;
+import org.miscela.core.model.RedlichKister;
+import org.miscela.core.problem.Numbers;
+import org.miscela.core.problem.Problem;
+import java.util.ArrayList;
+import java.util.List;
+import org.miscela.core.fit.DeviationMeasure;
+import org.miscela.core.fit.LeastSquaresFit;
+import org.miscela.core.fit.LinearLeastSquares;
+import org.miscela.core.fit.OrderSelection;
+import org.miscela.core.fit.RedlichKisterFit;
+import org.miscela.core.fit.RedlichKisterFitter;
+
+/**
+ * The fit cell functions' arithmetic: Redlich–Kister coefficients from lab data, in the units of the data or of a
+ * card, shaped so an array formula can fill a card's coefficient cells; and general linear least squares. Each
+ * returns the requested {@link FitOutput} as a table of cells (numbers and text; never NaN).
+ */
+public final class FitFunctions {
+    /** Significance level of the order-selection F-tests (common practice). */
+    static final double SIGNIFICANCE = 0.05;
+
+    private FitFunctions() {
+    }
+
+    /**
+     * Fit of (x1, V^E) data, with temperature dependence when {@code orderInT} &gt; 0. Coefficients come out in the
+     * unit of the excess volumes given, per unit of temperature difference; nothing else is converted.
+     *
+     * @param temperatures one per point, or null when {@code orderInT} is 0
+     * @param reference the reference temperature, in the unit of {@code temperatures} (NaN when orderInT is 0)
+     * @param weights one per point, or null
+     */
+    public static Object[][] excess(double[] x1, double[] excess, int orderInX, double[] temperatures, int orderInT,
+            double reference, double[] weights, FitOutput output) {
+        if (output == FitOutput.CHECK) {
+            excess(x1, excess, orderInX, temperatures, orderInT, reference, weights, FitOutput.COEFFICIENTS);
+            return new Object[][] {{CardFunctions.OK}};
+        }
+        double[] tau = offsets(x1.length, temperatures, orderInT, reference);
+        if (output == FitOutput.ORDERS) {
+            return orders(OrderSelection.compare(orderInX, m -> RedlichKisterFitter.excessVolumesAtOffsets(x1, tau,
+                    excess, m, orderInT, weights).leastSquares(), SIGNIFICANCE), "");
+        }
+        RedlichKisterFit fit = RedlichKisterFitter.excessVolumesAtOffsets(x1, tau, excess, orderInX, orderInT,
+                weights);
+        return rkOutput(fit, output, 1.0, fit.leastSquares().residuals(), 1.0, "", "excess volumes");
+    }
+
+    /**
+     * Fit of (x, T, ρ) data for the pair {@code first} + {@code second} of a card's components (x the mole fraction
+     * of {@code first} in the binary), minimising deviations in density. Everything is in the card's units:
+     * temperatures, densities, and the coefficients in its molar volume unit per unit of temperature difference.
+     *
+     * @param pure a card holding at least the two components' molar masses and densities
+     */
+    public static Object[][] density(Card pure, int first, int second, double[] x1, double[] density,
+            double[] temperatures, int orderInX, int orderInT, double reference, double[] weights, FitOutput output) {
+        if (output == FitOutput.CHECK) {
+            density(pure, first, second, x1, density, temperatures, orderInX, orderInT, reference, weights,
+                    FitOutput.COEFFICIENTS);
+            return new Object[][] {{CardFunctions.OK}};
+        }
+        Units u = pure.units();
+        if (orderInT > 0 && Double.isNaN(reference)) {
+            throw Problem.FIT_NEEDS_REFERENCE.raise();
+        }
+        int n = x1.length;
+        double[] kelvin = new double[n];
+        double[] rho = new double[n];
+        for (int i = 0; i < n; i++) {
+            kelvin[i] = u.temperature().toKelvin(temperatures[i]);
+            rho[i] = u.density().toKgPerM3(density[i]);
+            for (int k : new int[] {first, second}) {
+                double pureRho = pure.components().get(k).density().at(kelvin[i]);
+                if (!(pureRho > 0) || Double.isInfinite(pureRho)) {
+                    throw Problem.NON_PHYSICAL.raise(Numbers.show(temperatures[i]), u.temperature().symbol(),
+                            "density of " + pure.components().get(k).name(), Numbers.show(pureRho));
+                }
+            }
+        }
+        double refK = orderInT > 0 ? u.temperature().toKelvin(reference) : kelvin.length > 0 ? kelvin[0] : 298.15;
+        Component a = pure.components().get(first);
+        Component b = pure.components().get(second);
+        String densityUnit = u.density().symbol();
+        if (output == FitOutput.ORDERS) {
+            return orders(OrderSelection.compare(orderInX, m -> RedlichKisterFitter.densities(x1, kelvin, rho, a, b,
+                    m, orderInT, refK, DeviationMeasure.DENSITY, weights).leastSquares(), SIGNIFICANCE),
+                    " [" + densityUnit + "]", u.density().fromKgPerM3(1.0));
+        }
+        RedlichKisterFit fit = RedlichKisterFitter.densities(x1, kelvin, rho, a, b, orderInX, orderInT, refK,
+                DeviationMeasure.DENSITY, weights);
+        // Density residuals from the fitted expansion, in the card's density unit.
+        RedlichKister rk = fit.toRedlichKister();
+        double[] residuals = new double[n];
+        for (int i = 0; i < n; i++) {
+            double vm = x1[i] * a.molarVolume(kelvin[i]) + (1 - x1[i]) * b.molarVolume(kelvin[i])
+                    + rk.value(x1[i], kelvin[i]);
+            double m = x1[i] * a.molarMass() + (1 - x1[i]) * b.molarMass();
+            residuals[i] = u.density().fromKgPerM3(rho[i] - 1000.0 * m / vm);
+        }
+        double volumeScale = 1.0 / u.molarVolume().toCm3PerMol(1.0);
+        if (output == FitOutput.STATISTICS) {
+            // The least squares run on weighted excess volumes; their largest raw residual is a volume, so the
+            // largest deviation is taken from the density residuals, like the standard deviation beside it.
+            int worst = -1;
+            for (int i = 0; i < n; i++) {
+                if ((weights == null || weights[i] > 0)
+                        && (worst < 0 || Math.abs(residuals[i]) > Math.abs(residuals[worst]))) {
+                    worst = i;
+                }
+            }
+            return statistics(fit.leastSquares(), u.density().fromKgPerM3(1.0), " [" + densityUnit + "]",
+                    "densities (deviations in density)", residuals[worst], worst);
+        }
+        return rkOutput(fit, output, volumeScale, residuals, u.density().fromKgPerM3(1.0),
+                " [" + densityUnit + "]", "densities (deviations in density)");
+    }
+
+    /** General weighted linear least squares: y ≈ X·b. The orders output does not apply. */
+    public static Object[][] leastSquares(double[][] design, double[] response, double[] weights, FitOutput output) {
+        LeastSquaresFit fit = LinearLeastSquares.fit(design, response, weights);
+        switch (output) {
+            case COEFFICIENTS:
+                return column(fit.coefficients());
+            case STANDARD_ERRORS:
+                return column(fit.standardErrors());
+            case COVARIANCE:
+                return matrix(fit.covariance(), 1.0);
+            case RESIDUALS:
+                return column(fit.residuals());
+            case STATISTICS:
+                return statistics(fit, 1.0, "", "the response");
+            case CHECK:
+                return new Object[][] {{CardFunctions.OK}};
+            default:
+                throw Problem.FIT_OUTPUT_NOT_HERE.raise(output.word());
+        }
+    }
+
+    private static Object[][] rkOutput(RedlichKisterFit fit, FitOutput output, double volumeScale,
+            double[] residuals, double deviationScale, String deviationUnit, String fittedTo) {
+        switch (output) {
+            case COEFFICIENTS:
+                return matrix(fit.coefficients(), volumeScale);
+            case STANDARD_ERRORS:
+                return matrix(fit.standardErrors(), volumeScale);
+            case COVARIANCE:
+                return matrix(fit.leastSquares().covariance(), volumeScale * volumeScale);
+            case RESIDUALS:
+                return column(residuals);
+            case STATISTICS:
+                return statistics(fit.leastSquares(), deviationScale, deviationUnit, fittedTo);
+            default:
+                throw new IllegalStateException(output.toString());
+        }
+    }
+
+    private static Object[][] statistics(LeastSquaresFit fit, double deviationScale, String unit, String fittedTo) {
+        return statistics(fit, deviationScale, unit, fittedTo, fit.largestResidual() * deviationScale,
+                fit.largestResidualIndex());
+    }
+
+    /** The statistics table, with the largest residual (in the output's unit) and its 0-based point given. */
+    private static Object[][] statistics(LeastSquaresFit fit, double deviationScale, String unit, String fittedTo,
+            double largest, int worst) {
+        List<Object[]> rows = new ArrayList<>();
+        rows.add(new Object[] {"fitted to", fittedTo});
+        rows.add(new Object[] {"points", (double) fit.pointCount()});
+        rows.add(new Object[] {"parameters", (double) fit.parameterCount()});
+        rows.add(new Object[] {"degrees of freedom", (double) fit.degreesOfFreedom()});
+        double s = fit.residualStandardDeviation();
+        rows.add(new Object[] {"standard deviation of the fit" + unit,
+            Double.isNaN(s) ? "none: as many parameters as points" : finiteOr(s * deviationScale, OVERFLOW)});
+        rows.add(new Object[] {"largest residual" + unit, finiteOr(largest, OVERFLOW)});
+        rows.add(new Object[] {"largest residual at point", (double) (worst + 1)});
+        double r2 = fit.rSquared();
+        // R² = 1 − RSS/TSS is undefined when the data do not vary (TSS = 0), whatever RSS rounds to.
+        rows.add(new Object[] {fit.isCentred() ? "R²" : "R² (uncentred)", finiteOr(r2, "undefined")});
+        rows.add(new Object[] {"condition number (scaled columns)", fit.conditionNumber()});
+        return rows.toArray(new Object[0][]);
+    }
+
+    /** The statistics' text for a sum of squares beyond double range (data near ±1e308). */
+    private static final String OVERFLOW = "overflow: the residuals are too large to square";
+
+    /** The number, or the text saying why there is none: a statistics table never holds NaN or infinity. */
+    private static Object finiteOr(double v, String text) {
+        return Double.isFinite(v) ? (Object) v : text;
+    }
+
+    private static Object[][] orders(OrderSelection selection, String unit) {
+        return orders(selection, unit, 1.0);
+    }
+
+    private static Object[][] orders(OrderSelection selection, String unit, double deviationScale) {
+        List<Object[]> rows = new ArrayList<>();
+        rows.add(new Object[] {"order", "parameters", "degrees of freedom", "standard deviation" + unit,
+            "F against the order below", "p-value", "AIC", "BIC"});
+        for (OrderSelection.Step s : selection.steps()) {
+            rows.add(new Object[] {(double) s.order(), (double) s.parameterCount(), (double) s.degreesOfFreedom(),
+                orBlank(s.residualStandardDeviation() * deviationScale), orBlank(s.fStatistic()), orBlank(s.pValue()),
+                orBlank(s.aic()), orBlank(s.bic())});
+        }
+        rows.add(row8("selected order (F-test at 5 %)", (double) selection.selectedOrder()));
+        rows.add(row8("lowest AIC at order", (double) selection.lowestAicOrder()));
+        rows.add(row8("lowest BIC at order", (double) selection.lowestBicOrder()));
+        if (selection.reachedHighestOrder()) {
+            rows.add(row8("note", "every added term was significant: try a higher order"));
+        }
+        return rows.toArray(new Object[0][]);
+    }
+
+    private static Object[] row8(String label, Object value) {
+        return new Object[] {label, value, "", "", "", "", "", ""};
+    }
+
+    private static Object orBlank(double v) {
+        return Double.isNaN(v) || Double.isInfinite(v) ? "" : (Object) v;
+    }
+
+    private static double[] offsets(int n, double[] temperatures, int orderInT, double reference) {
+        double[] tau = new double[n];
+        if (orderInT == 0) {
+            return tau;
+        }
+        if (temperatures == null) {
+            throw Problem.FIT_NEEDS_TEMPERATURE.raise();
+        }
+        if (Double.isNaN(reference)) {
+            throw Problem.FIT_NEEDS_REFERENCE.raise();
+        }
+        for (int i = 0; i < n; i++) {
+            tau[i] = temperatures[i] - reference;
+        }
+        return tau;
+    }
+
+    private static Object[][] column(double[] v) {
+        Object[][] out = new Object[v.length][1];
+        for (int i = 0; i < v.length; i++) {
+            out[i][0] = orBlank(v[i]);
+        }
+        return out;
+    }
+
+    private static Object[][] matrix(double[][] m, double scale) {
+        Object[][] out = new Object[m.length][];
+        for (int i = 0; i < m.length; i++) {
+            out[i] = new Object[m[i].length];
+            for (int j = 0; j < m[i].length; j++) {
+                out[i][j] = orBlank(m[i][j] * scale);
+            }
+        }
+        return out;
+    }
+}

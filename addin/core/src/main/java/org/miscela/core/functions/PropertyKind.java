@@ -1,0 +1,29 @@
+package org.miscela.core.functions;
+
+import org.miscela.core.problem.Problem;
+
+/** The extensive properties a card can describe, for functions that take the property as an argument. */
+public enum PropertyKind {
+    VOLUME("volume"),
+    ENTHALPY("enthalpy");
+
+    private final String word;
+
+    PropertyKind(String word) {
+        this.word = word;
+    }
+
+    public String word() {
+        return word;
+    }
+
+    /** The property spelled {@code text} (case ignored); fails with a readable message otherwise. */
+    public static PropertyKind lookup(String text) {
+        for (PropertyKind p : values()) {
+            if (p.word.equalsIgnoreCase(text.trim())) {
+                return p;
+            }
+        }
+        throw Problem.UNKNOWN_PROPERTY.raise(text.trim(), "volume, enthalpy");
+    }
+}

@@ -1,0 +1,169 @@
+package org.miscela.core.functions;
+
+import org.miscela.core.card.Card;
+import org.miscela.core.card.Extrapolation;
+import org.miscela.core.card.Mixture;
+import org.miscela.core.card.Units;
+import org.miscela.core.model.Component;
+import org.miscela.core.model.ExcessFunction;
+import org.miscela.core.model.HeatCapacity;
+import org.miscela.core.model.RedlichKister;
+import org.miscela.core.model.TernaryTerm;
+import org.miscela.core.problem.MiscelaException;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The audit trace of one evaluation: (label, value) rows holding every intermediate number, in the card's units, in
+ * the order a person re-deriving the result by hand needs them. docs/trace.md documents each label; a test keeps
+ * the two in step.
+ */
+final class Trace {
+    private final List<Object[]> rows = new ArrayList<>();
+
+    private Trace() {
+    }
+
+    static Object[][] of(Card card, double[] x, double t, double kelvin, PropertyKind property, Extrapolation e,
+            List<MiscelaException> outside) {
+        Trace tr = new Trace();
+        Units u = card.units();
+        String tu = u.temperature().symbol();
+        tr.add("card", card.title());
+        tr.add("source", card.source());
+        tr.add("property", property.word());
+        tr.add("components", (double) card.componentCount());
+        ExcessFunction f = property == PropertyKind.VOLUME ? card.excessVolume() : card.excessEnthalpy();
+        String model = f.model().cardName();
+        if (f.asymmetricComponent() >= 0) {
+            model += " (asymmetric component: " + name(card, f.asymmetricComponent()) + ")";
+        }
+        tr.add("multicomponent model", model);
+        tr.add("temperature [" + tu + "]", t);
+        tr.add("temperature [K]", kelvin);
+        tr.add("extrapolation", extrapolation(card, e));
+        if (outside.isEmpty()) {
+            tr.add("outside validity", "none");
+        }
+        for (MiscelaException m : outside) {
+            String text = m.getMessage();
+            int cut = text.indexOf(" Extrapolation is refused");
+            tr.add("outside validity", cut > 0 ? text.substring(0, cut) : text);
+        }
+        for (int k = 0; k < x.length; k++) {
+            tr.add("mole fraction: " + name(card, k), x[k]);
+        }
+        Mixture m = card.mixture();
+        String mm = u.molarMass().symbol();
+        for (int k = 0; k < x.length; k++) {
+            Component c = card.components().get(k);
+            tr.add("molar mass: " + c.name() + " [" + mm + "]", 1.0 / u.molarMass().toGramPerMol(1.0) * c.molarMass());
+        }
+        double scale;
+        String unit;
+        String symbol;
+        if (property == PropertyKind.VOLUME) {
+            unit = u.molarVolume().symbol();
+            scale = 1.0 / u.molarVolume().toCm3PerMol(1.0);
+            symbol = "V";
+            for (int k = 0; k < x.length; k++) {
+                Component c = card.components().get(k);
+                tr.add("pure density model: " + c.name(), c.density().modelName());
+                tr.add("pure density: " + c.name() + " [" + u.density().symbol() + "]",
+                        u.density().fromKgPerM3(c.density().at(kelvin)));
+                tr.add("pure molar volume: " + c.name() + " [" + unit + "]", scale * m.pureMolarVolume(k, kelvin));
+            }
+        } else {
+            unit = u.enthalpy().symbol();
+            scale = 1.0 / u.enthalpy().toJoulePerMol(1.0);
+            symbol = "H";
+        }
+        String excessName = property == PropertyKind.VOLUME ? "excess molar volume" : "excess molar enthalpy";
+        tr.pairs(card, f, x, kelvin, scale, unit);
+        double[] g = new double[x.length];
+        double be = f.evaluate(x, kelvin, false, g, null);
+        tr.add(excessName + " [" + unit + "]", scale * be);
+        double mean = 0.0;
+        for (int k = 0; k < x.length; k++) {
+            tr.add("derivative d" + symbol + "E/dx: " + name(card, k) + " [" + unit + "]", scale * g[k]);
+            mean += x[k] * g[k];
+        }
+        tr.add("sum of x·d" + symbol + "E/dx [" + unit + "]", scale * mean);
+        String partialName = property == PropertyKind.VOLUME ? "partial molar excess volume: "
+                : "partial molar excess enthalpy: ";
+        for (int k = 0; k < x.length; k++) {
+            tr.add(partialName + name(card, k) + " [" + unit + "]", scale * (be + g[k] - mean));
+        }
+        if (property == PropertyKind.VOLUME) {
+            for (int k = 0; k < x.length; k++) {
+                tr.add("partial molar volume: " + name(card, k) + " [" + unit + "]",
+                        scale * (m.pureMolarVolume(k, kelvin) + be + g[k] - mean));
+            }
+            tr.add("mixture molar volume [" + unit + "]", scale * m.molarVolume(x, kelvin));
+            tr.add("mean molar mass [" + mm + "]", m.meanMolarMass(x) / u.molarMass().toGramPerMol(1.0));
+            tr.add("mixture density [" + u.density().symbol() + "]",
+                    u.density().fromKgPerM3(CardFunctions.physicalDensity(card, x, kelvin, t)));
+        } else {
+            String cpUnit = u.enthalpy().symbol() + "/K";
+            tr.add("excess heat capacity dHE/dT [" + cpUnit + "]", scale * m.excessHeatCapacity(x, kelvin));
+            for (int k = 0; k < x.length; k++) {
+                HeatCapacity c = card.components().get(k).heatCapacity();
+                tr.add("heat capacity: " + name(card, k) + " [" + cpUnit + "]",
+                        c == null ? "not on the card" : (Object) (scale * c.at(kelvin)));
+            }
+        }
+        return tr.rows.toArray(new Object[0][]);
+    }
+
+    /** Per pair: the series argument d, each coefficient at T, and the pair's term; then the ternary terms. */
+    private void pairs(Card card, ExcessFunction f, double[] x, double kelvin, double scale, String unit) {
+        int n = card.componentCount();
+        for (int i = 0; i < n; i++) {
+            for (int j = i + 1; j < n; j++) {
+                if (f.pair(i, j) == null) {
+                    add("pair term: " + name(card, i) + " + " + name(card, j) + " [" + unit + "]", 0.0);
+                    add("pair coefficients: " + name(card, i) + " + " + name(card, j),
+                            "none on the card: treated as ideal");
+                }
+            }
+        }
+        for (int p = 0; p < f.pairCount(); p++) {
+            String pair = name(card, f.pairFirst(p)) + " + " + name(card, f.pairSecond(p));
+            RedlichKister r = f.pairExpansion(p);
+            add("pair argument d: " + pair, f.pairCoordinate(p, x));
+            for (int k = 0; k <= r.order(); k++) {
+                add("A" + k + " at T: " + pair + " [" + unit + "]", scale * r.coefficientAt(k, kelvin));
+            }
+            add("pair term: " + pair + " [" + unit + "]", scale * f.pairContribution(p, x, kelvin));
+        }
+        List<TernaryTerm> ternary = f.ternaryTerms();
+        for (int t = 0; t < ternary.size(); t++) {
+            TernaryTerm term = ternary.get(t);
+            String triple = name(card, term.first()) + " + " + name(card, term.second()) + " + "
+                    + name(card, term.third());
+            for (int c = 0; c < term.coefficientCount(); c++) {
+                add("C" + c + " at T: " + triple + " [" + unit + "]", scale * term.coefficientAt(c, kelvin, false));
+            }
+            add("ternary term: " + triple + " [" + unit + "]", scale * f.ternaryContribution(t, x, kelvin));
+        }
+    }
+
+    private static String extrapolation(Card card, Extrapolation e) {
+        switch (e) {
+            case ALLOW:
+                return "allowed by the extrapolate argument";
+            case REFUSE:
+                return "refused by the extrapolate argument";
+            default:
+                return card.extrapolationAllowed() ? "allowed by the card" : "refused (the card's default)";
+        }
+    }
+
+    private static String name(Card card, int k) {
+        return card.components().get(k).name();
+    }
+
+    private void add(String label, Object value) {
+        rows.add(new Object[] {label, value});
+    }
+}

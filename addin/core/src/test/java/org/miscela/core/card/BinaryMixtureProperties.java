@@ -1,0 +1,164 @@
+package org.miscela.core.card;
+
+import org.miscela.core.model.Component;
+import org.miscela.core.model.ConstantDensity;
+import org.miscela.core.model.RedlichKister;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.Arrays;
+import java.util.List;
+import net.jqwik.api.Arbitraries;
+import net.jqwik.api.Arbitrary;
+import net.jqwik.api.Combinators;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.Provide;
+import net.jqwik.api.constraints.DoubleRange;
+
+/**
+ * Textbook identities of partial molar quantities, over random binary cards: summability, Gibbs–Duhem, analytic
+ * derivatives against finite differences, symmetry under swapping the components, and the pure-component limits.
+ */
+class BinaryMixtureProperties {
+
+    /** A random card: molar masses, constant pure densities, and an RK set of order 0..6 with linear T terms. */
+    @Provide
+    Arbitrary<Card> cards() {
+        Arbitrary<Double> mass = Arbitraries.doubles().between(10, 300);
+        Arbitrary<Double> rho = Arbitraries.doubles().between(600, 2000);
+        Arbitrary<double[][]> rk = Arbitraries.integers().between(0, 6).flatMap(order -> Arbitraries.doubles()
+                .between(-8, 8).array(double[].class).ofSize(2 * (order + 1)).map(v -> {
+                    double[][] a = new double[order + 1][2];
+                    for (int k = 0; k <= order; k++) {
+                        a[k][0] = v[2 * k];
+                        a[k][1] = v[2 * k + 1] * 0.01;
+                    }
+                    return a;
+                }));
+        return Combinators.combine(mass, mass, rho, rho, rk).as(BinaryMixtureProperties::card);
+    }
+
+    static Card card(double m1, double m2, double rho1, double rho2, double[][] a) {
+        List<Component> comps = Arrays.asList(new Component("a", m1, new ConstantDensity(rho1)),
+                new Component("b", m2, new ConstantDensity(rho2)));
+        RedlichKister[][] ex = new RedlichKister[2][2];
+        ex[0][1] = new RedlichKister(298.15, a);
+        Units units = new Units(Units.Temperature.KELVIN, Units.Density.KG_PER_M3, Units.MolarVolume.CM3_PER_MOL,
+                Units.MolarMass.G_PER_MOL);
+        return new Card("random", "generated", units, comps, ex,
+                new Validity(250, 350, new double[] {0, 0}, new double[] {1, 1}), false);
+    }
+
+    /** Swapped card: components in the other order, A_k → (−1)^k A_k. */
+    static Card swapped(Card c) {
+        List<Component> comps = Arrays.asList(c.components().get(1), c.components().get(0));
+        RedlichKister[][] ex = new RedlichKister[2][2];
+        ex[0][1] = c.excessVolume(1, 0);
+        return new Card("swapped", "generated", c.units(), comps, ex, c.validity(), false);
+    }
+
+    @Property(tries = 2000)
+    void summability(@ForAll("cards") Card card, @ForAll @DoubleRange(min = 0, max = 1) double x1,
+            @ForAll @DoubleRange(min = 260, max = 340) double t) {
+        BinaryMixture m = card.binary();
+        double vm = m.molarVolume(x1, t);
+        double sum = x1 * m.partialMolarVolume(0, x1, t) + (1 - x1) * m.partialMolarVolume(1, x1, t);
+        assertEquals(vm, sum, 1e-12 * Math.abs(vm));
+    }
+
+    /**
+     * Σ x_k dV̄_k = 0 with the library's analytic slopes; those slopes are checked against finite differences of the
+     * partial molar volumes in {@link #partialSlopesMatchFiniteDifferences}, so together the two pin Gibbs–Duhem.
+     */
+    @Property(tries = 2000)
+    void gibbsDuhem(@ForAll("cards") Card card, @ForAll @DoubleRange(min = 0, max = 1) double x1,
+            @ForAll @DoubleRange(min = 260, max = 340) double t) {
+        BinaryMixture m = card.binary();
+        double s1 = m.partialMolarVolumeSlope(0, x1, t);
+        double s2 = m.partialMolarVolumeSlope(1, x1, t);
+        double scale = Math.abs(x1 * s1) + Math.abs((1 - x1) * s2) + 1e-300;
+        assertTrue(Math.abs(x1 * s1 + (1 - x1) * s2) <= 1e-12 * scale + 1e-13, "x1 dV1 + x2 dV2 = "
+                + (x1 * s1 + (1 - x1) * s2));
+    }
+
+    /** Each partial molar volume's analytic slope against a central difference of the partial molar volume itself. */
+    @Property(tries = 1000)
+    void partialSlopesMatchFiniteDifferences(@ForAll("cards") Card card,
+            @ForAll @DoubleRange(min = 0.01, max = 0.99) double x1,
+            @ForAll @DoubleRange(min = 260, max = 340) double t) {
+        BinaryMixture m = card.binary();
+        double h = 1e-5;
+        for (int k = 0; k < 2; k++) {
+            double fd = (m.partialMolarVolume(k, x1 + h, t) - m.partialMolarVolume(k, x1 - h, t)) / (2 * h);
+            double an = m.partialMolarVolumeSlope(k, x1, t);
+            assertEquals(fd, an, 1e-5 * (1 + Math.abs(an)), "component " + (k + 1));
+        }
+    }
+
+    /** V̄_1 − V̄_2 = dV_m/dx1 (tangent construction), checked against a central difference of V_m. */
+    @Property(tries = 1000)
+    void partialsAreTangentIntercepts(@ForAll("cards") Card card,
+            @ForAll @DoubleRange(min = 0.01, max = 0.99) double x1,
+            @ForAll @DoubleRange(min = 260, max = 340) double t) {
+        BinaryMixture m = card.binary();
+        double h = 1e-5;
+        double fd = (m.molarVolume(x1 + h, t) - m.molarVolume(x1 - h, t)) / (2 * h);
+        double diff = m.partialMolarVolume(0, x1, t) - m.partialMolarVolume(1, x1, t);
+        assertEquals(fd, diff, 1e-6 * (1 + Math.abs(diff)));
+    }
+
+    @Property(tries = 1000)
+    void swappingComponentsChangesNothing(@ForAll("cards") Card card,
+            @ForAll @DoubleRange(min = 0, max = 1) double x1, @ForAll @DoubleRange(min = 260, max = 340) double t) {
+        BinaryMixture m = card.binary();
+        BinaryMixture s = swapped(card).binary();
+        double x2 = 1 - x1;
+        double tol = 1e-12 * (1 + Math.abs(m.molarVolume(x1, t)));
+        assertEquals(m.excessMolarVolume(x1, t), s.excessMolarVolume(x2, t), tol);
+        assertEquals(m.partialMolarVolume(0, x1, t), s.partialMolarVolume(1, x2, t), 1e-10 * (1
+                + Math.abs(m.partialMolarVolume(0, x1, t))));
+        assertEquals(m.partialMolarVolume(1, x1, t), s.partialMolarVolume(0, x2, t), 1e-10 * (1
+                + Math.abs(m.partialMolarVolume(1, x1, t))));
+        assertEquals(m.density(x1, t), s.density(x2, t), 1e-12 * m.density(x1, t));
+    }
+
+    /** At a pure corner the excess volume vanishes and the pure component's partial volume is its molar volume. */
+    @Property(tries = 500)
+    void pureCorners(@ForAll("cards") Card card, @ForAll @DoubleRange(min = 260, max = 340) double t) {
+        BinaryMixture m = card.binary();
+        assertEquals(0.0, m.excessMolarVolume(0, t), 0.0);
+        assertEquals(0.0, m.excessMolarVolume(1, t), 0.0);
+        assertEquals(m.pureMolarVolume(0, t), m.partialMolarVolume(0, 1, t), 1e-12 * m.pureMolarVolume(0, t));
+        assertEquals(m.pureMolarVolume(1, t), m.partialMolarVolume(1, 0, t), 1e-12 * m.pureMolarVolume(1, t));
+    }
+
+    /** Infinite dilution: V̄_1^E(x1 → 0) = Σ A_k (−1)^k and V̄_2^E(x1 → 1) = Σ A_k (the RK limits). */
+    @Property(tries = 500)
+    void infiniteDilution(@ForAll("cards") Card card, @ForAll @DoubleRange(min = 260, max = 340) double t) {
+        BinaryMixture m = card.binary();
+        RedlichKister rk = card.excessVolume(0, 1);
+        double alternating = 0;
+        double plain = 0;
+        for (int k = 0; k <= rk.order(); k++) {
+            double a = rk.coefficientAt(k, t);
+            alternating += k % 2 == 0 ? a : -a;
+            plain += a;
+        }
+        assertEquals(alternating, m.partialExcessMolarVolume(0, 0, t), 1e-12 * (1 + Math.abs(alternating)));
+        assertEquals(plain, m.partialExcessMolarVolume(1, 1, t), 1e-12 * (1 + Math.abs(plain)));
+    }
+
+    /** The analytic slope of V^E against a central difference. */
+    @Property(tries = 1000)
+    void excessSlopeMatchesFiniteDifference(@ForAll("cards") Card card,
+            @ForAll @DoubleRange(min = 0.01, max = 0.99) double x1,
+            @ForAll @DoubleRange(min = 260, max = 340) double t) {
+        RedlichKister rk = card.excessVolume(0, 1);
+        double[] e = new double[3];
+        rk.evaluate(x1, t, e);
+        double h = 1e-5;
+        double fd = (rk.value(x1 + h, t) - rk.value(x1 - h, t)) / (2 * h);
+        assertEquals(fd, e[1], 1e-6 * (1 + Math.abs(e[1])));
+    }
+}

@@ -1,0 +1,241 @@
+package org.miscela.core.card;
+
+import org.miscela.core.functions.CardFunctions;
+import org.miscela.core.model.Component;
+import org.miscela.core.model.GeometricModel;
+import org.miscela.core.problem.MiscelaException;
+import org.miscela.core.problem.Numbers;
+import org.miscela.core.problem.Problem;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.Paths;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Keeps docs/card-format.md and the reader in step: every example card in the document (a Markdown table after a
+ * line {@code <!-- card-example: name, name -->}) must read and declare exactly the components the marker lists.
+ */
+public class CardFormatDocTest {
+    private static final Pattern MARKER = Pattern.compile("^\\s*<!--\\s*card-example:(.*?)-->\\s*$");
+    private static final Pattern NUMBER = Pattern.compile("[-+]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][-+]?\\d+)?");
+    private static final double T = 298.15;
+
+    /** An example card: the components its marker states and its cells. */
+    private static final class Example {
+        final int line;
+        final List<String> components;
+        final Object[][] cells;
+
+        Example(int line, List<String> components, Object[][] cells) {
+            this.line = line;
+            this.components = components;
+            this.cells = cells;
+        }
+    }
+
+    public static Path document() {
+        String repo = System.getProperty("miscela.repo");
+        Path root = repo != null ? Paths.get(repo) : Paths.get("").toAbsolutePath().getParent();
+        return root.resolve("docs").resolve("card-format.md");
+    }
+
+    private static List<String> lines() throws IOException {
+        return Files.readAllLines(document(), StandardCharsets.UTF_8);
+    }
+
+    /** Numbers become Double, other text String, an empty cell "". */
+    static Object cell(String text) {
+        String t = text.trim();
+        if (NUMBER.matcher(t).matches()) {
+            return Double.valueOf(t);
+        }
+        return t;
+    }
+
+    /** Cells of a Markdown table row "| a | b |". */
+    static List<String> split(String row) {
+        String r = row.trim();
+        if (!r.startsWith("|") || !r.endsWith("|") || r.length() < 2) {
+            throw new IllegalArgumentException("not a table row: " + row);
+        }
+        return Arrays.asList(r.substring(1, r.length() - 1).split("\\|", -1));
+    }
+
+    static List<Example> examples(List<String> lines) {
+        List<Example> out = new ArrayList<>();
+        for (int i = 0; i < lines.size(); i++) {
+            Matcher m = MARKER.matcher(lines.get(i));
+            if (!m.find()) {
+                continue;
+            }
+            List<String> names = new ArrayList<>();
+            for (String n : m.group(1).split(",")) {
+                names.add(n.trim());
+            }
+            int start = i + 1;
+            assertTrue(start + 1 < lines.size() && lines.get(start).trim().startsWith("|")
+                    && lines.get(start + 1).trim().matches("\\|(\\s*:?-+:?\\s*\\|)+"),
+                    "line " + (i + 1) + ": a card-example marker must be followed by a table with a header row");
+            int width = split(lines.get(start)).size();
+            List<Object[]> rows = new ArrayList<>();
+            int j = start + 2;
+            for (; j < lines.size() && lines.get(j).trim().startsWith("|"); j++) {
+                List<String> cells = split(lines.get(j));
+                assertEquals(width, cells.size(), "line " + (j + 1) + ": cell count differs from the header");
+                Object[] row = new Object[width];
+                for (int c = 0; c < width; c++) {
+                    row[c] = cell(cells.get(c));
+                }
+                rows.add(row);
+            }
+            out.add(new Example(i + 1, names, rows.toArray(new Object[0][])));
+            i = j - 1;
+        }
+        return out;
+    }
+
+    @Test
+    void everyExampleCardReadsWithItsStatedComponents() throws IOException {
+        List<Example> examples = examples(lines());
+        assertTrue(examples.size() >= 2, "expected at least two example cards, found " + examples.size());
+        for (Example e : examples) {
+            Card card;
+            try {
+                card = CardReader.read(e.cells);
+            } catch (MiscelaException ex) {
+                throw new AssertionError("example card at line " + e.line + ": " + ex.getMessage(), ex);
+            }
+            List<String> names = new ArrayList<>();
+            for (Component c : card.components()) {
+                names.add(c.name());
+            }
+            assertEquals(e.components, names, "example card at line " + e.line);
+            assertTrue(card.source().toLowerCase(java.util.Locale.ROOT).contains("invented values"),
+                    "example card at line " + e.line + " must say its values are invented");
+            assertEquals(CardFunctions.OK, CardFunctions.check(card, Double.NaN, Double.NaN,
+                    Extrapolation.AS_CARD), "example card at line " + e.line);
+        }
+    }
+
+    /** The card shown in the README reads too, with a density a person can recognise. */
+    @Test
+    void readmeCardReads() throws IOException {
+        Path readme = document().getParent().getParent().resolve("README.md");
+        List<Example> examples = examples(Files.readAllLines(readme, StandardCharsets.UTF_8));
+        assertEquals(1, examples.size(), "the README shows one card");
+        Card card = CardReader.read(examples.get(0).cells);
+        assertEquals(examples.get(0).components.size(), card.componentCount());
+        double water = CardFunctions.density(card, 0, 20, Extrapolation.AS_CARD);
+        assertEquals(998.2067, water, 1e-4, "pure water at 20 °C through the README card (Tanaka 2001)");
+    }
+
+    /** The statements the examples' prose makes about them. */
+    @Test
+    void examplesBehaveAsDescribed() throws IOException {
+        List<Example> examples = examples(lines());
+        assertEquals(7, examples.size());
+        Card one = CardReader.read(examples.get(0).cells);
+        // "the functions refuse x1 above 0.9 unless extrapolation is allowed"
+        assertEquals(CardFunctions.OK, CardFunctions.check(one, 0.0, T, Extrapolation.AS_CARD));
+        assertEquals(CardFunctions.OK, CardFunctions.check(one, 0.89, T, Extrapolation.AS_CARD));
+        assertEquals(CardFunctions.OK, CardFunctions.check(one, 0.9, T, Extrapolation.AS_CARD), "limits are inclusive");
+        assertTrue(CardFunctions.check(one, 0.95, T, Extrapolation.AS_CARD).contains("solvent Q"));
+        assertEquals(CardFunctions.OK, CardFunctions.check(one, 0.95, T, Extrapolation.ALLOW));
+        assertEquals(-1.62, one.excessVolume(0, 1).coefficientAt(0, T), 0.0);
+
+        Card two = CardReader.read(examples.get(1).cells);
+        assertEquals(Units.Temperature.CELSIUS, two.units().temperature());
+        assertEquals(Units.Density.G_PER_CM3, two.units().density());
+        assertTrue(two.extrapolationAllowed());
+        assertEquals("Tanaka 2001", two.components().get(1).density().modelName());
+        assertEquals(791.2, two.components().get(0).density().at(293.15), 1e-9);
+        assertEquals(-3.95 - 0.011 * 10, two.excessVolume(0, 1).coefficientAt(0, 308.15), 1e-12);
+        assertEquals(2, two.excessVolume(0, 1).order(), "the commented-out A3 row is ignored");
+
+        Card three = CardReader.read(examples.get(2).cells);
+        assertEquals(Units.MolarVolume.L_PER_MOL, three.units().molarVolume());
+        assertEquals(-2.1, three.excessVolume(0, 1).coefficientAt(0, T), 1e-12); // -0.0021 L/mol in cm³/mol
+        assertEquals(-0.4, three.excessVolume(0, 1).coefficientAt(1, T), 1e-12);
+        assertEquals(74.1, three.components().get(0).molarMass(), 1e-9);
+
+        // Example 4: Toop with water asymmetric; the additive + glycol pair limit; a ternary term.
+        Card four = CardReader.read(examples.get(3).cells);
+        assertEquals(GeometricModel.TOOP, four.excessVolume().model());
+        assertEquals(1, four.excessVolume().asymmetricComponent());
+        assertEquals(1, four.excessVolume().ternaryTerms().size());
+        double[] inside = {0.5, 0.4, 0.1}; // additive share of the pair 0.1/0.6 = 0.17
+        double[] outside = {0.2, 0.6, 0.2}; // 0.2/0.4 = 0.5 > 0.3
+        assertEquals(1.0, CardFunctions.inside(four, inside, 20));
+        assertTrue(CardFunctions.check(four, outside, 20, Extrapolation.AS_CARD).contains("additive + glycol"));
+
+        // Example 5: enthalpy only; volumes refused; H^E depends on T, so Cp^E = x1 x2 Σ dA_k/dT (x1 − x2)^k.
+        Card five = CardReader.read(examples.get(4).cells);
+        assertEquals(null, five.excessVolume());
+        assertEquals(Problem.NO_VOLUME, org.junit.jupiter.api.Assertions.assertThrows(MiscelaException.class,
+                () -> CardFunctions.density(five, 0.2, 25, Extrapolation.AS_CARD)).problem());
+        double[] x = {0.2, 0.8};
+        assertEquals(0.2 * 0.8 * 0.05 * 1000, five.mixture().excessHeatCapacity(x, 298.15), 1e-9);
+        assertEquals(0.2 * 0.8 * (-55 + 33 * -0.6 + 14 * 0.36),
+                CardFunctions.excessEnthalpy(five, x, 25, Extrapolation.AS_CARD), 1e-12);
+
+        // Example 6: u(V^E) at x = 0.5 is x1·x2·√C00 since (x1 − x2) = 0 there: 0.25·0.02 = 0.005 cm³/mol.
+        Card six = CardReader.read(examples.get(5).cells);
+        assertEquals(0.005, CardFunctions.uncertainty(six, "excess volume", -1, new double[] {0.5, 0.5}, 20,
+                Extrapolation.AS_CARD), 1e-12);
+
+        // Example 7: with the X + Y pair ideal, V^E is the two water pairs alone (Kohler's d matters only for A1+).
+        Card seven = CardReader.read(examples.get(6).cells);
+        double[] z = {0.3, 0.2, 0.5};
+        assertEquals(0.3 * 0.5 * -1.8 + 0.2 * 0.5 * -0.9,
+                CardFunctions.excessMolarVolume(seven, z, 298.15, Extrapolation.AS_CARD), 1e-14);
+        assertEquals(null, seven.excessVolume(0, 1));
+    }
+
+    /** The document's table of problems names every card problem of the catalogue. */
+    @Test
+    void documentListsEveryCardProblem() throws IOException {
+        String text = String.join("\n", lines());
+        for (Problem p : EnumSet.range(Problem.CARD_EMPTY, Problem.NO_COMPOSITION_LIMIT)) {
+            assertTrue(text.contains("| `" + p.name() + "` |"), "docs/card-format.md does not describe " + p);
+        }
+    }
+
+    /** The document lists exactly the unit spellings the reader accepts. */
+    @Test
+    void documentListsEveryUnitSpelling() throws IOException {
+        String text = String.join("\n", lines());
+        List<Units.Spelled> all = new ArrayList<>();
+        all.addAll(Arrays.asList(Units.Temperature.values()));
+        all.addAll(Arrays.asList(Units.Density.values()));
+        all.addAll(Arrays.asList(Units.MolarVolume.values()));
+        all.addAll(Arrays.asList(Units.MolarMass.values()));
+        all.addAll(Arrays.asList(Units.MolarEnthalpy.values()));
+        for (Units.Spelled u : all) {
+            for (String s : u.spellings()) {
+                assertTrue(text.contains("`" + s + "`"), "docs/card-format.md does not list the spelling " + s);
+            }
+        }
+    }
+
+    @Test
+    void cellConversion() {
+        assertEquals(1.0, cell(" 1 "));
+        assertEquals(-0.0000012, cell("-0.0000012"));
+        assertEquals(1e-3, cell("1e-3"));
+        assertEquals("", cell("  "));
+        assertEquals("Tanaka 2001", cell(" Tanaka 2001 "));
+        assertEquals("solvent P + solvent Q", cell("solvent P + solvent Q"));
+        assertEquals(Arrays.asList(" a ", " ", "b"), split("| a | |b|"));
+    }
+}

@@ -1,0 +1,567 @@
+package org.miscela.core.card;
+
+import org.miscela.core.functions.CardFunctions;
+import org.miscela.core.model.PureDensity;
+import org.miscela.core.model.RedlichKister;
+import org.miscela.core.problem.MiscelaException;
+import org.miscela.core.problem.Problem;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.params.provider.Arguments.arguments;
+
+import java.util.EnumSet;
+import java.util.Set;
+import java.util.stream.Collectors;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
+
+/**
+ * The card reader: every card problem of the catalogue is produced by a minimal malformed card and names the row it
+ * is in; well-formed variations (units, pair order, layout) read as intended. All card values are invented.
+ */
+class CardReaderTest {
+
+    // ------------------------------------------------------------------ malformed cards
+
+    /** A malformed card: the problem it must raise, the row its message must name (0: none) and a text fragment. */
+    private static Arguments bad(String what, Problem problem, int row, String fragment, Object[][] cells) {
+        return arguments(what, problem, row, fragment, cells);
+    }
+
+    private static Object[][] base(java.util.function.UnaryOperator<TestCard> edit) {
+        return edit.apply(TestCard.base()).cells();
+    }
+
+    private static Object[][] v2(java.util.function.UnaryOperator<TestCard> edit) {
+        return edit.apply(TestCard.base().set(1, "Miscela card", 2)).cells();
+    }
+
+    private static Object[][] ternary(java.util.function.UnaryOperator<TestCard> edit) {
+        return edit.apply(TestCard.ternary()).cells();
+    }
+
+    static Stream<Arguments> malformed() {
+        return Stream.of(
+                bad("no cells", Problem.CARD_EMPTY, 0, "empty", new Object[0][]),
+                bad("only blank cells", Problem.CARD_EMPTY, 0, "empty",
+                        new Object[][] {{"", null}, {" ", ""}, null}),
+                bad("null range", Problem.CARD_EMPTY, 0, "empty", null),
+                bad("wrong header", Problem.CARD_HEADER, 1, "\"Miscela cards\"",
+                        base(c -> c.set(1, "Miscela cards", 1))),
+                bad("header after a blank row is still the first row", Problem.CARD_HEADER, 3, "\"title\"",
+                        base(c -> c.insert(1).blank(2))),
+                bad("comment before the header", Problem.CARD_HEADER, 1, "\"# draft\"",
+                        base(c -> c.insert(1, "# draft"))),
+                bad("version 3", Problem.CARD_VERSION, 1, "version 3 is not supported",
+                        base(c -> c.set(1, "Miscela card", 3))),
+                bad("a version 2 row on a version 1 card", Problem.NEEDS_VERSION_2, 20, "'Miscela card | 2'",
+                        base(c -> c.row("multicomponent model", "Kohler"))),
+                bad("an excess enthalpy row on a version 1 card", Problem.NEEDS_VERSION_2, 20, "excess enthalpy A0",
+                        base(c -> c.row("excess enthalpy A0", "alpha + beta", -800))),
+                bad("version 1.5", Problem.CARD_VERSION, 1, "version 1.5",
+                        base(c -> c.set(1, "Miscela card", 1.5))),
+                bad("unknown label", Problem.UNKNOWN_LABEL, 20, "\"viscosity\"",
+                        base(c -> c.row("viscosity", 1.1))),
+                bad("excess coefficient without a number", Problem.UNKNOWN_LABEL, 17, "\"excess volume A\"",
+                        base(c -> c.set(17, "excess volume A", "alpha + beta", -4.0))),
+                bad("global row twice", Problem.DUPLICATE_ROW, 20, "also in row 4",
+                        base(c -> c.row("Temperature unit", "K"))),
+                bad("component twice, other case", Problem.DUPLICATE_ROW, 20, "also in row 10",
+                        base(c -> c.row("component", "ALPHA", 46.07))),
+                bad("excess row twice, other spacing", Problem.DUPLICATE_ROW, 20, "also in row 17",
+                        base(c -> c.row("excess volume A0", "alpha+beta", -4.0))),
+                bad("excess reference twice", Problem.DUPLICATE_ROW, 21, "also in row 20",
+                        base(c -> c.row("excess volume reference temperature", "alpha + beta", 298.15)
+                                .row("excess volume reference temperature", "alpha +beta", 298.15))),
+                bad("no source", Problem.MISSING_ROW, 0, "\"source\"", base(c -> c.blank(3))),
+                bad("no density unit", Problem.MISSING_ROW, 0, "\"density unit\"", base(c -> c.blank(5))),
+                bad("no valid temperature", Problem.MISSING_ROW, 0, "\"valid temperature\"",
+                        base(c -> c.blank(8))),
+                bad("values without a label", Problem.NO_LABEL, 9, "no label",
+                        base(c -> c.set(9, "", "refuse"))),
+                bad("values under a null label", Problem.NO_LABEL, 9, "no label",
+                        base(c -> c.set(9, null, "refuse"))),
+                bad("upper temperature missing", Problem.MISSING_VALUE, 8, "column 3",
+                        base(c -> c.set(8, "valid temperature", 288.15))),
+                bad("component without name", Problem.MISSING_VALUE, 10, "column 2",
+                        base(c -> c.set(10, "component", "", 46.07))),
+                bad("text for a molar mass", Problem.NOT_A_NUMBER, 10, "column 3 holds the text \"heavy\"",
+                        base(c -> c.set(10, "component", "alpha", "heavy"))),
+                bad("a number typed as text", Problem.NOT_A_NUMBER, 13, "\"789.3\"",
+                        base(c -> c.set(13, "density coefficients", "alpha", "789.3"))),
+                bad("number for a component name", Problem.NOT_TEXT, 10, "column 2 must hold text; found 5",
+                        base(c -> c.set(10, "component", 5, 46.07))),
+                bad("number for a unit", Problem.NOT_TEXT, 4, "column 2",
+                        base(c -> c.set(4, "temperature unit", 1))),
+                bad("NaN coefficient", Problem.NOT_FINITE, 17, "column 3",
+                        base(c -> c.set(17, "excess volume A0", "alpha + beta", Double.NaN))),
+                bad("infinite temperature", Problem.NOT_FINITE, 8, "column 3",
+                        base(c -> c.set(8, "valid temperature", 288.15, Double.POSITIVE_INFINITY))),
+                bad("extra unit cell", Problem.EXTRA_VALUE, 4, "column 3 (\"kelvin\")",
+                        base(c -> c.set(4, "temperature unit", "K", "kelvin"))),
+                bad("extra value after a gap", Problem.EXTRA_VALUE, 3, "column 4",
+                        base(c -> c.set(3, "source", "invented", "", "more"))),
+                bad("extra value on the header", Problem.EXTRA_VALUE, 1, "column 3",
+                        base(c -> c.set(1, "Miscela card", 1, "x"))),
+                bad("second constant density value", Problem.EXTRA_VALUE, 13, "column 4",
+                        base(c -> c.set(13, "density coefficients", "alpha", 789.3, 0.1))),
+                bad("unknown temperature unit", Problem.UNKNOWN_UNIT, 4, "\"kelvin\"",
+                        base(c -> c.set(4, "temperature unit", "kelvin"))),
+                bad("unit spelling is case sensitive", Problem.UNKNOWN_UNIT, 5, "\"KG/M3\"",
+                        base(c -> c.set(5, "density unit", "KG/M3"))),
+                bad("unknown molar volume unit", Problem.UNKNOWN_UNIT, 6, "cm³/mol",
+                        base(c -> c.set(6, "molar volume unit", "cc/mol"))),
+                bad("unknown molar mass unit", Problem.UNKNOWN_UNIT, 7, "g/mol",
+                        base(c -> c.set(7, "molar mass unit", "Da"))),
+                bad("unknown density model", Problem.BAD_KEYWORD, 12, "constant, polynomial, Tanaka 2001",
+                        base(c -> c.set(12, "density model", "alpha", "cubic"))),
+                bad("unknown extrapolation word", Problem.BAD_KEYWORD, 9, "refuse, allow",
+                        base(c -> c.set(9, "extrapolation", "maybe"))),
+                bad("density of an undeclared component", Problem.UNKNOWN_COMPONENT, 20, "\"gamma\"",
+                        base(c -> c.row("density model", "gamma", "constant"))),
+                bad("pair with an undeclared component", Problem.UNKNOWN_COMPONENT, 17, "\"gamma\"",
+                        base(c -> c.set(17, "excess volume A0", "alpha + gamma", -4.0))),
+                bad("limit of an undeclared component", Problem.UNKNOWN_COMPONENT, 16, "\"gamma\"",
+                        base(c -> c.set(16, "valid mole fraction", "gamma", 0, 1))),
+                bad("pair of three", Problem.BAD_PAIR, 17, "\"alpha + beta + alpha\"",
+                        base(c -> c.set(17, "excess volume A0", "alpha + beta + alpha", -4.0))),
+                bad("pair of one component twice", Problem.BAD_PAIR, 18, "\"alpha + Alpha\"",
+                        base(c -> c.set(18, "excess volume A1", "alpha + Alpha", 1.5))),
+                bad("pair without '+'", Problem.BAD_PAIR, 17, "\"alpha beta\"",
+                        base(c -> c.set(17, "excess volume A0", "alpha beta", -4.0))),
+                bad("pair with a blank half", Problem.BAD_PAIR, 17, "\"alpha +\"",
+                        base(c -> c.set(17, "excess volume A0", "alpha + ", -4.0))),
+                bad("zero molar mass", Problem.NOT_POSITIVE, 11, "molar mass",
+                        base(c -> c.set(11, "component", "beta", 0))),
+                bad("negative molar mass", Problem.NOT_POSITIVE, 10, "found -46.07",
+                        base(c -> c.set(10, "component", "alpha", -46.07))),
+                bad("validity below absolute zero", Problem.NOT_POSITIVE, 8, "kelvin",
+                        base(c -> c.set(8, "valid temperature", -10, 300))),
+                bad("validity below absolute zero in °C", Problem.NOT_POSITIVE, 8, "found -6.85 K",
+                        base(c -> c.set(4, "temperature unit", "°C").set(8, "valid temperature", -280, 30))),
+                bad("temperature range reversed", Problem.BAD_RANGE, 8, "308.15 must be below the upper limit 288.15",
+                        base(c -> c.set(8, "valid temperature", 308.15, 288.15))),
+                bad("temperature range empty", Problem.BAD_RANGE, 8, "lower limit 300",
+                        base(c -> c.set(8, "valid temperature", 300, 300))),
+                bad("mole fraction range reversed", Problem.BAD_RANGE, 16, "0.8",
+                        base(c -> c.set(16, "valid mole fraction", "alpha", 0.8, 0.2))),
+                bad("mole fraction below 0", Problem.MOLE_FRACTION_LIMIT, 16, "-0.1..1",
+                        base(c -> c.set(16, "valid mole fraction", "alpha", -0.1, 1))),
+                bad("mole fraction above 1", Problem.MOLE_FRACTION_LIMIT, 16, "0..1.2",
+                        base(c -> c.set(16, "valid mole fraction", "alpha", 0, 1.2))),
+                bad("one component", Problem.TOO_FEW_COMPONENTS, 0, "declares 1 component",
+                        base(c -> c.blank(11))),
+                bad("no component", Problem.TOO_FEW_COMPONENTS, 0, "declares 0 component",
+                        base(c -> c.blank(10).blank(11))),
+                bad("no density model", Problem.MISSING_DENSITY, 0, "component \"beta\"",
+                        base(c -> c.blank(14).blank(15))),
+                bad("constant density with a reference temperature", Problem.MODEL_VALUES, 20,
+                        "no reference temperature",
+                        base(c -> c.row("density reference temperature", "alpha", 298.15))),
+                bad("constant density without coefficients", Problem.MODEL_VALUES, 12, "that row is missing",
+                        base(c -> c.blank(13))),
+                bad("polynomial without reference temperature", Problem.MODEL_VALUES, 12,
+                        "'density reference temperature' row",
+                        base(c -> c.set(12, "density model", "alpha", "polynomial"))),
+                bad("Tanaka 2001 with coefficients", Problem.MODEL_VALUES, 15, "no coefficients",
+                        base(c -> c.set(14, "density model", "beta", "Tanaka 2001"))),
+                bad("Tanaka 2001 beyond 40 °C", Problem.MODEL_RANGE, 14, "from 273.15 to 313.15 K",
+                        base(c -> c.set(14, "density model", "beta", "tanaka 2001").blank(15)
+                                .set(8, "valid temperature", 288.15, 320))),
+                bad("Tanaka 2001 below 0 °C", Problem.MODEL_RANGE, 14, "runs from 263.15 to 308.15 K",
+                        base(c -> c.set(14, "density model", "beta", "Tanaka 2001").blank(15)
+                                .set(8, "valid temperature", 263.15, 308.15))),
+                bad("pair written both ways", Problem.PAIR_ORDER, 18, "\"beta + alpha\" here but \"alpha + beta\" in row 17",
+                        base(c -> c.set(18, "excess volume A1", "beta + alpha", -1.5))),
+                bad("pair order: the later row in card order is the one reported", Problem.PAIR_ORDER, 18,
+                        "in row 17",
+                        base(c -> c.set(17, "excess volume A1", "beta + alpha", -1.5)
+                                .set(18, "excess volume A0", "alpha + beta", -4.0).blank(19))),
+                bad("reference temperature written the other way", Problem.PAIR_ORDER, 20, "in row 17",
+                        base(c -> c.row("excess volume reference temperature", "beta + alpha", 298.15))),
+                bad("negative constant density", Problem.DENSITY_NOT_POSITIVE, 13, "gives -5 kg/m³",
+                        base(c -> c.set(13, "density coefficients", "alpha", -5))),
+                bad("polynomial density that dips below zero away from the ends and middle",
+                        Problem.DENSITY_NOT_POSITIVE, 21, "density model of alpha",
+                        base(c -> c.set(12, "density model", "alpha", "polynomial")
+                                .blank(13)
+                                .row("density reference temperature", "alpha", 293.15)
+                                .row("density coefficients", "alpha", -1, 0, 0.1))),
+                bad("no excess volume rows", Problem.MISSING_PAIR, 0, "pair alpha + beta",
+                        base(c -> c.blank(17).blank(18).blank(19))),
+                bad("reference temperature without coefficients", Problem.MISSING_PAIR_ROW, 0,
+                        "'excess volume reference temperature' rows for alpha + beta but no 'excess volume A0' row",
+                        base(c -> c.blank(17).blank(18).blank(19)
+                                .row("excess volume reference temperature", "alpha + beta", 298.15))),
+                bad("temperature-dependent A0 without reference temperature", Problem.MISSING_PAIR_ROW, 0,
+                        "no 'excess volume reference temperature' row",
+                        base(c -> c.set(17, "excess volume A0", "alpha + beta", -4.0, 0.01))),
+                bad("gap in coefficients", Problem.COEFFICIENT_GAP, 0, "'excess volume A2' for alpha + beta but not 'excess volume A1'",
+                        base(c -> c.blank(18))),
+                bad("no A0", Problem.COEFFICIENT_GAP, 0, "but not 'excess volume A0'",
+                        base(c -> c.blank(17))),
+                bad("no composition limit", Problem.NO_COMPOSITION_LIMIT, 0, "'valid mole fraction'",
+                        base(c -> c.blank(16))),
+                // --- multicomponent, enthalpy and validity rows
+                bad("ternary term naming two components", Problem.BAD_TRIPLE, 25, "\"alpha + beta\"",
+                        ternary(c -> c.row("excess volume ternary C0", "alpha + beta", 0.3))),
+                bad("ternary term naming one component twice", Problem.BAD_TRIPLE, 25, "\"alpha + beta + beta\"",
+                        ternary(c -> c.row("excess volume ternary C0", "alpha + beta + beta", 0.3))),
+                bad("ternary coefficient beyond C2", Problem.UNKNOWN_LABEL, 25, "excess volume ternary C3",
+                        ternary(c -> c.row("excess volume ternary C3", "alpha + beta + gamma", 0.3))),
+                bad("ternary gap", Problem.COEFFICIENT_GAP, 0, "'excess volume ternary C0'",
+                        ternary(c -> c.row("excess volume ternary C1", "alpha + beta + gamma", 0.3))),
+                bad("ternary written two ways", Problem.PAIR_ORDER, 26, "in row 25",
+                        ternary(c -> c.row("excess volume ternary C0", "alpha + beta + gamma", 0.3)
+                                .row("excess volume ternary C1", "beta + alpha + gamma", 0.1))),
+                bad("T-dependent ternary term without reference temperature", Problem.MISSING_PAIR_ROW, 0,
+                        "'excess volume reference temperature'",
+                        ternary(c -> c.row("excess volume ternary C0", "alpha + beta + gamma", 0.3, 0.01))),
+                bad("ternary reference temperature without terms", Problem.MISSING_PAIR_ROW, 0,
+                        "no 'excess volume ternary C0' row",
+                        ternary(c -> c.row("excess volume reference temperature", "alpha + beta + gamma", 298.15))),
+                bad("missing pair in a ternary card", Problem.MISSING_PAIR, 0, "pair beta + gamma",
+                        ternary(c -> c.blank(24))),
+                bad("unknown model", Problem.BAD_KEYWORD, 25, "Muggianu, Kohler, Toop",
+                        ternary(c -> c.row("multicomponent model", "Redlich"))),
+                bad("Toop without its asymmetric component", Problem.MISSING_VALUE, 25, "column 3",
+                        ternary(c -> c.row("multicomponent model", "Toop"))),
+                bad("Toop naming an unknown component", Problem.UNKNOWN_COMPONENT, 25, "\"delta\"",
+                        ternary(c -> c.row("multicomponent model", "Toop", "delta"))),
+                bad("Muggianu with a component", Problem.EXTRA_VALUE, 25, "column 3",
+                        ternary(c -> c.row("multicomponent model", "Muggianu", "alpha"))),
+                bad("unknown missing-pairs word", Problem.BAD_KEYWORD, 25, "refuse, ideal",
+                        ternary(c -> c.row("missing pairs", "zero"))),
+                bad("excess enthalpy without an enthalpy unit", Problem.MISSING_ROW, 0, "\"enthalpy unit\"",
+                        v2(c -> c.row("excess enthalpy A0", "alpha + beta", -800))),
+                bad("unknown enthalpy unit", Problem.UNKNOWN_UNIT, 20, "J/mol, kJ/mol",
+                        v2(c -> c.row("enthalpy unit", "cal/mol"))),
+                bad("heat capacity without an enthalpy unit", Problem.MISSING_ROW, 0, "\"enthalpy unit\"",
+                        v2(c -> c.row("heat capacity", "alpha", 112.0))),
+                bad("temperature-dependent heat capacity without reference", Problem.MISSING_PAIR_ROW, 0,
+                        "'heat capacity reference temperature'",
+                        v2(c -> c.row("enthalpy unit", "J/mol").row("heat capacity", "alpha", 112.0, 0.3))),
+                bad("heat capacity of an unknown component", Problem.UNKNOWN_COMPONENT, 21, "\"delta\"",
+                        v2(c -> c.row("enthalpy unit", "J/mol").row("heat capacity", "delta", 112.0))),
+                bad("pair temperature range reversed", Problem.BAD_RANGE, 20, "lower limit 300",
+                        v2(c -> c.row("valid pair temperature", "alpha + beta", 300, 290))),
+                bad("pair mole-fraction range beyond 1", Problem.MOLE_FRACTION_LIMIT, 20, "0..1.5",
+                        v2(c -> c.row("valid pair mole fraction", "alpha + beta", 0, 1.5))),
+                bad("covariance with too few rows", Problem.COVARIANCE_SIZE, 20, "3 coefficients",
+                        v2(c -> c.row("excess volume covariance", "alpha + beta", 0.01, 0, 0))),
+                bad("covariance row too short", Problem.COVARIANCE_SIZE, 21, "2 value(s) in this row",
+                        v2(c -> c.row("excess volume covariance", "alpha + beta", 0.01, 0, 0)
+                                .row("excess volume covariance", "alpha + beta", 0, 0.02)
+                                .row("excess volume covariance", "alpha + beta", 0, 0, 0.03))),
+                bad("covariance not symmetric", Problem.COVARIANCE_NOT_SYMMETRIC, 21, "entry (2, 1)",
+                        v2(c -> c.row("excess volume covariance", "alpha + beta", 0.01, 0, 0)
+                                .row("excess volume covariance", "alpha + beta", 0.005, 0.02, 0)
+                                .row("excess volume covariance", "alpha + beta", 0, 0, 0.03))),
+                bad("negative variance", Problem.COVARIANCE_NEGATIVE, 22, "coefficient 3",
+                        v2(c -> c.row("excess volume covariance", "alpha + beta", 0.01, 0, 0)
+                                .row("excess volume covariance", "alpha + beta", 0, 0.02, 0)
+                                .row("excess volume covariance", "alpha + beta", 0, 0, -0.03))),
+                bad("covariance written the other way round", Problem.PAIR_ORDER, 20, "in row 17",
+                        v2(c -> c.row("excess volume covariance", "beta + alpha", 0.01, 0, 0))),
+                bad("pair limit on a pair of one", Problem.BAD_PAIR, 20, "\"alpha\"",
+                        v2(c -> c.row("valid pair mole fraction", "alpha", 0, 0.5))));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("malformed")
+    void malformedCardNamesProblemAndRow(String what, Problem problem, int row, String fragment, Object[][] cells) {
+        MiscelaException e = assertThrows(MiscelaException.class, () -> CardReader.read(cells));
+        assertEquals(problem, e.problem(), e.getMessage());
+        String m = e.getMessage();
+        if (row > 0) {
+            assertTrue(m.startsWith("Card row " + row + " ") || m.startsWith("Card row " + row + ":"),
+                    "expected row " + row + " in: " + m);
+        } else {
+            assertFalse(m.contains("Card row"), "no row expected in: " + m);
+        }
+        assertTrue(m.contains(fragment), "expected \"" + fragment + "\" in: " + m);
+    }
+
+    /** Every card problem in the catalogue (those before the argument problems) has a malformed card above. */
+    @Test
+    void everyCardProblemIsProduced() {
+        Set<Problem> produced = malformed().map(a -> (Problem) a.get()[1])
+                .collect(Collectors.toCollection(() -> EnumSet.noneOf(Problem.class)));
+        Set<Problem> card = EnumSet.range(Problem.CARD_EMPTY, Problem.NO_COMPOSITION_LIMIT);
+        Set<Problem> missing = EnumSet.copyOf(card);
+        missing.removeAll(produced);
+        assertTrue(missing.isEmpty(), "no malformed card for " + missing);
+        assertEquals(34, card.size(), "the card problems changed; update the malformed cards");
+    }
+
+    // ------------------------------------------------------------------ well-formed cards
+
+    private static final double T = 298.15;
+
+    @Test
+    void baseCardReads() {
+        Card card = TestCard.base().read();
+        assertEquals("Test pair", card.title());
+        assertEquals("invented values, for tests", card.source());
+        assertEquals(2, card.componentCount());
+        assertEquals("alpha", card.components().get(0).name());
+        assertEquals("beta", card.components().get(1).name());
+        assertEquals(46.07, card.components().get(0).molarMass(), 0.0);
+        assertEquals(789.3, card.components().get(0).density().at(T), 0.0);
+        assertEquals(288.15, card.validity().lowestKelvin(), 0.0);
+        assertEquals(308.15, card.validity().highestKelvin(), 0.0);
+        assertEquals(0.0, card.validity().lowestFraction(0), 0.0);
+        assertEquals(1.0, card.validity().highestFraction(1), 0.0);
+        assertFalse(card.extrapolationAllowed());
+        RedlichKister rk = card.excessVolume(0, 1);
+        assertEquals(2, rk.order());
+        assertEquals(-4.0, rk.coefficientAt(0, T), 0.0);
+        assertEquals(1.5, rk.coefficientAt(1, T), 0.0);
+        assertEquals(-0.5, rk.coefficientAt(2, T), 0.0);
+    }
+
+    @Test
+    void titleIsOptionalAndExtrapolationDefaultsToRefuse() {
+        Card card = TestCard.base().blank(2).blank(9).read();
+        assertEquals("", card.title());
+        assertFalse(card.extrapolationAllowed());
+        assertTrue(TestCard.base().set(9, "extrapolation", " Allow ").read().extrapolationAllowed());
+    }
+
+    @Test
+    void densityInGramPerCm3EqualsKgPerM3Internally() {
+        Card kg = TestCard.base().read();
+        for (String spelling : new String[] {"g/cm³", "g/cm3", "g/mL", "g/ml"}) {
+            Card g = TestCard.base().set(5, "density unit", spelling)
+                    .set(13, "density coefficients", "alpha", 0.7893)
+                    .set(15, "density coefficients", "beta", 0.997).read();
+            for (int k = 0; k < 2; k++) {
+                assertEquals(kg.components().get(k).density().at(T), g.components().get(k).density().at(T),
+                        1e-9, spelling);
+            }
+            // results come back in the card's unit
+            double rhoKg = CardFunctions.density(kg, 0.4, T, Extrapolation.AS_CARD);
+            double rhoG = CardFunctions.density(g, 0.4, T, Extrapolation.AS_CARD);
+            assertEquals(rhoKg / 1000.0, rhoG, 1e-12, spelling);
+        }
+        for (String spelling : new String[] {"kg/m3", "g/L", "g/l"}) {
+            Card same = TestCard.base().set(5, "density unit", spelling).read();
+            assertEquals(789.3, same.components().get(0).density().at(T), 0.0, spelling);
+        }
+    }
+
+    @Test
+    void polynomialDensityCoefficientsAreConvertedToo() {
+        Card g = TestCard.base().set(5, "density unit", "g/cm³")
+                .set(13, "density coefficients", "alpha", 0.79, -0.0008)
+                .set(12, "density model", "alpha", "polynomial")
+                .set(15, "density coefficients", "beta", 0.997)
+                .row("density reference temperature", "alpha", 293.15).read();
+        PureDensity d = g.components().get(0).density();
+        assertEquals(790.0, d.at(293.15), 1e-9);
+        assertEquals(790.0 - 0.8 * 10.0, d.at(303.15), 1e-9);
+    }
+
+    @Test
+    void celsiusTemperatureUnit() {
+        for (String spelling : new String[] {"°C", "degC", "C"}) {
+            Card c = TestCard.base().set(4, "temperature unit", spelling)
+                    .set(8, "valid temperature", 15, 35)
+                    .set(12, "density model", "alpha", "polynomial")
+                    .set(13, "density coefficients", "alpha", 790, -0.8)
+                    .row("density reference temperature", "alpha", 20)
+                    .set(17, "excess volume A0", "alpha + beta", -4.0, 0.02)
+                    .row("excess volume reference temperature", "alpha + beta", 25).read();
+            assertEquals(288.15, c.validity().lowestKelvin(), 1e-9, spelling);
+            assertEquals(308.15, c.validity().highestKelvin(), 1e-9, spelling);
+            // a slope per °C is the same as per K; the reference temperature is shifted
+            assertEquals(790.0, c.components().get(0).density().at(293.15), 1e-9, spelling);
+            assertEquals(782.0, c.components().get(0).density().at(303.15), 1e-9, spelling);
+            assertEquals(298.15, c.excessVolume(0, 1).referenceKelvin(), 1e-9, spelling);
+            assertEquals(-4.0 + 0.02 * 5, c.excessVolume(0, 1).coefficientAt(0, 303.15), 1e-12, spelling);
+            // function arguments are read in the card's temperature unit
+            Card k = TestCard.base().set(12, "density model", "alpha", "polynomial")
+                    .set(13, "density coefficients", "alpha", 790, -0.8)
+                    .row("density reference temperature", "alpha", 293.15)
+                    .set(17, "excess volume A0", "alpha + beta", -4.0, 0.02)
+                    .row("excess volume reference temperature", "alpha + beta", 298.15).read();
+            assertEquals(CardFunctions.density(k, 0.3, 300.15, Extrapolation.AS_CARD),
+                    CardFunctions.density(c, 0.3, 27, Extrapolation.AS_CARD), 1e-9, spelling);
+        }
+        assertEquals(Units.Temperature.KELVIN, TestCard.base().read().units().temperature());
+    }
+
+    @Test
+    void molarVolumeUnits() {
+        Card cm3 = TestCard.base().read();
+        Object[][] spellings = {{"L/mol", 1e-3}, {"l/mol", 1e-3}, {"dm³/mol", 1e-3}, {"dm3/mol", 1e-3},
+            {"m³/mol", 1e-6}, {"m3/mol", 1e-6}, {"mL/mol", 1.0}, {"ml/mol", 1.0}, {"cm3/mol", 1.0}};
+        for (Object[] s : spellings) {
+            double f = (Double) s[1];
+            Card c = TestCard.base().set(6, "molar volume unit", s[0])
+                    .set(17, "excess volume A0", "alpha + beta", -4.0 * f)
+                    .set(18, "excess volume A1", "alpha + beta", 1.5 * f)
+                    .set(19, "excess volume A2", "alpha + beta", -0.5 * f).read();
+            for (int k = 0; k <= 2; k++) {
+                assertEquals(cm3.excessVolume(0, 1).coefficientAt(k, T), c.excessVolume(0, 1).coefficientAt(k, T),
+                        1e-12, (String) s[0]);
+            }
+            // results come back in the card's molar volume unit
+            assertEquals(CardFunctions.excessMolarVolume(cm3, 0.3, T, Extrapolation.AS_CARD) * f,
+                    CardFunctions.excessMolarVolume(c, 0.3, T, Extrapolation.AS_CARD), 1e-12 * Math.max(f, 1e-3),
+                    (String) s[0]);
+        }
+    }
+
+    @Test
+    void molarMassInKgPerMol() {
+        Card c = TestCard.base().set(7, "molar mass unit", "kg/mol")
+                .set(10, "component", "alpha", 0.04607).set(11, "component", "beta", 0.018015).read();
+        assertEquals(46.07, c.components().get(0).molarMass(), 1e-9);
+        assertEquals(18.015, c.components().get(1).molarMass(), 1e-9);
+    }
+
+    @Test
+    void reversedPairFlipsOddCoefficients() {
+        double[] a = {-4.0, 1.5, -0.5, 0.25};
+        TestCard reversed = TestCard.base();
+        for (int k = 0; k < 3; k++) {
+            reversed.set(17 + k, "excess volume A" + k, "beta + alpha", a[k]);
+        }
+        reversed.row("excess volume A3", "Beta+ALPHA", a[3]);
+        Card c = reversed.read();
+        RedlichKister rk = c.excessVolume(0, 1);
+        RedlichKister asWritten = c.excessVolume(1, 0);
+        for (int k = 0; k < a.length; k++) {
+            assertEquals((k % 2 == 0 ? 1 : -1) * a[k], rk.coefficientAt(k, T), 0.0, "A" + k);
+            assertEquals(a[k], asWritten.coefficientAt(k, T), 0.0, "A" + k);
+        }
+        // the excess volume itself does not depend on the order the pair was written in
+        Card forward = TestCard.base().set(18, "excess volume A1", "alpha + beta", -1.5)
+                .row("excess volume A3", "alpha + beta", -0.25).read();
+        for (double x = 0.0; x <= 1.0; x += 0.125) {
+            assertEquals(forward.excessVolume(0, 1).value(x, T), rk.value(x, T), 1e-12);
+        }
+    }
+
+    @Test
+    void reversedPairFlipsTemperatureTermsOfOddCoefficients() {
+        Card c = TestCard.base()
+                .set(17, "excess volume A0", "beta + alpha", -4.0, 0.01)
+                .set(18, "excess volume A1", "beta + alpha", 1.5, 0.02, 0.001)
+                .blank(19)
+                .row("excess volume reference temperature", "beta + alpha", 298.15).read();
+        RedlichKister rk = c.excessVolume(0, 1);
+        double t = 303.15;
+        assertEquals(-4.0 + 0.01 * 5, rk.coefficientAt(0, t), 1e-12);
+        assertEquals(-(1.5 + 0.02 * 5 + 0.001 * 25), rk.coefficientAt(1, t), 1e-12);
+    }
+
+    @Test
+    void blankRowsAndTrailingBlankCellsAreIgnored() {
+        TestCard spaced = TestCard.base();
+        for (int r = 19; r >= 2; r -= 3) {
+            spaced.insert(r);
+        }
+        spaced.insert(1, "", "", null).row().row(" ", "", null);
+        Object[][] cells = spaced.cells(9); // every row padded with empty cells to 9 columns
+        cells[5] = new Object[] {cells[5][0], cells[5][1], null, null, " "};
+        Card c = CardReader.read(cells);
+        Card plain = TestCard.base().read();
+        assertEquals(plain.components().get(1).name(), c.components().get(1).name());
+        assertEquals(plain.validity().highestKelvin(), c.validity().highestKelvin(), 0.0);
+        assertEquals(plain.excessVolume(0, 1).coefficientAt(2, T), c.excessVolume(0, 1).coefficientAt(2, T), 0.0);
+        // row numbers in messages still count the blank rows
+        Object[][] broken = spaced.cells(9);
+        int viscosityRow = broken.length + 1;
+        Object[][] longer = java.util.Arrays.copyOf(broken, broken.length + 1);
+        longer[broken.length] = new Object[] {"viscosity", 1.0, ""};
+        MiscelaException e = assertThrows(MiscelaException.class, () -> CardReader.read(longer));
+        assertTrue(e.getMessage().startsWith("Card row " + viscosityRow + ":"), e.getMessage());
+    }
+
+    @Test
+    void labelsIgnoreCaseWhitespaceAndTrailingColon() {
+        Card c = TestCard.base()
+                .set(1, "  MISCELA   Card: ", 1)
+                .set(4, "Temperature Unit:", "K")
+                .set(8, "valid\ttemperature :", 288.15, 308.15)
+                .set(10, " COMPONENT ", "alpha", 46.07)
+                .set(12, "Density  Model", " Alpha ", " Constant ")
+                .set(16, "Valid Mole Fraction:", "ALPHA", 0, 1)
+                .set(17, "EXCESS VOLUME a0:", "ALPHA  +  beta", -4.0).read();
+        assertEquals("alpha", c.components().get(0).name());
+        assertEquals(789.3, c.components().get(0).density().at(T), 0.0);
+        assertEquals(-4.0, c.excessVolume(0, 1).coefficientAt(0, T), 0.0);
+    }
+
+    @Test
+    void noteAndHashRowsAreIgnored() {
+        Card c = TestCard.base()
+                .insert(2, "note", "anything", 42, "even", "numbers")
+                .insert(5, "#", "a comment row")
+                .insert(9, "# component", "gamma", 1.0)
+                .row("Note:", "fitted by hand")
+                .row("#excess volume A0", "alpha + gamma", 99)
+                .row("note").read();
+        assertEquals(2, c.componentCount());
+        assertEquals(-4.0, c.excessVolume(0, 1).coefficientAt(0, T), 0.0);
+    }
+
+    @Test
+    void tanaka2001WaterModel() {
+        Card c = TestCard.base().set(14, "density model", "beta", "Tanaka 2001").blank(15)
+                .set(8, "valid temperature", 273.15, 313.15).read();
+        PureDensity water = c.components().get(1).density();
+        assertEquals("Tanaka 2001", water.modelName());
+        // M. Tanaka et al., Metrologia 38, 301 (2001): 997.0470 kg/m³ at 25 °C and 998.2067 at 20 °C (as quoted in the
+        // project's reference notes); 999.9750 at 4 °C is the paper's table value from memory (the formula gives
+        // 999.9749, water.md).
+        assertEquals(997.0470, water.at(298.15), 5e-4);
+        assertEquals(998.2067, water.at(293.15), 5e-4);
+        assertEquals(999.9750, water.at(277.15), 5e-4);
+        // in °C the full 0..40 range is accepted
+        TestCard.base().set(4, "temperature unit", "°C").set(8, "valid temperature", 0, 40)
+                .set(14, "density model", "beta", "Tanaka 2001").blank(15).read();
+    }
+
+    @Test
+    void compositionLimitsPerComponent() {
+        Card c = TestCard.base().set(16, "valid mole fraction", "alpha", 0.1, 0.9)
+                .row("valid mole fraction", "beta", 0.2, 0.8).read();
+        Validity v = c.validity();
+        assertEquals(0.1, v.lowestFraction(0), 0.0);
+        assertEquals(0.9, v.highestFraction(0), 0.0);
+        assertEquals(0.2, v.lowestFraction(1), 0.0);
+        assertEquals(0.8, v.highestFraction(1), 0.0);
+        MiscelaException e = assertThrows(MiscelaException.class,
+                () -> CardFunctions.excessMolarVolume(c, 0.95, T, Extrapolation.AS_CARD));
+        assertEquals(Problem.OUTSIDE_COMPOSITION, e.problem());
+        CardFunctions.excessMolarVolume(c, 0.95, T, Extrapolation.ALLOW);
+    }
+
+    /** A limit of the second component is inclusive like every other: x2 = 1 − 0.8 = 0.2 is inside 0.2..0.8. */
+    @Test
+    void secondComponentLimitIsInclusive() {
+        Card c = TestCard.base().row("valid mole fraction", "beta", 0.2, 0.8).read();
+        assertEquals(CardFunctions.OK, CardFunctions.check(c, 0.8, T, Extrapolation.AS_CARD));
+    }
+
+    @Test
+    void extrapolationRowAndArgument() {
+        Card refuse = TestCard.base().read();
+        Card allow = TestCard.base().set(9, "extrapolation", "allow").read();
+        double hot = 320.0;
+        assertEquals(Problem.OUTSIDE_TEMPERATURE, assertThrows(MiscelaException.class,
+                () -> CardFunctions.density(refuse, 0.5, hot, Extrapolation.AS_CARD)).problem());
+        CardFunctions.density(refuse, 0.5, hot, Extrapolation.ALLOW);
+        CardFunctions.density(allow, 0.5, hot, Extrapolation.AS_CARD);
+        assertEquals(Problem.OUTSIDE_TEMPERATURE, assertThrows(MiscelaException.class,
+                () -> CardFunctions.density(allow, 0.5, hot, Extrapolation.REFUSE)).problem());
+    }
+}

@@ -1,0 +1,49 @@
+package org.miscela.core.card;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
+import java.util.List;
+
+/** Cards kept as tab-separated test resources: numbers become Double, everything else String, as Calc passes them. */
+public final class TestCards {
+    private TestCards() {
+    }
+
+    public static Object[][] cells(String resource) {
+        try (InputStream in = TestCards.class.getResourceAsStream("/cards/" + resource)) {
+            if (in == null) {
+                throw new IllegalArgumentException("no test card " + resource);
+            }
+            String text = new String(in.readAllBytes(), StandardCharsets.UTF_8);
+            List<Object[]> rows = new ArrayList<>();
+            for (String line : text.split("\n", -1)) {
+                if (line.isEmpty()) {
+                    continue;
+                }
+                String[] parts = line.split("\t", -1);
+                Object[] row = new Object[parts.length];
+                for (int i = 0; i < parts.length; i++) {
+                    row[i] = cell(parts[i]);
+                }
+                rows.add(row);
+            }
+            return rows.toArray(new Object[0][]);
+        } catch (IOException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    public static Card card(String resource) {
+        return CardReader.read(cells(resource));
+    }
+
+    static Object cell(String s) {
+        try {
+            return Double.valueOf(s.trim());
+        } catch (NumberFormatException e) {
+            return s;
+        }
+    }
+}

@@ -1,0 +1,174 @@
+package org.miscela.calc;
+
+import com.sun.star.lang.IllegalArgumentException;
+import com.sun.star.uno.Any;
+import java.util.LinkedHashMap;
+import java.util.Locale;
+import java.util.Map;
+import org.miscela.core.catalog.FunctionCatalog;
+import org.miscela.core.catalog.FunctionInfo;
+import org.miscela.core.functions.CardFunctions;
+import org.miscela.core.problem.Problem;
+
+/**
+ * MIX.EXPLAIN: runs another function's method on the arguments of a call, exactly as Calc would pass them, and gives
+ * the words of its refusal, or "OK". The arguments arrive as Calc's variable argument list: a single cell as its
+ * value, a range as {@code Object[][]}, a left-out argument as void. Each method's parameters are either ranges
+ * (IDL {@code sequence<sequence<any>>}, here 'R') or single values ({@code any}, here 'V'); a value given for a range
+ * parameter becomes a one-cell range, as Calc itself would pass it. A range parameter left out is refused by Calc
+ * itself (Err:502, the add-in is not called), and so is a call with too few or too many arguments (Err:504): for
+ * those MIX.EXPLAIN says so rather than run the method.
+ */
+final class Explanations {
+    /** One method called with the decoded arguments. */
+    interface Call {
+        Object on(MixtureAddIn addIn, Object[] p) throws IllegalArgumentException;
+    }
+
+    /** A method's parameter kinds ('R' range, 'V' value) in IDL order, and how to call it. */
+    static final class Target {
+        final String kinds;
+        final Call call;
+
+        Target(String kinds, Call call) {
+            this.kinds = kinds;
+            this.call = call;
+        }
+
+        /**
+         * The fewest arguments Calc accepts: up to the last range parameter (Calc passes a left-out value parameter
+         * as void, but refuses a call that leaves out a trailing range with Err:504).
+         */
+        int fewest() {
+            return kinds.lastIndexOf('R') + 1;
+        }
+    }
+
+    /** Every function of the catalogue but MIX.EXPLAIN itself, by IDL method name. */
+    private static final Map<String, Target> TARGETS = new LinkedHashMap<>();
+
+    private static void add(String method, String kinds, Call call) {
+        TARGETS.put(method, new Target(kinds, call));
+    }
+
+    static {
+        add("excessMolarVolume", "RRRV", (a, p) -> a.excessMolarVolume(r(p[0]), r(p[1]), r(p[2]), p[3]));
+        add("partialMolarVolume", "RVRRV", (a, p) -> a.partialMolarVolume(r(p[0]), p[1], r(p[2]), r(p[3]), p[4]));
+        add("partialExcessMolarVolume", "RVRRV",
+            (a, p) -> a.partialExcessMolarVolume(r(p[0]), p[1], r(p[2]), r(p[3]), p[4]));
+        add("mixtureMolarVolume", "RRRV", (a, p) -> a.mixtureMolarVolume(r(p[0]), r(p[1]), r(p[2]), p[3]));
+        add("mixtureDensity", "RRRV", (a, p) -> a.mixtureDensity(r(p[0]), r(p[1]), r(p[2]), p[3]));
+        add("pureDensity", "RVRV", (a, p) -> a.pureDensity(r(p[0]), p[1], r(p[2]), p[3]));
+        add("checkCard", "R", (a, p) -> a.checkCard(r(p[0])));
+        add("checkPoint", "RRRV", (a, p) -> a.checkPoint(r(p[0]), r(p[1]), r(p[2]), p[3]));
+        add("excessEnthalpy", "RRRV", (a, p) -> a.excessEnthalpy(r(p[0]), r(p[1]), r(p[2]), p[3]));
+        add("partialExcessEnthalpy", "RVRRV",
+            (a, p) -> a.partialExcessEnthalpy(r(p[0]), p[1], r(p[2]), r(p[3]), p[4]));
+        add("mixingHeat", "RRRVV", (a, p) -> a.mixingHeat(r(p[0]), r(p[1]), r(p[2]), p[3], p[4]));
+        add("additionHeat", "RRVVRVV",
+            (a, p) -> a.additionHeat(r(p[0]), r(p[1]), p[2], p[3], r(p[4]), p[5], p[6]));
+        add("adiabaticRise", "RRRVV", (a, p) -> a.adiabaticRise(r(p[0]), r(p[1]), r(p[2]), p[3], p[4]));
+        add("insideValidity", "RRR", (a, p) -> a.insideValidity(r(p[0]), r(p[1]), r(p[2])));
+        add("traceEvaluation", "RRRVV", (a, p) -> a.traceEvaluation(r(p[0]), r(p[1]), r(p[2]), p[3], p[4]));
+        add("fitExcessVolume", "RRVVVVVV",
+            (a, p) -> a.fitExcessVolume(r(p[0]), r(p[1]), p[2], p[3], p[4], p[5], p[6], p[7]));
+        add("fitDensity", "RVRRRVVVVV",
+            (a, p) -> a.fitDensity(r(p[0]), p[1], r(p[2]), r(p[3]), r(p[4]), p[5], p[6], p[7], p[8], p[9]));
+        add("leastSquares", "RRVV", (a, p) -> a.leastSquares(r(p[0]), r(p[1]), p[2], p[3]));
+        add("uncertainty", "RRRVVV", (a, p) -> a.uncertainty(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
+        add("convertComposition", "RRVVVVVV",
+            (a, p) -> a.convertComposition(r(p[0]), r(p[1]), p[2], p[3], p[4], p[5], p[6], p[7]));
+        add("batchTotals", "RRVRVVVV",
+            (a, p) -> a.batchTotals(r(p[0]), r(p[1]), p[2], r(p[3]), p[4], p[5], p[6], p[7]));
+        add("recipe", "RVVRVVVVVV",
+            (a, p) -> a.recipe(r(p[0]), p[1], p[2], r(p[3]), p[4], p[5], p[6], p[7], p[8], p[9]));
+        add("adjustBatch", "RRVRVVVVVVVVV", (a, p) -> a.adjustBatch(r(p[0]), r(p[1]), p[2], r(p[3]), p[4], p[5],
+                p[6], p[7], p[8], p[9], p[10], p[11], p[12]));
+        add("additionVolume", "RRVVVVVVVV",
+            (a, p) -> a.additionVolume(r(p[0]), r(p[1]), p[2], p[3], p[4], p[5], p[6], p[7], p[8], p[9]));
+        add("compositionFromDensity", "RRRVVVVVVVV", (a, p) -> a.compositionFromDensity(r(p[0]), r(p[1]), r(p[2]),
+                p[3], p[4], p[5], p[6], p[7], p[8], p[9], p[10]));
+        add("volumeCorrection", "RRVRVVVVV",
+            (a, p) -> a.volumeCorrection(r(p[0]), r(p[1]), p[2], r(p[3]), p[4], p[5], p[6], p[7], p[8]));
+        add("addInInfo", "V", (a, p) -> a.addInInfo(p[0]));
+    }
+
+    private Explanations() {
+    }
+
+    /** The methods MIX.EXPLAIN can run, by IDL name, with their parameter kinds (for the tests). */
+    static Map<String, Target> targets() {
+        return java.util.Collections.unmodifiableMap(TARGETS);
+    }
+
+    /**
+     * "OK" when the call of the named function with these arguments gives a result, otherwise the message of its
+     * refusal. Throws {@link org.miscela.core.problem.MiscelaException} only when there is no such function or Calc itself
+     * would refuse the call: for its number of arguments (Err:504) or a range argument left out (Err:502).
+     */
+    static String explain(MixtureAddIn addIn, Object name, Object[] arguments) {
+        FunctionInfo f = function(name);
+        Object[] given = arguments == null ? new Object[0] : arguments;
+        Target t = TARGETS.get(f.method());
+        if (given.length < t.fewest() || given.length > t.kinds.length()) {
+            throw Problem.EXPLAIN_ARGUMENT_COUNT.raise(f.displayName(), count(t.fewest(), t.kinds.length()),
+                    f.syntax(), given.length);
+        }
+        Object[] p = new Object[t.kinds.length()];
+        for (int i = 0; i < p.length; i++) {
+            Object v = i < given.length ? Arguments.unwrap(given[i]) : null;
+            if (t.kinds.charAt(i) == 'R' && v == null) {
+                throw Problem.EXPLAIN_RANGE_LEFT_OUT.raise(f.arguments().get(i).displayName(), i + 1,
+                        f.displayName());
+            }
+            p[i] = t.kinds.charAt(i) == 'R' ? asRange(v) : v == null ? Any.VOID : v;
+        }
+        try {
+            t.call.on(addIn, p);
+            return CardFunctions.OK;
+        } catch (IllegalArgumentException refused) {
+            return refused.getMessage();
+        }
+    }
+
+    /** The function a name gives, with or without "MIX.", in any case; MIX.EXPLAIN itself is not one. */
+    private static FunctionInfo function(Object name) {
+        Object v = Arguments.unwrap(name);
+        if (v instanceof String) {
+            String wanted = ((String) v).trim().toUpperCase(Locale.ROOT);
+            for (FunctionInfo f : FunctionCatalog.functions()) {
+                String d = f.displayName().toUpperCase(Locale.ROOT);
+                if (TARGETS.containsKey(f.method()) && (d.equals(wanted) || d.equals("MIX." + wanted))) {
+                    return f;
+                }
+            }
+        }
+        StringBuilder names = new StringBuilder();
+        for (FunctionInfo f : FunctionCatalog.functions()) {
+            if (TARGETS.containsKey(f.method())) {
+                names.append(names.length() == 0 ? "" : ", ").append(f.displayName());
+            }
+        }
+        throw Problem.EXPLAIN_UNKNOWN_FUNCTION.raise(v instanceof String ? "\"" + ((String) v).trim() + "\""
+                : v == null ? "A left-out name" : Arguments.describe(v), names);
+    }
+
+    /** A range parameter's cells: a range as given, a single value as a one-cell range (as Calc passes a cell). */
+    private static Object[][] asRange(Object v) {
+        if (v instanceof Object[][]) {
+            return (Object[][]) v;
+        }
+        return new Object[][] {{v}};
+    }
+
+    private static String count(int fewest, int most) {
+        if (fewest == most) {
+            return most + (most == 1 ? " argument" : " arguments");
+        }
+        return fewest + (most == fewest + 1 ? " or " : " to ") + most + " arguments";
+    }
+
+    private static Object[][] r(Object v) {
+        return (Object[][]) v;
+    }
+}

@@ -1,0 +1,507 @@
+package org.miscela.calc;
+
+import com.sun.star.lang.IllegalArgumentException;
+import com.sun.star.lang.XServiceInfo;
+import com.sun.star.lib.uno.helper.WeakBase;
+import org.miscela.core.catalog.FunctionCatalog;
+import org.miscela.core.functions.AmountBasis;
+import org.miscela.core.card.Card;
+import org.miscela.core.card.CardCache;
+import org.miscela.core.card.CardReader;
+import org.miscela.core.functions.FitFunctions;
+import org.miscela.core.functions.FitOutput;
+import org.miscela.core.blend.BlendException;
+import org.miscela.core.blend.BlendFunctions;
+import org.miscela.core.blend.CompositionBasis;
+import org.miscela.core.fit.FitException;
+import org.miscela.core.functions.CardFunctions;
+import org.miscela.core.card.Extrapolation;
+import org.miscela.core.problem.MiscelaException;
+import org.miscela.core.problem.Problem;
+
+/**
+ * The UNO face of the add-in: each method decodes Calc's arguments, calls the core, and encodes the result.
+ * A {@link MiscelaException} becomes an IllegalArgumentException, which Calc shows as Err:502.
+ */
+public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, XServiceInfo {
+    private static final String[] TEMPERATURE = {"temperature"};
+
+    /** The office's factory needs a public no-argument constructor; the add-in keeps no per-instance state. */
+    public MixtureAddIn() {
+        // every call stands alone
+    }
+
+    @Override
+    public Object excessMolarVolume(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object extrapolate)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return CompositionArguments.overCompositions(c, moleFraction, temperature,
+                    (k, x, t) -> CardFunctions.excessMolarVolume(k, x, t, e));
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object partialMolarVolume(Object[][] card, Object component, Object[][] moleFraction, Object[][] temperature,
+            Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int i = Arguments.component(c, component);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return CompositionArguments.overCompositions(c, moleFraction, temperature,
+                    (k, x, t) -> CardFunctions.partialMolarVolume(k, i, x, t, e));
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object partialExcessMolarVolume(Object[][] card, Object component, Object[][] moleFraction,
+            Object[][] temperature, Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int i = Arguments.component(c, component);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return CompositionArguments.overCompositions(c, moleFraction, temperature,
+                    (k, x, t) -> CardFunctions.partialExcessMolarVolume(k, i, x, t, e));
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object mixtureMolarVolume(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object extrapolate)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return CompositionArguments.overCompositions(c, moleFraction, temperature,
+                    (k, x, t) -> CardFunctions.molarVolume(k, x, t, e));
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object mixtureDensity(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object extrapolate)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return CompositionArguments.overCompositions(c, moleFraction, temperature,
+                    (k, x, t) -> CardFunctions.density(k, x, t, e));
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object pureDensity(Object[][] card, Object component, Object[][] temperature, Object extrapolate)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int i = Arguments.component(c, component);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return Arguments.broadcast(c, TEMPERATURE, new Object[][][] {temperature},
+                    (k, p) -> CardFunctions.pureDensity(k, i, p[0], e));
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public String checkCard(Object[][] card) {
+        try {
+            return CardFunctions.check(Arguments.card(card), Double.NaN, Double.NaN, Extrapolation.AS_CARD);
+        } catch (MiscelaException ex) {
+            return ex.getMessage();
+        }
+    }
+
+    @Override
+    public String checkPoint(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object extrapolate) {
+        try {
+            Card c = Arguments.card(card);
+            return CardFunctions.check(c, CompositionArguments.singleComposition(c, "composition", moleFraction),
+                    Arguments.single("temperature", temperature), Arguments.extrapolation(extrapolate));
+        } catch (MiscelaException ex) {
+            return ex.getMessage();
+        }
+    }
+
+    @Override
+    public Object excessEnthalpy(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object extrapolate)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return CompositionArguments.overCompositions(c, moleFraction, temperature,
+                    (k, x, t) -> CardFunctions.excessEnthalpy(k, x, t, e));
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object partialExcessEnthalpy(Object[][] card, Object component, Object[][] moleFraction,
+            Object[][] temperature, Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int i = Arguments.component(c, component);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return CompositionArguments.overCompositions(c, moleFraction, temperature,
+                    (k, x, t) -> CardFunctions.partialExcessEnthalpy(k, i, x, t, e));
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object mixingHeat(Object[][] card, Object[][] amounts, Object[][] temperature, Object basis,
+            Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            AmountBasis b = Arguments.basis(basis);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return CompositionArguments.overRows(c, "amount", amounts, temperature,
+                    (k, n, t) -> CardFunctions.mixingHeat(k, n, b, t, e));
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object additionHeat(Object[][] card, Object[][] amounts, Object component, Object added,
+            Object[][] temperature, Object basis, Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int i = Arguments.component(c, component);
+            double more = Arguments.number("amount added", added);
+            AmountBasis b = Arguments.basis(basis);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return CompositionArguments.overRows(c, "amount", amounts, temperature,
+                    (k, n, t) -> CardFunctions.additionHeat(k, n, i, more, b, t, e));
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object adiabaticRise(Object[][] card, Object[][] amounts, Object[][] temperature, Object basis,
+            Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            AmountBasis b = Arguments.basis(basis);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return CompositionArguments.overRows(c, "amount", amounts, temperature,
+                    (k, n, t) -> CardFunctions.adiabaticRise(k, n, b, t, e));
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object insideValidity(Object[][] card, Object[][] moleFraction, Object[][] temperature)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            return CompositionArguments.overCompositions(c, moleFraction, temperature, CardFunctions::inside);
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object traceEvaluation(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object quantity,
+            Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            return Arguments.table(CardFunctions.trace(c, CompositionArguments.singleComposition(c, "composition", moleFraction),
+                    Arguments.single("temperature", temperature), Arguments.property(quantity),
+                    Arguments.extrapolation(extrapolate)));
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object fitExcessVolume(Object[][] moleFraction, Object[][] excessVolume, Object order, Object temperature,
+            Object orderInTemperature, Object referenceTemperature, Object weights, Object result)
+            throws IllegalArgumentException {
+        try {
+            FitOutput output = Arguments.fitOutput(result);
+            int m = Arguments.requiredCount("order", order, MAX_ORDER_IN_X);
+            int mt = Arguments.count("order in T", orderInTemperature, MAX_ORDER_IN_T, 0);
+            double[][] d = DataArguments.dataColumns(new String[] {"mole fraction", "excess volume", "temperature",
+                "weight"}, new Object[][][] {moleFraction, excessVolume, Arguments.optionalRange(temperature),
+                    Arguments.optionalRange(weights)}, new boolean[] {false, false, false, false});
+            return Arguments.table(FitFunctions.excess(d[0], d[1], m, d[2], mt,
+                    Arguments.optionalNumber("reference temperature", referenceTemperature), d[3], output));
+        } catch (MiscelaException | FitException ex) {
+            return checkOrRefuse(result, ex);
+        }
+    }
+
+    @Override
+    public Object fitDensity(Object[][] pure, Object pair, Object[][] moleFraction, Object[][] density,
+            Object[][] temperature, Object order, Object orderInTemperature, Object referenceTemperature,
+            Object weights, Object result) throws IllegalArgumentException {
+        try {
+            FitOutput output = Arguments.fitOutput(result);
+            Card c = CardReader.readPureComponents(pure);
+            int[] p = Arguments.pair(c, pair);
+            int m = Arguments.requiredCount("order", order, MAX_ORDER_IN_X);
+            int mt = Arguments.count("order in T", orderInTemperature, MAX_ORDER_IN_T, 0);
+            double[][] d = DataArguments.dataColumns(new String[] {"mole fraction", "density", "temperature", "weight"},
+                    new Object[][][] {moleFraction, density, temperature, Arguments.optionalRange(weights)},
+                    new boolean[] {false, false, true, false});
+            return Arguments.table(FitFunctions.density(c, p[0], p[1], d[0], d[1], d[2], m, mt,
+                    Arguments.optionalNumber("reference temperature", referenceTemperature), d[3], output));
+        } catch (MiscelaException | FitException ex) {
+            return checkOrRefuse(result, ex);
+        }
+    }
+
+    @Override
+    public Object leastSquares(Object[][] design, Object[][] response, Object weights, Object result)
+            throws IllegalArgumentException {
+        try {
+            Object[][] w = Arguments.optionalRange(weights);
+            return Arguments.table(FitFunctions.leastSquares(DataArguments.numbers("design", design),
+                    DataArguments.values("response", response), w == null ? null : DataArguments.values("weights", w),
+                    Arguments.fitOutput(result)));
+        } catch (MiscelaException | FitException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object uncertainty(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object quantity,
+            Object component, Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            String q = Arguments.text("quantity", quantity, "density");
+            int i = Arguments.unwrap(component) == null ? -1 : Arguments.component(c, component);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return CompositionArguments.overCompositions(c, moleFraction, temperature,
+                    (k, x, t) -> CardFunctions.uncertainty(k, q, i, x, t, e));
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object convertComposition(Object[][] card, Object[][] values, Object from, Object to, Object temperature,
+            Object targetTemperature, Object balance, Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int b = Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE);
+            double t = Arguments.optionalNumber("temperature", temperature);
+            double tTo = Arguments.optionalNumber("to temperature", targetTemperature);
+            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("from", from, ""), t, b);
+            CompositionBasis out = BlendFunctions.basis(c, Arguments.text("to", to, ""), Double.isNaN(tTo) ? t : tTo, b);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            // Each basis carries its own temperature, so the lines need none of their own (0 is never read).
+            return CompositionArguments.overValueLines(c, "values", values, new Object[][] {{0.0}},
+                    v -> BlendFunctions.binary(c, v, in), true,
+                    (v, unused) -> BlendFunctions.convert(c, v, in, out, e));
+        } catch (MiscelaException | BlendException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object batchTotals(Object[][] card, Object[][] amounts, Object unit, Object[][] temperature, Object result,
+            Object resultUnit, Object storageTemperatures, Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            String u = Arguments.text("unit", unit, null);
+            String r = Arguments.text("result", result, null);
+            String ru = Arguments.text("result unit", resultUnit, null);
+            double[] storage = CompositionArguments.optionalLine(c, "storage temperatures", storageTemperatures);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return CompositionArguments.overRows(c, "amount", amounts, temperature,
+                    (k, n, t) -> BlendFunctions.batch(k, n, u, storage, t, r, ru, e));
+        } catch (MiscelaException | BlendException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object recipe(Object[][] card, Object quantity, Object unit, Object[][] composition, Object basis,
+            Object temperature, Object storageTemperatures, Object resultUnit, Object balance, Object extrapolate)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            double q = Arguments.number("quantity", quantity);
+            String u = Arguments.text("unit", unit, null);
+            double t = Arguments.number("temperature", temperature);
+            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("basis", basis, ""), t,
+                    Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE));
+            double[] storage = CompositionArguments.optionalLine(c, "storage temperatures", storageTemperatures);
+            String ru = Arguments.text("result unit", resultUnit, null);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return CompositionArguments.overValueLines(c, "composition", composition, new Object[][] {{t}},
+                    v -> BlendFunctions.binary(c, v, in), false,
+                    (v, at) -> BlendFunctions.recipe(c, q, u, at, v, in, storage, ru, e));
+        } catch (MiscelaException | BlendException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object adjustBatch(Object[][] card, Object[][] amounts, Object unit, Object[][] target, Object basis,
+            Object temperature, Object mode, Object limit, Object limitUnit, Object result, Object resultUnit,
+            Object balance, Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            double t = Arguments.number("temperature", temperature);
+            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("basis", basis, ""), t,
+                    Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE));
+            double[] batch = CompositionArguments.singleComposition(c, "amounts", amounts);
+            double[] goal = CompositionArguments.optionalLine(c, "target", target);
+            if (goal.length == 1) {
+                goal = BlendFunctions.binary(c, goal[0], in);
+            }
+            Object r = BlendFunctions.adjust(c, batch, Arguments.text("unit", unit, null), null, goal, in, t,
+                    Arguments.text("mode", mode, null), Arguments.optionalNumber("limit", limit),
+                    Arguments.text("limit unit", limitUnit, null), Arguments.text("result", result, null),
+                    Arguments.text("result unit", resultUnit, null), Arguments.extrapolation(extrapolate));
+            return r instanceof double[] ? CompositionArguments.row((double[]) r)
+                    : r instanceof Double ? Arguments.finite((Double) r) : r;
+        } catch (MiscelaException | BlendException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object additionVolume(Object[][] card, Object[][] amounts, Object unit, Object component, Object added,
+            Object temperature, Object result, Object resultUnit, Object storageTemperatures, Object extrapolate)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            String u = Arguments.text("unit", unit, null);
+            return Arguments.finite(BlendFunctions.additionVolume(c,
+                    CompositionArguments.singleComposition(c, "amounts", amounts), u,
+                    CompositionArguments.optionalLine(c, "storage temperatures", storageTemperatures),
+                    Arguments.component(c, component), Arguments.number("amount added", added), u,
+                    Arguments.number("temperature", temperature), Arguments.text("result", result, null),
+                    Arguments.text("result unit", resultUnit, null), Arguments.extrapolation(extrapolate)));
+        } catch (MiscelaException | BlendException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object compositionFromDensity(Object[][] card, Object[][] density, Object[][] temperature,
+            Object component, Object basis, Object basisTemperature, Object reference, Object from, Object to,
+            Object balance, Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int k = Arguments.optionalComponent(c, component, 0);
+            int b = Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE);
+            String basisText = Arguments.text("basis", basis, "mole fraction");
+            double tb = Arguments.optionalNumber("basis temperature", basisTemperature);
+            double[] ref = CompositionArguments.optionalLine(c, "reference", reference);
+            double lo = Arguments.optionalNumber("from", from);
+            double hi = Arguments.optionalNumber("to", to);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return Arguments.broadcast(c, new String[] {"density", "temperature"},
+                    new Object[][][] {density, temperature}, (card1, p) -> BlendFunctions.fromDensity(card1, p[0],
+                            p[1], k, ref, lo, hi, BlendFunctions.basis(card1, basisText, Double.isNaN(tb) ? p[1] : tb,
+                                    b), e));
+        } catch (MiscelaException | BlendException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public Object volumeCorrection(Object[][] card, Object[][] composition, Object basis, Object[][] temperature,
+            Object referenceTemperature, Object result, Object basisTemperature, Object balance, Object extrapolate)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            double tRef = Arguments.number("reference temperature", referenceTemperature);
+            double tb = Arguments.optionalNumber("basis temperature", basisTemperature);
+            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("basis", basis, ""), Double.isNaN(tb) ? tRef
+                    : tb, Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE));
+            String r = Arguments.text("result", result, null);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return CompositionArguments.overValueLines(c, "composition", composition, temperature,
+                    v -> BlendFunctions.binary(c, v, in), true,
+                    (v, t) -> new double[] {BlendFunctions.volumeCorrection(c, v, in, t, tRef, r, e)});
+        } catch (MiscelaException | BlendException ex) {
+            throw refused(ex);
+        }
+    }
+
+    @Override
+    public String explainCall(Object functionName, Object[] arguments) {
+        try {
+            return Explanations.explain(this, functionName, arguments);
+        } catch (MiscelaException ex) {
+            return ex.getMessage();
+        }
+    }
+
+    /** A fit's problem: the message itself when the "check" result was asked for, Err:502 otherwise. */
+    private static Object checkOrRefuse(Object result, RuntimeException ex) throws IllegalArgumentException {
+        boolean check;
+        try {
+            check = Arguments.fitOutput(result) == FitOutput.CHECK;
+        } catch (MiscelaException unknown) {
+            check = false;
+        }
+        if (check) {
+            return ex.getMessage();
+        }
+        throw refused(ex);
+    }
+
+    @Override
+    public Object addInInfo(Object item) throws IllegalArgumentException {
+        try {
+            String what = Arguments.text("item", item, "version").trim().toLowerCase(java.util.Locale.ROOT);
+            switch (what) {
+                case "version":
+                    return FunctionCatalog.VERSION;
+                case "card reads":
+                    return (double) CardCache.shared().parseCount();
+                case "cards kept":
+                    return (double) CardCache.shared().size();
+                default:
+                    throw Problem.UNKNOWN_INFO_ITEM.raise(what, "version, card reads, cards kept");
+            }
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
+    /** The fit engine's limits on the orders (beyond them the power basis is too ill-conditioned). */
+    private static final int MAX_ORDER_IN_X = 30;
+    private static final int MAX_ORDER_IN_T = 10;
+
+    private static IllegalArgumentException refused(RuntimeException ex) {
+        return new IllegalArgumentException(ex.getMessage());
+    }
+
+    // --- XServiceInfo
+
+    @Override
+    public String getImplementationName() {
+        return MixtureAddIn.class.getName();
+    }
+
+    @Override
+    public boolean supportsService(String name) {
+        return FunctionCatalog.SERVICE.equals(name);
+    }
+
+    @Override
+    public String[] getSupportedServiceNames() {
+        return new String[] {FunctionCatalog.SERVICE};
+    }
+}

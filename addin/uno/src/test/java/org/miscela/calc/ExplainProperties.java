@@ -1,0 +1,105 @@
+package org.miscela.calc;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import com.sun.star.lang.IllegalArgumentException;
+import com.sun.star.uno.Any;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Random;
+import net.jqwik.api.Arbitraries;
+import net.jqwik.api.Assume;
+import net.jqwik.api.Arbitrary;
+import net.jqwik.api.Combinators;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.Provide;
+import net.jqwik.api.ShrinkingMode;
+import net.jqwik.api.Tuple;
+import net.jqwik.api.lifecycle.AddLifecycleHook;
+import org.miscela.core.catalog.FunctionCatalog;
+import org.miscela.core.card.FuzzCards;
+import org.miscela.core.card.FuzzProfile;
+
+/**
+ * MIX.EXPLAIN agrees with the call it explains, for the fuzzers' calls ({@link FuzzCall}): "OK" when the call gives a
+ * result, and exactly the message of the refusal when it is refused, with the arguments in the forms Calc's variable
+ * argument list brings them (a one-cell range as its value now and then, trailing left-out arguments left out).
+ */
+class ExplainProperties {
+    /** The IDL method of each fuzzed method. */
+    private static final Map<FuzzCall.Method, String> METHODS = new EnumMap<>(FuzzCall.Method.class);
+
+    static {
+        String[] names = {"excessMolarVolume", "partialMolarVolume", "partialExcessMolarVolume", "mixtureMolarVolume",
+            "mixtureDensity", "pureDensity", "checkCard", "checkPoint", "excessEnthalpy", "partialExcessEnthalpy",
+            "mixingHeat", "additionHeat", "adiabaticRise", "insideValidity", "traceEvaluation", "fitExcessVolume",
+            "fitDensity", "leastSquares", "uncertainty", "convertComposition", "batchTotals", "recipe",
+            "adjustBatch", "additionVolume", "compositionFromDensity", "volumeCorrection"};
+        FuzzCall.Method[] all = FuzzCall.Method.values();
+        assertEquals(all.length, names.length, "a name for every fuzzed method");
+        for (int i = 0; i < all.length; i++) {
+            METHODS.put(all[i], names[i]);
+        }
+    }
+
+    private final MixtureAddIn addIn = new MixtureAddIn();
+
+    @Provide
+    Arbitrary<Tuple.Tuple2<FuzzCall, Long>> calls() {
+        Arbitrary<FuzzCards.Kind> kinds = Arbitraries.frequency(Tuple.of(55, FuzzCards.Kind.VALID),
+                Tuple.of(10, FuzzCards.Kind.EXTREME), Tuple.of(25, FuzzCards.Kind.MUTATED),
+                Tuple.of(5, FuzzCards.Kind.SOUP), Tuple.of(5, FuzzCards.Kind.SHAPE));
+        return Combinators.combine(kinds, Arbitraries.longs(), Arbitraries.of(FuzzCall.Method.class),
+                Arbitraries.longs(), Arbitraries.longs()).as((kind, cardSeed, method, callSeed, formSeed) ->
+                Tuple.of(FuzzCall.of(method, FuzzCards.of(kind, cardSeed), callSeed), formSeed));
+    }
+
+    @Property(shrinking = ShrinkingMode.OFF)
+    @FuzzProfile.Tries(ci = 2_000, full = 100_000)
+    @AddLifecycleHook(FuzzProfile.class)
+    void theExplanationIsTheCallsOwnAnswer(@ForAll("calls") Tuple.Tuple2<FuzzCall, Long> generated) {
+        FuzzCall call = generated.get1();
+        String expected;
+        try {
+            call.invoke(addIn);
+            expected = "OK";
+        } catch (IllegalArgumentException e) {
+            expected = e.getMessage();
+        }
+        String method = METHODS.get(call.method);
+        String name = FunctionCatalog.byMethod(method).displayName();
+        Explanations.Target target = Explanations.targets().get(method);
+        Object[] arguments = calcForms(call, target, new Random(generated.get2()));
+        for (int i = 0; i < arguments.length; i++) {
+            // Calc never calls with a range argument missing (it shows Err:502 itself)
+            Assume.that(target.kinds.charAt(i) != 'R' || arguments[i] != null);
+        }
+        assertEquals(expected, addIn.explainCall(name, arguments), () -> "MIX.EXPLAIN(\"" + name + "\"; …) of " + call
+                + "\n  as " + Arrays.deepToString(arguments));
+    }
+
+    /** The call's arguments as Calc's variable argument list could hold them. */
+    private static Object[] calcForms(FuzzCall call, Explanations.Target target, Random r) {
+        List<Object> out = new ArrayList<>();
+        boolean card = target.kinds.length() == call.args.length + 1;
+        if (card) {
+            out.add(call.cardCells());
+        }
+        out.addAll(Arrays.asList(call.args));
+        for (int i = 0; i < out.size(); i++) {
+            Object v = out.get(i);
+            if (target.kinds.charAt(i) == 'R' && v instanceof Object[][] && ((Object[][]) v).length == 1
+                    && ((Object[][]) v)[0].length == 1 && ((Object[][]) v)[0][0] != null && r.nextBoolean()) {
+                out.set(i, ((Object[][]) v)[0][0]); // a single cell arrives as its value
+            }
+        }
+        while (out.size() > target.fewest() && out.get(out.size() - 1) == Any.VOID && r.nextBoolean()) {
+            out.remove(out.size() - 1); // a trailing optional argument left out of the call
+        }
+        return out.toArray();
+    }
+}

@@ -1,0 +1,134 @@
+package org.miscela.calc;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.sun.star.lang.IllegalArgumentException;
+import com.sun.star.uno.Any;
+import java.lang.reflect.Method;
+import java.util.HashSet;
+import java.util.Set;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.miscela.core.catalog.FunctionCatalog;
+import org.miscela.core.catalog.FunctionInfo;
+import org.miscela.core.problem.Catalogue;
+import org.miscela.core.card.TestCards;
+
+/**
+ * MIX.EXPLAIN in a plain JVM: its table of methods matches the interface, it finds functions by name, it counts
+ * arguments as Calc does, and it gives exactly the message the call itself is refused with (or "OK").
+ */
+class ExplanationsTest {
+    private static final Object[][] CARD = TestCards.cells("ethanol-water-oiml.tsv");
+    private final MixtureAddIn addIn = new MixtureAddIn();
+
+    private static Object[][] one(Object v) {
+        return new Object[][] {{v}};
+    }
+
+    private String explain(Object name, Object... arguments) {
+        return addIn.explainCall(name, arguments);
+    }
+
+    /** Every function but MIX.EXPLAIN has a row, and its kinds are the generated interface's parameter types. */
+    @Test
+    void theTableHasEveryFunctionWithItsParameterKinds() {
+        Set<String> seen = new HashSet<>();
+        for (Method m : XMixtureFunctions.class.getDeclaredMethods()) {
+            if (m.isSynthetic() || m.getName().equals("explainCall")) {
+                continue;
+            }
+            Explanations.Target t = Explanations.targets().get(m.getName());
+            assertTrue(t != null, "MIX.EXPLAIN cannot run " + m.getName());
+            StringBuilder kinds = new StringBuilder();
+            for (Class<?> p : m.getParameterTypes()) {
+                kinds.append(p == Object[][].class ? 'R' : p == Object.class ? 'V' : '?');
+            }
+            assertEquals(kinds.toString(), t.kinds, m.getName());
+            seen.add(m.getName());
+        }
+        assertEquals(seen, Explanations.targets().keySet());
+        assertEquals(FunctionCatalog.functions().size() - 1, seen.size(), "every function of the catalogue");
+    }
+
+    @Test
+    void aRefusedCallIsExplainedInItsOwnWords() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> addIn.mixtureDensity(CARD, one(0.3), one(45.0), Any.VOID));
+        assertEquals(e.getMessage(), explain("MIX.DENSITY", CARD, 0.3, 45.0));
+        assertEquals("Problem.OUTSIDE_TEMPERATURE", Catalogue.entryOf(e.getMessage()));
+        IllegalArgumentException unit = assertThrows(IllegalArgumentException.class, () -> addIn.batchTotals(CARD,
+                new Object[][] {{50.0, 50.0}}, "lb", one(20.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+        assertEquals(unit.getMessage(), explain("MIX.BATCH", CARD, new Object[][] {{50.0, 50.0}}, "lb", 20.0));
+        assertEquals("BlendProblem.UNKNOWN_UNIT", Catalogue.entryOf(unit.getMessage()));
+    }
+
+    @Test
+    void aCallThatGivesAResultIsOk() {
+        assertEquals("OK", explain("MIX.DENSITY", CARD, 0.3, 20.0));
+        assertEquals("OK", explain("MIX.DENSITY", CARD, 0.3, 45.0, 1.0), "extrapolation allowed");
+        assertEquals("OK", explain("MIX.BATCH", CARD, new Object[][] {{50.0, 50.0}}, "g", 20.0, "contraction",
+                "mL"));
+        // a check that answers with a message still gives a result: its cell shows no error
+        assertEquals("OK", explain("MIX.CHECK", one("not a card")));
+    }
+
+    @Test
+    void theNameMayLackThePrefixAndIgnoresCase() {
+        String expected = explain("MIX.DENSITY", CARD, 0.3, 45.0);
+        assertEquals(expected, explain("density", CARD, 0.3, 45.0));
+        assertEquals(expected, explain(" mix.Density ", CARD, 0.3, 45.0));
+        assertEquals(expected, explain(new Any(com.sun.star.uno.Type.STRING, "Density"), CARD, 0.3, 45.0));
+    }
+
+    @Test
+    void anUnknownNameIsAnsweredWithTheNamesThereAre() {
+        for (Object name : new Object[] {"MIX.DENSTY", "", 3.0, Any.VOID, "MIX.EXPLAIN"}) {
+            String answer = explain(name, CARD, 0.3, 20.0);
+            assertEquals("Problem.EXPLAIN_UNKNOWN_FUNCTION", Catalogue.entryOf(answer), answer);
+            List<FunctionInfo> all = FunctionCatalog.functions();
+            String last = all.stream().filter(f -> !f.method().equals("explainCall")).reduce((a, b) -> b).get()
+                    .method();
+            for (FunctionInfo f : all) {
+                assertEquals(!f.method().equals("explainCall"), answer.contains(f.displayName() + (f.method()
+                        .equals(last) ? "." : ",")), f.displayName() + " in " + answer);
+            }
+        }
+        assertTrue(explain("MIX.DENSTY").startsWith("\"MIX.DENSTY\" names no function"));
+    }
+
+    /** Calc refuses a call with too few or too many arguments (Err:504): fewer than up to its last range. */
+    @Test
+    void argumentsAreCountedAsCalcCountsThem() {
+        String few = explain("MIX.DENSITY", CARD, 0.3);
+        assertEquals("Problem.EXPLAIN_ARGUMENT_COUNT", Catalogue.entryOf(few), few);
+        assertEquals("MIX.DENSITY takes 3 or 4 arguments (MIX.DENSITY(card; x; temperature; [extrapolate])), not 2: "
+                + "Calc shows Err:504 for such a call without calling the function.", few);
+        String many = explain("MIX.CHECK", CARD, 1.0);
+        assertTrue(many.startsWith("MIX.CHECK takes 1 argument (MIX.CHECK(card)), not 2"), many);
+        assertTrue(explain("MIX.FITEXCESS", one(0.5)).startsWith("MIX.FITEXCESS takes 2 to 8 arguments"));
+        // the order is a value argument: Calc calls the fit without it, and the fit says what is wrong
+        String noOrder = explain("MIX.FITEXCESS", new Object[][] {{0.2}, {0.4}}, new Object[][] {{-0.7}, {-1.0}});
+        assertTrue(Catalogue.entryOf(noOrder) != null && !noOrder.contains("Err:504"), noOrder);
+    }
+
+    /**
+     * A single value for a range parameter is a one-cell range; trailing value arguments left out are void; a range
+     * argument left out is refused by Calc itself (Err:502), even for MIX.CHECKPOINT, which never refuses.
+     */
+    @Test
+    void argumentsArriveInCalcsForms() throws Exception {
+        assertEquals(explain("MIX.DENSITY", CARD, one(0.3), one(45.0)), explain("MIX.DENSITY", CARD, 0.3, 45.0));
+        assertEquals(explain("MIX.DENSITY", CARD, 0.3, 45.0), explain("MIX.DENSITY", CARD, 0.3, 45.0, Any.VOID));
+        assertEquals("The x, argument 2 of MIX.CHECKPOINT, is left out; a range argument cannot be, so Calc shows "
+                + "Err:502 for the call without calling the function: give a value, a cell or a range.",
+                explain("MIX.CHECKPOINT", CARD, Any.VOID, 20.0));
+        String card = explain("MIX.DENSITY", Any.VOID, 0.3, 20.0);
+        assertEquals("Problem.EXPLAIN_RANGE_LEFT_OUT", Catalogue.entryOf(card), card);
+        assertTrue(card.startsWith("The card, argument 1 of MIX.DENSITY"), card);
+        assertEquals("OK", explain("MIX.ADDVOLUME", CARD, new Object[][] {{50.0, 50.0}}, "g", "ethanol", 10.0, 20.0,
+                Any.VOID, "mL"), "a value argument left out in the middle");
+    }
+}

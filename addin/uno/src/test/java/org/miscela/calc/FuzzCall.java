@@ -1,0 +1,813 @@
+package org.miscela.calc;
+
+import com.sun.star.lang.IllegalArgumentException;
+import com.sun.star.uno.Any;
+import com.sun.star.uno.Type;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Random;
+import org.miscela.core.card.Card;
+import org.miscela.core.card.CardReader;
+import org.miscela.core.card.FuzzCards;
+import org.miscela.core.problem.MiscelaException;
+
+/**
+ * One generated call of a {@link MixtureAddIn} method, made from a seed against a fuzz card: arguments in the forms
+ * Calc passes them (ranges as rectangular Object[][] of Double and String with "" for blanks, optional arguments as
+ * {@link Any#VOID}, scalars as Double, String or Boolean), aimed at the card's components and validity range and at
+ * the edges around them, with wrong shapes, blanks, text and non-finite numbers mixed in. All values are invented.
+ */
+final class FuzzCall {
+    /** Every method of the UNO interface. */
+    enum Method {
+        EXCESS_VOLUME, PARTIAL_VOLUME, PARTIAL_EXCESS_VOLUME, MOLAR_VOLUME, DENSITY, PURE_DENSITY, CHECK_CARD,
+        CHECK_POINT, EXCESS_ENTHALPY, PARTIAL_EXCESS_ENTHALPY, MIXING_HEAT, ADDITION_HEAT, ADIABATIC_RISE, INSIDE,
+        TRACE, FIT_EXCESS, FIT_DENSITY, LEAST_SQUARES, UNCERTAINTY, CONVERT, BATCH, RECIPE, ADJUST, ADDITION_VOLUME,
+        FROM_DENSITY, VOLUME_FACTOR;
+
+        /** The blending functions, whose array results hold one value per component. */
+        boolean blending() {
+            return ordinal() >= CONVERT.ordinal();
+        }
+    }
+
+    final Method method;
+    final FuzzCards.Blueprint card;
+    final long seed;
+    /** The arguments after the card, in the method's order. */
+    final Object[] args;
+
+    private FuzzCall(Method method, FuzzCards.Blueprint card, long seed, Object[] args) {
+        this.method = method;
+        this.card = card;
+        this.seed = seed;
+        this.args = args;
+    }
+
+    /** The card as Calc would pass it: rectangular, "" for blanks. */
+    Object[][] cardCells() {
+        return FuzzCards.rectangular(card.cells);
+    }
+
+    Object invoke(MixtureAddIn a) throws IllegalArgumentException {
+        Object[][] c = cardCells();
+        Object[] p = args;
+        switch (method) {
+            case EXCESS_VOLUME:
+                return a.excessMolarVolume(c, grid(p[0]), grid(p[1]), p[2]);
+            case PARTIAL_VOLUME:
+                return a.partialMolarVolume(c, p[0], grid(p[1]), grid(p[2]), p[3]);
+            case PARTIAL_EXCESS_VOLUME:
+                return a.partialExcessMolarVolume(c, p[0], grid(p[1]), grid(p[2]), p[3]);
+            case MOLAR_VOLUME:
+                return a.mixtureMolarVolume(c, grid(p[0]), grid(p[1]), p[2]);
+            case DENSITY:
+                return a.mixtureDensity(c, grid(p[0]), grid(p[1]), p[2]);
+            case PURE_DENSITY:
+                return a.pureDensity(c, p[0], grid(p[1]), p[2]);
+            case CHECK_CARD:
+                return a.checkCard(c);
+            case CHECK_POINT:
+                return a.checkPoint(c, grid(p[0]), grid(p[1]), p[2]);
+            case EXCESS_ENTHALPY:
+                return a.excessEnthalpy(c, grid(p[0]), grid(p[1]), p[2]);
+            case PARTIAL_EXCESS_ENTHALPY:
+                return a.partialExcessEnthalpy(c, p[0], grid(p[1]), grid(p[2]), p[3]);
+            case MIXING_HEAT:
+                return a.mixingHeat(c, grid(p[0]), grid(p[1]), p[2], p[3]);
+            case ADDITION_HEAT:
+                return a.additionHeat(c, grid(p[0]), p[1], p[2], grid(p[3]), p[4], p[5]);
+            case ADIABATIC_RISE:
+                return a.adiabaticRise(c, grid(p[0]), grid(p[1]), p[2], p[3]);
+            case INSIDE:
+                return a.insideValidity(c, grid(p[0]), grid(p[1]));
+            case TRACE:
+                return a.traceEvaluation(c, grid(p[0]), grid(p[1]), p[2], p[3]);
+            case FIT_EXCESS:
+                return a.fitExcessVolume(grid(p[0]), grid(p[1]), p[2], p[3], p[4], p[5], p[6], p[7]);
+            case FIT_DENSITY:
+                return a.fitDensity(c, p[0], grid(p[1]), grid(p[2]), grid(p[3]), p[4], p[5], p[6], p[7], p[8]);
+            case LEAST_SQUARES:
+                return a.leastSquares(grid(p[0]), grid(p[1]), p[2], p[3]);
+            case UNCERTAINTY:
+                return a.uncertainty(c, grid(p[0]), grid(p[1]), p[2], p[3], p[4]);
+            case CONVERT:
+                return a.convertComposition(c, grid(p[0]), p[1], p[2], p[3], p[4], p[5], p[6]);
+            case BATCH:
+                return a.batchTotals(c, grid(p[0]), p[1], grid(p[2]), p[3], p[4], p[5], p[6]);
+            case RECIPE:
+                return a.recipe(c, p[0], p[1], grid(p[2]), p[3], p[4], p[5], p[6], p[7], p[8]);
+            case ADJUST:
+                return a.adjustBatch(c, grid(p[0]), p[1], grid(p[2]), p[3], p[4], p[5], p[6], p[7], p[8], p[9], p[10],
+                        p[11]);
+            case ADDITION_VOLUME:
+                return a.additionVolume(c, grid(p[0]), p[1], p[2], p[3], p[4], p[5], p[6], p[7], p[8]);
+            case FROM_DENSITY:
+                return a.compositionFromDensity(c, grid(p[0]), grid(p[1]), p[2], p[3], p[4], p[5], p[6], p[7], p[8],
+                        p[9]);
+            case VOLUME_FACTOR:
+                return a.volumeCorrection(c, grid(p[0]), p[1], grid(p[2]), p[3], p[4], p[5], p[6], p[7]);
+            default:
+                throw new AssertionError(method);
+        }
+    }
+
+    /** The range arguments of this call (not the card): a well-shaped array result has the shape of one of them. */
+    List<Object[][]> ranges() {
+        List<Object[][]> out = new ArrayList<>();
+        for (Object v : args) {
+            Object u = v instanceof Any ? ((Any) v).getObject() : v;
+            if (u instanceof Object[][]) {
+                out.add((Object[][]) u);
+            }
+        }
+        return out;
+    }
+
+    private static Object[][] grid(Object v) {
+        return (Object[][]) v;
+    }
+
+    @Override
+    public String toString() {
+        StringBuilder b = new StringBuilder(method.toString()).append(", call seed ").append(seed).append('\n');
+        for (int i = 0; i < args.length; i++) {
+            b.append("  arg ").append(i + 2).append(": ").append(render(args[i])).append('\n');
+        }
+        return b.append("  card: ").append(card).toString();
+    }
+
+    private static String render(Object v) {
+        if (v == Any.VOID) {
+            return "VOID";
+        }
+        if (v instanceof Any) {
+            return "Any(" + render(((Any) v).getObject()) + ")";
+        }
+        if (v instanceof Object[][]) {
+            Object[][] g = (Object[][]) v;
+            StringBuilder b = new StringBuilder("[");
+            for (int i = 0; i < g.length && b.length() < 3000; i++) {
+                b.append(i == 0 ? "" : "; ");
+                for (int c = 0; c < g[i].length; c++) {
+                    b.append(c == 0 ? "" : ", ").append(FuzzCards.show(new Object[][] {{g[i][c]}}).substring(6).trim());
+                }
+            }
+            return b.append("] ").append(g.length).append('×').append(g.length == 0 ? 0 : g[0].length).toString();
+        }
+        return FuzzCards.show(new Object[][] {{v}}).substring(6).trim();
+    }
+
+    // ------------------------------------------------------------------ generation
+
+    static FuzzCall of(Method method, FuzzCards.Blueprint card, long seed) {
+        return new Generator(new Random(seed), card).call(method, seed);
+    }
+
+    /** Builds the arguments of one call. */
+    private static final class Generator {
+        final Random r;
+        final FuzzCards.Blueprint card;
+        final int n;
+        /**
+         * A clean call keeps every argument inside its contract (right shapes, numbers, in-range temperatures,
+         * known words), so that valid cards reach the numerics instead of stopping at the first bad argument.
+         */
+        final boolean clean;
+
+        Generator(Random r, FuzzCards.Blueprint card) {
+            this.r = r;
+            this.card = card;
+            this.clean = r.nextInt(5) < 2;
+            // Now and then a composition for a card of another size.
+            this.n = !clean && r.nextInt(15) == 0 ? 1 + r.nextInt(5) : Math.max(card.componentCount(), 1);
+        }
+
+        FuzzCall call(Method m, long seed) {
+            Object[] a;
+            switch (m) {
+                case EXCESS_VOLUME:
+                case MOLAR_VOLUME:
+                case DENSITY:
+                case EXCESS_ENTHALPY: {
+                    Object[][] x = composition();
+                    a = new Object[] {x, temperature(x), extrapolate()};
+                    break;
+                }
+                case PARTIAL_VOLUME:
+                case PARTIAL_EXCESS_VOLUME:
+                case PARTIAL_EXCESS_ENTHALPY: {
+                    Object[][] x = composition();
+                    a = new Object[] {component(), x, temperature(x), extrapolate()};
+                    break;
+                }
+                case PURE_DENSITY: {
+                    Object[][] t = r.nextInt(4) == 0 ? temperatureRange(1 + r.nextInt(4), 1 + r.nextInt(3))
+                            : new Object[][] {{temperatureValue()}};
+                    a = new Object[] {component(), t, extrapolate()};
+                    break;
+                }
+                case CHECK_CARD:
+                    a = new Object[0];
+                    break;
+                case CHECK_POINT:
+                case INSIDE: {
+                    Object[][] x = composition();
+                    Object[][] t = temperature(x);
+                    a = m == Method.INSIDE ? new Object[] {x, t} : new Object[] {x, t, extrapolate()};
+                    break;
+                }
+                case TRACE: {
+                    Object[][] x = composition();
+                    a = new Object[] {x, temperature(x), pick(Any.VOID, "volume", "enthalpy", " ENTHALPY ", "mass",
+                        "", 1.0, Boolean.TRUE), extrapolate()};
+                    break;
+                }
+                case MIXING_HEAT:
+                case ADIABATIC_RISE: {
+                    Object[][] amounts = amounts();
+                    a = new Object[] {amounts, temperature(amounts), basis(), extrapolate()};
+                    break;
+                }
+                case ADDITION_HEAT: {
+                    Object[][] amounts = amounts();
+                    a = new Object[] {amounts, component(), added(), temperature(amounts), basis(), extrapolate()};
+                    break;
+                }
+                case UNCERTAINTY: {
+                    Object[][] x = composition();
+                    a = new Object[] {x, temperature(x), pick(Any.VOID, "density", "excess volume", "molar volume",
+                        "partial volume", " Density ", "viscosity", "", 2.0), r.nextInt(3) == 0 ? Any.VOID
+                        : component(), extrapolate()};
+                    break;
+                }
+                case FIT_EXCESS:
+                    a = fitExcess();
+                    break;
+                case FIT_DENSITY:
+                    a = fitDensity();
+                    break;
+                case LEAST_SQUARES:
+                    a = leastSquares();
+                    break;
+                case CONVERT: {
+                    Object from = basisWord();
+                    a = new Object[] {basisValues(from), from, basisWord(), temperatureOrVoid(),
+                        r.nextBoolean() ? Any.VOID : temperatureValue(), balance(), extrapolate()};
+                    break;
+                }
+                case BATCH: {
+                    Object[][] amounts = amounts();
+                    a = new Object[] {amounts, amountUnit(), temperature(amounts), pick(Any.VOID, "volume", "mass",
+                        "moles", "density", "pure volume", "contraction", "contraction %", clean ? "volume" : "weight"),
+                        r.nextBoolean() ? Any.VOID : amountUnit(), storageTemperatures(), extrapolate()};
+                    break;
+                }
+                case RECIPE: {
+                    Object basis = basisWord();
+                    a = new Object[] {quantity(), amountUnit(), basisValues(basis), basis, temperatureValue(),
+                        storageTemperatures(), r.nextBoolean() ? Any.VOID : amountUnit(), balance(), extrapolate()};
+                    break;
+                }
+                case ADJUST: {
+                    Object basis = basisWord();
+                    Object[][] batch = amounts();
+                    a = new Object[] {batch.length > 1 && r.nextBoolean() ? new Object[][] {batch[0]} : batch,
+                        amountUnit(), basisValues(basis), basis, temperatureValue(),
+                        pick(Any.VOID, "least", "within", "make up", clean ? "least" : "most"),
+                        r.nextBoolean() ? Any.VOID : quantity(), r.nextBoolean() ? Any.VOID : amountUnit(),
+                        pick(Any.VOID, "additions", "volume", "summary", clean ? "summary" : "all"),
+                        r.nextBoolean() ? Any.VOID : amountUnit(), balance(), extrapolate()};
+                    break;
+                }
+                case ADDITION_VOLUME: {
+                    Object[][] batch = amounts();
+                    a = new Object[] {batch.length > 1 && r.nextBoolean() ? new Object[][] {batch[0]} : batch,
+                        amountUnit(), component(), added(), temperatureValue(),
+                        pick(Any.VOID, "exact", "first order", "difference", clean ? "exact" : "second order"),
+                        r.nextBoolean() ? Any.VOID : amountUnit(), storageTemperatures(), extrapolate()};
+                    break;
+                }
+                case FROM_DENSITY: {
+                    Object[][] t = new Object[][] {{temperatureValue()}};
+                    double tValue = t[0][0] instanceof Double ? (Double) t[0][0] : card.lowest;
+                    Object[][] densities = r.nextInt(4) == 0
+                            ? new Object[][] {{plausibleMixtureDensity(tValue)}, {plausibleMixtureDensity(tValue)}}
+                            : new Object[][] {{plausibleMixtureDensity(tValue)}};
+                    if (densities.length > 1 && r.nextBoolean()) {
+                        t = new Object[][] {{tValue}, {temperatureValue()}};
+                    }
+                    a = new Object[] {densities, t, r.nextBoolean() ? Any.VOID : component(), basisWord(),
+                        temperatureOrVoid(), r.nextInt(3) == 0 ? composition() : Any.VOID,
+                        r.nextBoolean() ? Any.VOID : (Object) (0.3 * r.nextDouble()),
+                        r.nextBoolean() ? Any.VOID : (Object) (0.7 + 0.3 * r.nextDouble()), balance(), extrapolate()};
+                    break;
+                }
+                case VOLUME_FACTOR: {
+                    Object basis = basisWord();
+                    Object[][] x = basisValues(basis);
+                    a = new Object[] {x, basis, temperature(x), temperatureValue(),
+                        pick(Any.VOID, "factor", "density", "reference density", clean ? "factor" : "ratio"),
+                        temperatureOrVoid(), balance(), extrapolate()};
+                    break;
+                }
+                default:
+                    throw new AssertionError(m);
+            }
+            return new FuzzCall(m, card, seed, a);
+        }
+
+        @SafeVarargs
+        final <T> T pick(T... options) {
+            return options[r.nextInt(options.length)];
+        }
+
+        // --- single values
+
+        /** A value that belongs nowhere: text, a number as text, blank, NaN, ±∞, a boolean, a huge number. */
+        Object junk() {
+            return pick("", "  ", "abc", "0.5", "20", "#N/A", "Err:502", Double.NaN, Double.POSITIVE_INFINITY,
+                    Double.NEGATIVE_INFINITY, Boolean.TRUE, Boolean.FALSE, 1e308, -1e308, Double.MIN_VALUE, -0.0);
+        }
+
+        Object extrapolate() {
+            int p = r.nextInt(clean ? 16 : 20);
+            if (p < 10) {
+                return Any.VOID;
+            }
+            if (p < 14) {
+                return Boolean.TRUE;
+            }
+            if (p < 16) {
+                return Boolean.FALSE;
+            }
+            return pick(1.0, 0.0, Double.NaN, "TRUE", "", new Any(Type.BOOLEAN, Boolean.TRUE),
+                    new Object[][] {{1.0}}, -2.5);
+        }
+
+        Object component() {
+            int p = r.nextInt(clean ? 15 : 20);
+            if (p < 10) {
+                return (double) (1 + r.nextInt(Math.max(card.componentCount(), 1)));
+            }
+            if (p < 15 && !card.names.isEmpty()) {
+                String name = card.names.get(r.nextInt(card.names.size()));
+                return pick(name, name.toUpperCase(java.util.Locale.ROOT), "  " + name + " ");
+            }
+            return pick(0.0, (double) card.componentCount() + 1, 1.5, -1.0, Double.NaN, Double.POSITIVE_INFINITY,
+                    "nobody", "", " ", Boolean.TRUE, Any.VOID, new Object[][] {{1.0}}, 1e300);
+        }
+
+        Object basis() {
+            if (clean) {
+                return pick(Any.VOID, "mol", "kmol", "g", "kg");
+            }
+            return pick(Any.VOID, Any.VOID, "mol", "kmol", "g", "kg", " KG ", "lb", "", 2.0, Boolean.TRUE);
+        }
+
+        Object added() {
+            int p = r.nextInt(clean ? 6 : 10);
+            if (p < 6) {
+                return 10 * r.nextDouble();
+            }
+            return pick(0.0, -1.0, Double.NaN, Double.POSITIVE_INFINITY, 1e300, "one", Any.VOID,
+                    new Object[][] {{2.0}}, new Object[][] {{1.0, 2.0}});
+        }
+
+        // --- compositions
+
+        /** A composition argument in one of the shapes the functions take, or a wrong one. */
+        Object[][] composition() {
+            int p = r.nextInt(clean ? 16 : 20);
+            if (n == 2 && p < 7) {
+                if (p < 4) {
+                    return new Object[][] {{maybeJunk(point()[0])}};
+                }
+                // a row or column of x1 values
+                int k = 2 + r.nextInt(5);
+                boolean column = r.nextBoolean();
+                Object[][] g = column ? new Object[k][1] : new Object[1][k];
+                for (int i = 0; i < k; i++) {
+                    Object v = r.nextInt(8) == 0 ? "" : maybeJunk(point()[0]);
+                    if (column) {
+                        g[i][0] = v;
+                    } else {
+                        g[0][i] = v;
+                    }
+                }
+                return g;
+            }
+            if (p < 16) {
+                int lines = p < 11 ? 1 : 2 + r.nextInt(5);
+                boolean column = lines == 1 && r.nextBoolean();
+                Object[][] g = column ? new Object[n][1] : new Object[lines][n];
+                for (int line = 0; line < lines; line++) {
+                    double[] x = point();
+                    boolean blankLine = lines > 1 && r.nextInt(8) == 0;
+                    for (int k = 0; k < n; k++) {
+                        Object v = blankLine ? "" : maybeJunk(x[k]);
+                        if (column) {
+                            g[k][0] = v;
+                        } else {
+                            g[line][k] = v;
+                        }
+                    }
+                }
+                return g;
+            }
+            return randomShape();
+        }
+
+        /** Any shape up to 5×5 (including none), filled with fractions and junk. */
+        Object[][] randomShape() {
+            int rows = r.nextInt(6);
+            int cols = rows == 0 ? 0 : r.nextInt(6);
+            Object[][] g = new Object[rows][cols];
+            for (Object[] row : g) {
+                for (int c = 0; c < cols; c++) {
+                    row[c] = r.nextInt(4) == 0 ? junk() : (Object) r.nextDouble();
+                }
+            }
+            return g;
+        }
+
+        Object maybeJunk(double v) {
+            return !clean && r.nextInt(25) == 0 ? junk() : (Object) v;
+        }
+
+        /** Mole fractions of n components: ordinary, at the corners and edges, 1e-15 away, slightly off in sum. */
+        double[] point() {
+            double[] x = new double[n];
+            int p = r.nextInt(clean ? 16 : 20);
+            if (p < 8) {
+                double sum = 0;
+                for (int k = 0; k < n; k++) {
+                    x[k] = -Math.log(1 - r.nextDouble());
+                    sum += x[k];
+                }
+                for (int k = 0; k < n; k++) {
+                    x[k] /= sum;
+                }
+            } else if (p < 11) {
+                x[r.nextInt(n)] = 1.0; // a pure component
+            } else if (p < 14) {
+                // 1e-15 (or one ulp) away from a corner
+                int k = r.nextInt(n);
+                double eps = pick(1e-15, 1e-300, Double.MIN_VALUE, Math.ulp(1.0));
+                x[k] = 1.0 - eps;
+                x[(k + 1) % n] += eps;
+            } else if (p < 16) {
+                // inside the card's own limits: the lower limits, the rest to the first component
+                double rest = 1.0;
+                for (int k = 1; k < n; k++) {
+                    x[k] = k < card.lowestFraction.length ? card.lowestFraction[k] : 0.0;
+                    rest -= x[k];
+                }
+                x[0] = rest;
+            } else if (p < 18) {
+                // the sum off by 1e-7 (accepted) or 1e-5 (refused)
+                x[r.nextInt(n)] = 1.0 + pick(1e-7, -1e-7, 1e-5, -1e-5, 1e-6, -1e-6);
+            } else {
+                x[r.nextInt(n)] = pick(-1e-15, -0.0, 1.5, -1.0, 2.0);
+                x[r.nextInt(n)] += 1.0;
+            }
+            return x;
+        }
+
+        // --- temperatures
+
+        /** A temperature argument fitted to a composition (or amounts) argument, or a wrong shape. */
+        Object[][] temperature(Object[][] x) {
+            int p = r.nextInt(clean ? 18 : 20);
+            if (p < 15 || x.length == 0) {
+                return new Object[][] {{temperatureValue()}};
+            }
+            int rows = x.length;
+            int cols = x[0].length;
+            if (p < 18) {
+                // the composition's own shape (x1 ranges), or a column with one per line (blocks)
+                return r.nextBoolean() ? temperatureRange(rows, cols) : temperatureRange(rows, 1);
+            }
+            return temperatureRange(1 + r.nextInt(4), 1 + r.nextInt(3));
+        }
+
+        Object[][] temperatureRange(int rows, int cols) {
+            Object[][] g = new Object[rows][cols];
+            for (Object[] row : g) {
+                for (int c = 0; c < cols; c++) {
+                    row[c] = !clean && r.nextInt(10) == 0 ? "" : temperatureValue();
+                }
+            }
+            return g;
+        }
+
+        /** Inside the range, at its limits, an ulp or more beyond, at and below absolute zero, or junk. */
+        Object temperatureValue() {
+            double lo = card.lowest;
+            double hi = card.highest;
+            double zero = card.celsius() ? -273.15 : 0.0;
+            int p = r.nextInt(clean ? 24 : 40);
+            if (p < 20) {
+                return lo + (hi - lo) * r.nextDouble();
+            }
+            switch (p) {
+                case 20: case 21:
+                    return lo;
+                case 22: case 23:
+                    return hi;
+                case 24:
+                    return Math.nextDown(lo);
+                case 25:
+                    return Math.nextUp(hi);
+                case 26:
+                    return lo - 1e-9;
+                case 27:
+                    return hi + 1;
+                case 28:
+                    return hi + 1000;
+                case 29:
+                    return zero;
+                case 30:
+                    return Math.nextDown(zero);
+                case 31:
+                    return zero + 1e-9;
+                case 32:
+                    return pick(-1e300, 1e300, 1e6, -1e6);
+                case 33:
+                    return pick(Double.NaN, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY);
+                default:
+                    return r.nextInt(3) == 0 ? junk() : (Object) (lo + (hi - lo) * r.nextDouble());
+            }
+        }
+
+        // --- amounts
+
+        Object[][] amounts() {
+            int p = r.nextInt(20);
+            if (p < 16) {
+                int lines = p < 11 ? 1 : 2 + r.nextInt(4);
+                boolean column = lines == 1 && r.nextBoolean();
+                Object[][] g = column ? new Object[n][1] : new Object[lines][n];
+                for (int line = 0; line < lines; line++) {
+                    for (int k = 0; k < n; k++) {
+                        Object v = amount();
+                        if (column) {
+                            g[k][0] = v;
+                        } else {
+                            g[line][k] = v;
+                        }
+                    }
+                }
+                return g;
+            }
+            return randomShape();
+        }
+
+        Object amount() {
+            int p = r.nextInt(clean ? 23 : 30);
+            if (p < 20) {
+                return 100 * r.nextDouble();
+            }
+            switch (p) {
+                case 20: case 21: case 22:
+                    return 0.0;
+                case 23:
+                    return pick(1e300, Double.MAX_VALUE, 1e-300, Double.MIN_VALUE);
+                case 24:
+                    return -1.0;
+                default:
+                    return r.nextInt(2) == 0 ? junk() : (Object) (1 + r.nextInt(5) * 1.0);
+            }
+        }
+
+        // --- blending
+
+        /** A composition basis by one of its spellings, or (not clean) a word that is none. */
+        Object basisWord() {
+            if (!clean && r.nextInt(8) == 0) {
+                return pick("ppm", "", Any.VOID, 1.0, "mole  fraction");
+            }
+            return pick("mole fraction", "mass fraction", "volume fraction", "%vol", "mol/L", "g/L", "mol/kg", "x",
+                    "w", "phi", " % vol ", "Mass Fraction");
+        }
+
+        private boolean concentration(Object basis) {
+            String b = basis instanceof String ? ((String) basis).trim().toLowerCase(java.util.Locale.ROOT) : "";
+            return b.contains("vol") && !b.contains("fraction") || b.contains("/l") || b.contains("/kg");
+        }
+
+        /** Values on a basis: fractions as compositions; concentrations per component with the balance blank. */
+        Object[][] basisValues(Object basis) {
+            if (!concentration(basis)) {
+                return composition();
+            }
+            String b = ((String) basis).toLowerCase(java.util.Locale.ROOT);
+            double top = b.contains("vol") ? 100 : b.contains("g/l") ? 800 : b.contains("mol/l") ? 15 : 40;
+            if (n == 2 && r.nextBoolean()) {
+                return new Object[][] {{maybeJunk(top * r.nextDouble())}};
+            }
+            Object[][] g = new Object[1][n];
+            for (int k = 0; k < n; k++) {
+                g[0][k] = k == n - 1 && r.nextInt(4) > 0 ? "" : maybeJunk(top / n * r.nextDouble());
+            }
+            return g;
+        }
+
+        Object amountUnit() {
+            if (!clean && r.nextInt(8) == 0) {
+                return pick("lb", "", Any.VOID, 3.0, "KG");
+            }
+            return pick("mol", "kmol", "g", "kg", "mL", "L", "m3", "cm³", "dm3");
+        }
+
+        Object balance() {
+            return r.nextBoolean() ? Any.VOID : component();
+        }
+
+        Object temperatureOrVoid() {
+            return r.nextInt(3) == 0 ? Any.VOID : temperatureValue();
+        }
+
+        /** Storage temperatures: left out, one for all, one per component, or (not clean) the wrong count. */
+        Object storageTemperatures() {
+            int p = r.nextInt(clean ? 3 : 4);
+            if (p == 0) {
+                return Any.VOID;
+            }
+            if (p == 1) {
+                return temperatureValue();
+            }
+            int count = p == 2 ? n : n + 1;
+            Object[][] g = new Object[1][count];
+            for (int k = 0; k < count; k++) {
+                g[0][k] = temperatureValue();
+            }
+            return g;
+        }
+
+        Object quantity() {
+            int p = r.nextInt(clean ? 8 : 10);
+            return p < 8 ? (Object) (1000 * r.nextDouble()) : pick(0.0, -5.0, Double.NaN, 1e300, "ten", Any.VOID);
+        }
+
+        /** A density the card can have at t (the mixture at a random composition), or any number if it cannot. */
+        double plausibleMixtureDensity(double t) {
+            try {
+                Card c = CardReader.read(card.cells);
+                double[] x = new double[c.componentCount()];
+                x[0] = r.nextDouble();
+                x[c.componentCount() - 1] += 1 - x[0];
+                return org.miscela.core.functions.CardFunctions.density(c, x, t, org.miscela.core.card.Extrapolation.ALLOW);
+            } catch (MiscelaException e) {
+                return 500 + 1000 * r.nextDouble();
+            }
+        }
+
+        // --- fits
+
+        Object order(int usual, int highest) {
+            int p = r.nextInt(clean ? 15 : 20);
+            if (p < 15) {
+                return (double) r.nextInt(usual + 1);
+            }
+            return pick((double) highest, (double) highest + 1, -1.0, 1.5, Double.NaN, "two", Any.VOID,
+                    new Object[][] {{2.0}}, Boolean.TRUE);
+        }
+
+        Object fitResult() {
+            if (clean) {
+                return pick(Any.VOID, "coefficients", "standard errors", "statistics", "covariance", "residuals",
+                        "orders", "check");
+            }
+            return pick(Any.VOID, Any.VOID, "coefficients", "standard errors", "statistics", "covariance",
+                    "residuals", "orders", "check", " Check ", "residual", 3.0);
+        }
+
+        /** A column (usually) or row of values; blanks and junk mixed in now and then, rarely a block instead. */
+        Object[][] vector(double[] v, boolean row) {
+            if (!clean && r.nextInt(40) == 0) {
+                return randomShape();
+            }
+            Object[][] g = row ? new Object[1][v.length] : new Object[v.length][1];
+            for (int i = 0; i < v.length; i++) {
+                Object cell = !clean && r.nextInt(60) == 0 ? junk() : (Object) v[i];
+                if (row) {
+                    g[0][i] = cell;
+                } else {
+                    g[i][0] = cell;
+                }
+            }
+            return v.length == 0 ? new Object[0][] : g;
+        }
+
+        double[] fractions(int points) {
+            double[] x = new double[points];
+            for (int i = 0; i < points; i++) {
+                x[i] = r.nextInt(10) == 0 ? pick(0.0, 1.0, 1e-15, 1 - 1e-15) : r.nextDouble();
+            }
+            if (points > 0 && !clean && r.nextInt(20) == 0) {
+                x[r.nextInt(points)] = pick(-0.1, 1.1, Double.NaN);
+            }
+            return x;
+        }
+
+        Object[] fitExcess() {
+            int points = !clean && r.nextInt(20) == 0 ? 0 : 1 + r.nextInt(40);
+            double[] x = fractions(points);
+            double[] t = new double[points];
+            double[] ve = new double[points];
+            double[] w = new double[points];
+            double a0 = -5 + 10 * r.nextDouble();
+            double a1 = -2 + 4 * r.nextDouble();
+            for (int i = 0; i < points; i++) {
+                t[i] = card.lowest + (card.highest - card.lowest) * r.nextDouble();
+                double d = 2 * x[i] - 1;
+                ve[i] = x[i] * (1 - x[i]) * (a0 + a1 * d) * (1 + 0.01 * (t[i] - card.lowest))
+                        + 1e-3 * r.nextGaussian();
+                w[i] = !clean && r.nextInt(10) == 0 ? pick(0.0, -1.0, Double.NaN) : 0.5 + r.nextDouble();
+            }
+            boolean row = r.nextInt(6) == 0;
+            int lengthError = !clean && r.nextInt(15) == 0 ? 1 : 0;
+            Object temperature = r.nextBoolean() ? Any.VOID : r.nextInt(5) == 0 && points > 0 ? (Object) t[0] : vector(t, row);
+            return new Object[] {vector(x, row), vector(Arrays.copyOf(ve, points + lengthError), row), order(6, 30),
+                temperature, r.nextBoolean() ? Any.VOID : order(2, 10),
+                r.nextBoolean() ? Any.VOID : (Object) (card.lowest + r.nextDouble()),
+                r.nextInt(3) == 0 ? vector(w, row) : Any.VOID, fitResult()};
+        }
+
+        Object[] fitDensity() {
+            int points = !clean && r.nextInt(20) == 0 ? 0 : 1 + r.nextInt(40);
+            double[] x = fractions(points);
+            double[] t = new double[points];
+            double[] rho = new double[points];
+            double[] w = new double[points];
+            Card pure = null;
+            try {
+                pure = CardReader.readPureComponents(card.cells);
+            } catch (MiscelaException e) {
+                // no pure data: the densities below are plausible numbers only
+            }
+            int first = 0;
+            int second = Math.min(1, Math.max(card.componentCount() - 1, 0));
+            Object pair = Any.VOID;
+            if (card.componentCount() > 2 || r.nextInt(4) == 0) {
+                int[] p = {r.nextInt(Math.max(card.componentCount(), 1)), r.nextInt(Math.max(card.componentCount(), 1))};
+                first = p[0];
+                second = p[1];
+                pair = card.names.isEmpty() ? "a + b" : pick(card.names.get(first) + " + " + card.names.get(second),
+                        card.names.get(first) + "+" + card.names.get(second), "nobody + " + card.names.get(first),
+                        "", 1.0);
+            }
+            for (int i = 0; i < points; i++) {
+                t[i] = card.lowest + (card.highest - card.lowest) * r.nextDouble();
+                rho[i] = plausibleDensity(pure, first, second, x[i], t[i]);
+                w[i] = !clean && r.nextInt(10) == 0 ? pick(0.0, -1.0) : 0.5 + r.nextDouble();
+            }
+            boolean row = r.nextInt(6) == 0;
+            Object[][] temperatures = r.nextInt(5) == 0 && points > 0 ? new Object[][] {{t[0]}} : vector(t, row);
+            return new Object[] {pair, vector(x, row), vector(rho, row), temperatures, order(5, 30),
+                r.nextBoolean() ? Any.VOID : order(2, 10),
+                r.nextBoolean() ? Any.VOID : (Object) ((card.lowest + card.highest) / 2),
+                r.nextInt(3) == 0 ? vector(w, row) : Any.VOID, fitResult()};
+        }
+
+        /** An ideal-mixture density from the card's pure data with a small excess, in the card's unit. */
+        double plausibleDensity(Card pure, int first, int second, double x, double t) {
+            if (pure == null || first == second || first >= pure.componentCount() || second >= pure.componentCount()
+                    || !(x >= 0 && x <= 1)) {
+                return 500 + 1000 * r.nextDouble();
+            }
+            double kelvin = pure.units().temperature().toKelvin(t);
+            double v1 = pure.components().get(first).molarVolume(kelvin);
+            double v2 = pure.components().get(second).molarVolume(kelvin);
+            double m = x * pure.components().get(first).molarMass() + (1 - x) * pure.components().get(second)
+                    .molarMass();
+            double vm = x * v1 + (1 - x) * v2 - 2 * x * (1 - x) + 1e-4 * r.nextGaussian();
+            return pure.units().density().fromKgPerM3(1000 * m / vm);
+        }
+
+        Object[] leastSquares() {
+            int points = !clean && r.nextInt(20) == 0 ? 0 : 1 + r.nextInt(30);
+            int parameters = !clean && r.nextInt(20) == 0 ? 0 : 1 + r.nextInt(6);
+            Object[][] design = new Object[points][parameters];
+            double[] y = new double[points];
+            double[] w = new double[points];
+            for (int i = 0; i < points; i++) {
+                double u = r.nextDouble() * pick(1.0, 1e-8, 1e8);
+                for (int j = 0; j < parameters; j++) {
+                    design[i][j] = !clean && r.nextInt(80) == 0 ? junk() : (Object) Math.pow(u, j);
+                }
+                y[i] = 1 + 2 * u - 0.5 * u * u + 1e-6 * r.nextGaussian();
+                w[i] = r.nextInt(10) == 0 ? 0.0 : 1.0;
+            }
+            if (points > 0 && parameters > 1 && r.nextInt(10) == 0) {
+                for (Object[] row : design) {
+                    row[parameters - 1] = row[0]; // two equal columns: rank deficient
+                }
+            }
+            return new Object[] {points == 0 ? new Object[0][] : design, vector(y, false),
+                r.nextInt(3) == 0 ? vector(w, false) : Any.VOID, fitResult()};
+        }
+    }
+}

@@ -1,0 +1,256 @@
+package org.miscela.calc;
+
+import com.sun.star.lang.IllegalArgumentException;
+import com.sun.star.uno.Any;
+import net.jqwik.api.Arbitraries;
+import net.jqwik.api.Arbitrary;
+import net.jqwik.api.Combinators;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.Provide;
+import net.jqwik.api.ShrinkingMode;
+import net.jqwik.api.Tuple;
+import net.jqwik.api.lifecycle.AddLifecycleHook;
+import net.jqwik.api.lifecycle.AfterContainer;
+import org.miscela.core.problem.Catalogue;
+import org.miscela.core.card.FuzzCards;
+import org.miscela.core.card.FuzzProfile;
+import org.miscela.core.card.FuzzTally;
+
+/**
+ * Fuzzing every method of the UNO adapter in a plain JVM with generated cards ({@link FuzzCards}) and arguments
+ * ({@link FuzzCall}). The contract each call must keep:
+ *
+ * <ul>
+ *   <li>a numeric function returns a finite Double, or an array (an Any holding Object[][]) shaped like one of its
+ *       range arguments (or one row per line of a block) whose cells are finite Doubles or "" (blank inputs);
+ *       MIX.INSIDE gives only 1 and 0;</li>
+ *   <li>MIX.CHECK and MIX.CHECKPOINT never throw and return "OK" or a catalogued message;</li>
+ *   <li>MIX.TRACE returns (label, value) rows: a non-empty text label and a finite number or a text;</li>
+ *   <li>a fit returns a rectangular table of finite Doubles and Strings, or (for the "check" result) "OK" or a
+ *       catalogued message;</li>
+ *   <li>a blending function returns a finite Double or an array of finite Doubles and "" with one value per
+ *       component (a row, a column, or a row per line) or the shape of an argument; MIX.ADJUST may also return its
+ *       summary sentence;</li>
+ *   <li>anything else ends in com.sun.star.lang.IllegalArgumentException (Calc's Err:502) carrying a message of the
+ *       catalogue ({@code Problem}, {@code FitProblem} or {@code BlendProblem});</li>
+ * </ul>
+ *
+ * never another exception, never NaN or infinity, and each call within {@link FuzzTally#CALL_BOUND_NANOS}.
+ */
+class MixtureAddInFuzzProperties {
+    private static final FuzzTally TALLY = new FuzzTally("adapter");
+    private final MixtureAddIn addIn = new MixtureAddIn();
+
+    @Provide
+    Arbitrary<FuzzCall> calls() {
+        Arbitrary<FuzzCards.Kind> kinds = Arbitraries.frequency(Tuple.of(50, FuzzCards.Kind.VALID),
+                Tuple.of(15, FuzzCards.Kind.EXTREME), Tuple.of(25, FuzzCards.Kind.MUTATED),
+                Tuple.of(5, FuzzCards.Kind.SOUP), Tuple.of(5, FuzzCards.Kind.SHAPE));
+        return Combinators.combine(kinds, Arbitraries.longs(), Arbitraries.of(FuzzCall.Method.class),
+                Arbitraries.longs()).as((kind, cardSeed, method, callSeed) ->
+                FuzzCall.of(method, FuzzCards.of(kind, cardSeed), callSeed));
+    }
+
+    @Property(shrinking = ShrinkingMode.OFF)
+    @FuzzProfile.Tries(ci = 7_000, full = 700_000)
+    @AddLifecycleHook(FuzzProfile.class)
+    void everyCallKeepsTheContract(@ForAll("calls") FuzzCall call) {
+        try {
+            check(call);
+        } catch (AssertionError e) {
+            TALLY.unexpected();
+            throw e;
+        }
+    }
+
+    private void check(FuzzCall call) {
+        String target = "MixtureAddIn." + call.method;
+        long start = System.nanoTime();
+        Object result;
+        try {
+            result = call.invoke(addIn);
+        } catch (IllegalArgumentException e) {
+            long nanos = System.nanoTime() - start;
+            String entry = Catalogue.entryOf(e.getMessage());
+            if (entry == null || call.method == FuzzCall.Method.CHECK_CARD
+                    || call.method == FuzzCall.Method.CHECK_POINT) {
+                unexpected("refused with an uncatalogued message or from a check: \"" + e.getMessage() + "\"", call,
+                        e);
+            }
+            TALLY.count(target, "error " + entry, nanos, call::toString);
+            return;
+        } catch (RuntimeException | Error e) {
+            throw new AssertionError("MixtureAddIn." + call.method + " threw " + e + " for " + call, e);
+        }
+        long nanos = System.nanoTime() - start;
+        TALLY.count(target, classify(call, result), nanos, call::toString);
+    }
+
+    /** The kind of a returned value, after checking it against the method's contract. */
+    private static String classify(FuzzCall call, Object result) {
+        switch (call.method) {
+            case CHECK_CARD:
+            case CHECK_POINT:
+                return text(call, result);
+            case TRACE:
+                return trace(call, result);
+            case FIT_EXCESS:
+            case FIT_DENSITY:
+            case LEAST_SQUARES:
+                return result instanceof String ? text(call, result) : table(call, result);
+            default:
+                if (call.method.blending()) {
+                    if (call.method == FuzzCall.Method.ADJUST && result instanceof String) {
+                        if (((String) result).trim().isEmpty()) {
+                            unexpected("returned an empty summary", call, null);
+                        }
+                        return "text summary";
+                    }
+                    return blending(call, result);
+                }
+                return number(call, result);
+        }
+    }
+
+    /** A blending result: one number, or finite numbers and blanks, one per component or shaped like an argument. */
+    private static String blending(FuzzCall call, Object result) {
+        if (result instanceof Double) {
+            finite(call, (Double) result);
+            return "number";
+        }
+        Object[][] grid = grid(call, result);
+        int n = org.miscela.core.card.CardReader.read(call.cardCells()).componentCount(); // it read: the call succeeded
+        int rows = grid.length;
+        int cols = grid[0].length;
+        boolean shaped = (rows == 1 && cols == n) || (rows == n && cols == 1);
+        for (Object[][] range : call.ranges()) {
+            shaped |= rows == range.length && (cols == n || cols == 1 || cols == range[0].length);
+        }
+        if (!shaped) {
+            unexpected("returned a " + rows + "×" + cols + " array for a card of " + n + " components", call, null);
+        }
+        for (Object[] row : grid) {
+            for (Object v : row) {
+                if (v instanceof Double) {
+                    finite(call, (Double) v);
+                } else if (!"".equals(v)) {
+                    unexpected("returned the cell " + v + " in an array of numbers", call, null);
+                }
+            }
+        }
+        return "array";
+    }
+
+    private static String text(FuzzCall call, Object result) {
+        if (!(result instanceof String)) {
+            unexpected("returned " + result + " where a text belongs", call, null);
+        }
+        String s = (String) result;
+        if (s.equals("OK")) {
+            return "text OK";
+        }
+        if (Catalogue.entryOf(s) == null) {
+            unexpected("returned an uncatalogued text \"" + s + "\"", call, null);
+        }
+        return "text message";
+    }
+
+    private static String number(FuzzCall call, Object result) {
+        if (result instanceof Double) {
+            finite(call, (Double) result);
+            inside(call, (Double) result);
+            return "number";
+        }
+        Object[][] grid = grid(call, result);
+        boolean shaped = false;
+        for (Object[][] range : call.ranges()) {
+            int rows = range.length;
+            int cols = rows == 0 ? 0 : range[0].length;
+            shaped |= (grid.length == rows && grid[0].length == cols) || (grid.length == rows && grid[0].length == 1);
+        }
+        if (!shaped) {
+            unexpected("returned a " + grid.length + "×" + grid[0].length + " array, the shape of no argument", call,
+                    null);
+        }
+        for (Object[] row : grid) {
+            for (Object v : row) {
+                if (v instanceof Double) {
+                    finite(call, (Double) v);
+                    inside(call, (Double) v);
+                } else if (!"".equals(v)) {
+                    unexpected("returned the cell " + v + " in an array of numbers", call, null);
+                }
+            }
+        }
+        return "array";
+    }
+
+    private static String trace(FuzzCall call, Object result) {
+        for (Object[] row : grid(call, result)) {
+            if (row.length != 2 || !(row[0] instanceof String) || ((String) row[0]).isEmpty()) {
+                unexpected("returned a trace row that is not (label, value): " + java.util.Arrays.toString(row), call,
+                        null);
+            }
+            cell(call, row[1]);
+        }
+        return "array";
+    }
+
+    private static String table(FuzzCall call, Object result) {
+        for (Object[] row : grid(call, result)) {
+            for (Object v : row) {
+                cell(call, v);
+            }
+        }
+        return "array";
+    }
+
+    private static void cell(FuzzCall call, Object v) {
+        if (v instanceof Double) {
+            finite(call, (Double) v);
+        } else if (!(v instanceof String)) {
+            unexpected("returned the cell " + v + " (" + (v == null ? "null" : v.getClass().getName()) + ")", call,
+                    null);
+        }
+    }
+
+    /** The array inside an Any result: rectangular, at least 1×1. */
+    private static Object[][] grid(FuzzCall call, Object result) {
+        Object inner = result instanceof Any ? ((Any) result).getObject() : null;
+        if (!(inner instanceof Object[][])) {
+            unexpected("returned " + result + ", neither a number nor an array", call, null);
+        }
+        Object[][] g = (Object[][]) inner;
+        if (g.length == 0 || g[0] == null || g[0].length == 0) {
+            unexpected("returned an empty array", call, null);
+        }
+        for (Object[] row : g) {
+            if (row == null || row.length != g[0].length) {
+                unexpected("returned a ragged array", call, null);
+            }
+        }
+        return g;
+    }
+
+    private static void finite(FuzzCall call, double v) {
+        if (!Double.isFinite(v)) {
+            unexpected("returned " + v, call, null);
+        }
+    }
+
+    private static void inside(FuzzCall call, double v) {
+        if (call.method == FuzzCall.Method.INSIDE && v != 0.0 && v != 1.0) {
+            unexpected("MIX.INSIDE returned " + v, call, null);
+        }
+    }
+
+    private static void unexpected(String what, FuzzCall call, Throwable cause) {
+        throw new AssertionError("MixtureAddIn." + call.method + " " + what + " for " + call, cause);
+    }
+
+    @AfterContainer
+    static void report() {
+        TALLY.write();
+    }
+}

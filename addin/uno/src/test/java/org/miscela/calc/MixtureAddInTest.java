@@ -1,0 +1,268 @@
+package org.miscela.calc;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.sun.star.lang.IllegalArgumentException;
+import com.sun.star.uno.Any;
+import org.junit.jupiter.api.Test;
+import org.miscela.core.catalog.FunctionCatalog;
+import org.miscela.core.functions.CardFunctions;
+import org.miscela.core.card.Extrapolation;
+import org.miscela.core.card.TestCards;
+
+/** The UNO adapter in a plain JVM: argument decoding, array results, blanks and error mapping. */
+class MixtureAddInTest {
+    private static final Object[][] CARD = TestCards.cells("ethanol-water-oiml.tsv");
+    private final MixtureAddIn addIn = new MixtureAddIn();
+
+    private static Object[][] one(Object v) {
+        return new Object[][] {{v}};
+    }
+
+    @Test
+    void scalarArgumentsGiveOneNumber() throws Exception {
+        Object r = addIn.mixtureDensity(CARD, one(0.3), one(20.0), Any.VOID);
+        double expected = CardFunctions.density(TestCards.card("ethanol-water-oiml.tsv"), 0.3, 20,
+                Extrapolation.AS_CARD);
+        assertEquals(expected, (Double) r, 0.0);
+    }
+
+    @Test
+    void aColumnGivesAColumnAndBlanksStayBlank() throws Exception {
+        Object[][] xs = {{0.1}, {""}, {0.5}};
+        Object r = addIn.excessMolarVolume(CARD, xs, one(20.0), Any.VOID);
+        Object[][] grid = (Object[][]) ((Any) r).getObject();
+        assertEquals(3, grid.length);
+        assertTrue(grid[0][0] instanceof Double);
+        assertEquals("", grid[1][0]);
+        assertEquals((Double) addIn.excessMolarVolume(CARD, one(0.5), one(20.0), Any.VOID), (Double) grid[2][0], 0.0);
+    }
+
+    @Test
+    void temperatureColumnPairsWithCompositionColumn() throws Exception {
+        Object[][] xs = {{0.2}, {0.2}};
+        Object[][] ts = {{10.0}, {30.0}};
+        Object[][] grid = (Object[][]) ((Any) addIn.mixtureDensity(CARD, xs, ts, Any.VOID)).getObject();
+        assertTrue((Double) grid[0][0] > (Double) grid[1][0], "density falls with temperature");
+    }
+
+    @Test
+    void mismatchedShapesAreRefused() {
+        Object[][] xs = {{0.2}, {0.3}};
+        Object[][] ts = {{10.0}, {20.0}, {30.0}};
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> addIn.mixtureDensity(CARD, xs, ts, Any.VOID));
+        assertTrue(e.getMessage().contains("same shape"), e.getMessage());
+    }
+
+    @Test
+    void componentByNumberOrName() throws Exception {
+        Object byNumber = addIn.partialMolarVolume(CARD, 2.0, one(0.4), one(25.0), Any.VOID);
+        Object byName = addIn.partialMolarVolume(CARD, "Water", one(0.4), one(25.0), Any.VOID);
+        assertEquals((Double) byNumber, (Double) byName, 0.0);
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> addIn.partialMolarVolume(CARD, 3.0, one(0.4), one(25.0), Any.VOID));
+        assertTrue(e.getMessage().contains("ethanol, water"), e.getMessage());
+    }
+
+    @Test
+    void outsideTheValidityRangeIsRefusedUnlessAllowed() throws Exception {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> addIn.mixtureDensity(CARD, one(0.4), one(45.0), Any.VOID));
+        assertTrue(e.getMessage().contains("0 to 40 °C"), e.getMessage());
+        assertTrue((Double) addIn.mixtureDensity(CARD, one(0.4), one(45.0), Boolean.TRUE) > 0);
+        assertTrue(addIn.checkPoint(CARD, one(0.4), one(45.0), Any.VOID).contains("outside"));
+        assertEquals("OK", addIn.checkPoint(CARD, one(0.4), one(45.0), 1.0));
+    }
+
+    @Test
+    void textWhereANumberBelongs() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> addIn.mixtureDensity(CARD, one("abc"), one(20.0), Any.VOID));
+        assertTrue(e.getMessage().contains("mole fraction"), e.getMessage());
+    }
+
+    @Test
+    void infoReportsTheBuildVersionAndCountsEachDistinctCardOnce() throws Exception {
+        // the build passes its own version (the pom's) to the tests: MIX.INFO must report that one
+        assertEquals(System.getProperty("miscela.version"), addIn.addInInfo(null));
+        assertEquals(FunctionCatalog.VERSION, addIn.addInInfo(" Version "));
+        Object[][] fresh = TestCards.cells("ethanol-water-oiml.tsv");
+        fresh[1] = new Object[] {"title", "a title no other test uses " + System.nanoTime()};
+        double before = (Double) addIn.addInInfo("card reads");
+        for (int i = 0; i < 50; i++) {
+            addIn.mixtureDensity(fresh, one(0.3), one(20.0), null);
+        }
+        assertEquals(before + 1, (Double) addIn.addInInfo("card reads"), "fifty calls on one new card parse it once");
+        assertTrue((Double) addIn.addInInfo("cards kept") >= 1);
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> addIn.addInInfo("colour"));
+        assertEquals("The item \"colour\" is not recognised; use one of: version, card reads, cards kept.",
+                e.getMessage());
+        assertThrows(IllegalArgumentException.class, () -> addIn.addInInfo(3.0));
+    }
+
+    @Test
+    void checkCardReportsTheFirstProblem() {
+        assertEquals("OK", addIn.checkCard(CARD));
+        Object[][] broken = CARD.clone();
+        broken[3] = new Object[] {"temperature unit", "°F"};
+        String message = addIn.checkCard(broken);
+        assertTrue(message.startsWith("Card row 4 (temperature unit)"), message);
+        assertThrows(IllegalArgumentException.class, () -> addIn.mixtureDensity(broken, one(0.4), one(20.0),
+                Any.VOID));
+    }
+
+    // --- compositions of any size (ternary test card, invented values)
+
+    private static final Object[][] TERNARY = TestCards.cells("ternary-invented.tsv");
+    private static final org.miscela.core.card.Card TERNARY_CARD = TestCards.card("ternary-invented.tsv");
+    private static final double[] X = {0.2, 0.5, 0.3};
+
+    private static double core(double[] x, double t) {
+        return CardFunctions.density(TERNARY_CARD, x, t, Extrapolation.AS_CARD);
+    }
+
+    @Test
+    void aRowOrAColumnIsOneComposition() throws Exception {
+        Object row = addIn.mixtureDensity(TERNARY, new Object[][] {{0.2, 0.5, 0.3}}, one(20.0), Any.VOID);
+        Object column = addIn.mixtureDensity(TERNARY, new Object[][] {{0.2}, {0.5}, {0.3}}, one(20.0), Any.VOID);
+        assertEquals(core(X, 20), (Double) row, 0.0);
+        assertEquals(core(X, 20), (Double) column, 0.0);
+    }
+
+    @Test
+    void aBlockGivesAColumnWithBlankLinesBlank() throws Exception {
+        Object[][] block = {{0.2, 0.5, 0.3}, {"", "", ""}, {0.1, 0.1, 0.8}, {0.3, 0.3, 0.4}};
+        Object[][] ts = {{20.0}, {20.0}, {25.0}, {""}};
+        Object[][] grid = (Object[][]) ((Any) addIn.mixtureDensity(TERNARY, block, ts, Boolean.TRUE)).getObject();
+        assertEquals(4, grid.length);
+        assertEquals(1, grid[0].length);
+        assertEquals(core(X, 20), (Double) grid[0][0], 0.0);
+        assertEquals("", grid[1][0]);
+        assertEquals(CardFunctions.density(TERNARY_CARD, new double[] {0.1, 0.1, 0.8}, 25, Extrapolation.ALLOW),
+                (Double) grid[2][0], 0.0);
+        assertEquals("", grid[3][0], "a blank temperature gives a blank result");
+    }
+
+    @Test
+    void aPartlyBlankLineIsRefusedWithItsName() {
+        Object[][] block = {{0.2, 0.5, 0.3}, {0.2, "", 0.8}};
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> addIn.mixtureDensity(TERNARY, block, one(20.0), Any.VOID));
+        assertTrue(e.getMessage().contains("composition of Q in line 2"), e.getMessage());
+    }
+
+    @Test
+    void shapesThatFitNoCompositionAreRefused() {
+        IllegalArgumentException single = assertThrows(IllegalArgumentException.class,
+                () -> addIn.mixtureDensity(TERNARY, one(0.3), one(20.0), Any.VOID));
+        assertTrue(single.getMessage().contains("this card has 3"), single.getMessage());
+        IllegalArgumentException wide = assertThrows(IllegalArgumentException.class,
+                () -> addIn.mixtureDensity(TERNARY, new Object[][] {{0.2, 0.5}, {0.3, 0.1}}, one(20.0), Any.VOID));
+        assertTrue(wide.getMessage().contains("2×2"), wide.getMessage());
+        IllegalArgumentException sum = assertThrows(IllegalArgumentException.class,
+                () -> addIn.mixtureDensity(TERNARY, new Object[][] {{0.2, 0.5, 0.2}}, one(20.0), Any.VOID));
+        assertTrue(sum.getMessage().contains("sum to 0.9"), sum.getMessage());
+        IllegalArgumentException temperatures = assertThrows(IllegalArgumentException.class,
+                () -> addIn.mixtureDensity(TERNARY, new Object[][] {{0.2, 0.5, 0.3}, {0.2, 0.5, 0.3}},
+                        new Object[][] {{20.0, 25.0}}, Any.VOID));
+        assertTrue(temperatures.getMessage().contains("temperature"), temperatures.getMessage());
+    }
+
+    /** For a binary card a two-column block holds compositions, anything else x1 values. */
+    @Test
+    void binaryCardsTakeX1OrTwoColumnBlocks() throws Exception {
+        Object[][] block = {{0.3, 0.7}, {0.6, 0.4}};
+        Object[][] grid = (Object[][]) ((Any) addIn.mixtureDensity(CARD, block, one(20.0), Any.VOID)).getObject();
+        assertEquals(2, grid.length);
+        assertEquals((Double) addIn.mixtureDensity(CARD, one(0.6), one(20.0), Any.VOID), (Double) grid[1][0], 0.0);
+        Object[][] x1 = {{0.3, 0.6, 0.9}};
+        Object[][] row = (Object[][]) ((Any) addIn.mixtureDensity(CARD, x1, one(20.0), Any.VOID)).getObject();
+        assertEquals(3, row[0].length, "a row of three x1 values gives a row of three results");
+    }
+
+    @Test
+    void heatFunctionsTakeAmountsAndABasis() throws Exception {
+        Object[][] batch = {{2.0, 5.0, 1.0}};
+        double mol = (Double) addIn.mixingHeat(TERNARY, batch, one(25.0), Any.VOID, Any.VOID);
+        double kmol = (Double) addIn.mixingHeat(TERNARY, batch, one(25.0), "kmol", Any.VOID);
+        assertEquals(mol * 1000, kmol, 1e-9 * Math.abs(kmol));
+        assertEquals(CardFunctions.mixingHeat(TERNARY_CARD, new double[] {2, 5, 1}, org.miscela.core.functions.AmountBasis.MOL,
+                25, Extrapolation.AS_CARD), mol, 0.0);
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> addIn.mixingHeat(TERNARY, batch, one(25.0), "lb", Any.VOID));
+        assertTrue(e.getMessage().contains("mol, kmol, g, kg"), e.getMessage());
+        double added = (Double) addIn.additionHeat(TERNARY, batch, "Q", 1.0, one(25.0), Any.VOID, Any.VOID);
+        double direct = CardFunctions.mixingHeat(TERNARY_CARD, new double[] {2, 6, 1},
+                org.miscela.core.functions.AmountBasis.MOL, 25, Extrapolation.AS_CARD) - mol;
+        assertEquals(direct, added, 1e-9 * Math.abs(direct));
+        double rise = (Double) addIn.adiabaticRise(TERNARY, batch, one(25.0), Any.VOID, Any.VOID);
+        assertTrue(rise > 0, "exothermic mixing warms the batch");
+    }
+
+    @Test
+    void insideAndTrace() throws Exception {
+        assertEquals(1.0, (Double) addIn.insideValidity(TERNARY, new Object[][] {{0.2, 0.5, 0.3}}, one(20.0)));
+        Object[][] block = {{0.2, 0.5, 0.3}, {0.1, 0.3, 0.6}};
+        Object[][] inside = (Object[][]) ((Any) addIn.insideValidity(TERNARY, block, one(20.0))).getObject();
+        assertEquals(0.0, (Double) inside[1][0], "R above its 0.5 limit");
+        Object[][] trace = (Object[][]) ((Any) addIn.traceEvaluation(TERNARY, new Object[][] {{0.2, 0.5, 0.3}},
+                one(20.0), Any.VOID, Any.VOID)).getObject();
+        assertEquals("card", trace[0][0]);
+        boolean found = false;
+        for (Object[] r : trace) {
+            if ("mixture density [kg/m³]".equals(r[0])) {
+                assertEquals(core(X, 20), (Double) r[1], 0.0);
+                found = true;
+            }
+        }
+        assertTrue(found);
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> addIn.traceEvaluation(TERNARY, new Object[][] {{0.2, 0.5, 0.3}}, one(20.0), "viscosity",
+                        Any.VOID));
+        assertTrue(e.getMessage().contains("volume, enthalpy"), e.getMessage());
+    }
+
+    /** A fit whose order is left out says so (it used to say "found -1", a number nobody wrote). */
+    @Test
+    void aFitWithoutItsOrderSaysTheOrderIsBlank() throws Exception {
+        Object[][] x = {{0.2}, {0.4}, {0.6}, {0.8}};
+        Object[][] v = {{-0.736}, {-1.008}, {-0.912}, {-0.544}};
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> addIn.fitExcessVolume(x, v, Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+        assertEquals("The order is blank.", e.getMessage());
+        assertEquals("The order is blank.", addIn.fitExcessVolume(x, v, Any.VOID, Any.VOID, Any.VOID, Any.VOID,
+                Any.VOID, "check"));
+        IllegalArgumentException d = assertThrows(IllegalArgumentException.class, () -> addIn.fitDensity(CARD,
+                Any.VOID, x, new Object[][] {{960.0}, {930.0}, {890.0}, {850.0}}, one(20.0), Any.VOID, Any.VOID,
+                Any.VOID, Any.VOID, Any.VOID));
+        assertEquals("The order is blank.", d.getMessage());
+        Object ok = addIn.fitExcessVolume(x, v, 1.0, Any.VOID, Any.VOID, Any.VOID, Any.VOID, "check");
+        assertEquals("OK", ((Object[][]) ((Any) ok).getObject())[0][0], "with the order given");
+    }
+
+    /** Numbers a message quotes from an argument are written as a person writes them ("31", not "31.0"). */
+    @Test
+    void messagesQuoteNumbersAsWritten() {
+        Object[][] x = {{0.2}, {0.4}, {0.6}, {0.8}};
+        Object[][] v = {{-0.736}, {-1.008}, {-0.912}, {-0.544}};
+        IllegalArgumentException order = assertThrows(IllegalArgumentException.class,
+                () -> addIn.fitExcessVolume(x, v, 31.0, Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+        assertEquals("The order must be a whole number from 0 to 30; found 31.", order.getMessage());
+        IllegalArgumentException unit = assertThrows(IllegalArgumentException.class, () -> addIn.batchTotals(CARD,
+                new Object[][] {{50.0, 50.0}}, 5.0, one(20.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+        assertEquals("The unit must be text; found 5.", unit.getMessage());
+    }
+
+    /** A batch that would cool below absolute zero: the range searched is named from 0 K (it said "-0.85 K"). */
+    @Test
+    void aTemperatureRiseWithNoRootNamesNoNegativeKelvin() {
+        Object[][] endothermic = TestCards.cells("invented-endothermic.tsv");
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> addIn.adiabaticRise(
+                endothermic, new Object[][] {{1.0, 1.0}}, one(-272.0), Any.VOID, Boolean.TRUE));
+        assertEquals("No temperature between 0 and 1.15 K balances the heat of mixing; the card's heat capacities or "
+                + "excess enthalpy are not physical there.", e.getMessage());
+    }
+}

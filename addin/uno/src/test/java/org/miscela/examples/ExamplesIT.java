@@ -1,0 +1,563 @@
+package org.miscela.examples;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.miscela.examples.TernaryWorkbookBuilder.ADDITION_HEAT_ROW;
+import static org.miscela.examples.TernaryWorkbookBuilder.AUDIT_PASS_ROW;
+import static org.miscela.examples.TernaryWorkbookBuilder.AUDIT_RESIDUAL_ROW;
+import static org.miscela.examples.TernaryWorkbookBuilder.AUDIT_TEMPERATURE_ROW;
+import static org.miscela.examples.TernaryWorkbookBuilder.AUDIT_TOLERANCE;
+import static org.miscela.examples.TernaryWorkbookBuilder.AUDIT_X_ROW;
+import static org.miscela.examples.TernaryWorkbookBuilder.BATCH_DENSITY_ROW;
+import static org.miscela.examples.TernaryWorkbookBuilder.BATCH_TEMPERATURE_ROW;
+import static org.miscela.examples.TernaryWorkbookBuilder.GRID_DENSITY;
+import static org.miscela.examples.TernaryWorkbookBuilder.GRID_EXCESS;
+import static org.miscela.examples.TernaryWorkbookBuilder.GRID_FIRST;
+import static org.miscela.examples.TernaryWorkbookBuilder.GRID_INSIDE;
+import static org.miscela.examples.TernaryWorkbookBuilder.GRID_PARTIAL;
+import static org.miscela.examples.TernaryWorkbookBuilder.GRID_ROWS;
+import static org.miscela.examples.TernaryWorkbookBuilder.GRID_X;
+import static org.miscela.examples.TernaryWorkbookBuilder.MIXING_HEAT_ROW;
+import static org.miscela.examples.TernaryWorkbookBuilder.PARTIAL_FIRST;
+import static org.miscela.examples.TernaryWorkbookBuilder.PARTIAL_ROWS;
+import static org.miscela.examples.TernaryWorkbookBuilder.RECIPE_FIRST;
+import static org.miscela.examples.TernaryWorkbookBuilder.RISE_ROW;
+import static org.miscela.examples.TernaryWorkbookBuilder.TOP_UP_ROW;
+import static org.miscela.examples.TernaryWorkbookBuilder.TRACE_TOP;
+
+import com.sun.star.beans.XPropertySet;
+import com.sun.star.container.XNameAccess;
+import com.sun.star.lang.XComponent;
+import com.sun.star.sheet.FormulaResult;
+import com.sun.star.sheet.XCalculatable;
+import com.sun.star.sheet.XCellRangeData;
+import com.sun.star.sheet.XCellRangeReferrer;
+import com.sun.star.sheet.XSpreadsheet;
+import com.sun.star.sheet.XSpreadsheetDocument;
+import com.sun.star.table.XCell;
+import com.sun.star.table.XTableChartsSupplier;
+import com.sun.star.text.XText;
+import com.sun.star.uno.UnoRuntime;
+import com.sun.star.util.XCloseable;
+import java.nio.file.DirectoryStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.Paths;
+import java.util.ArrayList;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.miscela.core.functions.AmountBasis;
+import org.miscela.core.card.Card;
+import org.miscela.core.functions.CardFunctions;
+import org.miscela.core.card.CardReader;
+import org.miscela.core.card.Extrapolation;
+import org.miscela.core.functions.FitFunctions;
+import org.miscela.core.functions.FitOutput;
+import org.miscela.core.functions.PropertyKind;
+import org.miscela.core.blend.BlendFunctions;
+import org.miscela.core.blend.CompositionBasis;
+import org.miscela.it.Office;
+import org.miscela.it.OfficeParameterResolver;
+import org.miscela.reference.Oiml22;
+
+/**
+ * The bundled example workbooks recalculate in the real office with no error cell and every check cell "OK"; the
+ * ternary, quote, make-up and lab-fit workbooks' numbers are the core library's, computed here in the JVM from the
+ * card and the inputs read off their sheets, and a few are checked against the OIML R 22 formula itself.
+ */
+@ExtendWith(OfficeParameterResolver.class)
+class ExamplesIT {
+    /** Both sides run the same core code on the same inputs: anything but rounding noise is a wiring fault. */
+    private static final double RELATIVE = 1e-12;
+
+    @Test
+    void everyExampleRecalculatesCleanly(Office office) throws Exception {
+        Path root = ExampleWorkbooks.repoRoot();
+        List<Path> workbooks = new ArrayList<>();
+        try (DirectoryStream<Path> ds = Files.newDirectoryStream(root.resolve("examples"), "*.ods")) {
+            ds.forEach(workbooks::add);
+        }
+        assertFalse(workbooks.isEmpty(), "no example workbooks");
+        List<String> names = new ArrayList<>();
+        workbooks.forEach(w -> names.add(w.getFileName().toString()));
+        for (String expected : ExampleRunner.EXPECTED) {
+            assertTrue(names.contains(expected), "the main job recalculates " + expected + ", found only " + names);
+        }
+        Path out = Files.createDirectories(Paths.get("target/examples-out"));
+        for (Path wb : workbooks) {
+            assertEquals(0, ExampleRunner.run(office, wb, out), wb.getFileName() + " has problem cells");
+        }
+    }
+
+    @Test
+    void ternaryGridAndBatchAreTheCoreLibrarysNumbers(Office office) throws Exception {
+        XComponent doc = openTernary(office);
+        try {
+            Card card = CardReader.read(namedRange(doc, "card"));
+            assertEquals(3, card.componentCount());
+
+            XSpreadsheet grid = sheet(doc, "Grid");
+            double t = grid.getCellRangeByName(TernaryWorkbookBuilder.GRID_TEMPERATURE_CELL).getCellByPosition(0, 0)
+                    .getValue();
+            assertEquals(sheet(doc, "Overview").getCellByPosition(1, TernaryWorkbookBuilder.OVERVIEW_TEMPERATURE_ROW)
+                    .getValue(), t, 0.0, "the grid takes the Overview's temperature");
+            int inside = 0;
+            for (int i = 0; i < GRID_ROWS; i++) {
+                int r = GRID_FIRST + i;
+                double[] x = row(grid, GRID_X, r, 3);
+                assertEquals(1.0, x[0] + x[1] + x[2], 1e-12, "grid row " + (r + 1) + " sums to 1");
+                assertClose(CardFunctions.density(card, x, t, Extrapolation.ALLOW), value(grid, GRID_DENSITY, r),
+                        "density, grid row " + (r + 1));
+                assertClose(CardFunctions.excessMolarVolume(card, x, t, Extrapolation.ALLOW),
+                        value(grid, GRID_EXCESS, r), "excess volume, grid row " + (r + 1));
+                double in = CardFunctions.inside(card, x, t);
+                assertEquals(in, value(grid, GRID_INSIDE, r), 0.0, "MIX.INSIDE, grid row " + (r + 1));
+                inside += (int) in;
+            }
+            // the grid is meant to show both sides of the card's limits
+            assertTrue(inside > 0 && inside < GRID_ROWS, inside + " of " + GRID_ROWS + " points inside");
+            for (int i = 0; i < PARTIAL_ROWS; i++) {
+                int r = PARTIAL_FIRST + i;
+                double[] x = row(grid, GRID_X, r, 3);
+                assertEquals(0.1, x[2], 1e-15, "the partial volumes run along x(glycerol) = 0.1");
+                for (int k = 0; k < 3; k++) {
+                    assertClose(CardFunctions.partialMolarVolume(card, k, x, t, Extrapolation.AS_CARD),
+                            value(grid, GRID_PARTIAL + k, r), "partial molar volume " + (k + 1) + ", grid row "
+                            + (r + 1));
+                }
+            }
+
+            XSpreadsheet batch = sheet(doc, "Batch");
+            double start = value(batch, 1, BATCH_TEMPERATURE_ROW);
+            double[] kg = column(batch, 1, RECIPE_FIRST, 3);
+            double[] x = column(batch, 4, RECIPE_FIRST, 3);
+            double added = value(batch, 1, TOP_UP_ROW);
+            double heat = CardFunctions.mixingHeat(card, kg, AmountBasis.KG, start, Extrapolation.AS_CARD);
+            assertTrue(heat < 0, "mixing releases heat on this card: " + heat);
+            assertClose(heat, value(batch, 1, MIXING_HEAT_ROW), "MIX.MIXINGHEAT in kJ");
+            double rise = CardFunctions.adiabaticRise(card, kg, AmountBasis.KG, start, Extrapolation.AS_CARD);
+            assertTrue(rise > 0, "released heat warms the batch: " + rise);
+            assertClose(rise, value(batch, 1, RISE_ROW), "MIX.TEMPERATURERISE in K");
+            assertClose(CardFunctions.additionHeat(card, kg, 1, added, AmountBasis.KG, start, Extrapolation.AS_CARD),
+                    value(batch, 1, ADDITION_HEAT_ROW), "MIX.ADDITIONHEAT of the water top-up in kJ");
+            assertClose(CardFunctions.density(card, x, start, Extrapolation.AS_CARD),
+                    value(batch, 1, BATCH_DENSITY_ROW), "density of the batch");
+
+            Object charts = UnoRuntime.queryInterface(XTableChartsSupplier.class, sheet(doc, "Overview")).getCharts();
+            assertTrue(UnoRuntime.queryInterface(XNameAccess.class, charts).hasByName(
+                    TernaryWorkbookBuilder.CHART_NAME), "the triangle chart is on the Overview");
+        } finally {
+            close(doc);
+        }
+    }
+
+    @Test
+    void ternaryAuditRederivesTheTraceAndCatchesADifference(Office office) throws Exception {
+        XComponent doc = openTernary(office);
+        try {
+            Card card = CardReader.read(namedRange(doc, "card"));
+            XSpreadsheet audit = sheet(doc, "Audit");
+            double[] x = column(audit, 1, AUDIT_X_ROW, 3);
+            double t = value(audit, 1, AUDIT_TEMPERATURE_ROW);
+            Object[][] trace = CardFunctions.trace(card, x, t, PropertyKind.VOLUME, Extrapolation.AS_CARD);
+            for (int i = 0; i < trace.length; i++) {
+                XCell label = audit.getCellByPosition(0, TRACE_TOP + i);
+                assertEquals(trace[i][0], text(label), "trace label in row " + (TRACE_TOP + i + 1));
+                XCell v = audit.getCellByPosition(1, TRACE_TOP + i);
+                if (trace[i][1] instanceof Double) {
+                    assertEquals((Double) trace[i][1], v.getValue(), 0.0, trace[i][0] + "");
+                } else {
+                    assertEquals(trace[i][1], text(v), trace[i][0] + "");
+                }
+            }
+            assertPasses(audit, "at the shipped composition");
+
+            // another composition and temperature inside the card's limits
+            double[] other = {0.2, 0.5, 0.3};
+            for (int k = 0; k < 3; k++) {
+                audit.getCellByPosition(1, AUDIT_X_ROW + k).setValue(other[k]);
+            }
+            audit.getCellByPosition(1, AUDIT_TEMPERATURE_ROW).setValue(8.0);
+            recalculate(doc);
+            assertPasses(audit, "at (0.2, 0.5, 0.3) and 8 °C");
+
+            // the pass cell must notice a hand value that is off by one part in a billion
+            int waterDensity = handRow(audit, "pure density: water [kg/m³]");
+            XCell hand = audit.getCellByPosition(4, waterDensity);
+            hand.setValue(hand.getValue() * (1 + 1e-9));
+            recalculate(doc);
+            assertEquals(0.0, audit.getCellByPosition(1, AUDIT_PASS_ROW).getValue(), "pass cell after the change");
+            assertTrue(audit.getCellByPosition(1, AUDIT_RESIDUAL_ROW).getValue() > 0.9e-9,
+                    "the largest residual shows the change");
+        } finally {
+            close(doc);
+        }
+    }
+
+    /** Tolerance of the reference card against the OIML R 22 formula (EthanolWaterCardTest), kg/m³. */
+    private static final double OIML_DENSITY = 0.011;
+
+    @Test
+    void quoteIsTheCoreLibrarysAndOimlsNumbers(Office office) throws Exception {
+        XComponent doc = open(office, QuoteWorkbookBuilder.FILE);
+        try {
+            Card card = CardReader.read(namedRange(doc, "card"));
+            XSpreadsheet q = sheet(doc, "Quote");
+            double volume = value(q, 1, QuoteWorkbookBuilder.VOLUME_ROW);
+            double strength = value(q, 1, QuoteWorkbookBuilder.STRENGTH_ROW);
+            double basisT = value(q, 1, QuoteWorkbookBuilder.BASIS_T_ROW);
+            double deliveryT = value(q, 1, QuoteWorkbookBuilder.DELIVERY_T_ROW);
+            double referenceT = value(q, 1, QuoteWorkbookBuilder.REFERENCE_T_ROW);
+            assertEquals(20.0, basisT, 0.0, "the shipped quote states its strength at 20 °C, as OIML R 22 does");
+            CompositionBasis pv = BlendFunctions.basis(card, "%vol", basisT, BlendFunctions.DEFAULT_BALANCE);
+            double[] ordered = BlendFunctions.binary(card, strength, pv);
+            Extrapolation e = Extrapolation.AS_CARD;
+
+            double factor = BlendFunctions.volumeCorrection(card, ordered, pv, deliveryT, referenceT, null, e);
+            assertClose(factor, value(q, 1, QuoteWorkbookBuilder.FACTOR_ROW), "MIX.VOLUMEFACTOR");
+            assertClose(volume * factor, value(q, 1, QuoteWorkbookBuilder.REFERENCE_VOLUME_ROW),
+                    "volume at the reference temperature");
+            double basisVolume = volume * BlendFunctions.volumeCorrection(card, ordered, pv, deliveryT, basisT, null,
+                    e);
+            assertClose(basisVolume, value(q, 1, QuoteWorkbookBuilder.BASIS_VOLUME_ROW), "volume for the recipe");
+            double[] kg = BlendFunctions.recipe(card, basisVolume, "L", basisT, ordered, pv, null, "kg", e);
+            double[] sheetKg = row(q, 1, QuoteWorkbookBuilder.MASS_ROW, 2);
+            double[] tanks = row(q, 1, QuoteWorkbookBuilder.TANK_T_ROW, 2);
+            double[] drawn = BlendFunctions.recipe(card, basisVolume, "L", basisT, ordered, pv, tanks, "L", e);
+            double[] sheetDrawn = row(q, 1, QuoteWorkbookBuilder.DRAW_ROW, 2);
+            for (int k = 0; k < 2; k++) {
+                assertClose(kg[k], sheetKg[k], "MIX.RECIPE mass of component " + (k + 1));
+                assertClose(drawn[k], sheetDrawn[k], "MIX.RECIPE volume drawn of component " + (k + 1));
+            }
+            assertTrue(tanks[0] != tanks[1], "the example's tanks are at different temperatures");
+            assertTrue(sheetDrawn[0] + sheetDrawn[1] > volume, "the tank volumes exceed the blend: contraction");
+            assertClose(BlendFunctions.batch(card, kg, "kg", null, basisT, "contraction", "L", e),
+                    value(q, 1, QuoteWorkbookBuilder.CONTRACTION_ROW), "MIX.BATCH contraction");
+            assertClose(BlendFunctions.batch(card, kg, "kg", null, basisT, "contraction %", null, e),
+                    value(q, 1, QuoteWorkbookBuilder.CONTRACTION_PERCENT_ROW), "MIX.BATCH contraction %");
+            assertEquals(volume, value(q, 1, QuoteWorkbookBuilder.DELIVERY_CHECK_ROW), 1e-9 * volume,
+                    "the masses make the ordered volume at the delivery temperature");
+
+            // the OIML R 22 formula itself: strength 100·p·ρ(p, 20)/ρ(1, 20) of the recipe's mass fraction, and the
+            // volume factor ρ(p, t)/ρ(p, t_ref); the card follows the formula within 0.011 kg/m³, which allows
+            // about 0.0005 %vol here and 2.3e-5 in a ratio of two densities
+            double p = sheetKg[0] / (sheetKg[0] + sheetKg[1]);
+            assertEquals(strength, 100 * p * Oiml22.density(p, 20) / Oiml22.density(1, 20), 0.002,
+                    "strength of the recipe by the OIML R 22 formula");
+            assertEquals(Oiml22.density(p, deliveryT) / Oiml22.density(p, referenceT), factor, 3e-5,
+                    "volume factor by the OIML R 22 formula");
+            double[] w = BlendFunctions.convert(card, ordered, pv, CompositionBasis.massFraction(), e);
+            assertClose(w[0], value(q, 7, QuoteWorkbookBuilder.MASS_FRACTION_ROW), "MIX.CONVERT mass fraction");
+            assertEquals(p, w[0], 1e-9, "the recipe has the ordered composition");
+
+            double[] price = row(q, 1, QuoteWorkbookBuilder.PRICE_ROW, 2);
+            double quote = (kg[0] * price[0] + kg[1] * price[1]
+                    + value(q, 1, QuoteWorkbookBuilder.CHARGE_RATE_ROW) * volume)
+                    * (1 + value(q, 1, QuoteWorkbookBuilder.MARGIN_ROW));
+            assertClose(quote, value(q, 1, QuoteWorkbookBuilder.QUOTE_ROW), "quoted price");
+        } finally {
+            close(doc);
+        }
+    }
+
+    @Test
+    void makeUpIsTheCoreLibrarysNumbers(Office office) throws Exception {
+        XComponent doc = open(office, PlantWorkbookBuilder.FILE);
+        try {
+            Card card = CardReader.read(namedRange(doc, "card"));
+            XSpreadsheet m = sheet(doc, "Make-up");
+            Extrapolation e = Extrapolation.AS_CARD;
+            double tank = value(m, 1, PlantWorkbookBuilder.TANK_T_ROW);
+            double working = value(m, 1, PlantWorkbookBuilder.WORKING_ROW);
+            double basisT = value(m, 1, PlantWorkbookBuilder.BASIS_T_ROW);
+            double rho = value(m, 1, PlantWorkbookBuilder.DENSITY_ROW);
+            double sampleT = value(m, 1, PlantWorkbookBuilder.SAMPLE_T_ROW);
+            double[] record = row(m, 1, PlantWorkbookBuilder.RECORD_ROW, 2);
+            CompositionBasis w = CompositionBasis.massFraction();
+            CompositionBasis pv = BlendFunctions.basis(card, "%vol", basisT, BlendFunctions.DEFAULT_BALANCE);
+
+            double labW = BlendFunctions.fromDensity(card, rho, sampleT, 0, null, Double.NaN, Double.NaN, w, e);
+            assertClose(labW, value(m, 1, PlantWorkbookBuilder.LAB_W_ROW), "MIX.FROMDENSITY mass fraction");
+            assertClose(BlendFunctions.fromDensity(card, rho, sampleT, 0, null, Double.NaN, Double.NaN, pv, e),
+                    value(m, 1, PlantWorkbookBuilder.LAB_STRENGTH_ROW), "MIX.FROMDENSITY %vol");
+            assertEquals(rho, Oiml22.density(labW, sampleT), OIML_DENSITY,
+                    "the OIML R 22 formula gives the reading back at the strength found");
+            assertClose(BlendFunctions.convert(card, new double[] {record[0] / (record[0] + record[1]),
+                record[1] / (record[0] + record[1])}, w, pv, e)[0],
+                    value(m, 1, PlantWorkbookBuilder.RECORD_STRENGTH_ROW), "strength of the batch record");
+
+            double total = record[0] + record[1];
+            double[] amounts = {total * labW, total * (1 - labW)};
+            double[] sheetAmounts = row(m, 1, PlantWorkbookBuilder.LAB_AMOUNTS_ROW, 2);
+            for (int k = 0; k < 2; k++) {
+                assertClose(amounts[k], sheetAmounts[k], "amount in the tank, component " + (k + 1));
+            }
+            assertClose(BlendFunctions.batch(card, amounts, "kg", null, tank, null, null, e),
+                    value(m, 1, PlantWorkbookBuilder.VOLUME_NOW_ROW), "MIX.BATCH volume now");
+            double target = value(m, 1, PlantWorkbookBuilder.TARGET_ROW);
+            double[] goal = BlendFunctions.convert(card, BlendFunctions.binary(card, target, pv), pv, w, e);
+            assertClose(goal[0], value(m, 1, PlantWorkbookBuilder.TARGET_W_ROW), "target as a mass fraction");
+
+            double[] least = (double[]) BlendFunctions.adjust(card, amounts, "kg", null, goal, w, tank, null,
+                    Double.NaN, null, null, null, e);
+            double[] sheetLeast = row(m, 1, PlantWorkbookBuilder.LEAST_ROW, 2);
+            for (int k = 0; k < 2; k++) {
+                assertClose(least[k], sheetLeast[k], "least addition, component " + (k + 1));
+            }
+            assertEquals(0.0, sheetLeast[0], 0.0, "a weaker target needs water only");
+            double leastVolume = (Double) BlendFunctions.adjust(card, amounts, "kg", null, goal, w, tank, null,
+                    Double.NaN, null, "volume", "L", e);
+            assertClose(leastVolume, value(m, 1, PlantWorkbookBuilder.LEAST_VOLUME_ROW), "volume after");
+            assertTrue(leastVolume > working, "the shipped example shows a target that overfills the tank: "
+                    + leastVolume + " L against " + working + " L");
+
+            double[] within = (double[]) BlendFunctions.adjust(card, amounts, "kg", null, goal, w, tank, "within",
+                    working, "L", null, null, e);
+            double[] sheetWithin = row(m, 1, PlantWorkbookBuilder.WITHIN_ROW, 2);
+            for (int k = 0; k < 2; k++) {
+                assertClose(within[k], sheetWithin[k], "addition within the working volume, component " + (k + 1));
+            }
+            double withinVolume = value(m, 1, PlantWorkbookBuilder.WITHIN_VOLUME_ROW);
+            assertTrue(withinVolume <= working * (1 + 1e-9), "within keeps to the working volume: " + withinVolume);
+            assertEquals(BlendFunctions.adjust(card, amounts, "kg", null, goal, w, tank, "within", working, "L",
+                    "summary", null, e), text(m.getCellByPosition(0, PlantWorkbookBuilder.SUMMARY_ROW + 1)),
+                    "the summary sentence");
+            assertTrue(value(m, 1, PlantWorkbookBuilder.WITHIN_STRENGTH_ROW) > target,
+                    "within the working volume the batch stays stronger than the target");
+
+            // keeping only part of the batch lets the least additions fit exactly into the working volume
+            double keep = value(m, 1, PlantWorkbookBuilder.KEEP_ROW);
+            assertClose(working / leastVolume, keep, "part that can stay");
+            double[] kept = {keep * amounts[0], keep * amounts[1]};
+            double[] keptAdd = row(m, 1, PlantWorkbookBuilder.KEPT_ADD_ROW, 2);
+            assertEquals(keep * least[1], keptAdd[1], 1e-9 * least[1], "the additions scale with the batch");
+            assertEquals(working, value(m, 1, PlantWorkbookBuilder.KEPT_VOLUME_ROW), 1e-9 * working,
+                    "what stays, adjusted, fills the working volume");
+            double[] after = {kept[0] + keptAdd[0], kept[1] + keptAdd[1]};
+            assertEquals(target, BlendFunctions.convert(card, new double[] {after[0] / (after[0] + after[1]),
+                after[1] / (after[0] + after[1])}, w, pv, e)[0], 1e-9, "what stays reaches the target");
+
+            double last = 0;
+            for (int i = 0; i < PlantWorkbookBuilder.TOP_UP_KG.length; i++) {
+                int r = PlantWorkbookBuilder.TOP_UP_FIRST + i;
+                double added = value(m, PlantWorkbookBuilder.TOP_UP_ADDED, r);
+                double exact = BlendFunctions.additionVolume(card, amounts, "kg", null, 1, added, "kg", tank, null,
+                        "L", e);
+                double first = BlendFunctions.additionVolume(card, amounts, "kg", null, 1, added, "kg", tank,
+                        "first order", "L", e);
+                assertClose(exact, value(m, PlantWorkbookBuilder.TOP_UP_EXACT, r), "exact top-up, row " + (r + 1));
+                assertClose(first, value(m, PlantWorkbookBuilder.TOP_UP_FIRST_ORDER, r), "first order, row "
+                        + (r + 1));
+                double gap = value(m, PlantWorkbookBuilder.TOP_UP_DIFFERENCE, r);
+                assertEquals(first - exact, gap, 1e-9 * Math.abs(exact), "difference, row " + (r + 1));
+                assertTrue(Math.abs(gap / exact) > last, "the linear estimate drifts as the top-up grows");
+                last = Math.abs(gap / exact);
+            }
+        } finally {
+            close(doc);
+        }
+    }
+
+    @Test
+    void labCardIsTheFitOfTheLabTableAndRefitsOnNewData(Office office) throws Exception {
+        XComponent doc = open(office, LabFitWorkbookBuilder.FILE);
+        try {
+            Card pure = CardReader.readPureComponents(namedRange(doc, "pure"));
+            Card card = CardReader.read(namedRange(doc, "card"));
+            XSpreadsheet lab = sheet(doc, "Lab");
+            XSpreadsheet fit = sheet(doc, "Fit");
+            double[][] planned = LabFitWorkbookBuilder.measurements();
+            int n = LabFitWorkbookBuilder.POINTS;
+            double[] x = new double[n];
+            double[] t = new double[n];
+            double[] rho = new double[n];
+            for (int i = 0; i < n; i++) {
+                int r = LabFitWorkbookBuilder.LAB_FIRST + i;
+                x[i] = value(lab, LabFitWorkbookBuilder.LAB_X, r);
+                t[i] = value(lab, LabFitWorkbookBuilder.LAB_T, r);
+                rho[i] = value(lab, LabFitWorkbookBuilder.LAB_DENSITY, r);
+                assertEquals(Oiml22.moleFraction(planned[i][0]), x[i], 1e-12, "mole fraction of point " + (i + 1));
+                assertEquals(planned[i][2], rho[i], 0.0, "the sheet holds the generated density of point " + (i + 1));
+                double noise = rho[i] - Oiml22.density(planned[i][0], t[i]);
+                assertTrue(Math.abs(noise) < 5 * LabFitWorkbookBuilder.NOISE, "noise of point " + (i + 1) + ": "
+                        + noise);
+            }
+            assertTrue(text(lab.getCellByPosition(0, LabFitWorkbookBuilder.LAB_FIRST + n)).isEmpty(),
+                    "room for new measurements below the data");
+            double tRef = value(fit, 1, LabFitWorkbookBuilder.TREF_ROW);
+            int order = LabFitWorkbookBuilder.ORDER;
+            int orderT = LabFitWorkbookBuilder.ORDER_IN_T;
+            Object[][] a = FitFunctions.density(pure, 0, 1, x, rho, t, order, orderT, tRef, null,
+                    FitOutput.COEFFICIENTS);
+            Object[][] se = FitFunctions.density(pure, 0, 1, x, rho, t, order, orderT, tRef, null,
+                    FitOutput.STANDARD_ERRORS);
+            XSpreadsheet results = sheet(doc, "Results");
+            for (int k = 0; k <= order; k++) {
+                int r = LabFitWorkbookBuilder.COEFF_FIRST + k;
+                for (int j = 0; j <= orderT; j++) {
+                    assertClose((Double) a[k][j], value(results, 1 + j, r), "card coefficient a" + k + j);
+                    assertClose((Double) se[k][j], value(results, 3 + j, r), "standard error of a" + k + j);
+                }
+            }
+            Object[][] stats = FitFunctions.density(pure, 0, 1, x, rho, t, order, orderT, tRef, null,
+                    FitOutput.STATISTICS);
+            int s0 = LabFitWorkbookBuilder.STATS_FIRST;
+            assertEquals((double) n, value(fit, 1, s0 + 1), 0.0, "points in the fit");
+            double sd = value(fit, 1, s0 + 4);
+            assertClose((Double) stats[4][1], sd, "standard deviation of the fit");
+            assertTrue(sd > 0.8 * LabFitWorkbookBuilder.NOISE && sd < 1.3 * LabFitWorkbookBuilder.NOISE,
+                    "the fit scatters like the noise put in: " + sd);
+            Object[][] orders = FitFunctions.density(pure, 0, 1, x, rho, t, LabFitWorkbookBuilder.HIGHEST_ORDER,
+                    orderT, tRef, null, FitOutput.ORDERS);
+            int selected = LabFitWorkbookBuilder.ORDERS_FIRST + LabFitWorkbookBuilder.HIGHEST_ORDER + 2;
+            for (int i = 0; i < 3; i++) {
+                assertEquals(orders[LabFitWorkbookBuilder.HIGHEST_ORDER + 2 + i][1], value(fit, 1, selected + i),
+                        "order verdict " + (i + 1));
+                assertEquals((double) order, value(fit, 1, selected + i), 0.0,
+                        "the sheet's note says every verdict picks the card's order (" + (i + 1) + ")");
+            }
+
+            XSpreadsheet plot = sheet(doc, "Plot");
+            for (int i = 0; i < n; i++) {
+                int r = LabFitWorkbookBuilder.PLOT_FIRST + i;
+                assertEquals(rho[i] - CardFunctions.density(card, x[i], t[i], Extrapolation.AS_CARD),
+                        value(plot, LabFitWorkbookBuilder.PLOT_RESIDUAL, r), 1e-9, "residual of point " + (i + 1));
+            }
+
+            double px = value(results, 1, LabFitWorkbookBuilder.POINT_X_ROW);
+            double pt = value(results, 1, LabFitWorkbookBuilder.POINT_T_ROW);
+            double pw = value(results, 1, LabFitWorkbookBuilder.POINT_W_ROW);
+            double[] xx = {px, 1 - px};
+            int r0 = LabFitWorkbookBuilder.RESULTS_FIRST;
+            double density = value(results, 1, r0);
+            double u = value(results, 2, r0);
+            assertClose(CardFunctions.density(card, xx, pt, Extrapolation.AS_CARD), density, "density at the point");
+            assertClose(CardFunctions.uncertainty(card, "density", -1, xx, pt, Extrapolation.AS_CARD), u,
+                    "MIX.UNCERTAINTY of the density");
+            assertTrue(Math.abs(density - Oiml22.density(pw, pt)) < 3 * u, "the card fitted to noisy data follows "
+                    + "the formula they came from within 3 standard uncertainties: " + density + " against "
+                    + Oiml22.density(pw, pt) + ", u = " + u);
+            for (int k = 0; k < 2; k++) {
+                assertClose(CardFunctions.partialMolarVolume(card, k, xx, pt, Extrapolation.AS_CARD),
+                        value(results, 1, r0 + 3 + k), "partial molar volume " + (k + 1));
+                assertClose(CardFunctions.uncertainty(card, "partial volume", k, xx, pt, Extrapolation.AS_CARD),
+                        value(results, 2, r0 + 3 + k), "uncertainty of the partial molar volume " + (k + 1));
+            }
+            Object charts = UnoRuntime.queryInterface(XTableChartsSupplier.class, fit).getCharts();
+            XNameAccess named = UnoRuntime.queryInterface(XNameAccess.class, charts);
+            assertTrue(named.hasByName(LabFitWorkbookBuilder.DATA_CHART) && named.hasByName(
+                    LabFitWorkbookBuilder.RESIDUAL_CHART), "both charts are on the Fit sheet");
+
+            // What the Lab sheet's note promises: a half-filled row is refused with a message, a full one refits.
+            int next = LabFitWorkbookBuilder.LAB_FIRST + n;
+            XCell check = lab.getCellByPosition(1, LabFitWorkbookBuilder.LAB_CHECK_ROW);
+            assertEquals("OK", text(check));
+            lab.getCellByPosition(LabFitWorkbookBuilder.LAB_W, next).setValue(0.5);
+            recalculate(doc);
+            assertEquals("Point " + (n + 1) + " has a mole fraction but a blank density; fill it in, or clear the "
+                    + "whole point.", text(check));
+            assertEquals(504, results.getCellByPosition(1, r0).getError(), "users of the card show Err:504");
+            lab.getCellByPosition(LabFitWorkbookBuilder.LAB_T, next).setValue(20.0);
+            lab.getCellByPosition(LabFitWorkbookBuilder.LAB_DENSITY, next).setValue(Oiml22.density(0.5, 20) + 1.0);
+            recalculate(doc);
+            assertEquals("OK", text(check));
+            assertEquals(n + 1.0, value(fit, 1, LabFitWorkbookBuilder.FIT_POINTS_ROW), 0.0, "the new point is in");
+            assertTrue(value(results, 1, r0) != density, "the card refitted and the result moved");
+        } finally {
+            close(doc);
+        }
+    }
+
+    private static XComponent open(Office office, String file) throws Exception {
+        Path wb = ExampleWorkbooks.repoRoot().resolve("examples").resolve(file);
+        XComponent doc = office.load(office.stage(wb));
+        recalculate(doc);
+        return doc;
+    }
+
+    private static void assertPasses(XSpreadsheet audit, String where) throws Exception {
+        XCell residual = audit.getCellByPosition(1, AUDIT_RESIDUAL_ROW);
+        XCell pass = audit.getCellByPosition(1, AUDIT_PASS_ROW);
+        assertEquals(0, residual.getError(), "largest residual " + where + " is a number");
+        assertTrue(residual.getValue() <= AUDIT_TOLERANCE, "largest residual " + where + ": " + residual.getValue());
+        assertEquals(FormulaResult.VALUE, UnoRuntime.queryInterface(XPropertySet.class, pass)
+                .getPropertyValue("FormulaResultType2"), "pass cell " + where + " holds a value");
+        assertEquals(1.0, pass.getValue(), "pass cell " + where);
+        assertEquals("TRUE", text(pass), "pass cell " + where + " as shown");
+    }
+
+    /** The row (0-based) of the audit's re-derivation of one quantity, found by its label in column D. */
+    private static int handRow(XSpreadsheet audit, String quantity) throws Exception {
+        for (int r = TRACE_TOP; r < TRACE_TOP + 80; r++) {
+            if (quantity.equals(text(audit.getCellByPosition(3, r)))) {
+                return r;
+            }
+        }
+        throw new AssertionError("no re-derivation of " + quantity);
+    }
+
+    private static XComponent openTernary(Office office) throws Exception {
+        Path wb = ExampleWorkbooks.repoRoot().resolve("examples").resolve(TernaryWorkbookBuilder.FILE);
+        XComponent doc = office.load(office.stage(wb));
+        recalculate(doc);
+        return doc;
+    }
+
+    private static Object[][] namedRange(XComponent doc, String name) throws Exception {
+        XPropertySet dp = UnoRuntime.queryInterface(XPropertySet.class, doc);
+        Object range = UnoRuntime.queryInterface(XNameAccess.class, dp.getPropertyValue("NamedRanges"))
+                .getByName(name);
+        return UnoRuntime.queryInterface(XCellRangeData.class, UnoRuntime.queryInterface(XCellRangeReferrer.class,
+                range).getReferredCells()).getDataArray();
+    }
+
+    private static XSpreadsheet sheet(XComponent doc, String name) throws Exception {
+        return UnoRuntime.queryInterface(XSpreadsheet.class,
+                UnoRuntime.queryInterface(XSpreadsheetDocument.class, doc).getSheets().getByName(name));
+    }
+
+    /** A formula cell's numeric result, failing on an error result. */
+    private static double value(XSpreadsheet s, int c, int r) throws Exception {
+        XCell cell = s.getCellByPosition(c, r);
+        assertEquals(0, cell.getError(), "cell " + (char) ('A' + c) + (r + 1) + " has no error");
+        return cell.getValue();
+    }
+
+    private static double[] row(XSpreadsheet s, int c, int r, int n) throws Exception {
+        double[] v = new double[n];
+        for (int k = 0; k < n; k++) {
+            v[k] = value(s, c + k, r);
+        }
+        return v;
+    }
+
+    private static double[] column(XSpreadsheet s, int c, int r, int n) throws Exception {
+        double[] v = new double[n];
+        for (int k = 0; k < n; k++) {
+            v[k] = value(s, c, r + k);
+        }
+        return v;
+    }
+
+    private static void assertClose(double expected, double actual, String what) {
+        assertEquals(expected, actual, RELATIVE * Math.max(1.0, Math.abs(expected)), what);
+    }
+
+    private static String text(XCell c) {
+        return UnoRuntime.queryInterface(XText.class, c).getString();
+    }
+
+    private static void recalculate(XComponent doc) {
+        UnoRuntime.queryInterface(XCalculatable.class, doc).calculateAll();
+    }
+
+    private static void close(XComponent doc) {
+        try {
+            UnoRuntime.queryInterface(XCloseable.class, doc).close(true);
+        } catch (Exception e) {
+            doc.dispose();
+        }
+    }
+}
