@@ -14,32 +14,23 @@ public final class Units {
         CELSIUS("°C", 273.15, "°C", "degC", "C"),
         KELVIN("K", 0.0, "K");
 
-        final String symbol;
-        final double offset;
-        final String[] spellings;
+        private final Scale scale;
 
         Temperature(String symbol, double offset, String... spellings) {
-            this.symbol = symbol;
-            this.offset = offset;
-            this.spellings = spellings;
+            this.scale = new Scale(symbol, offset, spellings);
         }
 
         @Override
-        public String symbol() {
-            return symbol;
-        }
-
-        @Override
-        public String[] spellings() {
-            return spellings.clone();
+        public Scale scale() {
+            return scale;
         }
 
         public double toKelvin(double t) {
-            return t + offset;
+            return t + scale.factor;
         }
 
         public double fromKelvin(double k) {
-            return k - offset;
+            return k - scale.factor;
         }
     }
 
@@ -48,32 +39,23 @@ public final class Units {
         KG_PER_M3("kg/m³", 1.0, "kg/m³", "kg/m3", "g/L", "g/l"),
         G_PER_CM3("g/cm³", 1000.0, "g/cm³", "g/cm3", "g/mL", "g/ml");
 
-        final String symbol;
-        final double factor;
-        final String[] spellings;
+        private final Scale scale;
 
         Density(String symbol, double factor, String... spellings) {
-            this.symbol = symbol;
-            this.factor = factor;
-            this.spellings = spellings;
+            this.scale = new Scale(symbol, factor, spellings);
         }
 
         @Override
-        public String symbol() {
-            return symbol;
-        }
-
-        @Override
-        public String[] spellings() {
-            return spellings.clone();
+        public Scale scale() {
+            return scale;
         }
 
         public double toKgPerM3(double v) {
-            return v * factor;
+            return v * scale.factor;
         }
 
         public double fromKgPerM3(double v) {
-            return v / factor;
+            return v / scale.factor;
         }
     }
 
@@ -83,32 +65,23 @@ public final class Units {
         L_PER_MOL("L/mol", 1000.0, "L/mol", "l/mol", "dm³/mol", "dm3/mol"),
         M3_PER_MOL("m³/mol", 1.0e6, "m³/mol", "m3/mol");
 
-        final String symbol;
-        final double factor;
-        final String[] spellings;
+        private final Scale scale;
 
         MolarVolume(String symbol, double factor, String... spellings) {
-            this.symbol = symbol;
-            this.factor = factor;
-            this.spellings = spellings;
+            this.scale = new Scale(symbol, factor, spellings);
         }
 
         @Override
-        public String symbol() {
-            return symbol;
-        }
-
-        @Override
-        public String[] spellings() {
-            return spellings.clone();
+        public Scale scale() {
+            return scale;
         }
 
         public double toCm3PerMol(double v) {
-            return v * factor;
+            return v * scale.factor;
         }
 
         public double fromCm3PerMol(double v) {
-            return v / factor;
+            return v / scale.factor;
         }
     }
 
@@ -117,28 +90,19 @@ public final class Units {
         G_PER_MOL("g/mol", 1.0, "g/mol"),
         KG_PER_MOL("kg/mol", 1000.0, "kg/mol");
 
-        final String symbol;
-        final double factor;
-        final String[] spellings;
+        private final Scale scale;
 
         MolarMass(String symbol, double factor, String... spellings) {
-            this.symbol = symbol;
-            this.factor = factor;
-            this.spellings = spellings;
+            this.scale = new Scale(symbol, factor, spellings);
         }
 
         @Override
-        public String symbol() {
-            return symbol;
-        }
-
-        @Override
-        public String[] spellings() {
-            return spellings.clone();
+        public Scale scale() {
+            return scale;
         }
 
         public double toGramPerMol(double v) {
-            return v * factor;
+            return v * scale.factor;
         }
     }
 
@@ -147,45 +111,56 @@ public final class Units {
         J_PER_MOL("J/mol", 1.0, "J/mol"),
         KJ_PER_MOL("kJ/mol", 1000.0, "kJ/mol");
 
-        final String symbol;
-        final double factor;
-        final String[] spellings;
+        private final Scale scale;
 
         MolarEnthalpy(String symbol, double factor, String... spellings) {
-            this.symbol = symbol;
-            this.factor = factor;
-            this.spellings = spellings;
+            this.scale = new Scale(symbol, factor, spellings);
         }
 
         @Override
-        public String symbol() {
-            return symbol;
-        }
-
-        @Override
-        public String[] spellings() {
-            return spellings.clone();
+        public Scale scale() {
+            return scale;
         }
 
         /** The energy unit of this molar unit times moles: J or kJ. */
         public String energySymbol() {
-            return symbol.substring(0, symbol.indexOf('/'));
+            return scale.symbol.substring(0, scale.symbol.indexOf('/'));
         }
 
         public double toJoulePerMol(double v) {
-            return v * factor;
+            return v * scale.factor;
         }
 
         public double fromJoulePerMol(double v) {
-            return v / factor;
+            return v / scale.factor;
         }
     }
 
     /** A unit with a display symbol and the spellings a card may use for it. */
     public interface Spelled {
-        String symbol();
+        /** The unit's symbol, spellings and its factor (or, for a temperature scale, its offset) to internal units. */
+        Scale scale();
 
-        String[] spellings();
+        default String symbol() {
+            return scale().symbol;
+        }
+
+        default String[] spellings() {
+            return scale().spellings.clone();
+        }
+    }
+
+    /** What every unit enum holds: its display symbol, its factor (or offset) to internal units, its spellings. */
+    public static final class Scale {
+        final String symbol;
+        final double factor;
+        final String[] spellings;
+
+        Scale(String symbol, double factor, String[] spellings) {
+            this.symbol = symbol;
+            this.factor = factor;
+            this.spellings = spellings;
+        }
     }
 
     private final Temperature temperature;
@@ -259,8 +234,8 @@ public final class Units {
 
     @Override
     public String toString() {
-        return String.format(Locale.ROOT, "%s, %s, %s, %s%s", temperature.symbol, density.symbol, molarVolume.symbol,
-                molarMass.symbol, enthalpy == null ? "" : ", " + enthalpy.symbol);
+        return String.format(Locale.ROOT, "%s, %s, %s, %s%s", temperature.symbol(), density.symbol(),
+                molarVolume.symbol(), molarMass.symbol(), enthalpy == null ? "" : ", " + enthalpy.symbol());
     }
 
     @Override
