@@ -2,29 +2,22 @@ package org.miscela.core.functions;
 
 import org.miscela.core.card.Card;
 import org.miscela.core.card.Extrapolation;
-import org.miscela.core.card.Mixture;
-import org.miscela.core.card.Units;
-import org.miscela.core.card.Validity;
 import org.miscela.core.model.Component;
 import org.miscela.core.problem.MiscelaException;
 import org.miscela.core.problem.Numbers;
 import org.miscela.core.problem.Problem;
-import java.util.ArrayList;
-import java.util.List;
-import org.apache.commons.math3.analysis.solvers.BrentSolver;
 
 /**
  * The cell functions' arithmetic, one method per function: arguments and results in the card's own units, every
  * argument and the validity range checked, every result finite or a {@link MiscelaException}.
  * Components are numbered from 0 here; a composition is the mole fractions of every component in card order.
+ * The checks every function makes on its point are PointChecks'; the adiabatic root search is AdiabaticRise's.
  */
 public final class CardFunctions {
     /** The text {@link #check} returns for a card (and point) with nothing to report. */
     public static final String OK = "OK";
     /** How far from 1 a composition's sum may be (rounding in typed or computed fractions) before it is refused. */
     static final double SUM_TOLERANCE = 1e-6;
-    /** How far the adiabatic search may move from the start temperature, in K. */
-    private static final double SEARCH_SPAN = 2000.0;
 
     private CardFunctions() {
     }
@@ -106,36 +99,36 @@ public final class CardFunctions {
 
     public static double excessMolarVolume(Card card, double[] x, double t, Extrapolation e) {
         double[] z = moleFractions(card, x);
-        double kelvin = checkPoint(card, z, t, e);
+        double kelvin = PointChecks.checkPoint(card, z, t, e);
         return volumeOut(card, card.mixture().excessMolarVolume(z, kelvin), t);
     }
 
     public static double partialMolarVolume(Card card, int component, double[] x, double t, Extrapolation e) {
         double[] z = moleFractions(card, x);
-        double kelvin = checkPoint(card, z, t, e);
+        double kelvin = PointChecks.checkPoint(card, z, t, e);
         return volumeOut(card, card.mixture().partialMolarVolume(component, z, kelvin), t);
     }
 
     public static double partialExcessMolarVolume(Card card, int component, double[] x, double t, Extrapolation e) {
         double[] z = moleFractions(card, x);
-        double kelvin = checkPoint(card, z, t, e);
+        double kelvin = PointChecks.checkPoint(card, z, t, e);
         return volumeOut(card, card.mixture().partialExcessMolarVolume(component, z, kelvin), t);
     }
 
     public static double molarVolume(Card card, double[] x, double t, Extrapolation e) {
         double[] z = moleFractions(card, x);
-        double kelvin = checkPoint(card, z, t, e);
+        double kelvin = PointChecks.checkPoint(card, z, t, e);
         double v = card.mixture().molarVolume(z, kelvin);
         if (!(v > 0.0) || Double.isInfinite(v)) {
-            throw nonPhysical(card, t, "molar volume", v);
+            throw PointChecks.nonPhysical(card, t, "molar volume", v);
         }
         return card.units().molarVolume().fromCm3PerMol(v);
     }
 
     public static double density(Card card, double[] x, double t, Extrapolation e) {
         double[] z = moleFractions(card, x);
-        double kelvin = checkPoint(card, z, t, e);
-        return card.units().density().fromKgPerM3(physicalDensity(card, z, kelvin, t));
+        double kelvin = PointChecks.checkPoint(card, z, t, e);
+        return card.units().density().fromKgPerM3(PointChecks.physicalDensity(card, z, kelvin, t));
     }
 
     public static double excessMolarVolume(Card card, double x1, double t, Extrapolation e) {
@@ -160,8 +153,8 @@ public final class CardFunctions {
 
     /** Density of one pure component (any number of components on the card). */
     public static double pureDensity(Card card, int component, double t, Extrapolation e) {
-        double kelvin = checkTemperature(card, t, e);
-        return card.units().density().fromKgPerM3(pureDensityAt(card, component, kelvin, t));
+        double kelvin = PointChecks.checkTemperature(card, t, e);
+        return card.units().density().fromKgPerM3(PointChecks.pureDensityAt(card, component, kelvin, t));
     }
 
     /**
@@ -178,12 +171,12 @@ public final class CardFunctions {
             throw Problem.ARG_BLANK.raise("component (needed for a partial volume)");
         }
         double[] z = moleFractions(card, x);
-        double kelvin = checkPoint(card, z, t, e);
-        physicalDensity(card, z, kelvin, t);
+        double kelvin = PointChecks.checkPoint(card, z, t, e);
+        PointChecks.physicalDensity(card, z, kelvin, t);
         double u = Uncertainty.of(card, q, component, z, kelvin);
         if (!Double.isFinite(u)) {
             // e.g. a density's sensitivity −ρ/V_m overflowing for a molar volume that underflows to nearly zero
-            throw nonPhysical(card, t, "standard uncertainty", u);
+            throw PointChecks.nonPhysical(card, t, "standard uncertainty", u);
         }
         return q == Uncertainty.Quantity.DENSITY ? card.units().density().fromKgPerM3(u)
                 : card.units().molarVolume().fromCm3PerMol(u);
@@ -194,14 +187,14 @@ public final class CardFunctions {
     /** H^E in the card's enthalpy unit. */
     public static double excessEnthalpy(Card card, double[] x, double t, Extrapolation e) {
         double[] z = moleFractions(card, x);
-        double kelvin = checkPoint(card, z, t, e);
+        double kelvin = PointChecks.checkPoint(card, z, t, e);
         return enthalpyOut(card, card.mixture().excessEnthalpy(z, kelvin), t);
     }
 
     /** H̄_k^E = H̄_k − H_k* in the card's enthalpy unit. */
     public static double partialExcessEnthalpy(Card card, int component, double[] x, double t, Extrapolation e) {
         double[] z = moleFractions(card, x);
-        double kelvin = checkPoint(card, z, t, e);
+        double kelvin = PointChecks.checkPoint(card, z, t, e);
         double[] out = new double[z.length];
         card.mixture().partialExcessEnthalpies(z, kelvin, out);
         return enthalpyOut(card, out[component], t);
@@ -245,64 +238,7 @@ public final class CardFunctions {
      * exchange with the vessel or surroundings, no evaporation or reaction, and the card's models over T..T_f.
      */
     public static double adiabaticRise(Card card, double[] amounts, AmountBasis basis, double t, Extrapolation e) {
-        double[] n = amountsToMoles(card, amounts, basis);
-        double total = 0.0;
-        for (double v : n) {
-            total += v;
-        }
-        double[] x = moleFractions(card, scaled(n, 1.0 / total));
-        double start = checkPoint(card, x, t, e);
-        Mixture m = card.mixture();
-        for (int k = 0; k < n.length; k++) {
-            m.heatCapacity(k);
-        }
-        final double moles = total;
-        org.apache.commons.math3.analysis.UnivariateFunction balance = tf -> {
-            double h = moles * m.excessEnthalpy(x, tf);
-            for (int k = 0; k < n.length; k++) {
-                h += n[k] * m.heatCapacity(k).enthalpyChange(start, tf);
-            }
-            if (!Double.isFinite(h)) {
-                // The polynomials overflow (temperatures or amounts near the double range): no root to bracket.
-                throw Problem.NO_TEMPERATURE_ROOT.raise(Numbers.show(Math.min(start, tf)),
-                        Numbers.show(Math.max(start, tf)));
-            }
-            return h;
-        };
-        double f0 = balance.value(start);
-        double end;
-        if (f0 == 0.0) {
-            end = start;
-        } else {
-            // Heat released (f0 < 0) warms the batch, heat absorbed cools it: bracket on that side.
-            double direction = f0 < 0.0 ? 1.0 : -1.0;
-            double step = 1.0;
-            double far = start + direction * step;
-            while (Math.signum(balance.value(far)) == Math.signum(f0)) {
-                step *= 2.0;
-                far = start + direction * step;
-                if (step > SEARCH_SPAN || far <= 1.0) {
-                    // (the search may have stepped below 0 K; the range worth naming starts at 0 K)
-                    throw Problem.NO_TEMPERATURE_ROOT.raise(Numbers.show(Math.max(0.0, Math.min(start, far))),
-                            Numbers.show(Math.max(start, far)));
-                }
-            }
-            double lo = Math.min(start, far);
-            double hi = Math.max(start, far);
-            end = new BrentSolver(1e-12, 1e-9).solve(200, balance, lo, hi);
-        }
-        if (!card.mayExtrapolate(e) && !insideTemperature(card, x, end)) {
-            Units.Temperature unit = card.units().temperature();
-            Validity v = card.validity();
-            throw Problem.OUTSIDE_FINAL_TEMPERATURE.raise(Numbers.show(unit.fromKelvin(end)), unit.symbol(),
-                    Numbers.show(unit.fromKelvin(v.lowestKelvin())), Numbers.show(unit.fromKelvin(v.highestKelvin())),
-                    unit.symbol());
-        }
-        double cp = m.heatCapacity(x, end);
-        if (!(cp > 0.0)) {
-            throw nonPhysical(card, card.units().temperature().fromKelvin(end), "mixture heat capacity", cp);
-        }
-        return end - start;
+        return AdiabaticRise.of(card, amounts, basis, t, e);
     }
 
     // --- validity
@@ -325,7 +261,7 @@ public final class CardFunctions {
         if (!(kelvin > 0.0)) {
             throw Problem.BELOW_ABSOLUTE_ZERO.raise(Numbers.show(t), card.units().temperature().symbol());
         }
-        return within(card, z, kelvin);
+        return PointChecks.within(card, z, kelvin);
     }
 
     /**
@@ -366,124 +302,21 @@ public final class CardFunctions {
     /** Every intermediate of one evaluation, for auditors: see {@link Trace}. */
     public static Object[][] trace(Card card, double[] x, double t, PropertyKind property, Extrapolation e) {
         double[] z = moleFractions(card, x);
-        double kelvin = checkPoint(card, z, t, e);
+        double kelvin = PointChecks.checkPoint(card, z, t, e);
         if (property == PropertyKind.ENTHALPY) {
             card.mixture().enthalpy();
         } else {
             card.mixture().volume();
         }
-        Object[][] rows = Trace.of(card, z, t, kelvin, property, e, violations(card, z, kelvin, t));
+        Object[][] rows = Trace.of(card, z, t, kelvin, property, e, PointChecks.violations(card, z, kelvin, t));
         for (Object[] row : rows) {
             // An intermediate that overflows (say a pure molar volume M/ρ of a card with extreme numbers) is refused
             // like a final result that does: a trace never shows NaN or infinity.
             if (row[1] instanceof Double && !Double.isFinite((Double) row[1])) {
-                throw nonPhysical(card, t, (String) row[0], (Double) row[1]);
+                throw PointChecks.nonPhysical(card, t, (String) row[0], (Double) row[1]);
             }
         }
         return rows;
-    }
-
-    // --- checks shared by every function
-
-    /** Checks temperature and composition limits (unless extrapolation is allowed) and the pure densities. */
-    static double checkPoint(Card card, double[] x, double t, Extrapolation e) {
-        double kelvin = checkTemperature(card, t, e);
-        if (!card.mayExtrapolate(e) && !within(card, x, kelvin)) {
-            throw violations(card, x, kelvin, t).get(0);
-        }
-        for (int k = 0; k < x.length; k++) {
-            pureDensityAt(card, k, kelvin, t);
-        }
-        return kelvin;
-    }
-
-    /**
-     * Whether the point exceeds no validity limit: the same answer as {@code violations(…).isEmpty()}, without
-     * writing the messages (this runs on every call).
-     */
-    static boolean within(Card card, double[] x, double kelvin) {
-        Validity v = card.validity();
-        if (!v.containsTemperature(kelvin)) {
-            return false;
-        }
-        for (int k = 0; k < x.length; k++) {
-            if (!v.containsFraction(k, x[k])) {
-                return false;
-            }
-        }
-        List<Validity.PairLimit> limits = v.pairLimits();
-        for (int i = 0; i < limits.size(); i++) {
-            Validity.PairLimit p = limits.get(i);
-            boolean present = x[p.first()] > 0.0 && x[p.second()] > 0.0;
-            if (present && !p.containsTemperature(kelvin) || !p.containsRatio(x)) {
-                return false;
-            }
-        }
-        return true;
-    }
-
-    /** Every validity limit the point exceeds, in the order: temperature, components, pairs. */
-    static List<MiscelaException> violations(Card card, double[] x, double kelvin, double t) {
-        List<MiscelaException> out = new ArrayList<>();
-        Validity v = card.validity();
-        Units.Temperature unit = card.units().temperature();
-        if (!v.containsTemperature(kelvin)) {
-            out.add(Problem.OUTSIDE_TEMPERATURE.raise(Numbers.show(t), unit.symbol(),
-                    Numbers.show(unit.fromKelvin(v.lowestKelvin())), Numbers.show(unit.fromKelvin(v.highestKelvin())),
-                    unit.symbol()));
-        }
-        for (int k = 0; k < x.length; k++) {
-            if (!v.containsFraction(k, x[k])) {
-                out.add(Problem.OUTSIDE_COMPOSITION.raise(card.components().get(k).name(), Numbers.show(x[k]),
-                        Numbers.show(v.lowestFraction(k)), Numbers.show(v.highestFraction(k))));
-            }
-        }
-        for (Validity.PairLimit p : v.pairLimits()) {
-            String a = card.components().get(p.first()).name();
-            String b = card.components().get(p.second()).name();
-            boolean present = x[p.first()] > 0.0 && x[p.second()] > 0.0;
-            if (present && !p.containsTemperature(kelvin)) {
-                out.add(Problem.OUTSIDE_PAIR_TEMPERATURE.raise(Numbers.show(t), unit.symbol(),
-                        Numbers.show(unit.fromKelvin(p.lowestKelvin())),
-                        Numbers.show(unit.fromKelvin(p.highestKelvin())), unit.symbol(), a + " + " + b));
-            }
-            if (!p.containsRatio(x)) {
-                out.add(Problem.OUTSIDE_PAIR_COMPOSITION.raise(a + " + " + b, "x(" + a + ")/(x(" + a + ") + x(" + b
-                        + "))", Numbers.show(p.ratio(x)), Numbers.show(p.lowestRatio()),
-                        Numbers.show(p.highestRatio())));
-            }
-        }
-        return out;
-    }
-
-    private static boolean insideTemperature(Card card, double[] x, double kelvin) {
-        if (!card.validity().containsTemperature(kelvin)) {
-            return false;
-        }
-        for (Validity.PairLimit p : card.validity().pairLimits()) {
-            if (x[p.first()] > 0.0 && x[p.second()] > 0.0 && !p.containsTemperature(kelvin)) {
-                return false;
-            }
-        }
-        return true;
-    }
-
-    static double checkTemperature(Card card, double t, Extrapolation e) {
-        if (Double.isNaN(t) || Double.isInfinite(t)) {
-            throw Problem.ARG_NOT_FINITE.raise("temperature");
-        }
-        Units.Temperature unit = card.units().temperature();
-        double kelvin = unit.toKelvin(t);
-        if (!(kelvin > 0.0)) {
-            throw Problem.BELOW_ABSOLUTE_ZERO.raise(Numbers.show(t), unit.symbol());
-        }
-        Validity v = card.validity();
-        if (!card.mayExtrapolate(e) && !v.containsTemperature(kelvin)) {
-            throw Problem.OUTSIDE_TEMPERATURE.raise(Numbers.show(t), unit.symbol(),
-                    Numbers.show(unit.fromKelvin(v.lowestKelvin())), Numbers.show(unit.fromKelvin(v.highestKelvin())),
-                    unit.symbol());
-        }
-        return kelvin;
     }
 
     /** N·H^E of a batch given in moles, J; checks the batch's composition like any point. */
@@ -493,46 +326,25 @@ public final class CardFunctions {
             total += v;
         }
         double[] x = moleFractions(card, scaled(moles, 1.0 / total));
-        double kelvin = checkPoint(card, x, t, e);
+        double kelvin = PointChecks.checkPoint(card, x, t, e);
         return total * card.mixture().excessEnthalpy(x, kelvin);
-    }
-
-    static double pureDensityAt(Card card, int k, double kelvin, double t) {
-        double rho = card.components().get(k).density().at(kelvin);
-        if (!(rho > 0.0) || Double.isInfinite(rho)) {
-            throw nonPhysical(card, t, "density of " + card.components().get(k).name(), rho);
-        }
-        return rho;
-    }
-
-    static double physicalDensity(Card card, double[] x, double kelvin, double t) {
-        double rho = card.mixture().density(x, kelvin);
-        if (!(rho > 0.0) || Double.isInfinite(rho)) {
-            throw nonPhysical(card, t, "mixture density", rho);
-        }
-        return rho;
     }
 
     private static double volumeOut(Card card, double cm3PerMol, double t) {
         if (Double.isNaN(cm3PerMol) || Double.isInfinite(cm3PerMol)) {
-            throw nonPhysical(card, t, "volume", cm3PerMol);
+            throw PointChecks.nonPhysical(card, t, "volume", cm3PerMol);
         }
         return card.units().molarVolume().fromCm3PerMol(cm3PerMol);
     }
 
     private static double enthalpyOut(Card card, double joulePerMol, double t) {
         if (Double.isNaN(joulePerMol) || Double.isInfinite(joulePerMol)) {
-            throw nonPhysical(card, t, "enthalpy", joulePerMol);
+            throw PointChecks.nonPhysical(card, t, "enthalpy", joulePerMol);
         }
         return card.units().enthalpy().fromJoulePerMol(joulePerMol);
     }
 
-    private static MiscelaException nonPhysical(Card card, double t, String what, double value) {
-        return Problem.NON_PHYSICAL.raise(Numbers.show(t), card.units().temperature().symbol(), what,
-                Numbers.show(value));
-    }
-
-    private static double[] scaled(double[] v, double f) {
+    static double[] scaled(double[] v, double f) {
         double[] out = new double[v.length];
         for (int k = 0; k < v.length; k++) {
             out[k] = v[k] * f;

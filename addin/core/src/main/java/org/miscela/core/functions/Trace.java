@@ -102,7 +102,7 @@ final class Trace {
             tr.add("mixture molar volume [" + unit + "]", scale * m.molarVolume(x, kelvin));
             tr.add("mean molar mass [" + mm + "]", m.meanMolarMass(x) / u.molarMass().toGramPerMol(1.0));
             tr.add("mixture density [" + u.density().symbol() + "]",
-                    u.density().fromKgPerM3(CardFunctions.physicalDensity(card, x, kelvin, t)));
+                    u.density().fromKgPerM3(PointChecks.physicalDensity(card, x, kelvin, t)));
         } else {
             String cpUnit = u.enthalpy().symbol() + "/K";
             tr.add("excess heat capacity dHE/dT [" + cpUnit + "]", scale * m.excessHeatCapacity(x, kelvin));

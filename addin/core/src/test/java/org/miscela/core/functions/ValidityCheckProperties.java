@@ -12,7 +12,7 @@ import net.jqwik.api.constraints.DoubleRange;
 import net.jqwik.api.constraints.IntRange;
 
 /**
- * The quick validity test every call runs ({@link CardFunctions#within}) gives the same answer as the list of
+ * The quick validity test every call runs ({@link PointChecks#within}) gives the same answer as the list of
  * violations the messages come from, on an invented ternary card with component, pair-ratio and pair-temperature
  * limits, at points inside, on and beyond every limit.
  */
@@ -37,8 +37,8 @@ class ValidityCheckProperties {
         double sum = a + b + c;
         double[] x = {a / sum, b / sum, c / sum};
         double kelvin = celsius + 273.15;
-        assertEquals(CardFunctions.violations(CARD, x, kelvin, celsius).isEmpty(),
-                CardFunctions.within(CARD, x, kelvin), () -> Arrays.toString(x) + " at " + celsius + " °C");
+        assertEquals(PointChecks.violations(CARD, x, kelvin, celsius).isEmpty(),
+                PointChecks.within(CARD, x, kelvin), () -> Arrays.toString(x) + " at " + celsius + " °C");
     }
 
     @Property(tries = 500)
@@ -50,7 +50,7 @@ class ValidityCheckProperties {
         double[] celsius = {20, 20, 0, 40, 10};
         // for which = 1, R/(R + P) = 0.6 exactly: P = 0.4·s, R = 0.6·s with s the pair's share
         double[] x = which == 1 ? new double[] {0.4 * (1 - u * 0.5), u * 0.5, 0.6 * (1 - u * 0.5)} : points[which];
-        assertEquals(CardFunctions.violations(CARD, x, celsius[which] + 273.15, celsius[which]).isEmpty(),
-                CardFunctions.within(CARD, x, celsius[which] + 273.15), () -> Arrays.toString(x));
+        assertEquals(PointChecks.violations(CARD, x, celsius[which] + 273.15, celsius[which]).isEmpty(),
+                PointChecks.within(CARD, x, celsius[which] + 273.15), () -> Arrays.toString(x));
     }
 }

@@ -1,0 +1,290 @@
+package org.miscela.core.card;
+
+import static org.miscela.core.card.CardLabels.COMPONENT;
+import static org.miscela.core.card.CardLabels.DENSITY_COEFFICIENTS;
+import static org.miscela.core.card.CardLabels.DENSITY_MODEL;
+import static org.miscela.core.card.CardLabels.DENSITY_REFERENCE;
+import static org.miscela.core.card.CardLabels.DENSITY_UNIT;
+import static org.miscela.core.card.CardLabels.ENTHALPY_UNIT;
+import static org.miscela.core.card.CardLabels.EXCESS_ENTHALPY;
+import static org.miscela.core.card.CardLabels.EXCESS_VOLUME;
+import static org.miscela.core.card.CardLabels.EXTRAPOLATION;
+import static org.miscela.core.card.CardLabels.HEAT_CAPACITY;
+import static org.miscela.core.card.CardLabels.HEAT_CAPACITY_REFERENCE;
+import static org.miscela.core.card.CardLabels.MISSING_PAIRS;
+import static org.miscela.core.card.CardLabels.MODEL;
+import static org.miscela.core.card.CardLabels.MOLAR_MASS_UNIT;
+import static org.miscela.core.card.CardLabels.MOLAR_VOLUME_UNIT;
+import static org.miscela.core.card.CardLabels.SOURCE;
+import static org.miscela.core.card.CardLabels.TEMPERATURE_UNIT;
+import static org.miscela.core.card.CardLabels.TITLE;
+import static org.miscela.core.card.CardReader.normalise;
+
+import org.miscela.core.model.Component;
+import org.miscela.core.model.ConstantDensity;
+import org.miscela.core.model.ExcessFunction;
+import org.miscela.core.model.GeometricModel;
+import org.miscela.core.model.HeatCapacity;
+import org.miscela.core.model.PolynomialDensity;
+import org.miscela.core.model.PureDensity;
+import org.miscela.core.model.Tanaka2001WaterDensity;
+import org.miscela.core.problem.Numbers;
+import org.miscela.core.problem.Problem;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Builds a {@link Card} from a card's sorted rows: reads each row's values as the format defines them, converts them
+ * to internal units and checks them (units known, masses and densities positive, every keyed row about a declared
+ * component, the models' ranges covering the validity range), in a fixed order, so the same card always fails with
+ * the same first problem. The validity range is read by {@link ValidityBuilder}, each excess-property section by
+ * {@link ExcessSectionBuilder}.
+ */
+final class CardBuilder {
+    /** Intervals the validity range is split into when checking a density model stays positive. */
+    private static final int DENSITY_SAMPLES = 256;
+
+    private final ParsedCard rows;
+    /** Whether only the pure-component part is read ({@link CardReader#readPureComponents}). */
+    private final boolean pureOnly;
+    private Units units;
+
+    CardBuilder(ParsedCard rows, boolean pureOnly) {
+        this.rows = rows;
+        this.pureOnly = pureOnly;
+    }
+
+    Card card() {
+        Units.MolarEnthalpy enthalpyUnit = rows.global(ENTHALPY_UNIT) != null
+                ? unit(ENTHALPY_UNIT, Units.MolarEnthalpy.class) : null;
+        units = new Units(unit(TEMPERATURE_UNIT, Units.Temperature.class), unit(DENSITY_UNIT, Units.Density.class),
+                unit(MOLAR_VOLUME_UNIT, Units.MolarVolume.class), unit(MOLAR_MASS_UNIT, Units.MolarMass.class),
+                enthalpyUnit);
+        String source = rows.required(SOURCE).text(0);
+        rows.required(SOURCE).atMost(1);
+        CardRow titleRow = rows.global(TITLE);
+        String title = titleRow == null ? "" : titleRow.text(0);
+        if (titleRow != null) {
+            titleRow.atMost(1);
+        }
+        Map<String, CardRow> componentRows = rows.keyed(COMPONENT);
+        List<String> names = new ArrayList<>();
+        List<Double> masses = new ArrayList<>();
+        for (CardRow r : componentRows.values()) {
+            names.add(r.text(0).trim());
+            double mass = r.number(1);
+            if (!(mass > 0)) {
+                throw Problem.NOT_POSITIVE.raise(r.number, r.label, "the molar mass", Numbers.show(mass));
+            }
+            r.atMost(2);
+            masses.add(units.molarMass().toGramPerMol(mass));
+        }
+        if (names.size() < 2) {
+            throw Problem.TOO_FEW_COMPONENTS.raise(names.size());
+        }
+        checkSubjects(componentRows);
+        Subjects subjects = new Subjects(names);
+        Validity validity = new ValidityBuilder(rows, subjects, units.temperature()).validity(pureOnly);
+        List<Component> components = new ArrayList<>();
+        for (int i = 0; i < names.size(); i++) {
+            components.add(new Component(names.get(i), masses.get(i), density(names.get(i), validity),
+                    heatCapacity(names.get(i))));
+        }
+        int[] asymmetric = {-1};
+        GeometricModel model = model(subjects, asymmetric);
+        boolean missingIdeal = choice(MISSING_PAIRS, "ideal", "refuse") || pureOnly;
+        // A card may describe enthalpy alone; then the volumetric functions refuse rather than guess.
+        boolean enthalpyOnly = rows.hasSection(EXCESS_ENTHALPY) && !rows.hasSection(EXCESS_VOLUME);
+        ExcessFunction volume = enthalpyOnly ? null
+                : section(EXCESS_VOLUME, units.molarVolume().toCm3PerMol(1.0), subjects, model, asymmetric[0],
+                        missingIdeal);
+        ExcessFunction enthalpy = null;
+        if (rows.hasSection(EXCESS_ENTHALPY)) {
+            if (enthalpyUnit == null) {
+                throw Problem.MISSING_ROW.raise(ENTHALPY_UNIT);
+            }
+            enthalpy = section(EXCESS_ENTHALPY, enthalpyUnit.toJoulePerMol(1.0), subjects, model, asymmetric[0],
+                    missingIdeal);
+        }
+        boolean allow = choice(EXTRAPOLATION, "allow", "refuse");
+        return new Card(title, source, units, components, volume, enthalpy, validity, allow, missingIdeal);
+    }
+
+    private ExcessFunction section(String prefix, double factor, Subjects subjects, GeometricModel model,
+            int asymmetric, boolean missingIdeal) {
+        return new ExcessSectionBuilder(rows.section(prefix), subjects, units.temperature(), factor)
+                .build(model, asymmetric, missingIdeal);
+    }
+
+    /** The component's heat capacity, or null when the card gives none. */
+    private HeatCapacity heatCapacity(String name) {
+        String subject = normalise(name);
+        CardRow r = rows.keyed(HEAT_CAPACITY).get(subject);
+        CardRow reference = rows.keyed(HEAT_CAPACITY_REFERENCE).get(subject);
+        if (r == null) {
+            if (reference != null) {
+                throw Problem.MISSING_PAIR_ROW.raise(HEAT_CAPACITY_REFERENCE, name, HEAT_CAPACITY);
+            }
+            return null;
+        }
+        if (units.enthalpy() == null) {
+            throw Problem.MISSING_ROW.raise(ENTHALPY_UNIT);
+        }
+        double[] c = r.numbersFrom(1);
+        for (int j = 0; j < c.length; j++) {
+            c[j] = units.enthalpy().toJoulePerMol(c[j]);
+        }
+        double tRef = 298.15; // irrelevant for a constant heat capacity
+        if (reference != null) {
+            reference.atMost(2);
+            tRef = units.temperature().toKelvin(reference.number(1));
+        } else if (c.length > 1) {
+            throw Problem.MISSING_PAIR_ROW.raise(HEAT_CAPACITY, name, HEAT_CAPACITY_REFERENCE);
+        }
+        return new HeatCapacity(tRef, c);
+    }
+
+    /**
+     * The multicomponent model, Muggianu's when the row is absent; for Toop's, the asymmetric component goes into
+     * {@code asymmetric[0]}.
+     */
+    private GeometricModel model(Subjects subjects, int[] asymmetric) {
+        CardRow r = rows.global(MODEL);
+        if (r == null) {
+            return GeometricModel.MUGGIANU;
+        }
+        String kind = normalise(r.text(0));
+        for (GeometricModel m : GeometricModel.values()) {
+            if (kind.equals(normalise(m.cardName()))) {
+                if (m == GeometricModel.TOOP) {
+                    r.atMost(2);
+                    String a = r.text(1).trim();
+                    asymmetric[0] = subjects.indexOf(a);
+                    if (asymmetric[0] < 0) {
+                        throw Problem.UNKNOWN_COMPONENT.raise(r.number, r.label, a);
+                    }
+                } else {
+                    r.atMost(1);
+                }
+                return m;
+            }
+        }
+        throw Problem.BAD_KEYWORD.raise(r.number, r.label, r.text(0).trim(), "Muggianu, Kohler, Toop");
+    }
+
+    /**
+     * A global yes/no row: true for the word {@code yes}, false for {@code no} or when the row is absent (both
+     * words compared as labels are).
+     */
+    private boolean choice(String label, String yes, String no) {
+        CardRow r = rows.global(label);
+        if (r == null) {
+            return false;
+        }
+        r.atMost(1);
+        String v = normalise(r.text(0));
+        if (v.equals(yes)) {
+            return true;
+        }
+        if (v.equals(no)) {
+            return false;
+        }
+        throw Problem.BAD_KEYWORD.raise(r.number, r.label, r.text(0).trim(), no + ", " + yes);
+    }
+
+    /** Every keyed row must name a declared component (or, for excess rows, a pair of them). */
+    private void checkSubjects(Map<String, CardRow> componentRows) {
+        for (Map.Entry<String, LinkedHashMap<String, CardRow>> e : rows.keyed().entrySet()) {
+            if (e.getKey().equals(COMPONENT) || CardLabels.isSectionRow(e.getKey())
+                    || CardLabels.isPairKeyed(e.getKey())) {
+                continue;
+            }
+            for (Map.Entry<String, CardRow> s : e.getValue().entrySet()) {
+                if (!componentRows.containsKey(s.getKey())) {
+                    CardRow r = s.getValue();
+                    throw Problem.UNKNOWN_COMPONENT.raise(r.number, r.label, r.text(0).trim());
+                }
+            }
+        }
+    }
+
+    /** The pure liquid's density model, checked positive over the validity range. */
+    private PureDensity density(String name, Validity validity) {
+        String subject = normalise(name);
+        CardRow model = rows.keyed(DENSITY_MODEL).get(subject);
+        if (model == null) {
+            throw Problem.MISSING_DENSITY.raise(name);
+        }
+        model.atMost(2);
+        CardRow reference = rows.keyed(DENSITY_REFERENCE).get(subject);
+        CardRow coefficients = rows.keyed(DENSITY_COEFFICIENTS).get(subject);
+        String kind = normalise(model.text(1));
+        PureDensity d;
+        if (kind.equals(ConstantDensity.NAME)) {
+            if (reference != null) {
+                throw Problem.MODEL_VALUES.raise(reference.number, reference.label, ConstantDensity.NAME,
+                        "no reference temperature", "remove this row");
+            }
+            if (coefficients == null) {
+                throw Problem.MODEL_VALUES.raise(model.number, model.label, ConstantDensity.NAME,
+                        "one value in a 'density coefficients' row", "that row is missing");
+            }
+            coefficients.atMost(2);
+            d = new ConstantDensity(units.density().toKgPerM3(coefficients.number(1)));
+        } else if (kind.equals(PolynomialDensity.NAME)) {
+            if (reference == null || coefficients == null) {
+                throw Problem.MODEL_VALUES.raise(model.number, model.label, PolynomialDensity.NAME,
+                        "a 'density reference temperature' row and a 'density coefficients' row",
+                        "one of them is missing");
+            }
+            reference.atMost(2);
+            double tRef = units.temperature().toKelvin(reference.number(1));
+            double[] c = coefficients.numbersFrom(1);
+            for (int j = 0; j < c.length; j++) {
+                c[j] = units.density().toKgPerM3(c[j]);
+            }
+            d = new PolynomialDensity(tRef, c);
+        } else if (kind.equals(normalise(Tanaka2001WaterDensity.NAME))) {
+            CardRow extra = reference != null ? reference : coefficients;
+            if (extra != null) {
+                throw Problem.MODEL_VALUES.raise(extra.number, extra.label, Tanaka2001WaterDensity.NAME,
+                        "no coefficients or reference temperature", "remove this row");
+            }
+            d = Tanaka2001WaterDensity.INSTANCE;
+        } else {
+            throw Problem.BAD_KEYWORD.raise(model.number, model.label, model.text(1),
+                    ConstantDensity.NAME + ", " + PolynomialDensity.NAME + ", " + Tanaka2001WaterDensity.NAME);
+        }
+        double lo = validity.lowestKelvin();
+        double hi = validity.highestKelvin();
+        if (lo < d.lowestKelvin() || hi > d.highestKelvin()) {
+            throw Problem.MODEL_RANGE.raise(model.number, model.label, d.modelName(),
+                    Numbers.show(d.lowestKelvin()), Numbers.show(d.highestKelvin()), Numbers.show(lo),
+                    Numbers.show(hi));
+        }
+        // A polynomial can dip below zero between widely spaced points, so sample the range finely.
+        CardRow cause = coefficients != null ? coefficients : model;
+        for (int s = 0; s <= DENSITY_SAMPLES; s++) {
+            double t = s == DENSITY_SAMPLES ? hi : lo + (hi - lo) * s / DENSITY_SAMPLES;
+            double rho = d.at(t);
+            if (!(rho > 0) || Double.isInfinite(rho)) {
+                throw Problem.DENSITY_NOT_POSITIVE.raise(cause.number, cause.label, name, Numbers.show(rho),
+                        Numbers.show(t));
+            }
+        }
+        return d;
+    }
+
+    /** A global unit row: one known spelling of this kind of unit. */
+    private <E extends Enum<E> & Units.Spelled> E unit(String label, Class<E> type) {
+        CardRow r = rows.required(label);
+        r.atMost(1);
+        E e = Units.lookup(type, r.text(0));
+        if (e == null) {
+            throw Problem.UNKNOWN_UNIT.raise(r.number, r.label, r.text(0).trim(), Units.accepted(type));
+        }
+        return e;
+    }
+}
