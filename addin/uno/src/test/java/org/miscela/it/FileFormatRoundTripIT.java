@@ -49,7 +49,9 @@ import org.miscela.core.catalog.FunctionCatalog;
  *
  * <p>Each format is checked in full before the test fails, and what the files store for the add-in calls (the names
  * in the .xls binary, the formulas in the .xlsx sheet) is written with the outcome to
- * {@code target/file-formats.txt}, and the saved files are kept in {@code target/file-formats/}.
+ * {@code target/file-formats.txt}, and the saved files are kept in {@code target/file-formats/}. So is what each file
+ * shows in an office without the extension, as loaded and after a recalculation (recorded, not asserted: that is the
+ * office's behaviour, not the add-in's).
  */
 @ExtendWith(OfficeParameterResolver.class)
 class FileFormatRoundTripIT {
@@ -197,6 +199,9 @@ class FileFormatRoundTripIT {
                 failures.add(e.getKey() + " " + p);
             }
         }
+        report.append("\nOpened in an office without the extension (recorded, not asserted; 'kept' = the value or "
+                + "text from before saving):\n");
+        report.append(withoutTheExtension(saved, before));
         report.append("\nWhat the files store for the add-in calls:\n");
         report.append("xls   names in the file: ").append(namesInXls(saved.get("xls"))).append('\n');
         report.append("xlsx  formulas of sheet1: ").append(formulasInXlsx(saved.get("xlsx"))).append('\n');
@@ -208,6 +213,51 @@ class FileFormatRoundTripIT {
         Files.write(Paths.get("target", "file-formats.txt"), report.toString().getBytes(StandardCharsets.UTF_8));
         System.out.print(report);
         assertTrue(failures.isEmpty(), "after reopening:\n" + String.join("\n", failures));
+    }
+
+    /**
+     * What a colleague without the add-in sees: each saved file opened in a second office on a fresh profile with no
+     * extension, once as loaded and once after calculateAll, summarised over the formula cells.
+     */
+    private static String withoutTheExtension(Map<String, Path> saved, Map<String, Cell> before) throws Exception {
+        StringBuilder out = new StringBuilder();
+        Path base = Office.freshDirectory();
+        Office bare = Office.launch(base, base.resolve("profile"));
+        try {
+            for (Map.Entry<String, Path> e : saved.entrySet()) {
+                XComponent doc = bare.load(e.getValue());
+                try {
+                    out.append(String.format("%-5s as loaded:        %s%n", e.getKey(), shows(doc, before)));
+                    Sheets.recalculate(doc);
+                    out.append(String.format("%-5s after calculateAll: %s%n", e.getKey(), shows(doc, before)));
+                } finally {
+                    Sheets.close(doc);
+                }
+            }
+        } finally {
+            bare.dispose();
+        }
+        return out.toString();
+    }
+
+    /** Per kind of cell (single-cell number, single-cell text, array), how many show what. */
+    private static String shows(XComponent doc, Map<String, Cell> before) throws Exception {
+        XSpreadsheet sheet = Sheets.sheet(doc, 0);
+        Map<String, Map<String, Integer>> kinds = new LinkedHashMap<>();
+        for (Cell b : before.values()) {
+            String kind = b.where.startsWith("A") && !b.formula.startsWith("{")
+                    ? (b.where.equals("A" + SCALARS.length) ? "native formula" : b.isText ? "text" : "number")
+                    : "array " + (b.isText ? "text" : "number");
+            int col = b.where.charAt(0) - 'A';
+            int row = Integer.parseInt(b.where.substring(1)) - 1;
+            XCell c = Sheets.cell(sheet, col, row);
+            String what = c.getError() != 0 ? "Err:" + c.getError() + " " + Sheets.text(c)
+                    : b.isText ? (Sheets.text(c).equals(b.text) ? "kept" : "text '" + Sheets.text(c) + "'")
+                    : Double.doubleToRawLongBits(c.getValue()) == Double.doubleToRawLongBits(b.value) ? "kept"
+                    : relative(c.getValue(), b.value) <= RELATIVE ? "kept within 1e-12" : "other value";
+            kinds.computeIfAbsent(kind, k -> new LinkedHashMap<>()).merge(what, 1, Integer::sum);
+        }
+        return kinds.toString();
     }
 
     /** The card on its own sheet, named {@code card}; the formulas on the first sheet, x1 inputs in B1:B5. */
