@@ -52,6 +52,9 @@ public final class MetadataWriter {
             prop(x, "      ", "DisplayName", f.displayName(), true);
             prop(x, "      ", "Description", f.summary(), true);
             prop(x, "      ", "Category", f.category(), false);
+            // the name a call is stored under in .xls files; without it Calc writes a macro name and a reload shows
+            // #MACRO? (Err:531)
+            prop(x, "      ", "CompatibilityName", f.displayName(), true);
             x.append("      <node oor:name=\"Parameters\">\n");
             for (ArgumentInfo a : f.arguments()) {
                 x.append("       <node oor:name=\"").append(a.name()).append("\" oor:op=\"replace\">\n");

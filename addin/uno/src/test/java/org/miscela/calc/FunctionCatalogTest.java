@@ -123,6 +123,56 @@ class FunctionCatalogTest {
         }
     }
 
+    /**
+     * Every function node of the XCU carries a CompatibilityName (schema: org.openoffice.Office.CalcAddIns, template
+     * AddInFunction, property CompatibilityName, xs:string, localised), equal to the display name and unique: Calc
+     * stores an add-in call in .xls files under that name and finds the function by it on reload; without it the
+     * call is stored as a macro name and reopens as #MACRO? (Err:531). {@code CalcAddInsRoundTripIT} checks the
+     * reload in a real office.
+     */
+    @Test
+    void xcuGivesEveryFunctionItsCompatibilityName() throws Exception {
+        javax.xml.parsers.DocumentBuilderFactory factory = javax.xml.parsers.DocumentBuilderFactory.newInstance();
+        factory.setNamespaceAware(true);
+        org.w3c.dom.Document xcu = factory.newDocumentBuilder().parse(new org.xml.sax.InputSource(
+                new java.io.StringReader(MetadataWriter.calcAddInsXcu())));
+        String oor = "http://openoffice.org/2001/registry";
+        org.w3c.dom.Element functions = null;
+        org.w3c.dom.NodeList nodes = xcu.getElementsByTagName("node");
+        for (int i = 0; i < nodes.getLength(); i++) {
+            org.w3c.dom.Element e = (org.w3c.dom.Element) nodes.item(i);
+            if ("AddInFunctions".equals(e.getAttributeNS(oor, "name"))) {
+                functions = e;
+            }
+        }
+        assertTrue(functions != null, "no AddInFunctions node");
+        Set<String> compatibilityNames = new HashSet<>();
+        int seen = 0;
+        for (org.w3c.dom.Node n = functions.getFirstChild(); n != null; n = n.getNextSibling()) {
+            if (!(n instanceof org.w3c.dom.Element)) {
+                continue;
+            }
+            org.w3c.dom.Element function = (org.w3c.dom.Element) n;
+            FunctionInfo f = FunctionCatalog.byMethod(function.getAttributeNS(oor, "name"));
+            List<String> values = new ArrayList<>();
+            for (org.w3c.dom.Node c = function.getFirstChild(); c != null; c = c.getNextSibling()) {
+                if (c instanceof org.w3c.dom.Element && "prop".equals(c.getLocalName())
+                        && "CompatibilityName".equals(((org.w3c.dom.Element) c).getAttributeNS(oor, "name"))) {
+                    org.w3c.dom.Element value = (org.w3c.dom.Element) ((org.w3c.dom.Element) c)
+                            .getElementsByTagName("value").item(0);
+                    assertEquals("en-US", value.getAttributeNS(javax.xml.XMLConstants.XML_NS_URI, "lang"),
+                            f.method() + ": CompatibilityName is localised like LibreOffice's own add-ins'");
+                    values.add(value.getTextContent());
+                }
+            }
+            assertEquals(Arrays.asList(f.displayName()), values, f.method() + ": exactly one CompatibilityName");
+            assertTrue(compatibilityNames.add(values.get(0).toUpperCase(java.util.Locale.ROOT)),
+                    "duplicate CompatibilityName " + values.get(0));
+            seen++;
+        }
+        assertEquals(FunctionCatalog.functions().size(), seen, "function nodes in the XCU");
+    }
+
     /** The README's function list names every function with its exact syntax, and nothing else. */
     @Test
     void readmeListsEveryFunction() throws IOException {

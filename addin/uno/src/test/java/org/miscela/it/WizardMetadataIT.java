@@ -6,6 +6,9 @@ import static org.junit.jupiter.api.Assertions.assertNotNull;
 
 import com.sun.star.beans.PropertyValue;
 import com.sun.star.container.XIndexAccess;
+import com.sun.star.container.XNameAccess;
+import com.sun.star.lang.XComponent;
+import com.sun.star.lang.XMultiServiceFactory;
 import com.sun.star.sheet.FunctionArgument;
 import com.sun.star.uno.UnoRuntime;
 import java.util.HashMap;
@@ -16,7 +19,10 @@ import org.miscela.core.catalog.ArgumentInfo;
 import org.miscela.core.catalog.FunctionCatalog;
 import org.miscela.core.catalog.FunctionInfo;
 
-/** What the Function Wizard shows, read from the running office, equals the catalogue: names and every help text. */
+/**
+ * What the Function Wizard shows, read from the running office, equals the catalogue: names and every help text; and
+ * the office's configuration holds every function's CompatibilityName.
+ */
 @ExtendWith(OfficeParameterResolver.class)
 class WizardMetadataIT {
 
@@ -46,6 +52,35 @@ class WizardMetadataIT {
             }
         }
         System.out.printf("wizard: %d Miscela functions with all argument help present%n",
+                FunctionCatalog.functions().size());
+    }
+
+    /**
+     * The CompatibilityName of every function (the name .xls files store a call under), as the running office has
+     * merged it from the installed extension's CalcAddIns.xcu into its configuration. FunctionDescriptions has no
+     * such field (com.sun.star.sheet.FunctionDescription: Id, Category, Name, Description, Arguments), so this reads
+     * the configuration node org.openoffice.Office.CalcAddIns/AddInInfo/SERVICE/AddInFunctions; FileFormatRoundTripIT
+     * checks what it is for, the .xls round trip.
+     */
+    @Test
+    void everyFunctionHasItsCompatibilityNameInTheOfficeConfiguration(Office office) throws Exception {
+        XMultiServiceFactory provider = UnoRuntime.queryInterface(XMultiServiceFactory.class,
+                office.service("com.sun.star.configuration.ConfigurationProvider"));
+        Object access = provider.createInstanceWithArguments("com.sun.star.configuration.ConfigurationAccess",
+                new Object[] {Office.property("nodepath", "/org.openoffice.Office.CalcAddIns/AddInInfo/"
+                        + FunctionCatalog.SERVICE + "/AddInFunctions")});
+        try {
+            XNameAccess functions = UnoRuntime.queryInterface(XNameAccess.class, access);
+            assertEquals(FunctionCatalog.functions().size(), functions.getElementNames().length,
+                    "functions in the office's configuration");
+            for (FunctionInfo f : FunctionCatalog.functions()) {
+                XNameAccess node = UnoRuntime.queryInterface(XNameAccess.class, functions.getByName(f.method()));
+                assertEquals(f.displayName(), node.getByName("CompatibilityName"), f.method());
+            }
+        } finally {
+            UnoRuntime.queryInterface(XComponent.class, access).dispose();
+        }
+        System.out.printf("configuration: %d Miscela functions with their CompatibilityName%n",
                 FunctionCatalog.functions().size());
     }
 }

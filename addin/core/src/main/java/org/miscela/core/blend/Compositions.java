@@ -25,8 +25,11 @@ public final class Compositions {
     static final double SUM_TOLERANCE = 1e-6;
     /** How far a given balance entry may differ, relative, from the one the other entries imply. */
     static final double BALANCE_TOLERANCE = 1e-6;
-    /** Cells of the scan for the balance component's mole fraction; see {@link Roots}. */
-    static final int SCAN_CELLS = 128;
+    /**
+     * Cells of the scan for the balance component's mole fraction (so {@value} + 1 points); see {@link Roots}. Public
+     * so that the function catalogue's texts quote it rather than repeat it.
+     */
+    public static final int SCAN_CELLS = 128;
 
     private Compositions() {
     }

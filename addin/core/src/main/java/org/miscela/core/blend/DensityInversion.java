@@ -31,7 +31,8 @@ import org.miscela.core.card.Validity;
  * official tables, local codes and licensed practice.
  */
 public final class DensityInversion {
-    static final int SCAN_CELLS = 256;
+    /** Cells of the scan along the path; public so that the function catalogue's formula text quotes it. */
+    public static final int SCAN_CELLS = 256;
 
     private DensityInversion() {
     }

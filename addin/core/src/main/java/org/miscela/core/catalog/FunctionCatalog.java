@@ -5,6 +5,8 @@ import java.util.Collections;
 import java.util.List;
 import org.miscela.core.problem.Problem;
 import org.miscela.core.blend.BlendProblem;
+import org.miscela.core.blend.Compositions;
+import org.miscela.core.blend.DensityInversion;
 import org.miscela.core.fit.FitProblem;
 
 /**
@@ -108,7 +110,8 @@ public final class FunctionCatalog {
             BlendProblem.NEEDS_SOLVENT, "the cell functions always name a solvent: the card's last component when "
                     + "the balance is left out",
             BlendProblem.NO_COMPOSITION, "the concentration search's last fallback, for a card whose molar volume "
-                    + "is not physical between two of the 257 points the search looks at while physical at all of "
+                    + "is not physical between two of the " + (Compositions.SCAN_CELLS + 1) + " points the search "
+                    + "looks at while physical at all of "
                     + "them; no card or input is known that reaches it, and no test produces it (values too large "
                     + "to add up are TOO_CONCENTRATED)",
             BlendProblem.NEEDS_TEMPERATURE, "every cell function that takes a quantity also takes the temperature "
@@ -398,7 +401,7 @@ public final class FunctionCatalog {
                             + "component on a chosen basis. Every composition with that density is searched for; "
                             + "when there are several the call is refused, listing them, until a range is given.",
                     "ρ(x(s), T) = ρ_measured along x(s) (component k at s, the others in the reference's ratios); "
-                            + "a scan in 256 cells, each root refined by Brent's method",
+                            + "a scan in " + DensityInversion.SCAN_CELLS + " cells, each root refined by Brent's method",
                     "=MIX.FROMDENSITY(card; 913.771; 20; 1; \"mass fraction\")",
                     CARD, required("density", "density", "The measured density in the card's unit: a value, or a "
                             + "range for an array result."),
