@@ -100,6 +100,7 @@ final class Explanations {
         add("volumeCorrection",
             (a, p) -> a.volumeCorrection(r(p[0]), r(p[1]), p[2], r(p[3]), p[4], p[5], p[6], p[7], p[8]));
         add("addInInfo", (a, p) -> a.addInInfo(p[0]));
+        add("mixtureMolarMass", (a, p) -> a.mixtureMolarMass(r(p[0]), r(p[1])));
     }
 
     private Explanations() {

@@ -328,6 +328,9 @@ final class FuzzCall {
                         temperatureOrVoid(), balance(), extrapolate()};
                     break;
                 }
+                case "mixtureMolarMass":
+                    a = new Object[] {composition()};
+                    break;
                 case "addInInfo":
                     a = new Object[] {pick(Any.VOID, "version", "card reads", "cards kept", " Cards Kept ",
                         clean ? "version" : "cards", "", 1.0, Boolean.TRUE)};

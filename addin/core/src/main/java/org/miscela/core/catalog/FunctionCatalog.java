@@ -472,7 +472,16 @@ public final class FunctionCatalog {
                             + "\"density\" (case does not matter)."),
                     argumentList("arguments", "arguments", "The same arguments as the call, in its order (one per "
                             + "argument box); leave out here what the call leaves out.")).answersInWords()
-                    .shows("The unit \"lb\" is not recognised").refuses(list())));
+                    .shows("The unit \"lb\" is not recognised").refuses(list()),
+            new FunctionInfo("mixtureMolarMass", "MIX.MOLARMASS", "mean molar mass of the mixture",
+                    "Mean molar mass of the mixture (mass per mole of mixture) from the molar masses on the card, in "
+                            + "the card's molar mass unit. It needs no temperature and no density.",
+                    "M = Σ_k x_k·M_k",
+                    "=MIX.MOLARMASS(card; 0.3)",
+                    CARD, MOLE_FRACTION)
+                    .shows("26.431").refuses(list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER, Problem.NOT_BINARY,
+                            Problem.MOLE_FRACTION_OUTSIDE_UNIT, Problem.COMPOSITION_NEGATIVE,
+                            Problem.COMPOSITION_SUM, Problem.COMPOSITION_SHAPE))));
 
     private FunctionCatalog() {
     }
