@@ -8,8 +8,10 @@ import org.miscela.core.blend.BlendProblem;
 import org.miscela.core.fit.FitProblem;
 
 /**
- * The single source of truth for every cell function's user-facing metadata. The wizard's CalcAddIns.xcu and
- * docs/functions.md are generated from this list; tests check it against the IDL and the implementation.
+ * The single source of every cell function's signature and user-facing metadata, in interface order (new functions go
+ * at the end). The IDL interface, the wizard's CalcAddIns.xcu, docs/functions.md, docs/errors.md and the README's
+ * function table are generated from this list; MIX.EXPLAIN's parameter kinds and the fuzzers' functions come from it,
+ * and tests check the compiled interface, the adapter and the explain table against it.
  */
 public final class FunctionCatalog {
     /** The UNO service: permanent, written into every saved workbook. */
