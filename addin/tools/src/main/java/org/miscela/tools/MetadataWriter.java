@@ -10,24 +10,45 @@ import java.nio.file.Path;
 import java.nio.file.Paths;
 
 /**
- * Writes the artefacts made from the {@link FunctionCatalog}: Calc's wizard metadata (CalcAddIns.xcu) and the function
- * reference (docs/functions.md). Run by the build; {@code --docs PATH} rewrites the reference.
+ * Writes the artefacts made from the {@link FunctionCatalog}: Calc's wizard metadata (CalcAddIns.xcu, by the build),
+ * and, run by scripts/regenerate-docs, the function reference (docs/functions.md), the error catalogue
+ * (docs/errors.md), the IDL interface ({@link IdlWriter}) and the README's function table.
  */
 public final class MetadataWriter {
     private MetadataWriter() {
     }
 
     public static void main(String[] args) throws IOException {
-        if (args.length == 2 && args[0].equals("--docs")) {
-            write(Paths.get(args[1]), functionReference());
-        } else if (args.length == 2 && args[0].equals("--errors")) {
-            write(Paths.get(args[1]), errorCatalogue());
-        } else if (args.length == 1) {
+        if (args.length == 1) {
             write(Paths.get(args[0]), calcAddInsXcu());
-        } else {
-            throw new IllegalArgumentException("usage: MetadataWriter OUT.xcu | --docs OUT.md");
+            return;
+        }
+        if (args.length == 0 || args.length % 2 != 0) {
+            throw new IllegalArgumentException(USAGE);
+        }
+        for (int i = 0; i < args.length; i += 2) {
+            Path out = Paths.get(args[i + 1]);
+            switch (args[i]) {
+                case "--docs":
+                    write(out, functionReference());
+                    break;
+                case "--errors":
+                    write(out, errorCatalogue());
+                    break;
+                case "--idl":
+                    write(out, IdlWriter.interfaceIdl());
+                    break;
+                case "--readme":
+                    write(out, withFunctionTable(new String(Files.readAllBytes(out), StandardCharsets.UTF_8)));
+                    break;
+                default:
+                    throw new IllegalArgumentException(USAGE);
+            }
         }
     }
+
+    private static final String USAGE = "usage: MetadataWriter OUT.xcu | [--docs functions.md] [--errors errors.md] "
+            + "[--idl XMixtureFunctions.idl] [--readme README.md]";
 
     private static void write(Path out, String text) throws IOException {
         if (out.getParent() != null) {
@@ -139,6 +160,32 @@ public final class MetadataWriter {
                     .append("`.\n");
         }
         return m.toString();
+    }
+
+    /** The README's function table is the text between these two lines. */
+    public static final String TABLE_START = "<!-- function table: generated from the function catalogue by "
+            + "scripts/regenerate-docs; a test fails when it is out of date -->";
+    public static final String TABLE_END = "<!-- end of the function table -->";
+
+    /** The README's function table: each function's syntax and a few words on what it returns. */
+    public static String functionTable() {
+        StringBuilder m = new StringBuilder("| function | returns |\n|---|---|\n");
+        for (FunctionInfo f : FunctionCatalog.functions()) {
+            m.append("| `").append(syntax(f)).append("` | ").append(f.brief().replace("|", "\\|")).append(" |\n");
+        }
+        return m.toString();
+    }
+
+    /** The README's text with the function table between its markers made anew. */
+    public static String withFunctionTable(String readme) {
+        int start = readme.indexOf(TABLE_START);
+        int end = readme.indexOf(TABLE_END);
+        if (start < 0 || end < start) {
+            throw new IllegalArgumentException("the README lacks the function table's markers: " + TABLE_START
+                    + " … " + TABLE_END);
+        }
+        return readme.substring(0, start + TABLE_START.length()) + "\n" + functionTable()
+                + readme.substring(end);
     }
 
     /** How a call is written, optional arguments in brackets: {@code MIX.DENSITY(card; x1; temperature; [extrapolate])}. */

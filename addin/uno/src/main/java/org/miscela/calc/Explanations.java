@@ -5,8 +5,10 @@ import com.sun.star.uno.Any;
 import java.util.LinkedHashMap;
 import java.util.Locale;
 import java.util.Map;
+import org.miscela.core.catalog.ArgumentInfo;
 import org.miscela.core.catalog.FunctionCatalog;
 import org.miscela.core.catalog.FunctionInfo;
+import org.miscela.core.catalog.IdlType;
 import org.miscela.core.functions.CardFunctions;
 import org.miscela.core.problem.Problem;
 
@@ -14,15 +16,15 @@ import org.miscela.core.problem.Problem;
  * MIX.EXPLAIN: runs another function's method on the arguments of a call, exactly as Calc would pass them, and gives
  * the words of its refusal, or "OK". The arguments arrive as Calc's variable argument list: a single cell as its
  * value, a range as {@code Object[][]}, a left-out argument as void. Each method's parameters are either ranges
- * (IDL {@code sequence<sequence<any>>}, here 'R') or single values ({@code any}, here 'V'); a value given for a range
- * parameter becomes a one-cell range, as Calc itself would pass it. A range parameter left out is refused by Calc
- * itself (Err:502, the add-in is not called), and so is a call with too few or too many arguments (Err:504): for
- * those MIX.EXPLAIN says so rather than run the method.
+ * (IDL {@code sequence<sequence<any>>}, here 'R') or single values ({@code any}, here 'V'), as the function catalogue
+ * says; a value given for a range parameter becomes a one-cell range, as Calc itself would pass it. A range parameter
+ * left out is refused by Calc itself (Err:502, the add-in is not called), and so is a call with too few or too many
+ * arguments (Err:504): for those MIX.EXPLAIN says so rather than run the method.
  */
 final class Explanations {
-    /** One method called with the decoded arguments. */
+    /** One method called with the decoded arguments, in its parameters' order. */
     interface Call {
-        Object on(MixtureAddIn addIn, Object[] p) throws IllegalArgumentException;
+        Object on(XMixtureFunctions functions, Object[] p) throws IllegalArgumentException;
     }
 
     /** A method's parameter kinds ('R' range, 'V' value) in IDL order, and how to call it. */
@@ -44,53 +46,61 @@ final class Explanations {
         }
     }
 
-    /** Every function of the catalogue but MIX.EXPLAIN itself, by IDL method name. */
+    /**
+     * Every function of the catalogue but MIX.EXPLAIN itself, by IDL method name: the kinds from the catalogue, the
+     * call written out (shipped code uses no reflection). ExplanationsTest fails when a function has no call here or
+     * a call passes other arguments, in another order, or to another method.
+     */
     private static final Map<String, Target> TARGETS = new LinkedHashMap<>();
 
-    private static void add(String method, String kinds, Call call) {
-        TARGETS.put(method, new Target(kinds, call));
+    private static void add(String method, Call call) {
+        TARGETS.put(method, new Target(kinds(FunctionCatalog.byMethod(method)), call));
+    }
+
+    /** A function's parameter kinds as a word of 'R' (range) and 'V' (single value), in IDL order. */
+    static String kinds(FunctionInfo f) {
+        StringBuilder kinds = new StringBuilder();
+        for (ArgumentInfo a : f.arguments()) {
+            kinds.append(a.kind() == IdlType.Kind.RANGE ? 'R' : 'V');
+        }
+        return kinds.toString();
     }
 
     static {
-        add("excessMolarVolume", "RRRV", (a, p) -> a.excessMolarVolume(r(p[0]), r(p[1]), r(p[2]), p[3]));
-        add("partialMolarVolume", "RVRRV", (a, p) -> a.partialMolarVolume(r(p[0]), p[1], r(p[2]), r(p[3]), p[4]));
-        add("partialExcessMolarVolume", "RVRRV",
-            (a, p) -> a.partialExcessMolarVolume(r(p[0]), p[1], r(p[2]), r(p[3]), p[4]));
-        add("mixtureMolarVolume", "RRRV", (a, p) -> a.mixtureMolarVolume(r(p[0]), r(p[1]), r(p[2]), p[3]));
-        add("mixtureDensity", "RRRV", (a, p) -> a.mixtureDensity(r(p[0]), r(p[1]), r(p[2]), p[3]));
-        add("pureDensity", "RVRV", (a, p) -> a.pureDensity(r(p[0]), p[1], r(p[2]), p[3]));
-        add("checkCard", "R", (a, p) -> a.checkCard(r(p[0])));
-        add("checkPoint", "RRRV", (a, p) -> a.checkPoint(r(p[0]), r(p[1]), r(p[2]), p[3]));
-        add("excessEnthalpy", "RRRV", (a, p) -> a.excessEnthalpy(r(p[0]), r(p[1]), r(p[2]), p[3]));
-        add("partialExcessEnthalpy", "RVRRV",
-            (a, p) -> a.partialExcessEnthalpy(r(p[0]), p[1], r(p[2]), r(p[3]), p[4]));
-        add("mixingHeat", "RRRVV", (a, p) -> a.mixingHeat(r(p[0]), r(p[1]), r(p[2]), p[3], p[4]));
-        add("additionHeat", "RRVVRVV",
-            (a, p) -> a.additionHeat(r(p[0]), r(p[1]), p[2], p[3], r(p[4]), p[5], p[6]));
-        add("adiabaticRise", "RRRVV", (a, p) -> a.adiabaticRise(r(p[0]), r(p[1]), r(p[2]), p[3], p[4]));
-        add("insideValidity", "RRR", (a, p) -> a.insideValidity(r(p[0]), r(p[1]), r(p[2])));
-        add("traceEvaluation", "RRRVV", (a, p) -> a.traceEvaluation(r(p[0]), r(p[1]), r(p[2]), p[3], p[4]));
-        add("fitExcessVolume", "RRVVVVVV",
-            (a, p) -> a.fitExcessVolume(r(p[0]), r(p[1]), p[2], p[3], p[4], p[5], p[6], p[7]));
-        add("fitDensity", "RVRRRVVVVV",
+        add("excessMolarVolume", (a, p) -> a.excessMolarVolume(r(p[0]), r(p[1]), r(p[2]), p[3]));
+        add("partialMolarVolume", (a, p) -> a.partialMolarVolume(r(p[0]), p[1], r(p[2]), r(p[3]), p[4]));
+        add("partialExcessMolarVolume", (a, p) -> a.partialExcessMolarVolume(r(p[0]), p[1], r(p[2]), r(p[3]), p[4]));
+        add("mixtureMolarVolume", (a, p) -> a.mixtureMolarVolume(r(p[0]), r(p[1]), r(p[2]), p[3]));
+        add("mixtureDensity", (a, p) -> a.mixtureDensity(r(p[0]), r(p[1]), r(p[2]), p[3]));
+        add("pureDensity", (a, p) -> a.pureDensity(r(p[0]), p[1], r(p[2]), p[3]));
+        add("checkCard", (a, p) -> a.checkCard(r(p[0])));
+        add("checkPoint", (a, p) -> a.checkPoint(r(p[0]), r(p[1]), r(p[2]), p[3]));
+        add("excessEnthalpy", (a, p) -> a.excessEnthalpy(r(p[0]), r(p[1]), r(p[2]), p[3]));
+        add("partialExcessEnthalpy", (a, p) -> a.partialExcessEnthalpy(r(p[0]), p[1], r(p[2]), r(p[3]), p[4]));
+        add("mixingHeat", (a, p) -> a.mixingHeat(r(p[0]), r(p[1]), r(p[2]), p[3], p[4]));
+        add("additionHeat", (a, p) -> a.additionHeat(r(p[0]), r(p[1]), p[2], p[3], r(p[4]), p[5], p[6]));
+        add("adiabaticRise", (a, p) -> a.adiabaticRise(r(p[0]), r(p[1]), r(p[2]), p[3], p[4]));
+        add("insideValidity", (a, p) -> a.insideValidity(r(p[0]), r(p[1]), r(p[2])));
+        add("traceEvaluation", (a, p) -> a.traceEvaluation(r(p[0]), r(p[1]), r(p[2]), p[3], p[4]));
+        add("fitExcessVolume", (a, p) -> a.fitExcessVolume(r(p[0]), r(p[1]), p[2], p[3], p[4], p[5], p[6], p[7]));
+        add("fitDensity",
             (a, p) -> a.fitDensity(r(p[0]), p[1], r(p[2]), r(p[3]), r(p[4]), p[5], p[6], p[7], p[8], p[9]));
-        add("leastSquares", "RRVV", (a, p) -> a.leastSquares(r(p[0]), r(p[1]), p[2], p[3]));
-        add("uncertainty", "RRRVVV", (a, p) -> a.uncertainty(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
-        add("convertComposition", "RRVVVVVV",
+        add("leastSquares", (a, p) -> a.leastSquares(r(p[0]), r(p[1]), p[2], p[3]));
+        add("uncertainty", (a, p) -> a.uncertainty(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
+        add("convertComposition",
             (a, p) -> a.convertComposition(r(p[0]), r(p[1]), p[2], p[3], p[4], p[5], p[6], p[7]));
-        add("batchTotals", "RRVRVVVV",
-            (a, p) -> a.batchTotals(r(p[0]), r(p[1]), p[2], r(p[3]), p[4], p[5], p[6], p[7]));
-        add("recipe", "RVVRVVVVVV",
-            (a, p) -> a.recipe(r(p[0]), p[1], p[2], r(p[3]), p[4], p[5], p[6], p[7], p[8], p[9]));
-        add("adjustBatch", "RRVRVVVVVVVVV", (a, p) -> a.adjustBatch(r(p[0]), r(p[1]), p[2], r(p[3]), p[4], p[5],
-                p[6], p[7], p[8], p[9], p[10], p[11], p[12]));
-        add("additionVolume", "RRVVVVVVVV",
+        add("batchTotals", (a, p) -> a.batchTotals(r(p[0]), r(p[1]), p[2], r(p[3]), p[4], p[5], p[6], p[7]));
+        add("recipe", (a, p) -> a.recipe(r(p[0]), p[1], p[2], r(p[3]), p[4], p[5], p[6], p[7], p[8], p[9]));
+        add("adjustBatch", (a, p) -> a.adjustBatch(r(p[0]), r(p[1]), p[2], r(p[3]), p[4], p[5], p[6], p[7], p[8],
+                p[9], p[10], p[11], p[12]));
+        add("additionVolume",
             (a, p) -> a.additionVolume(r(p[0]), r(p[1]), p[2], p[3], p[4], p[5], p[6], p[7], p[8], p[9]));
-        add("compositionFromDensity", "RRRVVVVVVVV", (a, p) -> a.compositionFromDensity(r(p[0]), r(p[1]), r(p[2]),
-                p[3], p[4], p[5], p[6], p[7], p[8], p[9], p[10]));
-        add("volumeCorrection", "RRVRVVVVV",
+        add("compositionFromDensity", (a, p) -> a.compositionFromDensity(r(p[0]), r(p[1]), r(p[2]), p[3], p[4],
+                p[5], p[6], p[7], p[8], p[9], p[10]));
+        add("volumeCorrection",
             (a, p) -> a.volumeCorrection(r(p[0]), r(p[1]), p[2], r(p[3]), p[4], p[5], p[6], p[7], p[8]));
-        add("addInInfo", "V", (a, p) -> a.addInInfo(p[0]));
+        add("addInInfo", (a, p) -> a.addInInfo(p[0]));
+        add("mixtureMolarMass", (a, p) -> a.mixtureMolarMass(r(p[0]), r(p[1])));
     }
 
     private Explanations() {

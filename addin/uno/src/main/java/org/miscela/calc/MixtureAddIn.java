@@ -480,6 +480,17 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
         }
     }
 
+    @Override
+    public Object mixtureMolarMass(Object[][] card, Object[][] moleFraction) throws IllegalArgumentException {
+        try {
+            // no temperature: each composition is paired with 0, which the molar mass never reads
+            return CompositionArguments.overCompositions(Arguments.card(card), moleFraction, new Object[][] {{0.0}},
+                    (k, x, unused) -> CardFunctions.meanMolarMass(k, x));
+        } catch (MiscelaException ex) {
+            throw refused(ex);
+        }
+    }
+
     /** The fit engine's limits on the orders (beyond them the power basis is too ill-conditioned). */
     private static final int MAX_ORDER_IN_X = 30;
     private static final int MAX_ORDER_IN_T = 10;

@@ -6,9 +6,7 @@ import com.sun.star.lang.IllegalArgumentException;
 import com.sun.star.uno.Any;
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.EnumMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Random;
 import net.jqwik.api.Arbitraries;
 import net.jqwik.api.Assume;
@@ -20,7 +18,6 @@ import net.jqwik.api.Provide;
 import net.jqwik.api.ShrinkingMode;
 import net.jqwik.api.Tuple;
 import net.jqwik.api.lifecycle.AddLifecycleHook;
-import org.miscela.core.catalog.FunctionCatalog;
 import org.miscela.core.card.FuzzCards;
 import org.miscela.core.card.FuzzProfile;
 
@@ -30,22 +27,6 @@ import org.miscela.core.card.FuzzProfile;
  * argument list brings them (a one-cell range as its value now and then, trailing left-out arguments left out).
  */
 class ExplainProperties {
-    /** The IDL method of each fuzzed method. */
-    private static final Map<FuzzCall.Method, String> METHODS = new EnumMap<>(FuzzCall.Method.class);
-
-    static {
-        String[] names = {"excessMolarVolume", "partialMolarVolume", "partialExcessMolarVolume", "mixtureMolarVolume",
-            "mixtureDensity", "pureDensity", "checkCard", "checkPoint", "excessEnthalpy", "partialExcessEnthalpy",
-            "mixingHeat", "additionHeat", "adiabaticRise", "insideValidity", "traceEvaluation", "fitExcessVolume",
-            "fitDensity", "leastSquares", "uncertainty", "convertComposition", "batchTotals", "recipe",
-            "adjustBatch", "additionVolume", "compositionFromDensity", "volumeCorrection"};
-        FuzzCall.Method[] all = FuzzCall.Method.values();
-        assertEquals(all.length, names.length, "a name for every fuzzed method");
-        for (int i = 0; i < all.length; i++) {
-            METHODS.put(all[i], names[i]);
-        }
-    }
-
     private final MixtureAddIn addIn = new MixtureAddIn();
 
     @Provide
@@ -53,9 +34,9 @@ class ExplainProperties {
         Arbitrary<FuzzCards.Kind> kinds = Arbitraries.frequency(Tuple.of(55, FuzzCards.Kind.VALID),
                 Tuple.of(10, FuzzCards.Kind.EXTREME), Tuple.of(25, FuzzCards.Kind.MUTATED),
                 Tuple.of(5, FuzzCards.Kind.SOUP), Tuple.of(5, FuzzCards.Kind.SHAPE));
-        return Combinators.combine(kinds, Arbitraries.longs(), Arbitraries.of(FuzzCall.Method.class),
-                Arbitraries.longs(), Arbitraries.longs()).as((kind, cardSeed, method, callSeed, formSeed) ->
-                Tuple.of(FuzzCall.of(method, FuzzCards.of(kind, cardSeed), callSeed), formSeed));
+        return Combinators.combine(kinds, Arbitraries.longs(), Arbitraries.of(FuzzCall.fuzzed()),
+                Arbitraries.longs(), Arbitraries.longs()).as((kind, cardSeed, function, callSeed, formSeed) ->
+                Tuple.of(FuzzCall.of(function, FuzzCards.of(kind, cardSeed), callSeed), formSeed));
     }
 
     @Property(shrinking = ShrinkingMode.OFF)
@@ -70,9 +51,8 @@ class ExplainProperties {
         } catch (IllegalArgumentException e) {
             expected = e.getMessage();
         }
-        String method = METHODS.get(call.method);
-        String name = FunctionCatalog.byMethod(method).displayName();
-        Explanations.Target target = Explanations.targets().get(method);
+        String name = call.function.displayName();
+        Explanations.Target target = Explanations.targets().get(call.method());
         Object[] arguments = calcForms(call, target, new Random(generated.get2()));
         for (int i = 0; i < arguments.length; i++) {
             // Calc never calls with a range argument missing (it shows Err:502 itself)
@@ -84,12 +64,7 @@ class ExplainProperties {
 
     /** The call's arguments as Calc's variable argument list could hold them. */
     private static Object[] calcForms(FuzzCall call, Explanations.Target target, Random r) {
-        List<Object> out = new ArrayList<>();
-        boolean card = target.kinds.length() == call.args.length + 1;
-        if (card) {
-            out.add(call.cardCells());
-        }
-        out.addAll(Arrays.asList(call.args));
+        List<Object> out = new ArrayList<>(Arrays.asList(call.allArguments()));
         for (int i = 0; i < out.size(); i++) {
             Object v = out.get(i);
             if (target.kinds.charAt(i) == 'R' && v instanceof Object[][] && ((Object[][]) v).length == 1

@@ -1,18 +1,21 @@
 package org.miscela.calc;
 
+import static org.junit.jupiter.api.Assertions.assertDoesNotThrow;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.sun.star.lang.IllegalArgumentException;
 import com.sun.star.uno.Any;
-import java.lang.reflect.Method;
-import java.util.HashSet;
-import java.util.Set;
+import java.lang.reflect.Proxy;
+import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.miscela.core.catalog.FunctionCatalog;
 import org.miscela.core.catalog.FunctionInfo;
+import org.miscela.core.catalog.IdlType;
 import org.miscela.core.problem.Catalogue;
 import org.miscela.core.card.TestCards;
 
@@ -32,25 +35,55 @@ class ExplanationsTest {
         return addIn.explainCall(name, arguments);
     }
 
-    /** Every function but MIX.EXPLAIN has a row, and its kinds are the generated interface's parameter types. */
+    /**
+     * Every function but MIX.EXPLAIN has a call, and each call hands the arguments it is given, the same objects in
+     * the same order, to its own method: a call missing, calling another method, dropping, swapping or treating an
+     * argument as the wrong kind fails here. The kinds themselves are the catalogue's (FunctionCatalogTest checks
+     * them against the interface the office sees).
+     */
     @Test
-    void theTableHasEveryFunctionWithItsParameterKinds() {
-        Set<String> seen = new HashSet<>();
-        for (Method m : XMixtureFunctions.class.getDeclaredMethods()) {
-            if (m.isSynthetic() || m.getName().equals("explainCall")) {
-                continue;
+    void everyCallPassesItsArgumentsInOrderToItsOwnMethod() {
+        List<String> explained = new ArrayList<>();
+        for (FunctionInfo f : FunctionCatalog.functions()) {
+            if (f.arguments().stream().anyMatch(a -> a.kind() == IdlType.Kind.ARGUMENT_LIST)) {
+                continue; // MIX.EXPLAIN itself
             }
-            Explanations.Target t = Explanations.targets().get(m.getName());
-            assertTrue(t != null, "MIX.EXPLAIN cannot run " + m.getName());
-            StringBuilder kinds = new StringBuilder();
-            for (Class<?> p : m.getParameterTypes()) {
-                kinds.append(p == Object[][].class ? 'R' : p == Object.class ? 'V' : '?');
+            Explanations.Target t = Explanations.targets().get(f.method());
+            assertNotNull(t, "MIX.EXPLAIN cannot run " + f.displayName() + ": add its call to Explanations");
+            Object[] given = new Object[f.arguments().size()];
+            for (int i = 0; i < given.length; i++) {
+                String marker = f.method() + " argument " + (i + 1);
+                given[i] = f.arguments().get(i).kind() == IdlType.Kind.RANGE ? new Object[][] {{marker}} : marker;
             }
-            assertEquals(kinds.toString(), t.kinds, m.getName());
-            seen.add(m.getName());
+            Object[][] received = new Object[1][];
+            String[] called = new String[1];
+            XMixtureFunctions recorder = (XMixtureFunctions) Proxy.newProxyInstance(getClass().getClassLoader(),
+                    new Class<?>[] {XMixtureFunctions.class}, (proxy, method, args) -> {
+                        called[0] = method.getName();
+                        received[0] = args == null ? new Object[0] : args;
+                        return null;
+                    });
+            assertDoesNotThrow(() -> t.call.on(recorder, given), f.method() + "'s call takes a value as a range");
+            assertEquals(f.method(), called[0], "the call for " + f.method());
+            Object[] got = received[0];
+            assertEquals(given.length, got.length, f.method() + "'s arguments");
+            for (int i = 0; i < given.length; i++) {
+                assertSame(given[i], got[i], f.method() + " argument " + (i + 1));
+            }
+            assertEquals(Explanations.kinds(f), t.kinds, f.method());
+            explained.add(f.method());
         }
-        assertEquals(seen, Explanations.targets().keySet());
-        assertEquals(FunctionCatalog.functions().size() - 1, seen.size(), "every function of the catalogue");
+        assertEquals(explained, new ArrayList<>(Explanations.targets().keySet()), "calls for functions the "
+                + "catalogue lacks, or in another order");
+    }
+
+    /** The kinds word: 'R' for each range parameter and 'V' for each single value, in IDL order. */
+    @Test
+    void theKindsAreTheCataloguesTypes() {
+        assertEquals("RRRV", Explanations.kinds(FunctionCatalog.byMethod("mixtureDensity")));
+        assertEquals("RVRRV", Explanations.kinds(FunctionCatalog.byMethod("partialMolarVolume")));
+        assertEquals("RVVRVVVVVV", Explanations.kinds(FunctionCatalog.byMethod("recipe")));
+        assertEquals("V", Explanations.kinds(FunctionCatalog.byMethod("addInInfo")));
     }
 
     @Test

@@ -14,85 +14,85 @@ import java.util.Arrays;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
+import com.sun.star.lang.IllegalArgumentException;
+import com.sun.star.lib.uno.typeinfo.MethodTypeInfo;
+import com.sun.star.lib.uno.typeinfo.TypeInfo;
 import org.junit.jupiter.api.Test;
 import org.miscela.core.catalog.ArgumentInfo;
 import org.miscela.core.catalog.FunctionCatalog;
 import org.miscela.core.catalog.FunctionInfo;
+import org.miscela.core.catalog.IdlType;
+import org.miscela.tools.IdlWriter;
 import org.miscela.tools.MetadataWriter;
 
-/** The catalogue, the IDL, the generated Java interface and the generated docs must agree exactly. */
+/**
+ * The catalogue is the one source of every function's signature and texts: the committed IDL, the README's function
+ * table and the docs must be exactly what the generators make of it, and the Java interface javamaker made from the
+ * type library must have its methods, types and exceptions.
+ */
 class FunctionCatalogTest {
-    private static final Pattern METHOD = Pattern.compile("(\\w+)\\s+(\\w+)\\s*\\(([^)]*)\\)", Pattern.DOTALL);
-    private static final Pattern PARAM = Pattern.compile("\\[in\\]\\s+(.+?)\\s+(\\w+)\\s*$", Pattern.DOTALL);
-
-    /** Methods and parameter names in IDL order, read from idl/…/XMixtureFunctions.idl. */
-    private static List<String[]> idlMethods() throws IOException {
-        String idl = new String(Files.readAllBytes(Paths.get("../../idl/org/miscela/calc/XMixtureFunctions.idl")),
-                StandardCharsets.UTF_8);
-        String body = idl.substring(idl.indexOf("interface XMixtureFunctions"));
-        body = body.replaceAll("(?s)/\\*\\*.*?\\*/", " ");
-        List<String[]> out = new ArrayList<>();
-        Matcher m = METHOD.matcher(body.substring(body.indexOf('{') + 1));
-        while (m.find()) {
-            List<String> names = new ArrayList<>();
-            names.add(m.group(2));
-            for (String p : m.group(3).split(",(?![^<]*>)")) {
-                Matcher pm = PARAM.matcher(p.trim());
-                assertTrue(pm.find(), "cannot read parameter " + p);
-                names.add(pm.group(2));
-            }
-            out.add(names.toArray(new String[0]));
-        }
-        return out;
+    private static String committed(String path) throws IOException {
+        return new String(Files.readAllBytes(Paths.get("../..", path)), StandardCharsets.UTF_8);
     }
 
+    /** The IDL in full: names, order, types, results, raises clauses and doc comments. */
     @Test
-    void catalogueMatchesTheIdl() throws IOException {
-        List<String[]> idl = idlMethods();
-        List<FunctionInfo> cat = FunctionCatalog.functions();
-        assertEquals(idl.size(), cat.size(), "number of functions");
-        for (int i = 0; i < idl.size(); i++) {
-            String[] m = idl.get(i);
-            FunctionInfo f = cat.get(i);
-            assertEquals(m[0], f.method(), "function " + i);
-            List<String> args = new ArrayList<>();
-            for (ArgumentInfo a : f.arguments()) {
-                args.add(a.name());
-            }
-            assertEquals(Arrays.asList(m).subList(1, m.length), args, "arguments of " + f.method());
-        }
+    void theIdlIsTheCataloguesOwn() throws IOException {
+        assertEquals(IdlWriter.interfaceIdl(), committed(IdlWriter.PATH),
+                IdlWriter.PATH + " is out of date: run scripts/regenerate-docs (method names are permanent: add, "
+                        + "never rename)");
     }
 
-    /** Every IDL method carries a doc comment with an @param per parameter. */
+    /**
+     * The javamaker-generated interface (from the type library built out of the IDL) has the catalogue's methods in
+     * its order, each parameter's Java type that of its IDL type, the result type, and the exception.
+     */
     @Test
-    void idlIsDocumented() throws IOException {
-        String idl = new String(Files.readAllBytes(Paths.get("../../idl/org/miscela/calc/XMixtureFunctions.idl")),
-                StandardCharsets.UTF_8);
+    void theGeneratedInterfaceHasTheCataloguesSignatures() throws Exception {
+        List<String> order = new ArrayList<>();
+        for (TypeInfo t : (TypeInfo[]) XMixtureFunctions.class.getField("UNOTYPEINFO").get(null)) {
+            if (t instanceof MethodTypeInfo) {
+                order.add(t.getName());
+            }
+        }
+        List<String> methods = new ArrayList<>();
         for (FunctionInfo f : FunctionCatalog.functions()) {
-            int at = idl.indexOf(" " + f.method() + "(");
-            String before = idl.substring(0, at);
-            String doc = before.substring(before.lastIndexOf("/**"));
-            for (ArgumentInfo a : f.arguments()) {
-                assertTrue(doc.contains("@param " + a.name() + " "), f.method() + " lacks @param " + a.name());
-            }
+            methods.add(f.method());
         }
-    }
-
-    /** The javamaker-generated interface (from the type library) has the same methods and parameter counts. */
-    @Test
-    void catalogueMatchesTheGeneratedInterface() {
-        Set<String> seen = new HashSet<>();
+        assertEquals(methods, order, "the interface's methods in order");
+        int declared = 0;
         for (Method m : XMixtureFunctions.class.getDeclaredMethods()) {
             if (m.isSynthetic()) {
                 continue;
             }
+            declared++;
             FunctionInfo f = FunctionCatalog.byMethod(m.getName());
-            assertEquals(f.arguments().size(), m.getParameterCount(), m.getName());
-            seen.add(m.getName());
+            List<Class<?>> expected = new ArrayList<>();
+            for (ArgumentInfo a : f.arguments()) {
+                expected.add(javaType(a.type()));
+            }
+            assertEquals(expected, Arrays.asList(m.getParameterTypes()), m.getName() + "'s parameters");
+            assertEquals(javaType(f.returnType()), m.getReturnType(), m.getName() + "'s result");
+            assertEquals(f.raisesIllegalArgument() ? List.of(IllegalArgumentException.class) : List.of(),
+                    Arrays.asList(m.getExceptionTypes()), m.getName() + "'s exceptions");
         }
-        assertEquals(FunctionCatalog.functions().size(), seen.size());
+        assertEquals(FunctionCatalog.functions().size(), declared, "methods of the interface");
+    }
+
+    /** What javamaker makes of each IDL type. */
+    private static Class<?> javaType(IdlType type) {
+        switch (type) {
+            case RANGE:
+                return Object[][].class;
+            case ANY:
+                return Object.class;
+            case ARGUMENT_LIST:
+                return Object[].class;
+            case STRING:
+                return String.class;
+            default:
+                throw new AssertionError(type);
+        }
     }
 
     @Test
@@ -127,7 +127,7 @@ class FunctionCatalogTest {
      * Every function node of the XCU carries a CompatibilityName (schema: org.openoffice.Office.CalcAddIns, template
      * AddInFunction, property CompatibilityName, xs:string, localised), equal to the display name and unique: Calc
      * stores an add-in call in .xls files under that name and finds the function by it on reload; without it the
-     * call is stored as a macro name and reopens as #MACRO? (Err:531). {@code CalcAddInsRoundTripIT} checks the
+     * call is stored as a macro name and reopens as #MACRO? (Err:531). {@code FileFormatRoundTripIT} checks the
      * reload in a real office.
      */
     @Test
@@ -173,33 +173,24 @@ class FunctionCatalogTest {
         assertEquals(FunctionCatalog.functions().size(), seen, "function nodes in the XCU");
     }
 
-    /** The README's function list names every function with its exact syntax, and nothing else. */
+    /** The README's function table is the catalogue's, between its markers. */
     @Test
-    void readmeListsEveryFunction() throws IOException {
-        String readme = new String(Files.readAllBytes(Paths.get("../../README.md")), StandardCharsets.UTF_8);
-        for (FunctionInfo f : FunctionCatalog.functions()) {
-            assertTrue(readme.contains("| `" + MetadataWriter.syntax(f) + "` |"),
-                    "README lacks the row for " + MetadataWriter.syntax(f));
-        }
-        Matcher rows = Pattern.compile("(?m)^\\| `MIX\\.").matcher(readme);
-        int count = 0;
-        while (rows.find()) {
-            count++;
-        }
-        assertEquals(FunctionCatalog.functions().size(), count, "function rows in the README");
+    void theReadmeFunctionTableIsUpToDate() throws IOException {
+        String readme = committed("README.md");
+        assertEquals(MetadataWriter.withFunctionTable(readme), readme,
+                "README.md's function table is out of date: run scripts/regenerate-docs");
+        assertTrue(readme.contains(MetadataWriter.functionTable()), "the table itself");
     }
 
     @Test
     void functionReferenceIsUpToDate() throws IOException {
-        String committed = new String(Files.readAllBytes(Paths.get("../../docs/functions.md")), StandardCharsets.UTF_8);
-        assertEquals(MetadataWriter.functionReference(), committed,
+        assertEquals(MetadataWriter.functionReference(), committed("docs/functions.md"),
                 "docs/functions.md is out of date: run scripts/regenerate-docs");
     }
 
     @Test
     void errorCatalogueIsUpToDate() throws IOException {
-        String committed = new String(Files.readAllBytes(Paths.get("../../docs/errors.md")), StandardCharsets.UTF_8);
-        assertEquals(MetadataWriter.errorCatalogue(), committed,
+        assertEquals(MetadataWriter.errorCatalogue(), committed("docs/errors.md"),
                 "docs/errors.md is out of date: run scripts/regenerate-docs");
     }
 

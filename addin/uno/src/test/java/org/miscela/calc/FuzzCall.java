@@ -3,13 +3,20 @@ package org.miscela.calc;
 import com.sun.star.lang.IllegalArgumentException;
 import com.sun.star.uno.Any;
 import com.sun.star.uno.Type;
+import java.lang.reflect.InvocationTargetException;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.Collections;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Random;
 import org.miscela.core.card.Card;
 import org.miscela.core.card.CardReader;
 import org.miscela.core.card.FuzzCards;
+import org.miscela.core.catalog.FunctionCatalog;
+import org.miscela.core.catalog.FunctionInfo;
+import org.miscela.core.catalog.IdlType;
 import org.miscela.core.problem.MiscelaException;
 
 /**
@@ -19,30 +26,57 @@ import org.miscela.core.problem.MiscelaException;
  * the edges around them, with wrong shapes, blanks, text and non-finite numbers mixed in. All values are invented.
  */
 final class FuzzCall {
-    /** Every method of the UNO interface. */
-    enum Method {
-        EXCESS_VOLUME, PARTIAL_VOLUME, PARTIAL_EXCESS_VOLUME, MOLAR_VOLUME, DENSITY, PURE_DENSITY, CHECK_CARD,
-        CHECK_POINT, EXCESS_ENTHALPY, PARTIAL_EXCESS_ENTHALPY, MIXING_HEAT, ADDITION_HEAT, ADIABATIC_RISE, INSIDE,
-        TRACE, FIT_EXCESS, FIT_DENSITY, LEAST_SQUARES, UNCERTAINTY, CONVERT, BATCH, RECIPE, ADJUST, ADDITION_VOLUME,
-        FROM_DENSITY, VOLUME_FACTOR;
+    /**
+     * The functions the fuzzers call: every function of the catalogue but MIX.EXPLAIN (whose variable argument list
+     * ExplainProperties fuzzes with these calls). A function without a case in {@link Generator#call} fails
+     * {@code FuzzCoverageTest}.
+     */
+    private static final List<FunctionInfo> FUZZED = fuzzedFunctions();
+    /** The interface's methods by name, to call a method the catalogue names. */
+    private static final Map<String, java.lang.reflect.Method> METHODS = new HashMap<>();
 
-        /** The blending functions, whose array results hold one value per component. */
-        boolean blending() {
-            return ordinal() >= CONVERT.ordinal();
+    static {
+        for (java.lang.reflect.Method m : XMixtureFunctions.class.getMethods()) {
+            METHODS.put(m.getName(), m);
         }
     }
 
-    final Method method;
+    final FunctionInfo function;
     final FuzzCards.Blueprint card;
     final long seed;
-    /** The arguments after the card, in the method's order. */
+    /** The arguments after the card (or all of them, for a function that takes no card), in the method's order. */
     final Object[] args;
 
-    private FuzzCall(Method method, FuzzCards.Blueprint card, long seed, Object[] args) {
-        this.method = method;
+    private FuzzCall(FunctionInfo function, FuzzCards.Blueprint card, long seed, Object[] args) {
+        this.function = function;
         this.card = card;
         this.seed = seed;
         this.args = args;
+    }
+
+    private static List<FunctionInfo> fuzzedFunctions() {
+        List<FunctionInfo> out = new ArrayList<>();
+        for (FunctionInfo f : FunctionCatalog.functions()) {
+            if (f.arguments().stream().noneMatch(a -> a.kind() == IdlType.Kind.ARGUMENT_LIST)) {
+                out.add(f);
+            }
+        }
+        return Collections.unmodifiableList(out);
+    }
+
+    /** The functions to fuzz, in catalogue order. */
+    static List<FunctionInfo> fuzzed() {
+        return FUZZED;
+    }
+
+    /** The IDL method name of the function called. */
+    String method() {
+        return function.method();
+    }
+
+    /** Whether the card's cells are the first argument (they are not for MIX.FITEXCESS, MIX.LEASTSQUARES, MIX.INFO). */
+    boolean takesCard() {
+        return args.length + 1 == function.arguments().size();
     }
 
     /** The card as Calc would pass it: rectangular, "" for blanks. */
@@ -50,66 +84,44 @@ final class FuzzCall {
         return FuzzCards.rectangular(card.cells);
     }
 
+    /** Every argument of the call in the method's order, the card's cells first where the method takes them. */
+    Object[] allArguments() {
+        if (!takesCard()) {
+            return args.clone();
+        }
+        Object[] all = new Object[args.length + 1];
+        all[0] = cardCells();
+        System.arraycopy(args, 0, all, 1, args.length);
+        return all;
+    }
+
+    /** Calls the method the catalogue names through the interface; the add-in's own exceptions pass unchanged. */
     Object invoke(MixtureAddIn a) throws IllegalArgumentException {
-        Object[][] c = cardCells();
-        Object[] p = args;
-        switch (method) {
-            case EXCESS_VOLUME:
-                return a.excessMolarVolume(c, grid(p[0]), grid(p[1]), p[2]);
-            case PARTIAL_VOLUME:
-                return a.partialMolarVolume(c, p[0], grid(p[1]), grid(p[2]), p[3]);
-            case PARTIAL_EXCESS_VOLUME:
-                return a.partialExcessMolarVolume(c, p[0], grid(p[1]), grid(p[2]), p[3]);
-            case MOLAR_VOLUME:
-                return a.mixtureMolarVolume(c, grid(p[0]), grid(p[1]), p[2]);
-            case DENSITY:
-                return a.mixtureDensity(c, grid(p[0]), grid(p[1]), p[2]);
-            case PURE_DENSITY:
-                return a.pureDensity(c, p[0], grid(p[1]), p[2]);
-            case CHECK_CARD:
-                return a.checkCard(c);
-            case CHECK_POINT:
-                return a.checkPoint(c, grid(p[0]), grid(p[1]), p[2]);
-            case EXCESS_ENTHALPY:
-                return a.excessEnthalpy(c, grid(p[0]), grid(p[1]), p[2]);
-            case PARTIAL_EXCESS_ENTHALPY:
-                return a.partialExcessEnthalpy(c, p[0], grid(p[1]), grid(p[2]), p[3]);
-            case MIXING_HEAT:
-                return a.mixingHeat(c, grid(p[0]), grid(p[1]), p[2], p[3]);
-            case ADDITION_HEAT:
-                return a.additionHeat(c, grid(p[0]), p[1], p[2], grid(p[3]), p[4], p[5]);
-            case ADIABATIC_RISE:
-                return a.adiabaticRise(c, grid(p[0]), grid(p[1]), p[2], p[3]);
-            case INSIDE:
-                return a.insideValidity(c, grid(p[0]), grid(p[1]));
-            case TRACE:
-                return a.traceEvaluation(c, grid(p[0]), grid(p[1]), p[2], p[3]);
-            case FIT_EXCESS:
-                return a.fitExcessVolume(grid(p[0]), grid(p[1]), p[2], p[3], p[4], p[5], p[6], p[7]);
-            case FIT_DENSITY:
-                return a.fitDensity(c, p[0], grid(p[1]), grid(p[2]), grid(p[3]), p[4], p[5], p[6], p[7], p[8]);
-            case LEAST_SQUARES:
-                return a.leastSquares(grid(p[0]), grid(p[1]), p[2], p[3]);
-            case UNCERTAINTY:
-                return a.uncertainty(c, grid(p[0]), grid(p[1]), p[2], p[3], p[4]);
-            case CONVERT:
-                return a.convertComposition(c, grid(p[0]), p[1], p[2], p[3], p[4], p[5], p[6]);
-            case BATCH:
-                return a.batchTotals(c, grid(p[0]), p[1], grid(p[2]), p[3], p[4], p[5], p[6]);
-            case RECIPE:
-                return a.recipe(c, p[0], p[1], grid(p[2]), p[3], p[4], p[5], p[6], p[7], p[8]);
-            case ADJUST:
-                return a.adjustBatch(c, grid(p[0]), p[1], grid(p[2]), p[3], p[4], p[5], p[6], p[7], p[8], p[9], p[10],
-                        p[11]);
-            case ADDITION_VOLUME:
-                return a.additionVolume(c, grid(p[0]), p[1], p[2], p[3], p[4], p[5], p[6], p[7], p[8]);
-            case FROM_DENSITY:
-                return a.compositionFromDensity(c, grid(p[0]), grid(p[1]), p[2], p[3], p[4], p[5], p[6], p[7], p[8],
-                        p[9]);
-            case VOLUME_FACTOR:
-                return a.volumeCorrection(c, grid(p[0]), p[1], grid(p[2]), p[3], p[4], p[5], p[6], p[7]);
-            default:
-                throw new AssertionError(method);
+        java.lang.reflect.Method m = METHODS.get(method());
+        if (m == null) {
+            throw new AssertionError("the interface has no method " + method());
+        }
+        Object[] all = allArguments();
+        if (all.length != m.getParameterCount()) {
+            throw new AssertionError("the generator made " + all.length + " arguments for " + method() + ", which "
+                    + "takes " + m.getParameterCount());
+        }
+        try {
+            return m.invoke(a, all);
+        } catch (InvocationTargetException e) {
+            Throwable cause = e.getCause();
+            if (cause instanceof IllegalArgumentException) {
+                throw (IllegalArgumentException) cause;
+            }
+            if (cause instanceof RuntimeException) {
+                throw (RuntimeException) cause;
+            }
+            if (cause instanceof Error) {
+                throw (Error) cause;
+            }
+            throw new AssertionError(method() + " threw " + cause, cause);
+        } catch (IllegalAccessException | java.lang.IllegalArgumentException e) {
+            throw new AssertionError("the generator's arguments do not fit " + method() + ": " + e, e);
         }
     }
 
@@ -131,9 +143,11 @@ final class FuzzCall {
 
     @Override
     public String toString() {
-        StringBuilder b = new StringBuilder(method.toString()).append(", call seed ").append(seed).append('\n');
+        StringBuilder b = new StringBuilder(function.displayName()).append(" (").append(method())
+                .append("), call seed ").append(seed).append('\n');
+        int first = takesCard() ? 2 : 1;
         for (int i = 0; i < args.length; i++) {
-            b.append("  arg ").append(i + 2).append(": ").append(render(args[i])).append('\n');
+            b.append("  arg ").append(i + first).append(": ").append(render(args[i])).append('\n');
         }
         return b.append("  card: ").append(card).toString();
     }
@@ -161,8 +175,8 @@ final class FuzzCall {
 
     // ------------------------------------------------------------------ generation
 
-    static FuzzCall of(Method method, FuzzCards.Blueprint card, long seed) {
-        return new Generator(new Random(seed), card).call(method, seed);
+    static FuzzCall of(FunctionInfo function, FuzzCards.Blueprint card, long seed) {
+        return new Generator(new Random(seed), card).call(function, seed);
     }
 
     /** Builds the arguments of one call. */
@@ -184,93 +198,95 @@ final class FuzzCall {
             this.n = !clean && r.nextInt(15) == 0 ? 1 + r.nextInt(5) : Math.max(card.componentCount(), 1);
         }
 
-        FuzzCall call(Method m, long seed) {
+        /** The arguments of a call of f, by its IDL method name. */
+        FuzzCall call(FunctionInfo f, long seed) {
+            String m = f.method();
             Object[] a;
             switch (m) {
-                case EXCESS_VOLUME:
-                case MOLAR_VOLUME:
-                case DENSITY:
-                case EXCESS_ENTHALPY: {
+                case "excessMolarVolume":
+                case "mixtureMolarVolume":
+                case "mixtureDensity":
+                case "excessEnthalpy": {
                     Object[][] x = composition();
                     a = new Object[] {x, temperature(x), extrapolate()};
                     break;
                 }
-                case PARTIAL_VOLUME:
-                case PARTIAL_EXCESS_VOLUME:
-                case PARTIAL_EXCESS_ENTHALPY: {
+                case "partialMolarVolume":
+                case "partialExcessMolarVolume":
+                case "partialExcessEnthalpy": {
                     Object[][] x = composition();
                     a = new Object[] {component(), x, temperature(x), extrapolate()};
                     break;
                 }
-                case PURE_DENSITY: {
+                case "pureDensity": {
                     Object[][] t = r.nextInt(4) == 0 ? temperatureRange(1 + r.nextInt(4), 1 + r.nextInt(3))
                             : new Object[][] {{temperatureValue()}};
                     a = new Object[] {component(), t, extrapolate()};
                     break;
                 }
-                case CHECK_CARD:
+                case "checkCard":
                     a = new Object[0];
                     break;
-                case CHECK_POINT:
-                case INSIDE: {
+                case "checkPoint":
+                case "insideValidity": {
                     Object[][] x = composition();
                     Object[][] t = temperature(x);
-                    a = m == Method.INSIDE ? new Object[] {x, t} : new Object[] {x, t, extrapolate()};
+                    a = m.equals("insideValidity") ? new Object[] {x, t} : new Object[] {x, t, extrapolate()};
                     break;
                 }
-                case TRACE: {
+                case "traceEvaluation": {
                     Object[][] x = composition();
                     a = new Object[] {x, temperature(x), pick(Any.VOID, "volume", "enthalpy", " ENTHALPY ", "mass",
                         "", 1.0, Boolean.TRUE), extrapolate()};
                     break;
                 }
-                case MIXING_HEAT:
-                case ADIABATIC_RISE: {
+                case "mixingHeat":
+                case "adiabaticRise": {
                     Object[][] amounts = amounts();
                     a = new Object[] {amounts, temperature(amounts), basis(), extrapolate()};
                     break;
                 }
-                case ADDITION_HEAT: {
+                case "additionHeat": {
                     Object[][] amounts = amounts();
                     a = new Object[] {amounts, component(), added(), temperature(amounts), basis(), extrapolate()};
                     break;
                 }
-                case UNCERTAINTY: {
+                case "uncertainty": {
                     Object[][] x = composition();
                     a = new Object[] {x, temperature(x), pick(Any.VOID, "density", "excess volume", "molar volume",
                         "partial volume", " Density ", "viscosity", "", 2.0), r.nextInt(3) == 0 ? Any.VOID
                         : component(), extrapolate()};
                     break;
                 }
-                case FIT_EXCESS:
+                case "fitExcessVolume":
                     a = fitExcess();
                     break;
-                case FIT_DENSITY:
+                case "fitDensity":
                     a = fitDensity();
                     break;
-                case LEAST_SQUARES:
+                case "leastSquares":
                     a = leastSquares();
                     break;
-                case CONVERT: {
+                case "convertComposition": {
                     Object from = basisWord();
                     a = new Object[] {basisValues(from), from, basisWord(), temperatureOrVoid(),
                         r.nextBoolean() ? Any.VOID : temperatureValue(), balance(), extrapolate()};
                     break;
                 }
-                case BATCH: {
+                case "batchTotals": {
                     Object[][] amounts = amounts();
                     a = new Object[] {amounts, amountUnit(), temperature(amounts), pick(Any.VOID, "volume", "mass",
                         "moles", "density", "pure volume", "contraction", "contraction %", clean ? "volume" : "weight"),
                         r.nextBoolean() ? Any.VOID : amountUnit(), storageTemperatures(), extrapolate()};
                     break;
                 }
-                case RECIPE: {
+                case "recipe": {
                     Object basis = basisWord();
                     a = new Object[] {quantity(), amountUnit(), basisValues(basis), basis, temperatureValue(),
                         storageTemperatures(), r.nextBoolean() ? Any.VOID : amountUnit(), balance(), extrapolate()};
                     break;
                 }
-                case ADJUST: {
+                case "adjustBatch": {
                     Object basis = basisWord();
                     Object[][] batch = amounts();
                     a = new Object[] {batch.length > 1 && r.nextBoolean() ? new Object[][] {batch[0]} : batch,
@@ -281,7 +297,7 @@ final class FuzzCall {
                         r.nextBoolean() ? Any.VOID : amountUnit(), balance(), extrapolate()};
                     break;
                 }
-                case ADDITION_VOLUME: {
+                case "additionVolume": {
                     Object[][] batch = amounts();
                     a = new Object[] {batch.length > 1 && r.nextBoolean() ? new Object[][] {batch[0]} : batch,
                         amountUnit(), component(), added(), temperatureValue(),
@@ -289,7 +305,7 @@ final class FuzzCall {
                         r.nextBoolean() ? Any.VOID : amountUnit(), storageTemperatures(), extrapolate()};
                     break;
                 }
-                case FROM_DENSITY: {
+                case "compositionFromDensity": {
                     Object[][] t = new Object[][] {{temperatureValue()}};
                     double tValue = t[0][0] instanceof Double ? (Double) t[0][0] : card.lowest;
                     Object[][] densities = r.nextInt(4) == 0
@@ -304,7 +320,7 @@ final class FuzzCall {
                         r.nextBoolean() ? Any.VOID : (Object) (0.7 + 0.3 * r.nextDouble()), balance(), extrapolate()};
                     break;
                 }
-                case VOLUME_FACTOR: {
+                case "volumeCorrection": {
                     Object basis = basisWord();
                     Object[][] x = basisValues(basis);
                     a = new Object[] {x, basis, temperature(x), temperatureValue(),
@@ -312,10 +328,18 @@ final class FuzzCall {
                         temperatureOrVoid(), balance(), extrapolate()};
                     break;
                 }
+                case "mixtureMolarMass":
+                    a = new Object[] {composition()};
+                    break;
+                case "addInInfo":
+                    a = new Object[] {pick(Any.VOID, "version", "card reads", "cards kept", " Cards Kept ",
+                        clean ? "version" : "cards", "", 1.0, Boolean.TRUE)};
+                    break;
                 default:
-                    throw new AssertionError(m);
+                    throw new IllegalStateException("FuzzCall has no arguments for " + f.displayName() + " ("
+                            + m + "): add a case to FuzzCall.Generator.call");
             }
-            return new FuzzCall(m, card, seed, a);
+            return new FuzzCall(f, card, seed, a);
         }
 
         @SafeVarargs

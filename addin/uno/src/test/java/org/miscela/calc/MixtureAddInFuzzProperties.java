@@ -12,6 +12,9 @@ import net.jqwik.api.ShrinkingMode;
 import net.jqwik.api.Tuple;
 import net.jqwik.api.lifecycle.AddLifecycleHook;
 import net.jqwik.api.lifecycle.AfterContainer;
+import java.util.Set;
+import org.miscela.core.catalog.FunctionCatalog;
+import org.miscela.core.catalog.IdlType;
 import org.miscela.core.problem.Catalogue;
 import org.miscela.core.card.FuzzCards;
 import org.miscela.core.card.FuzzProfile;
@@ -19,13 +22,16 @@ import org.miscela.core.card.FuzzTally;
 
 /**
  * Fuzzing every method of the UNO adapter in a plain JVM with generated cards ({@link FuzzCards}) and arguments
- * ({@link FuzzCall}). The contract each call must keep:
+ * ({@link FuzzCall}); the methods are the catalogue's (all but MIX.EXPLAIN, see {@link ExplainProperties}), and
+ * {@link FuzzCoverageTest} fails when one has no argument generator. The contract each call must keep:
  *
  * <ul>
  *   <li>a numeric function returns a finite Double, or an array (an Any holding Object[][]) shaped like one of its
  *       range arguments (or one row per line of a block) whose cells are finite Doubles or "" (blank inputs);
  *       MIX.INSIDE gives only 1 and 0;</li>
- *   <li>MIX.CHECK and MIX.CHECKPOINT never throw and return "OK" or a catalogued message;</li>
+ *   <li>the functions that answer in words (MIX.CHECK, MIX.CHECKPOINT) never throw and return "OK" or a catalogued
+ *       message;</li>
+ *   <li>MIX.INFO returns the version or a whole count of cards;</li>
  *   <li>MIX.TRACE returns (label, value) rows: a non-empty text label and a finite number or a text;</li>
  *   <li>a fit returns a rectangular table of finite Doubles and Strings, or (for the "check" result) "OK" or a
  *       catalogued message;</li>
@@ -40,6 +46,9 @@ import org.miscela.core.card.FuzzTally;
  */
 class MixtureAddInFuzzProperties {
     private static final FuzzTally TALLY = new FuzzTally("adapter");
+    /** The blending functions, whose array results hold one value per component. */
+    private static final Set<String> BLENDING = Set.of("convertComposition", "batchTotals", "recipe", "adjustBatch",
+            "additionVolume", "compositionFromDensity", "volumeCorrection");
     private final MixtureAddIn addIn = new MixtureAddIn();
 
     @Provide
@@ -47,9 +56,9 @@ class MixtureAddInFuzzProperties {
         Arbitrary<FuzzCards.Kind> kinds = Arbitraries.frequency(Tuple.of(50, FuzzCards.Kind.VALID),
                 Tuple.of(15, FuzzCards.Kind.EXTREME), Tuple.of(25, FuzzCards.Kind.MUTATED),
                 Tuple.of(5, FuzzCards.Kind.SOUP), Tuple.of(5, FuzzCards.Kind.SHAPE));
-        return Combinators.combine(kinds, Arbitraries.longs(), Arbitraries.of(FuzzCall.Method.class),
-                Arbitraries.longs()).as((kind, cardSeed, method, callSeed) ->
-                FuzzCall.of(method, FuzzCards.of(kind, cardSeed), callSeed));
+        return Combinators.combine(kinds, Arbitraries.longs(), Arbitraries.of(FuzzCall.fuzzed()),
+                Arbitraries.longs()).as((kind, cardSeed, function, callSeed) ->
+                FuzzCall.of(function, FuzzCards.of(kind, cardSeed), callSeed));
     }
 
     @Property(shrinking = ShrinkingMode.OFF)
@@ -65,7 +74,7 @@ class MixtureAddInFuzzProperties {
     }
 
     private void check(FuzzCall call) {
-        String target = "MixtureAddIn." + call.method;
+        String target = "MixtureAddIn." + call.method();
         long start = System.nanoTime();
         Object result;
         try {
@@ -73,15 +82,14 @@ class MixtureAddInFuzzProperties {
         } catch (IllegalArgumentException e) {
             long nanos = System.nanoTime() - start;
             String entry = Catalogue.entryOf(e.getMessage());
-            if (entry == null || call.method == FuzzCall.Method.CHECK_CARD
-                    || call.method == FuzzCall.Method.CHECK_POINT) {
+            if (entry == null || !call.function.raisesIllegalArgument()) {
                 unexpected("refused with an uncatalogued message or from a check: \"" + e.getMessage() + "\"", call,
                         e);
             }
             TALLY.count(target, "error " + entry, nanos, call::toString);
             return;
         } catch (RuntimeException | Error e) {
-            throw new AssertionError("MixtureAddIn." + call.method + " threw " + e + " for " + call, e);
+            throw new AssertionError("MixtureAddIn." + call.method() + " threw " + e + " for " + call, e);
         }
         long nanos = System.nanoTime() - start;
         TALLY.count(target, classify(call, result), nanos, call::toString);
@@ -89,19 +97,21 @@ class MixtureAddInFuzzProperties {
 
     /** The kind of a returned value, after checking it against the method's contract. */
     private static String classify(FuzzCall call, Object result) {
-        switch (call.method) {
-            case CHECK_CARD:
-            case CHECK_POINT:
-                return text(call, result);
-            case TRACE:
+        if (call.function.returnType() == IdlType.STRING) {
+            return text(call, result);
+        }
+        switch (call.method()) {
+            case "traceEvaluation":
                 return trace(call, result);
-            case FIT_EXCESS:
-            case FIT_DENSITY:
-            case LEAST_SQUARES:
+            case "fitExcessVolume":
+            case "fitDensity":
+            case "leastSquares":
                 return result instanceof String ? text(call, result) : table(call, result);
+            case "addInInfo":
+                return info(call, result);
             default:
-                if (call.method.blending()) {
-                    if (call.method == FuzzCall.Method.ADJUST && result instanceof String) {
+                if (BLENDING.contains(call.method())) {
+                    if (call.method().equals("adjustBatch") && result instanceof String) {
                         if (((String) result).trim().isEmpty()) {
                             unexpected("returned an empty summary", call, null);
                         }
@@ -111,6 +121,17 @@ class MixtureAddInFuzzProperties {
                 }
                 return number(call, result);
         }
+    }
+
+    /** MIX.INFO: the version text, or a count of cards (a whole number, never negative). */
+    private static String info(FuzzCall call, Object result) {
+        if (FunctionCatalog.VERSION.equals(result)) {
+            return "text version";
+        }
+        if (!(result instanceof Double) || !((Double) result >= 0) || (Double) result != Math.rint((Double) result)) {
+            unexpected("returned " + result + ", neither the version nor a count", call, null);
+        }
+        return "number";
     }
 
     /** A blending result: one number, or finite numbers and blanks, one per component or shaped like an argument. */
@@ -240,13 +261,13 @@ class MixtureAddInFuzzProperties {
     }
 
     private static void inside(FuzzCall call, double v) {
-        if (call.method == FuzzCall.Method.INSIDE && v != 0.0 && v != 1.0) {
+        if (call.method().equals("insideValidity") && v != 0.0 && v != 1.0) {
             unexpected("MIX.INSIDE returned " + v, call, null);
         }
     }
 
     private static void unexpected(String what, FuzzCall call, Throwable cause) {
-        throw new AssertionError("MixtureAddIn." + call.method + " " + what + " for " + call, cause);
+        throw new AssertionError("MixtureAddIn." + call.method() + " " + what + " for " + call, cause);
     }
 
     @AfterContainer

@@ -11,6 +11,7 @@ import org.miscela.core.catalog.FunctionCatalog;
 import org.miscela.core.functions.CardFunctions;
 import org.miscela.core.card.Extrapolation;
 import org.miscela.core.card.TestCards;
+import org.miscela.core.problem.Catalogue;
 
 /** The UNO adapter in a plain JVM: argument decoding, array results, blanks and error mapping. */
 class MixtureAddInTest {
@@ -264,5 +265,49 @@ class MixtureAddInTest {
                 endothermic, new Object[][] {{1.0, 1.0}}, one(-272.0), Any.VOID, Boolean.TRUE));
         assertEquals("No temperature between 0 and 1.15 K balances the heat of mixing; the card's heat capacities or "
                 + "excess enthalpy are not physical there.", e.getMessage());
+    }
+
+    /**
+     * MIX.MOLARMASS: x1 alone, a row of x1 values, a block with a blank line; 0.3·46.06844 + 0.7·18.01528 g/mol
+     * (the OIML card's molar masses, those of the IUPAC 2007 atomic weights, from memory); and equal to a batch's
+     * mass over its moles as MIX.BATCH gives them.
+     */
+    @Test
+    void meanMolarMassOfOneCompositionARangeAndABlock() throws Exception {
+        assertEquals(0.3 * 46.06844 + 0.7 * 18.01528, (Double) addIn.mixtureMolarMass(CARD, one(0.3)), 1e-12);
+        Object[][] row = (Object[][]) ((Any) addIn.mixtureMolarMass(CARD, new Object[][] {{0.0, 1.0, ""}}))
+                .getObject();
+        assertEquals(18.01528, (Double) row[0][0], 1e-12);
+        assertEquals(46.06844, (Double) row[0][1], 1e-12);
+        assertEquals("", row[0][2]);
+        Object[][] tern = TestCards.cells("ternary-invented.tsv");
+        Object[][] column = (Object[][]) ((Any) addIn.mixtureMolarMass(tern,
+                new Object[][] {{0.2, 0.5, 0.3}, {"", "", ""}, {1.0, 0.0, 0.0}})).getObject();
+        assertEquals(0.2 * 62.07 + 0.5 * 18.015 + 0.3 * 92.09, (Double) column[0][0], 1e-12, "invented card");
+        assertEquals("", column[1][0]);
+        assertEquals(62.07, (Double) column[2][0], 1e-12);
+        Object[][] batch = {{0.3, 0.7}};
+        double grams = (Double) addIn.batchTotals(CARD, batch, "mol", one(20.0), "mass", "g", Any.VOID, Any.VOID);
+        double moles = (Double) addIn.batchTotals(CARD, batch, "mol", one(20.0), "moles", "mol", Any.VOID, Any.VOID);
+        assertEquals(grams / moles, (Double) addIn.mixtureMolarMass(CARD, batch), 1e-12);
+    }
+
+    @Test
+    void meanMolarMassRefusesWhatIsNoComposition() {
+        Object[][] tern = TestCards.cells("ternary-invented.tsv");
+        Object[][][] bad = {one("abc"), one(1.5), new Object[][] {{0.3, 0.6}}};
+        String[] entries = {"Problem.ARG_NOT_NUMBER", "Problem.MOLE_FRACTION_OUTSIDE_UNIT", "Problem.COMPOSITION_SUM"};
+        for (int i = 0; i < bad.length; i++) {
+            Object[][] x = bad[i];
+            IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                    () -> addIn.mixtureMolarMass(CARD, x));
+            assertEquals(entries[i], Catalogue.entryOf(e.getMessage()), e.getMessage());
+        }
+        IllegalArgumentException single = assertThrows(IllegalArgumentException.class,
+                () -> addIn.mixtureMolarMass(tern, one(0.3)));
+        assertEquals("Problem.NOT_BINARY", Catalogue.entryOf(single.getMessage()), single.getMessage());
+        IllegalArgumentException two = assertThrows(IllegalArgumentException.class,
+                () -> addIn.mixtureMolarMass(tern, new Object[][] {{0.5, 0.5}}));
+        assertEquals("Problem.COMPOSITION_SHAPE", Catalogue.entryOf(two.getMessage()), two.getMessage());
     }
 }

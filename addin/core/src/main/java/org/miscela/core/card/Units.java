@@ -104,6 +104,10 @@ public final class Units {
         public double toGramPerMol(double v) {
             return v * scale.factor;
         }
+
+        public double fromGramPerMol(double v) {
+            return v / factor;
+        }
     }
 
     /** Molar enthalpy units: the factor to J/mol. Heat capacities are in the same unit per kelvin. */

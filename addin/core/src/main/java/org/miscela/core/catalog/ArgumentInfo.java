@@ -1,17 +1,22 @@
 package org.miscela.core.catalog;
 
-/** One argument of a cell function: its IDL name (permanent), the name the wizard shows, and its help text. */
+/**
+ * One argument of a cell function: its IDL name (permanent) and IDL type, the name the wizard shows, its help text
+ * (also the IDL's {@code @param} comment), and whether a call may leave it out.
+ */
 public final class ArgumentInfo {
     private final String name;
     private final String displayName;
     private final String description;
     private final boolean optional;
+    private final IdlType type;
 
-    ArgumentInfo(String name, String displayName, String description, boolean optional) {
+    ArgumentInfo(String name, String displayName, String description, boolean optional, IdlType type) {
         this.name = name;
         this.displayName = displayName;
         this.description = description;
         this.optional = optional;
+        this.type = type;
     }
 
     public String name() {
@@ -26,7 +31,18 @@ public final class ArgumentInfo {
         return description;
     }
 
+    /** Whether the syntax shows the argument in brackets: a call may leave it out. */
     public boolean optional() {
         return optional;
+    }
+
+    /** The IDL type: it decides what Calc passes (saved workbooks store no types, only names). */
+    public IdlType type() {
+        return type;
+    }
+
+    /** Range or single value (or MIX.EXPLAIN's list of arguments), from the IDL type. */
+    public IdlType.Kind kind() {
+        return type.kind();
     }
 }

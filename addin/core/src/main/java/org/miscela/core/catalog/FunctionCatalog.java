@@ -10,8 +10,10 @@ import org.miscela.core.blend.DensityInversion;
 import org.miscela.core.fit.FitProblem;
 
 /**
- * The single source of truth for every cell function's user-facing metadata. The wizard's CalcAddIns.xcu and
- * docs/functions.md are generated from this list; tests check it against the IDL and the implementation.
+ * The single source of every cell function's signature and user-facing metadata, in interface order (new functions go
+ * at the end). The IDL interface, the wizard's CalcAddIns.xcu, docs/functions.md, docs/errors.md and the README's
+ * function table are generated from this list; MIX.EXPLAIN's parameter kinds and the fuzzers' functions come from it,
+ * and tests check the compiled interface, the adapter and the explain table against it.
  */
 public final class FunctionCatalog {
     /** The UNO service: permanent, written into every saved workbook. */
@@ -21,29 +23,29 @@ public final class FunctionCatalog {
     /** Calc's fixed category names allow no category of our own; "Add-In" is where extension functions belong. */
     static final String CATEGORY = "Add-In";
 
-    private static final ArgumentInfo CARD = required("card", "card",
+    private static final ArgumentInfo CARD = range("card", "card",
             "The named range holding the mixture's card: labels in the first column, values to their right.");
-    private static final ArgumentInfo MOLE_FRACTION = required("moleFraction", "x",
+    private static final ArgumentInfo MOLE_FRACTION = range("moleFraction", "x",
             "Composition: the mole fractions of all components in card order, as a row or column; or a block with "
                     + "one composition per row (the result is a column). For a two-component card, x1 alone, "
                     + "or a range of x1 values.");
-    private static final ArgumentInfo TEMPERATURE = required("temperature", "temperature",
+    private static final ArgumentInfo TEMPERATURE = range("temperature", "temperature",
             "Temperature in the card's temperature unit: a single value, or one per composition (a column for a "
                     + "block, the same shape for a range of x1).");
     private static final ArgumentInfo EXTRAPOLATE = optional("extrapolate", "extrapolate",
             "Optional. TRUE accepts a result outside the card's validity range; FALSE refuses it; "
                     + "left out, the card's 'extrapolation' row decides (refuse when absent).");
-    private static final ArgumentInfo MOLE_FRACTION_ONE = required("moleFraction", "x",
+    private static final ArgumentInfo MOLE_FRACTION_ONE = range("moleFraction", "x",
             "One composition: the mole fractions of all components in card order, as a row or column; "
                     + "for a two-component card, x1 alone.");
-    private static final ArgumentInfo TEMPERATURE_ONE = required("temperature", "temperature",
+    private static final ArgumentInfo TEMPERATURE_ONE = range("temperature", "temperature",
             "Temperature in the card's temperature unit (one value).");
-    private static final ArgumentInfo COMPONENT = required("component", "component",
+    private static final ArgumentInfo COMPONENT = value("component", "component",
             "The component: its number on the card (1 for the first) or its name as written on the card.");
-    private static final ArgumentInfo AMOUNTS = required("amounts", "amounts",
+    private static final ArgumentInfo AMOUNTS = range("amounts", "amounts",
             "Amount of each component in card order, as a row or column (one batch); or a block with one batch "
                     + "per row (the result is a column).");
-    private static final ArgumentInfo BATCH_TEMPERATURE = required("temperature", "temperature",
+    private static final ArgumentInfo BATCH_TEMPERATURE = range("temperature", "temperature",
             "Temperature of the components and of the mixture, in the card's temperature unit: a single value, "
                     + "or a column with one per batch.");
     private static final String BASES = "One of: \"mole fraction\" (\"x\"), \"mass fraction\" (\"w\"), "
@@ -51,13 +53,13 @@ public final class FunctionCatalog {
     private static final ArgumentInfo BALANCE = optional("balance", "balance",
             "Optional. For %vol, mol/L, g/L and mol/kg: the component that makes up the rest (the solvent), by "
                     + "number or name; left out, the card's last component.");
-    private static final ArgumentInfo UNIT = required("unit", "unit",
+    private static final ArgumentInfo UNIT = value("unit", "unit",
             "The unit of the amounts: mol, kmol, g, kg, or mL, L, m³ for volumes of the pure liquids.");
     private static final ArgumentInfo RESULT_UNIT = optional("resultUnit", "result unit",
             "Optional. The unit of the result (left out: L for volumes, kg for masses, mol for moles).");
     private static final ArgumentInfo STORAGE_T = optional("storageTemperatures", "storage temperatures",
             "Optional. For volumes of the pure liquids: the temperature of each, in card order (or one for all).");
-    private static final ArgumentInfo ORDER = required("order", "order",
+    private static final ArgumentInfo ORDER = value("order", "order",
             "The highest k of the coefficients A0..Ak to fit, 0 to 30.");
     private static final ArgumentInfo ORDER_IN_T = optional("orderInTemperature", "order in T",
             "Optional. The highest power j of (T − T_ref) in each A_k (left out: 0, constant coefficients).");
@@ -138,7 +140,7 @@ public final class FunctionCatalog {
             Problem.UNKNOWN_COMPONENT_ARG));
 
     private static final List<FunctionInfo> FUNCTIONS = Collections.unmodifiableList(Arrays.asList(
-            new FunctionInfo("excessMolarVolume", "MIX.EXCESSVOLUME",
+            new FunctionInfo("excessMolarVolume", "MIX.EXCESSVOLUME", "excess molar volume V^E",
                     "Excess molar volume of the mixture from the card's Redlich–Kister coefficients, "
                             + "in the card's molar volume unit.",
                     "V^E = Σ_i<j x_i·x_j·Σ_k A_k^ij(T)·d_ij^k + ternary terms; binary: d = x1 − x2 (Redlich & Kister "
@@ -147,53 +149,55 @@ public final class FunctionCatalog {
                     "=MIX.EXCESSVOLUME(card; 0.3; 20)",
                     CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE)
                     .shows("-1.0567").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS)),
-            new FunctionInfo("partialMolarVolume", "MIX.PARTIALVOLUME",
+            new FunctionInfo("partialMolarVolume", "MIX.PARTIALVOLUME", "partial molar volume of a component",
                     "Partial molar volume of one component in the mixture, in the card's molar volume unit.",
                     "V̄_k = V_k* + V^E + ∂V^E/∂x_k − Σ_j x_j·∂V^E/∂x_j (binary: V̄_1 = V_1* + V^E + x2·dV^E/dx1)",
                     "=MIX.PARTIALVOLUME(card; 1; 0.3; 20)",
                     CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE)
                     .shows("56.670").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, COMPONENT_PROBLEMS)),
             new FunctionInfo("partialExcessMolarVolume", "MIX.PARTIALEXCESS",
+                    "partial molar excess volume of a component",
                     "Partial molar excess volume of one component "
                             + "(its partial molar volume less its pure molar volume), in the card's molar volume unit.",
                     "V̄_k^E = V^E + ∂V^E/∂x_k − Σ_j x_j·∂V^E/∂x_j (binary: V̄_1^E = V^E + x2·dV^E/dx1)",
                     "=MIX.PARTIALEXCESS(card; \"water\"; 0.3; 20)",
                     CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE)
                     .shows("-0.7808").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, COMPONENT_PROBLEMS)),
-            new FunctionInfo("mixtureMolarVolume", "MIX.MOLARVOLUME",
+            new FunctionInfo("mixtureMolarVolume", "MIX.MOLARVOLUME", "molar volume of the mixture",
                     "Molar volume of the mixture (volume per mole of mixture), in the card's molar volume unit.",
                     "V_m = Σ_k x_k·V_k* + V^E, V_k* = M_k / ρ_k(T)",
                     "=MIX.MOLARVOLUME(card; 0.3; 20)",
                     CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE)
                     .shows("29.088").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS)),
-            new FunctionInfo("mixtureDensity", "MIX.DENSITY",
+            new FunctionInfo("mixtureDensity", "MIX.DENSITY", "density of the mixture",
                     "Density of the mixture, in the card's density unit.",
                     "ρ = Σ_k x_k·M_k / V_m",
                     "=MIX.DENSITY(card; 0.3; 20)",
                     CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE)
                     .shows("908.667").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS)),
-            new FunctionInfo("pureDensity", "MIX.PUREDENSITY",
+            new FunctionInfo("pureDensity", "MIX.PUREDENSITY", "density of a pure component",
                     "Density of one pure component from its model on the card, in the card's density unit.",
                     "constant: ρ = c0; polynomial: ρ = Σ_j c_j·(T − T_ref)^j; Tanaka 2001: the CIPM water formula",
                     "=MIX.PUREDENSITY(card; \"water\"; 20)",
-                    CARD, COMPONENT, required("temperature", "temperature",
+                    CARD, COMPONENT, range("temperature", "temperature",
                             "Temperature in the card's temperature unit. A single value, or a range for an array "
                                     + "result."), EXTRAPOLATE)
                     .shows("998.201").refuses(union(COMPONENT_PROBLEMS, list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER, Problem.ARG_NOT_FLAG, Problem.BELOW_ABSOLUTE_ZERO, Problem.OUTSIDE_TEMPERATURE, Problem.NON_PHYSICAL))),
-            new FunctionInfo("checkCard", "MIX.CHECK",
+            new FunctionInfo("checkCard", "MIX.CHECK", "\"OK\" or the card's first problem, naming its row",
                     "\"OK\" when the card can be read and used; otherwise its first problem, naming the row.",
                     "—",
                     "=MIX.CHECK(card)",
-                    CARD)
+                    CARD).answersInWords()
                     .shows("OK").refuses(list()),
-            new FunctionInfo("checkPoint", "MIX.CHECKPOINT",
+            new FunctionInfo("checkPoint", "MIX.CHECKPOINT", "\"OK\" or why the functions refuse at that point",
                     "\"OK\" when the functions can answer at this composition and temperature; otherwise why they "
                             + "refuse (for example the validity limit that is exceeded).",
                     "—",
                     "=MIX.CHECKPOINT(card; 0.3; 45)",
-                    CARD, MOLE_FRACTION_ONE, TEMPERATURE_ONE, EXTRAPOLATE)
+                    CARD, MOLE_FRACTION_ONE, TEMPERATURE_ONE, EXTRAPOLATE).answersInWords()
                     .shows("The temperature 45 °C is outside the card's validity range 0 to 40 °C.").refuses(list(Problem.ARG_NOT_SINGLE)),
             new FunctionInfo("excessEnthalpy", "MIX.EXCESSENTHALPY",
+                    "excess molar enthalpy H^E (heat of mixing per mole)",
                     "Excess molar enthalpy (heat of mixing per mole of mixture) from the card's excess enthalpy "
                             + "coefficients, in the card's enthalpy unit; negative when mixing releases heat.",
                     "H^E = Σ_i<j x_i·x_j·Σ_k A_k^ij(T)·d_ij^k + ternary terms, combined as for V^E",
@@ -201,6 +205,7 @@ public final class FunctionCatalog {
                     CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE)
                     .shows("-719.5").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, list(Problem.NO_ENTHALPY))),
             new FunctionInfo("partialExcessEnthalpy", "MIX.PARTIALENTHALPY",
+                    "partial molar excess enthalpy of a component",
                     "Partial molar excess enthalpy of one component (its partial molar enthalpy less its pure molar "
                             + "enthalpy), in the card's enthalpy unit.",
                     "H̄_k^E = H^E + ∂H^E/∂x_k − Σ_j x_j·∂H^E/∂x_j",
@@ -208,6 +213,7 @@ public final class FunctionCatalog {
                     CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE)
                     .shows("-773.5").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS, list(Problem.NO_ENTHALPY))),
             new FunctionInfo("mixingHeat", "MIX.MIXINGHEAT",
+                    "enthalpy change on mixing given amounts (negative: heat released)",
                     "Enthalpy change when the given amounts of the pure components, all at one temperature, are mixed "
                             + "and kept at that temperature: J or kJ as the card's enthalpy unit; negative means heat "
                             + "is released and must be removed.",
@@ -215,26 +221,28 @@ public final class FunctionCatalog {
                     "=MIX.MIXINGHEAT(acid; {1; 10}; 25)",
                     CARD, AMOUNTS, BATCH_TEMPERATURE, BASIS, EXTRAPOLATE)
                     .shows("-66.50").refuses(union(AMOUNT_PROBLEMS, POINT_PROBLEMS, list(Problem.NO_ENTHALPY))),
-            new FunctionInfo("additionHeat", "MIX.ADDITIONHEAT",
+            new FunctionInfo("additionHeat", "MIX.ADDITIONHEAT", "enthalpy change on adding one component to a batch",
                     "Enthalpy change when an amount of one component is added to an existing batch, all at one "
                             + "temperature: J or kJ as the card's enthalpy unit; negative means heat is released.",
                     "ΔH = (N + Δn)·H^E(x') − N·H^E(x)",
                     "=MIX.ADDITIONHEAT(acid; {1; 1}; \"water\"; 9; 25)",
-                    CARD, AMOUNTS, COMPONENT, required("added", "added",
+                    CARD, AMOUNTS, COMPONENT, value("added", "added",
                             "The amount of the component added, in the same basis as the amounts."),
                     BATCH_TEMPERATURE, BASIS, EXTRAPOLATE)
                     .shows("-38.70").refuses(union(AMOUNT_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS, list(Problem.NO_ENTHALPY))),
             new FunctionInfo("adiabaticRise", "MIX.TEMPERATURERISE",
+                    "estimated adiabatic temperature rise of a batch, K",
                     "Estimated temperature rise, in K (the same in °C), of a batch mixed from pure components all at "
                             + "one temperature with no heat exchanged. An estimate for planning, not a safety "
                             + "rating: it ignores the vessel, losses, evaporation and reaction.",
                     "Σ_k n_k·∫_T^T_f Cp_k dT + N·H^E(x, T_f) = 0, solved for T_f (Brent); result T_f − T",
                     "=MIX.TEMPERATURERISE(acid; {1; 10}; 25; \"mol\"; TRUE())",
-                    CARD, AMOUNTS, required("temperature", "temperature",
+                    CARD, AMOUNTS, range("temperature", "temperature",
                             "Starting temperature of every component, in the card's temperature unit: a single "
                                     + "value, or a column with one per batch."), BASIS, EXTRAPOLATE)
                     .shows("74.57").refuses(union(AMOUNT_PROBLEMS, POINT_PROBLEMS, list(Problem.NO_ENTHALPY, Problem.NO_HEAT_CAPACITY, Problem.NO_TEMPERATURE_ROOT, Problem.OUTSIDE_FINAL_TEMPERATURE))),
             new FunctionInfo("insideValidity", "MIX.INSIDE",
+                    "1 (TRUE) when the point is inside every validity limit of the card, else 0",
                     "1 (TRUE) when the composition and temperature lie inside every validity limit the card states "
                             + "(temperature, each component's mole fraction, each pair's limits); 0 (FALSE) otherwise.",
                     "—",
@@ -242,6 +250,7 @@ public final class FunctionCatalog {
                     CARD, MOLE_FRACTION, TEMPERATURE)
                     .shows("0").refuses(union(COMPOSITION_PROBLEMS, list(Problem.BELOW_ABSOLUTE_ZERO))),
             new FunctionInfo("traceEvaluation", "MIX.TRACE",
+                    "every intermediate number of one evaluation, as a label/value table ([`docs/trace.md`](docs/trace.md))",
                     "Every intermediate number of one evaluation, as a two-column array of labels and values, so the "
                             + "result can be re-derived by hand (see docs/trace.md).",
                     "—",
@@ -251,15 +260,16 @@ public final class FunctionCatalog {
                                     + "trace."), EXTRAPOLATE)
                     .shows("card").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, list(Problem.NO_ENTHALPY, Problem.UNKNOWN_PROPERTY, Problem.ARG_NOT_SINGLE))),
             new FunctionInfo("fitExcessVolume", "MIX.FITEXCESS",
+                    "Redlich–Kister coefficients fitted to excess volumes (or their statistics)",
                     "Redlich–Kister coefficients fitted by least squares to excess volumes: an array of A0..Am "
                             + "(one row each, one column per power of T − T_ref) to enter over a card's coefficient "
                             + "cells, or the fit's standard errors, statistics, covariance, residuals or order table.",
                     "min Σ w_i (V^E_i − x1·x2·Σ_k Σ_j a_kj (x1 − x2)^k (T_i − T_ref)^j)², Householder QR with column "
                             + "scaling and iterative refinement",
                     "=INDEX(MIX.FITEXCESS({0.2|0.4|0.6|0.8}; {-0.736|-1.008|-0.912|-0.544}; 1); 2; 1)",
-                    required("moleFraction", "x1", "Mole fraction of the first component at each point: a column "
+                    range("moleFraction", "x1", "Mole fraction of the first component at each point: a column "
                             + "(or row). Points left blank in every data range are skipped."),
-                    required("excessVolume", "excess volume", "The excess molar volume at each point, in any unit: "
+                    range("excessVolume", "excess volume", "The excess molar volume at each point, in any unit: "
                             + "the coefficients come out in the same unit."),
                     ORDER,
                     optional("temperature", "temperature", "Optional. The temperature of each point, needed for "
@@ -267,38 +277,40 @@ public final class FunctionCatalog {
                     ORDER_IN_T, REFERENCE_T, WEIGHTS, RESULT)
                     .shows("1.0000").refuses(union(DATA_PROBLEMS, FIT_ENGINE_PROBLEMS, list(Problem.FIT_NEEDS_TEMPERATURE, Problem.FIT_NEEDS_REFERENCE))),
             new FunctionInfo("fitDensity", "MIX.FITDENSITY",
+                    "Redlich–Kister coefficients of a pair fitted to measured densities",
                     "Redlich–Kister coefficients of one pair fitted to measured densities, with the pure liquids' "
                             + "molar masses and densities taken from a card: an array to enter over the card's "
                             + "coefficient cells (in its molar volume unit), or the fit's statistics.",
                     "V^E_i = Σ x M / ρ_i − x1·V_1*(T_i) − x2·V_2*(T_i); min Σ w_i (ρ_i − ρ_fit,i)² to first order "
                             + "(each V^E residual weighted by (ρ_i²/M_i)²)",
                     "=INDEX(MIX.FITDENSITY(card; \"ethanol + water\"; {0.1|0.3|0.5|0.7|0.9}; {965.728|908.666|863.096|829.229|801.749}; 20; 2); 1; 1)",
-                    required("pure", "pure data", "The cells of a card's pure-component part: header, units, "
+                    range("pure", "pure data", "The cells of a card's pure-component part: header, units, "
                             + "components and density models (put the coefficient rows, which hold this formula, "
                             + "below it)."),
                     optional("pair", "pair", "The pair as \"first + second\"; may be left out for a card of two "
                             + "components."),
-                    required("moleFraction", "x", "Mole fraction of the pair's first component at each point (a "
+                    range("moleFraction", "x", "Mole fraction of the pair's first component at each point (a "
                             + "column). Points left blank in every data range are skipped."),
-                    required("density", "density", "The measured density at each point, in the card's density "
+                    range("density", "density", "The measured density at each point, in the card's density "
                             + "unit."),
-                    required("temperature", "temperature", "The temperature of each point, or one value for all, in "
+                    range("temperature", "temperature", "The temperature of each point, or one value for all, in "
                             + "the card's temperature unit."),
                     ORDER, ORDER_IN_T, REFERENCE_T, WEIGHTS, RESULT)
                     .shows("-4.400").refuses(union(DATA_PROBLEMS, FIT_ENGINE_PROBLEMS, list(Problem.FIT_NEEDS_REFERENCE, Problem.UNKNOWN_PAIR_ARG, Problem.NON_PHYSICAL))),
-            new FunctionInfo("leastSquares", "MIX.LEASTSQUARES",
+            new FunctionInfo("leastSquares", "MIX.LEASTSQUARES", "general linear least squares by the same engine",
                     "General weighted linear least squares y ≈ X·b, by the same engine as the card fits: the "
                             + "coefficients b as a column, or their standard errors, the statistics, the covariance "
                             + "or the residuals.",
                     "min Σ w_i (y_i − Σ_j X_ij b_j)², Householder QR with column scaling and iterative refinement",
                     "=INDEX(MIX.LEASTSQUARES({1;1|1;2|1;3}; {2.1|3.9|6.0}); 2; 1)",
-                    required("design", "X", "The design matrix: one row per point, one column per parameter "
+                    range("design", "X", "The design matrix: one row per point, one column per parameter "
                             + "(include a column of 1s for an intercept)."),
-                    required("response", "y", "The observed values, one per point (a column)."),
+                    range("response", "y", "The observed values, one per point (a column)."),
                     WEIGHTS, optional("result", "result", "Optional. \"coefficients\" (left out), \"standard "
                             + "errors\", \"statistics\", \"covariance\", \"residuals\" or \"check\"."))
                     .shows("1.95").refuses(union(list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER, Problem.DATA_SHAPE, Problem.UNKNOWN_FIT_OUTPUT, Problem.FIT_OUTPUT_NOT_HERE), FIT_ENGINE_PROBLEMS)),
             new FunctionInfo("uncertainty", "MIX.UNCERTAINTY",
+                    "standard uncertainty of a result from the card's coefficient covariance",
                     "Standard uncertainty of the density, excess volume, molar volume or a partial molar volume, "
                             + "propagated linearly from the coefficient covariance the card holds (the pure liquids "
                             + "taken as exact), in the result's unit.",
@@ -311,6 +323,7 @@ public final class FunctionCatalog {
                             + "or its name."), EXTRAPOLATE)
                     .shows("0.178").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, COMPONENT_PROBLEMS, list(Problem.NO_COVARIANCE, Problem.UNKNOWN_QUANTITY, Problem.ARG_NOT_TEXT))),
             new FunctionInfo("convertComposition", "MIX.CONVERT",
+                    "a composition on another basis: mole, mass or volume fraction, %vol, mol/L, g/L, mol/kg",
                     "A composition written on one basis, written on another: mole fraction, mass fraction, volume "
                             + "fraction of the unmixed liquids, strength (%vol), molarity (mol/L), mass concentration "
                             + "(g/L) or molality (mol/kg of the balance component).",
@@ -318,11 +331,11 @@ public final class FunctionCatalog {
                             + "c_k = x_k/V_m(T); ρ_k = x_k M_k/V_m(T); b_k = x_k/(x_s M_s); concentrations read back by "
                             + "Brent's method on the balance's mole fraction",
                     "=MIX.CONVERT(card; 0.5; \"mass fraction\"; \"%vol\"; 20)",
-                    CARD, required("values", "values", "The composition on the from basis: one value per component in "
+                    CARD, range("values", "values", "The composition on the from basis: one value per component in "
                             + "card order (a row or column, or a block with one composition per row). On a "
                             + "concentration basis the balance's own entry may be blank. A lone number on a "
                             + "two-component card is the first component's value."),
-                    required("from", "from", BASES), required("to", "to", BASES),
+                    value("from", "from", BASES), value("to", "to", BASES),
                     optional("temperature", "temperature", "The temperature of the from basis, and of the to basis "
                             + "unless the next argument gives one, in the card's unit; needed for volume fraction, "
                             + "%vol, mol/L and g/L."),
@@ -330,12 +343,13 @@ public final class FunctionCatalog {
                     BALANCE, EXTRAPOLATE)
                     .shows("57.889").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
             new FunctionInfo("batchTotals", "MIX.BATCH",
+                    "volume, mass, moles, density or contraction of a batch made from amounts",
                     "One total of the batch made from the given amounts of the components, mixed and brought to a "
                             + "temperature: its volume, mass, moles, density, the pure liquids' volume before mixing, "
                             + "or the contraction on mixing (absolute or %).",
                     "V = N·V_m(x, T); contraction = Σ n_k V_k*(T) − V (positive when the mixture shrinks)",
                     "=MIX.BATCH(card; {50; 50}; \"g\"; 20; \"contraction\"; \"mL\")",
-                    CARD, AMOUNTS, UNIT, required("temperature", "temperature",
+                    CARD, AMOUNTS, UNIT, range("temperature", "temperature",
                             "The temperature of the mixed batch, in the card's unit: one value, or a column with one "
                                     + "per batch."),
                     optional("result", "result", "Optional. \"volume\" (left out), \"mass\", \"moles\", "
@@ -343,6 +357,7 @@ public final class FunctionCatalog {
                     RESULT_UNIT, STORAGE_T, EXTRAPOLATE)
                     .shows("4.006").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
             new FunctionInfo("recipe", "MIX.RECIPE",
+                    "what to charge of each component for a target quantity and composition",
                     "What to charge of each component to make a quantity (a volume at a temperature, a mass or moles) "
                             + "of a target composition: a row of amounts in card order, masses in kg unless another "
                             + "unit is asked for (a volume unit gives each pure liquid's volume at its storage "
@@ -350,18 +365,19 @@ public final class FunctionCatalog {
                     "N = Q (moles), Q/Σ x M (mass) or V/V_m(x, T) (volume); n_k = N·x_k; m_k = n_k M_k; "
                             + "V_k = n_k V_k*(T_k)",
                     "=INDEX(MIX.RECIPE(card; 1; \"L\"; 40; \"%vol\"; 20; 20; \"mL\"); 1; 1)",
-                    CARD, required("quantity", "quantity", "The quantity to make."),
-                    required("unit", "unit", "Its unit: mol, kmol, g, kg, mL, L or m³ (a volume of the mixture at the "
+                    CARD, value("quantity", "quantity", "The quantity to make."),
+                    value("unit", "unit", "Its unit: mol, kmol, g, kg, mL, L or m³ (a volume of the mixture at the "
                             + "temperature)."),
-                    required("composition", "composition", "The target composition on the basis, one value per "
+                    range("composition", "composition", "The target composition on the basis, one value per "
                             + "component (a lone number on a two-component card is the first component's); a block "
                             + "gives one recipe per row."),
-                    required("basis", "basis", BASES),
-                    required("temperature", "temperature", "The temperature of the quantity (when a volume) and of "
+                    value("basis", "basis", BASES),
+                    value("temperature", "temperature", "The temperature of the quantity (when a volume) and of "
                             + "the basis, in the card's unit."),
                     STORAGE_T, RESULT_UNIT, BALANCE, EXTRAPOLATE)
                     .shows("400.00").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
             new FunctionInfo("adjustBatch", "MIX.ADJUST",
+                    "what to add to an existing batch to reach a target composition",
                     "How much of each component to add to an existing batch to reach a target composition: the "
                             + "least additions, the closest composition within a limit, or additions making up to a "
                             + "final quantity; or the resulting volume, or a sentence saying whether the target is "
@@ -369,11 +385,11 @@ public final class FunctionCatalog {
                     "n'_k = n_k + a_k, a_k ≥ 0; least: N' = max_k n_k/x_k; otherwise the composition closest to the "
                             + "target in mole fraction (least squares) at the limit's total",
                     "=INDEX(MIX.ADJUST(card; {500; 500}; \"g\"; 0.4; \"mass fraction\"; 20); 1; 2)",
-                    CARD, required("amounts", "amounts", "The batch: the amount of each component in card order."),
-                    UNIT, required("target", "target", "The target composition on the basis (a lone number on a "
+                    CARD, range("amounts", "amounts", "The batch: the amount of each component in card order."),
+                    UNIT, range("target", "target", "The target composition on the basis (a lone number on a "
                             + "two-component card is the first component's)."),
-                    required("basis", "basis", BASES),
-                    required("temperature", "temperature", "The temperature of the batch and of the basis, in the "
+                    value("basis", "basis", BASES),
+                    value("temperature", "temperature", "The temperature of the batch and of the basis, in the "
                             + "card's unit."),
                     optional("mode", "mode", "Optional. \"least\" additions (left out), \"within\" the limit "
                             + "(the closest composition if the target does not fit), or \"make up\" to the limit."),
@@ -384,28 +400,30 @@ public final class FunctionCatalog {
                     RESULT_UNIT, BALANCE, EXTRAPOLATE)
                     .shows("0.2500").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
             new FunctionInfo("additionVolume", "MIX.ADDVOLUME",
+                    "volume change on adding a component, exact and to first order",
                     "The volume change of a batch when an amount of one component is added: exact (the difference "
                             + "of the two totals), to first order (partial molar volume × amount), or the difference "
                             + "of the two, so one sees when the linear estimate is good enough.",
                     "exact ΔV = V(n + Δn·e_k) − V(n); first order ΔV ≈ V̄_k(x)·Δn",
                     "=MIX.ADDVOLUME(card; {50; 50}; \"g\"; \"ethanol\"; 10; 20; ; \"mL\")",
-                    CARD, required("amounts", "amounts", "The batch: the amount of each component in card order."),
-                    UNIT, COMPONENT, required("added", "added", "The amount added, in the unit of the amounts."),
-                    required("temperature", "temperature", "The temperature of the batch, in the card's unit."),
+                    CARD, range("amounts", "amounts", "The batch: the amount of each component in card order."),
+                    UNIT, COMPONENT, value("added", "added", "The amount added, in the unit of the amounts."),
+                    value("temperature", "temperature", "The temperature of the batch, in the card's unit."),
                     optional("result", "result", "Optional. \"exact\" (left out), \"first order\" or "
                             + "\"difference\" (first order minus exact)."),
                     RESULT_UNIT, STORAGE_T, EXTRAPOLATE)
                     .shows("12.302").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS)),
             new FunctionInfo("compositionFromDensity", "MIX.FROMDENSITY",
+                    "the composition at which the card's density equals a measured one",
                     "The composition at which the card's density equals a measured density: the content of one "
                             + "component on a chosen basis. Every composition with that density is searched for; "
                             + "when there are several the call is refused, listing them, until a range is given.",
                     "ρ(x(s), T) = ρ_measured along x(s) (component k at s, the others in the reference's ratios); "
                             + "a scan in " + DensityInversion.SCAN_CELLS + " cells, each root refined by Brent's method",
                     "=MIX.FROMDENSITY(card; 913.771; 20; 1; \"mass fraction\")",
-                    CARD, required("density", "density", "The measured density in the card's unit: a value, or a "
+                    CARD, range("density", "density", "The measured density in the card's unit: a value, or a "
                             + "range for an array result."),
-                    required("temperature", "temperature", "The temperature of the measurement in the card's unit: "
+                    range("temperature", "temperature", "The temperature of the measurement in the card's unit: "
                             + "a value, or a range of the same shape."),
                     optional("component", "component", "Optional. The component whose content is sought (left out: "
                             + "the first)."),
@@ -420,17 +438,18 @@ public final class FunctionCatalog {
                     .shows("0.5000").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS,
                             list(Problem.COMPOSITION_LENGTH))),
             new FunctionInfo("volumeCorrection", "MIX.VOLUMEFACTOR",
+                    "volume correction factor to a reference temperature, or the density at either",
                     "Temperature correction of a blend of known composition: the factor that turns a volume "
                             + "measured at one temperature into the volume at a reference temperature (15 °C or "
                             + "20 °C for quotes and custody transfer), or the blend's density at either temperature.",
                     "factor = V(T_ref)/V(T) = ρ(T)/ρ(T_ref) at fixed composition",
                     "=MIX.VOLUMEFACTOR(card; 0.5; \"mass fraction\"; 25; 20)",
-                    CARD, required("composition", "composition", "The blend's composition on the basis (a lone number "
+                    CARD, range("composition", "composition", "The blend's composition on the basis (a lone number "
                             + "on a two-component card is the first component's; a block gives one factor per row)."),
-                    required("basis", "basis", BASES),
-                    required("temperature", "temperature", "The measured temperature in the card's unit (one, or "
+                    value("basis", "basis", BASES),
+                    range("temperature", "temperature", "The measured temperature in the card's unit (one, or "
                             + "one per row of a block)."),
-                    required("referenceTemperature", "reference temperature", "The reference temperature in the "
+                    value("referenceTemperature", "reference temperature", "The reference temperature in the "
                             + "card's unit."),
                     optional("result", "result", "Optional. \"factor\" (left out), \"density\" (at the measured "
                             + "temperature) or \"reference density\"."),
@@ -439,6 +458,7 @@ public final class FunctionCatalog {
                     BALANCE, EXTRAPOLATE)
                     .shows("0.99562").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
             new FunctionInfo("addInInfo", "MIX.INFO",
+                    "the add-in's version (for audit records), or how many cards it has parsed and holds",
                     "Facts about the add-in itself: its version (for audit records), or how many cards it has "
                             + "parsed and holds (each distinct card content is parsed once).",
                     "—",
@@ -447,16 +467,26 @@ public final class FunctionCatalog {
                             + "the office started) or \"cards kept\" (parsed cards held now)."))
                     .shows(VERSION).refuses(list(Problem.ARG_NOT_TEXT, Problem.UNKNOWN_INFO_ITEM)),
             new FunctionInfo("explainCall", "MIX.EXPLAIN",
+                    "\"OK\" or, for a call that shows Err:502, why: the same arguments after the function's name",
                     "The words for a refused call: \"OK\" when the named function gives a result for these "
                             + "arguments, otherwise the message of its refusal (why its cell shows Err:502). It runs "
                             + "that function on them, so it always agrees with the call; it never refuses itself.",
                     "—",
                     "=MIX.EXPLAIN(\"MIX.BATCH\"; card; {50; 50}; \"lb\"; 20)",
-                    required("functionName", "function", "The function's name as text: \"MIX.DENSITY\" or "
+                    value("functionName", "function", "The function's name as text: \"MIX.DENSITY\" or "
                             + "\"density\" (case does not matter)."),
-                    optional("arguments", "arguments", "The same arguments as the call, in its order (one per "
-                            + "argument box); leave out here what the call leaves out."))
-                    .shows("The unit \"lb\" is not recognised").refuses(list())));
+                    argumentList("arguments", "arguments", "The same arguments as the call, in its order (one per "
+                            + "argument box); leave out here what the call leaves out.")).answersInWords()
+                    .shows("The unit \"lb\" is not recognised").refuses(list()),
+            new FunctionInfo("mixtureMolarMass", "MIX.MOLARMASS", "mean molar mass of the mixture",
+                    "Mean molar mass of the mixture (mass per mole of mixture) from the molar masses on the card, in "
+                            + "the card's molar mass unit. It needs no temperature and no density.",
+                    "M = Σ_k x_k·M_k",
+                    "=MIX.MOLARMASS(card; 0.3)",
+                    CARD, MOLE_FRACTION)
+                    .shows("26.431").refuses(list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER, Problem.NOT_BINARY,
+                            Problem.MOLE_FRACTION_OUTSIDE_UNIT, Problem.COMPOSITION_NEGATIVE,
+                            Problem.COMPOSITION_SUM, Problem.COMPOSITION_SHAPE))));
 
     private FunctionCatalog() {
     }
@@ -536,11 +566,23 @@ public final class FunctionCatalog {
         return new java.util.ArrayList<>(all);
     }
 
-    private static ArgumentInfo required(String name, String displayName, String description) {
-        return new ArgumentInfo(name, displayName, description, false);
+    /** A required range argument (IDL {@code sequence< sequence< any > >}): a range, a cell or an inline array. */
+    private static ArgumentInfo range(String name, String displayName, String description) {
+        return new ArgumentInfo(name, displayName, description, false, IdlType.RANGE);
     }
 
+    /** A required single value (IDL {@code any}); Calc's wizard still shows every {@code any} as optional. */
+    private static ArgumentInfo value(String name, String displayName, String description) {
+        return new ArgumentInfo(name, displayName, description, false, IdlType.ANY);
+    }
+
+    /** An optional single value (IDL {@code any}): left out, it arrives as void. */
     private static ArgumentInfo optional(String name, String displayName, String description) {
-        return new ArgumentInfo(name, displayName, description, true);
+        return new ArgumentInfo(name, displayName, description, true, IdlType.ANY);
+    }
+
+    /** MIX.EXPLAIN's variable argument list (IDL {@code sequence< any >}), which may be empty. */
+    private static ArgumentInfo argumentList(String name, String displayName, String description) {
+        return new ArgumentInfo(name, displayName, description, true, IdlType.ARGUMENT_LIST);
     }
 }

@@ -4,21 +4,28 @@ import java.util.Arrays;
 import java.util.Collections;
 import java.util.List;
 
-/** What a person needs to know about one cell function; the wizard metadata and the reference are made from it. */
+/**
+ * One cell function: what a person needs to know about it and its UNO signature. The IDL interface, the wizard
+ * metadata, the reference and the README's function table are made from it.
+ */
 public final class FunctionInfo {
     private final String method;
     private final String displayName;
+    private final String brief;
     private final String summary;
     private final String formula;
     private final String example;
     private final List<ArgumentInfo> arguments;
     private String exampleResult = "";
     private List<Enum<?>> errors = Collections.emptyList();
+    private IdlType returnType = IdlType.ANY;
+    private boolean raisesIllegalArgument = true;
 
-    FunctionInfo(String method, String displayName, String summary, String formula, String example,
+    FunctionInfo(String method, String displayName, String brief, String summary, String formula, String example,
             ArgumentInfo... arguments) {
         this.method = method;
         this.displayName = displayName;
+        this.brief = brief;
         this.summary = summary;
         this.formula = formula;
         this.example = example;
@@ -35,6 +42,29 @@ public final class FunctionInfo {
     FunctionInfo refuses(List<Enum<?>> problems) {
         this.errors = Collections.unmodifiableList(problems);
         return this;
+    }
+
+    /**
+     * A function that answers in words: its result is text (IDL {@code string}) and it raises nothing, so a problem
+     * is its answer, never Err:502.
+     */
+    FunctionInfo answersInWords() {
+        this.returnType = IdlType.STRING;
+        this.raisesIllegalArgument = false;
+        return this;
+    }
+
+    /** The IDL result type: {@code any} (a number, a text or an array), or {@code string}. */
+    public IdlType returnType() {
+        return returnType;
+    }
+
+    /**
+     * Whether the IDL method raises com.sun.star.lang.IllegalArgumentException, which Calc shows as Err:502: every
+     * function but those that answer in words.
+     */
+    public boolean raisesIllegalArgument() {
+        return raisesIllegalArgument;
     }
 
     public String exampleResult() {
@@ -55,6 +85,12 @@ public final class FunctionInfo {
         return displayName;
     }
 
+    /** A few words on what the function returns, for the README's function table. */
+    public String brief() {
+        return brief;
+    }
+
+    /** What the function returns: the wizard's description and the IDL method's doc comment. */
     public String summary() {
         return summary;
     }

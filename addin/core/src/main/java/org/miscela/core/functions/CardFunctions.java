@@ -95,6 +95,15 @@ public final class CardFunctions {
         return moles;
     }
 
+    /**
+     * The mixture's mean molar mass M = Σ x_k·M_k (mass per mole of mixture), in the card's molar mass unit. It needs
+     * only the components' molar masses: no temperature, no density, no validity range.
+     */
+    public static double meanMolarMass(Card card, double[] x) {
+        double[] z = moleFractions(card, x);
+        return card.units().molarMass().fromGramPerMol(card.mixture().meanMolarMass(z));
+    }
+
     // --- volumetric properties
 
     public static double excessMolarVolume(Card card, double[] x, double t, Extrapolation e) {
