@@ -106,7 +106,7 @@ public final class Units {
         }
 
         public double fromGramPerMol(double v) {
-            return v / factor;
+            return v / scale.factor;
         }
     }
 
