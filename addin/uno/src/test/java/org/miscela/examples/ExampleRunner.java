@@ -34,8 +34,8 @@ import org.miscela.it.Office;
  * shows an error and that every check cell (MIX.CHECK, MIX.CHECKPOINT, a fit's result "check") says OK, and exits
  * non-zero when one does not.
  *
- * <p>Run: {@code mvn -q -B test-compile exec:java -pl addin -Dexec.classpathScope=test
- * -Dexec.mainClass=org.miscela.examples.ExampleRunner -Dmiscela.oxt=$PWD/addin/target/miscela.oxt}. To choose the
+ * <p>Run: {@code mvn -q -B test-compile exec:java -pl addin/uno -Dexec.classpathScope=test
+ * -Dexec.mainClass=org.miscela.examples.ExampleRunner -Dmiscela.oxt=$PWD/addin/uno/target/miscela.oxt}. To choose the
  * folder use {@code -Dmiscela.examples.out=DIR}: {@code -Dexec.args} would also reach the build's own exec execution
  * (the wizard metadata writer) when a lifecycle phase such as test-compile runs in the same command.
  */

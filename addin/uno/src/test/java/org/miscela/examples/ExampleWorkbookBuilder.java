@@ -23,11 +23,9 @@ import com.sun.star.beans.XPropertySet;
 import com.sun.star.chart.ChartAxisAssign;
 import com.sun.star.chart.ChartLegendPosition;
 import com.sun.star.chart.ChartSymbolType;
-import com.sun.star.chart.XAxisXSupplier;
 import com.sun.star.chart.XAxisYSupplier;
 import com.sun.star.chart.XChartDocument;
 import com.sun.star.chart.XDiagram;
-import com.sun.star.container.XIndexAccess;
 import com.sun.star.container.XNameAccess;
 import com.sun.star.document.XEmbeddedObjectSupplier;
 import com.sun.star.lang.XComponent;
@@ -45,8 +43,8 @@ import org.miscela.examples.ExampleWorkbooks.Formats;
  * Builds the example workbook examples/coolant-blend.ods from nothing, through a real office with the built
  * extension installed. The scenario (Fernhollow Fluids Ltd) and every coefficient on its card are invented.
  *
- * <p>Run: {@code mvn -q -B test-compile exec:java -pl addin -Dexec.classpathScope=test
- * -Dexec.mainClass=org.miscela.examples.ExampleWorkbookBuilder -Dmiscela.oxt=$PWD/addin/target/miscela.oxt}
+ * <p>Run: {@code mvn -q -B test-compile exec:java -pl addin/uno -Dexec.classpathScope=test
+ * -Dexec.mainClass=org.miscela.examples.ExampleWorkbookBuilder -Dmiscela.oxt=$PWD/addin/uno/target/miscela.oxt}
  * (optional argument: the output file).
  */
 public final class ExampleWorkbookBuilder {
@@ -323,14 +321,8 @@ public final class ExampleWorkbookBuilder {
         Object chart = UnoRuntime.queryInterface(XNameAccess.class, charts).getByName(name);
         XChartDocument cd = UnoRuntime.queryInterface(XChartDocument.class,
                 UnoRuntime.queryInterface(XEmbeddedObjectSupplier.class, chart).getEmbeddedObject());
-        XDiagram d = UnoRuntime.queryInterface(XDiagram.class, UnoRuntime.queryInterface(
-                com.sun.star.lang.XMultiServiceFactory.class, cd).createInstance("com.sun.star.chart.XYDiagram"));
-        cd.setDiagram(d);
+        XDiagram d = ExampleWorkbooks.xyDiagram(cd, title, 11f);
         XPropertySet cp = UnoRuntime.queryInterface(XPropertySet.class, cd);
-        cp.setPropertyValue("HasMainTitle", Boolean.TRUE);
-        XPropertySet tp = UnoRuntime.queryInterface(XPropertySet.class, cd.getTitle());
-        tp.setPropertyValue("String", title);
-        tp.setPropertyValue("CharHeight", 11f);
         cp.setPropertyValue("HasLegend", Boolean.TRUE);
         UnoRuntime.queryInterface(XPropertySet.class, cd.getLegend()).setPropertyValue("Alignment",
                 ChartLegendPosition.BOTTOM);
@@ -339,20 +331,7 @@ public final class ExampleWorkbookBuilder {
         dp.setPropertyValue("SymbolType", ChartSymbolType.NONE);
         dp.setPropertyValue("HasXAxisTitle", Boolean.TRUE);
         dp.setPropertyValue("HasYAxisTitle", Boolean.TRUE);
-        XAxisXSupplier xs = UnoRuntime.queryInterface(XAxisXSupplier.class, d);
-        UnoRuntime.queryInterface(XPropertySet.class, xs.getXAxisTitle()).setPropertyValue("String",
-                "ethanol mole fraction x1");
-        XPropertySet xAxis = xs.getXAxis();
-        xAxis.setPropertyValue("AutoMin", Boolean.FALSE);
-        xAxis.setPropertyValue("AutoMax", Boolean.FALSE);
-        xAxis.setPropertyValue("AutoStepMain", Boolean.FALSE);
-        xAxis.setPropertyValue("Min", 0.0);
-        xAxis.setPropertyValue("Max", 1.0);
-        xAxis.setPropertyValue("StepMain", 0.2);
-        xAxis.setPropertyValue("LinkNumberFormatToSource", Boolean.FALSE);
-        xAxis.setPropertyValue("NumberFormat", numberFormat(s, "0.0"));
-        // keep the composition axis at the foot of the plot even when the values are negative
-        xAxis.setPropertyValue("CrossoverPosition", com.sun.star.chart.ChartAxisPosition.START);
+        ExampleWorkbooks.moleFractionAxis(d, "ethanol mole fraction x1", numberFormat(s, "0.0"));
         XAxisYSupplier ys = UnoRuntime.queryInterface(XAxisYSupplier.class, d);
         UnoRuntime.queryInterface(XPropertySet.class, ys.getYAxisTitle()).setPropertyValue("String", yTitle);
         XPropertySet yAxis = ys.getYAxis();

@@ -395,4 +395,44 @@ final class ExampleWorkbooks {
             return k >= 0 ? k : formats.addNew(code, locale);
         }
     }
+
+    /**
+     * Sets an XY diagram into a chart document and shows its main title with the given text and character height.
+     * Returns the diagram.
+     */
+    static com.sun.star.chart.XDiagram xyDiagram(com.sun.star.chart.XChartDocument cd, String title, float charHeight)
+            throws Exception {
+        com.sun.star.chart.XDiagram d = com.sun.star.uno.UnoRuntime.queryInterface(com.sun.star.chart.XDiagram.class,
+                com.sun.star.uno.UnoRuntime.queryInterface(com.sun.star.lang.XMultiServiceFactory.class, cd)
+                        .createInstance("com.sun.star.chart.XYDiagram"));
+        cd.setDiagram(d);
+        com.sun.star.uno.UnoRuntime.queryInterface(com.sun.star.beans.XPropertySet.class, cd)
+                .setPropertyValue("HasMainTitle", Boolean.TRUE);
+        com.sun.star.beans.XPropertySet tp = com.sun.star.uno.UnoRuntime.queryInterface(
+                com.sun.star.beans.XPropertySet.class, cd.getTitle());
+        tp.setPropertyValue("String", title);
+        tp.setPropertyValue("CharHeight", charHeight);
+        return d;
+    }
+
+    /**
+     * The mole-fraction axis of an XY chart: titled, fixed from 0 to 1 in steps of 0.2 with the given number format,
+     * and kept at the foot of the plot even when the values are negative.
+     */
+    static void moleFractionAxis(com.sun.star.chart.XDiagram d, String title, int numberFormat) throws Exception {
+        com.sun.star.chart.XAxisXSupplier xs = com.sun.star.uno.UnoRuntime.queryInterface(
+                com.sun.star.chart.XAxisXSupplier.class, d);
+        com.sun.star.uno.UnoRuntime.queryInterface(com.sun.star.beans.XPropertySet.class, xs.getXAxisTitle())
+                .setPropertyValue("String", title);
+        com.sun.star.beans.XPropertySet xAxis = xs.getXAxis();
+        xAxis.setPropertyValue("AutoMin", Boolean.FALSE);
+        xAxis.setPropertyValue("AutoMax", Boolean.FALSE);
+        xAxis.setPropertyValue("AutoStepMain", Boolean.FALSE);
+        xAxis.setPropertyValue("Min", 0.0);
+        xAxis.setPropertyValue("Max", 1.0);
+        xAxis.setPropertyValue("StepMain", 0.2);
+        xAxis.setPropertyValue("LinkNumberFormatToSource", Boolean.FALSE);
+        xAxis.setPropertyValue("NumberFormat", numberFormat);
+        xAxis.setPropertyValue("CrossoverPosition", com.sun.star.chart.ChartAxisPosition.START);
+    }
 }

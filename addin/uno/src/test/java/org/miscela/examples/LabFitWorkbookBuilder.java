@@ -24,14 +24,12 @@ import com.sun.star.awt.Size;
 import com.sun.star.beans.XPropertySet;
 import com.sun.star.chart.ChartLegendPosition;
 import com.sun.star.chart.ChartSymbolType;
-import com.sun.star.chart.XAxisXSupplier;
 import com.sun.star.chart.XAxisYSupplier;
 import com.sun.star.chart.XChartDocument;
 import com.sun.star.chart.XDiagram;
 import com.sun.star.container.XNameAccess;
 import com.sun.star.document.XEmbeddedObjectSupplier;
 import com.sun.star.lang.XComponent;
-import com.sun.star.lang.XMultiServiceFactory;
 import com.sun.star.sheet.XCellRangeData;
 import com.sun.star.sheet.XSpreadsheet;
 import com.sun.star.sheet.XSpreadsheets;
@@ -63,8 +61,8 @@ import org.miscela.reference.Oiml22;
  * Card (named ranges 'pure' and 'card'), Results (values and standard uncertainties from the card, coefficients with
  * their standard errors), Plot (the charts' data). The constants that locate cells are shared with ExamplesIT.
  *
- * <p>Run: {@code mvn -q -B test-compile exec:java -pl addin -Dexec.classpathScope=test
- * -Dexec.mainClass=org.miscela.examples.LabFitWorkbookBuilder -Dmiscela.oxt=$PWD/addin/target/miscela.oxt}
+ * <p>Run: {@code mvn -q -B test-compile exec:java -pl addin/uno -Dexec.classpathScope=test
+ * -Dexec.mainClass=org.miscela.examples.LabFitWorkbookBuilder -Dmiscela.oxt=$PWD/addin/uno/target/miscela.oxt}
  * (optional argument: the output file).
  */
 public final class LabFitWorkbookBuilder {
@@ -623,14 +621,8 @@ public final class LabFitWorkbookBuilder {
         Object chart = UnoRuntime.queryInterface(XNameAccess.class, charts).getByName(name);
         XChartDocument cd = UnoRuntime.queryInterface(XChartDocument.class,
                 UnoRuntime.queryInterface(XEmbeddedObjectSupplier.class, chart).getEmbeddedObject());
-        XDiagram d = UnoRuntime.queryInterface(XDiagram.class, UnoRuntime.queryInterface(XMultiServiceFactory.class,
-                cd).createInstance("com.sun.star.chart.XYDiagram"));
-        cd.setDiagram(d);
+        XDiagram d = ExampleWorkbooks.xyDiagram(cd, title, 10f);
         XPropertySet cp = UnoRuntime.queryInterface(XPropertySet.class, cd);
-        cp.setPropertyValue("HasMainTitle", Boolean.TRUE);
-        XPropertySet tp = UnoRuntime.queryInterface(XPropertySet.class, cd.getTitle());
-        tp.setPropertyValue("String", title);
-        tp.setPropertyValue("CharHeight", 10f);
         cp.setPropertyValue("HasLegend", legend);
         if (legend) {
             UnoRuntime.queryInterface(XPropertySet.class, cd.getLegend()).setPropertyValue("Alignment",
@@ -643,19 +635,7 @@ public final class LabFitWorkbookBuilder {
         dp.setPropertyValue("MissingValueTreatment", com.sun.star.chart.MissingValueTreatment.LEAVE_GAP);
         dp.setPropertyValue("HasXAxisTitle", Boolean.TRUE);
         dp.setPropertyValue("HasYAxisTitle", Boolean.TRUE);
-        XAxisXSupplier xs = UnoRuntime.queryInterface(XAxisXSupplier.class, d);
-        UnoRuntime.queryInterface(XPropertySet.class, xs.getXAxisTitle()).setPropertyValue("String",
-                "ethanol mole fraction x");
-        XPropertySet xAxis = xs.getXAxis();
-        xAxis.setPropertyValue("AutoMin", Boolean.FALSE);
-        xAxis.setPropertyValue("AutoMax", Boolean.FALSE);
-        xAxis.setPropertyValue("AutoStepMain", Boolean.FALSE);
-        xAxis.setPropertyValue("Min", 0.0);
-        xAxis.setPropertyValue("Max", 1.0);
-        xAxis.setPropertyValue("StepMain", 0.2);
-        xAxis.setPropertyValue("LinkNumberFormatToSource", Boolean.FALSE);
-        xAxis.setPropertyValue("NumberFormat", formats.key("0.0"));
-        xAxis.setPropertyValue("CrossoverPosition", com.sun.star.chart.ChartAxisPosition.START);
+        ExampleWorkbooks.moleFractionAxis(d, "ethanol mole fraction x", formats.key("0.0"));
         XAxisYSupplier ys = UnoRuntime.queryInterface(XAxisYSupplier.class, d);
         UnoRuntime.queryInterface(XPropertySet.class, ys.getYAxisTitle()).setPropertyValue("String", yTitle);
         XPropertySet yAxis = ys.getYAxis();

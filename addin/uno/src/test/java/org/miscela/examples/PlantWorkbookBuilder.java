@@ -36,8 +36,8 @@ import org.miscela.examples.ExampleWorkbooks.Formats;
  * water top-up exact against first order) and Card. The constants that locate cells are shared with ExamplesIT
  * (0-based rows; single values in column B, per-component values in B (ethanol) and C (water)).
  *
- * <p>Run: {@code mvn -q -B test-compile exec:java -pl addin -Dexec.classpathScope=test
- * -Dexec.mainClass=org.miscela.examples.PlantWorkbookBuilder -Dmiscela.oxt=$PWD/addin/target/miscela.oxt}
+ * <p>Run: {@code mvn -q -B test-compile exec:java -pl addin/uno -Dexec.classpathScope=test
+ * -Dexec.mainClass=org.miscela.examples.PlantWorkbookBuilder -Dmiscela.oxt=$PWD/addin/uno/target/miscela.oxt}
  * (optional argument: the output file).
  */
 public final class PlantWorkbookBuilder {

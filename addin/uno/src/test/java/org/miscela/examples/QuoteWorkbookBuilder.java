@@ -36,8 +36,8 @@ import org.miscela.examples.ExampleWorkbooks.Formats;
  * strength on other bases) and Card. The constants that locate cells are shared with ExamplesIT (0-based rows; the
  * order's values are in column B).
  *
- * <p>Run: {@code mvn -q -B test-compile exec:java -pl addin -Dexec.classpathScope=test
- * -Dexec.mainClass=org.miscela.examples.QuoteWorkbookBuilder -Dmiscela.oxt=$PWD/addin/target/miscela.oxt}
+ * <p>Run: {@code mvn -q -B test-compile exec:java -pl addin/uno -Dexec.classpathScope=test
+ * -Dexec.mainClass=org.miscela.examples.QuoteWorkbookBuilder -Dmiscela.oxt=$PWD/addin/uno/target/miscela.oxt}
  * (optional argument: the output file).
  */
 public final class QuoteWorkbookBuilder {

@@ -73,8 +73,8 @@ import org.miscela.it.Office;
  * compositions across the triangle, array formulas), Batch (a recipe in kg and its heats), Audit (MIX.TRACE re-derived
  * by native formulas), Plot (the chart's coordinates). The constants that locate cells are shared with ExamplesIT.
  *
- * <p>Run: {@code mvn -q -B test-compile exec:java -pl addin -Dexec.classpathScope=test
- * -Dexec.mainClass=org.miscela.examples.TernaryWorkbookBuilder -Dmiscela.oxt=$PWD/addin/target/miscela.oxt}
+ * <p>Run: {@code mvn -q -B test-compile exec:java -pl addin/uno -Dexec.classpathScope=test
+ * -Dexec.mainClass=org.miscela.examples.TernaryWorkbookBuilder -Dmiscela.oxt=$PWD/addin/uno/target/miscela.oxt}
  * (optional argument: the output file).
  */
 public final class TernaryWorkbookBuilder {
@@ -1059,15 +1059,9 @@ public final class TernaryWorkbookBuilder {
         Object model = UnoRuntime.queryInterface(XEmbeddedObjectSupplier.class, chart).getEmbeddedObject();
         com.sun.star.chart.XChartDocument cd = UnoRuntime.queryInterface(com.sun.star.chart.XChartDocument.class,
                 model);
-        XDiagram d = UnoRuntime.queryInterface(XDiagram.class, UnoRuntime.queryInterface(XMultiServiceFactory.class,
-                cd).createInstance("com.sun.star.chart.XYDiagram"));
-        cd.setDiagram(d);
+        XDiagram d = ExampleWorkbooks.xyDiagram(cd, "Blend density across the composition triangle, at the "
+                + "temperature in B5 (invented coefficients)", 11f);
         XPropertySet cp = UnoRuntime.queryInterface(XPropertySet.class, cd);
-        cp.setPropertyValue("HasMainTitle", Boolean.TRUE);
-        XPropertySet tp = UnoRuntime.queryInterface(XPropertySet.class, cd.getTitle());
-        tp.setPropertyValue("String", "Blend density across the composition triangle, at the temperature in B5 "
-                + "(invented coefficients)");
-        tp.setPropertyValue("CharHeight", 11f);
         cp.setPropertyValue("HasLegend", Boolean.TRUE);
         XPropertySet legend = UnoRuntime.queryInterface(XPropertySet.class, cd.getLegend());
         legend.setPropertyValue("Alignment", ChartLegendPosition.BOTTOM);
