@@ -1,5 +1,6 @@
 package org.miscela.calc;
 
+import org.miscela.core.problem.Problem;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -62,7 +63,7 @@ class ExplanationsTest {
         IllegalArgumentException unit = assertThrows(IllegalArgumentException.class, () -> addIn.batchTotals(CARD,
                 new Object[][] {{50.0, 50.0}}, "lb", one(20.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID));
         assertEquals(unit.getMessage(), explain("MIX.BATCH", CARD, new Object[][] {{50.0, 50.0}}, "lb", 20.0));
-        assertEquals("BlendProblem.UNKNOWN_UNIT", Catalogue.entryOf(unit.getMessage()));
+        assertEquals("Problem.BLEND_UNKNOWN_UNIT", Catalogue.entryOf(unit.getMessage()));
     }
 
     @Test

@@ -3,6 +3,7 @@ package org.miscela.core.catalog;
 import java.util.Arrays;
 import java.util.Collections;
 import java.util.List;
+import org.miscela.core.problem.Problem;
 
 /** What a person needs to know about one cell function; the wizard metadata and the reference are made from it. */
 public final class FunctionInfo {
@@ -13,7 +14,7 @@ public final class FunctionInfo {
     private final String example;
     private final List<ArgumentInfo> arguments;
     private String exampleResult = "";
-    private List<Enum<?>> errors = Collections.emptyList();
+    private List<Problem> errors = Collections.emptyList();
 
     FunctionInfo(String method, String displayName, String summary, String formula, String example,
             ArgumentInfo... arguments) {
@@ -31,8 +32,8 @@ public final class FunctionInfo {
         return this;
     }
 
-    /** The problems this function reports besides those of the card itself (Problem or FitProblem entries). */
-    FunctionInfo refuses(List<Enum<?>> problems) {
+    /** The problems this function reports besides those of the card itself (entries of the call, fit and blending sections of the catalogue). */
+    FunctionInfo refuses(List<Problem> problems) {
         this.errors = Collections.unmodifiableList(problems);
         return this;
     }
@@ -41,7 +42,7 @@ public final class FunctionInfo {
         return exampleResult;
     }
 
-    public List<Enum<?>> errors() {
+    public List<Problem> errors() {
         return errors;
     }
 

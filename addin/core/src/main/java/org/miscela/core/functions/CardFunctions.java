@@ -11,7 +11,10 @@ import org.miscela.core.problem.Numbers;
 import org.miscela.core.problem.Problem;
 import java.util.ArrayList;
 import java.util.List;
+import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.exception.NoBracketingException;
+import org.apache.commons.math3.exception.TooManyEvaluationsException;
 
 /**
  * The cell functions' arithmetic, one method per function: arguments and results in the card's own units, every
@@ -25,6 +28,8 @@ public final class CardFunctions {
     static final double SUM_TOLERANCE = 1e-6;
     /** How far the adiabatic search may move from the start temperature, in K. */
     private static final double SEARCH_SPAN = 2000.0;
+    /** The evaluations of the heat balance the final temperature's search may use. */
+    static final int BALANCE_EVALUATIONS = 200;
 
     private CardFunctions() {
     }
@@ -257,7 +262,7 @@ public final class CardFunctions {
             m.heatCapacity(k);
         }
         final double moles = total;
-        org.apache.commons.math3.analysis.UnivariateFunction balance = tf -> {
+        UnivariateFunction balance = tf -> {
             double h = moles * m.excessEnthalpy(x, tf);
             for (int k = 0; k < n.length; k++) {
                 h += n[k] * m.heatCapacity(k).enthalpyChange(start, tf);
@@ -287,9 +292,7 @@ public final class CardFunctions {
                             Numbers.show(Math.max(start, far)));
                 }
             }
-            double lo = Math.min(start, far);
-            double hi = Math.max(start, far);
-            end = new BrentSolver(1e-12, 1e-9).solve(200, balance, lo, hi);
+            end = finalTemperature(balance, Math.min(start, far), Math.max(start, far), BALANCE_EVALUATIONS);
         }
         if (!card.mayExtrapolate(e) && !insideTemperature(card, x, end)) {
             Units.Temperature unit = card.units().temperature();
@@ -303,6 +306,24 @@ public final class CardFunctions {
             throw nonPhysical(card, card.units().temperature().fromKelvin(end), "mixture heat capacity", cp);
         }
         return end - start;
+    }
+
+    /**
+     * The root of the heat balance between lo and hi (K), where its signs differ: Brent's method, to 1e-9 K, within so
+     * many evaluations. The bracket the temperature rise passes is at most 1024 K wide (its search doubles the step up
+     * to SEARCH_SPAN), which bisection alone narrows in 40 steps, and the balance's non-finite values are refused
+     * before (NO_TEMPERATURE_ROOT); no input is known that makes the solver fail within the 200 evaluations it allows.
+     * Should it fail all the same, that is a catalogued refusal (NO_CONVERGENCE, Err:523 in Calc), never an exception
+     * of the solver's own.
+     */
+    static double finalTemperature(UnivariateFunction balance, double lo, double hi, int evaluations) {
+        try {
+            return new BrentSolver(1e-12, 1e-9).solve(evaluations, balance, lo, hi);
+        } catch (TooManyEvaluationsException | NoBracketingException e) {
+            throw Problem.NO_CONVERGENCE.raise("the final temperature between " + Numbers.show(lo) + " and "
+                    + Numbers.show(hi) + " K", e instanceof NoBracketingException ? "the heat balance has the same "
+                    + "sign at both ends" : "no root within " + evaluations + " evaluations of the heat balance");
+        }
     }
 
     // --- validity
@@ -389,7 +410,7 @@ public final class CardFunctions {
     static double checkPoint(Card card, double[] x, double t, Extrapolation e) {
         double kelvin = checkTemperature(card, t, e);
         if (!card.mayExtrapolate(e) && !within(card, x, kelvin)) {
-            throw violations(card, x, kelvin, t).get(0);
+            throw violations(card, x, kelvin, t).get(0).refusal();
         }
         for (int k = 0; k < x.length; k++) {
             pureDensityAt(card, k, kelvin, t);
@@ -423,18 +444,18 @@ public final class CardFunctions {
     }
 
     /** Every validity limit the point exceeds, in the order: temperature, components, pairs. */
-    static List<MiscelaException> violations(Card card, double[] x, double kelvin, double t) {
-        List<MiscelaException> out = new ArrayList<>();
+    static List<Violation> violations(Card card, double[] x, double kelvin, double t) {
+        List<Violation> out = new ArrayList<>();
         Validity v = card.validity();
         Units.Temperature unit = card.units().temperature();
         if (!v.containsTemperature(kelvin)) {
-            out.add(Problem.OUTSIDE_TEMPERATURE.raise(Numbers.show(t), unit.symbol(),
+            out.add(new Violation(Problem.OUTSIDE_TEMPERATURE, Numbers.show(t), unit.symbol(),
                     Numbers.show(unit.fromKelvin(v.lowestKelvin())), Numbers.show(unit.fromKelvin(v.highestKelvin())),
                     unit.symbol()));
         }
         for (int k = 0; k < x.length; k++) {
             if (!v.containsFraction(k, x[k])) {
-                out.add(Problem.OUTSIDE_COMPOSITION.raise(card.components().get(k).name(), Numbers.show(x[k]),
+                out.add(new Violation(Problem.OUTSIDE_COMPOSITION, card.components().get(k).name(), Numbers.show(x[k]),
                         Numbers.show(v.lowestFraction(k)), Numbers.show(v.highestFraction(k))));
             }
         }
@@ -443,12 +464,12 @@ public final class CardFunctions {
             String b = card.components().get(p.second()).name();
             boolean present = x[p.first()] > 0.0 && x[p.second()] > 0.0;
             if (present && !p.containsTemperature(kelvin)) {
-                out.add(Problem.OUTSIDE_PAIR_TEMPERATURE.raise(Numbers.show(t), unit.symbol(),
+                out.add(new Violation(Problem.OUTSIDE_PAIR_TEMPERATURE, Numbers.show(t), unit.symbol(),
                         Numbers.show(unit.fromKelvin(p.lowestKelvin())),
                         Numbers.show(unit.fromKelvin(p.highestKelvin())), unit.symbol(), a + " + " + b));
             }
             if (!p.containsRatio(x)) {
-                out.add(Problem.OUTSIDE_PAIR_COMPOSITION.raise(a + " + " + b, "x(" + a + ")/(x(" + a + ") + x(" + b
+                out.add(new Violation(Problem.OUTSIDE_PAIR_COMPOSITION, a + " + " + b, "x(" + a + ")/(x(" + a + ") + x(" + b
                         + "))", Numbers.show(p.ratio(x)), Numbers.show(p.lowestRatio()),
                         Numbers.show(p.highestRatio())));
             }
