@@ -130,8 +130,19 @@ public final class BridgeProbe extends WeakBase implements XBridgeProbe {
                 return new IllegalStateException("probe: a Java runtime exception");
             case 4:
                 return new com.sun.star.uno.RuntimeException("probe: a UNO runtime exception");
+            case 5:
+                return new OwnRuntimeException("probe: a subclass of the UNO runtime exception, no UNO type");
             default:
                 return null;
+        }
+    }
+
+    /** A Java subclass of the UNO RuntimeException that no type library knows, as the add-in's UnexpectedFailure. */
+    private static final class OwnRuntimeException extends com.sun.star.uno.RuntimeException {
+        private static final long serialVersionUID = 1L;
+
+        OwnRuntimeException(String message) {
+            super(message);
         }
     }
 

@@ -13,7 +13,8 @@ import org.junit.jupiter.api.Test;
  * Which Calc error code each exception a Java add-in method throws becomes, declared in the IDL or not: the bridge
  * probe's PROBE.FAILDECLARED and PROBE.FAILUNDECLARED (benchmark module, never shipped) throw the kind asked for.
  * The add-in's error model (DEVELOPERS.md, docs/errors.md) rests on these codes: IllegalArgumentException is
- * Err:502, NoConvergenceException Err:523, any other exception #VALUE! (Err:519).
+ * Err:502, NoConvergenceException Err:523, any other exception #VALUE! (Err:519), a Java subclass of the UNO
+ * RuntimeException (as the add-in's UnexpectedFailure) too.
  */
 class UnoExceptionCodesIT {
     /** Calc's codes (formula/errorcodes.hxx, as ERRORTYPE and XCell.getError give them). */
@@ -32,6 +33,8 @@ class UnoExceptionCodesIT {
         expected.put("=PROBE.FAILUNDECLARED(2)", ILLEGAL_ARGUMENT);
         expected.put("=PROBE.FAILUNDECLARED(3)", NO_VALUE);
         expected.put("=PROBE.FAILUNDECLARED(4)", NO_VALUE);
+        // a Java subclass of the UNO RuntimeException, as the add-in's UnexpectedFailure is
+        expected.put("=PROBE.FAILUNDECLARED(5)", NO_VALUE);
         expected.put("=PROBE.FAILUNDECLARED(0)", 0);
         Map<String, Integer> shown = new LinkedHashMap<>();
         Office office = Office.start(Paths.get(System.getProperty("miscela.probe.oxt")));
