@@ -95,4 +95,61 @@ public final class BridgeProbe extends WeakBase implements XBridgeProbe {
         THREADS.add(Thread.currentThread());
         return THREADS.size();
     }
+
+    @Override
+    public double failUndeclared(double kind) {
+        // a checked UNO exception thrown past the compiler, as the bridge would see an undeclared one
+        BridgeProbe.<RuntimeException>sneaky(failure(kind));
+        return kind;
+    }
+
+    @Override
+    public double failDeclared(double kind) throws com.sun.star.lang.IllegalArgumentException,
+            com.sun.star.sheet.NoConvergenceException {
+        Throwable t = failure(kind);
+        if (t instanceof com.sun.star.sheet.NoConvergenceException) {
+            throw (com.sun.star.sheet.NoConvergenceException) t;
+        }
+        if (t instanceof com.sun.star.lang.IllegalArgumentException) {
+            throw (com.sun.star.lang.IllegalArgumentException) t;
+        }
+        if (t instanceof RuntimeException) {
+            throw (RuntimeException) t;
+        }
+        return kind;
+    }
+
+    /** The exception a kind names (see XBridgeProbe.idl), or null. */
+    private static Throwable failure(double kind) {
+        switch ((int) kind) {
+            case 1:
+                return new com.sun.star.sheet.NoConvergenceException("probe: no convergence");
+            case 2:
+                return new com.sun.star.lang.IllegalArgumentException("probe: illegal argument");
+            case 3:
+                return new IllegalStateException("probe: a Java runtime exception");
+            case 4:
+                return new com.sun.star.uno.RuntimeException("probe: a UNO runtime exception");
+            case 5:
+                return new OwnRuntimeException("probe: a subclass of the UNO runtime exception, no UNO type");
+            default:
+                return null;
+        }
+    }
+
+    /** A Java subclass of the UNO RuntimeException that no type library knows, as the add-in's UnexpectedFailure. */
+    private static final class OwnRuntimeException extends com.sun.star.uno.RuntimeException {
+        private static final long serialVersionUID = 1L;
+
+        OwnRuntimeException(String message) {
+            super(message);
+        }
+    }
+
+    @SuppressWarnings("unchecked")
+    private static <T extends Throwable> void sneaky(Throwable t) throws T {
+        if (t != null) {
+            throw (T) t;
+        }
+    }
 }

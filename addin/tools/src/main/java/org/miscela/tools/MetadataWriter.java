@@ -3,6 +3,7 @@ package org.miscela.tools;
 import org.miscela.core.catalog.ArgumentInfo;
 import org.miscela.core.catalog.FunctionCatalog;
 import org.miscela.core.catalog.FunctionInfo;
+import org.miscela.core.problem.Problem;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -150,7 +151,7 @@ public final class MetadataWriter {
                     .append("**.\n\n");
             if (!f.errors().isEmpty()) {
                 m.append("Refused (Err:502) when:\n\n");
-                for (Enum<?> e : f.errors()) {
+                for (Problem e : f.errors()) {
                     m.append("- `").append(e.name()).append("`: ").append(pattern(e).replaceAll("%[sd]", "…").replace("%%", "%"))
                             .append('\n');
                 }
@@ -197,9 +198,9 @@ public final class MetadataWriter {
     public static String errorCatalogue() {
         StringBuilder m = new StringBuilder();
         m.append("# Error catalogue\n\n");
-        m.append("<!-- Generated from the message catalogues (org.miscela.core.problem.Problem, org.miscela.core.fit.FitProblem, "
-                + "org.miscela.core.blend.BlendProblem) and the function catalogue; a test fails when this file is "
-                + "out of date. Regenerate with scripts/regenerate-docs. -->\n\n");
+        m.append("<!-- Generated from the message catalogue (org.miscela.core.problem.Problem, one section per table "
+                + "below) and the function catalogue; a test fails when this file is out of date. Regenerate with "
+                + "scripts/regenerate-docs. -->\n\n");
         m.append("Every message names what was wrong and how to put it right; `…` stands for the details the actual "
                 + "message fills in (a row number, a value, a name).\n\n");
         m.append("## What Calc shows\n\n");
@@ -209,6 +210,9 @@ public final class MetadataWriter {
                 + "first and then the call's own arguments (copy them from the formula). Also `MIX.CHECK(card)` "
                 + "for the card's problems, `MIX.CHECKPOINT(card; x; temperature)` for a point's, a fit's result "
                 + "`\"check\"` for a fit's. |\n");
+        m.append("| Err:523 | A numerical search inside the add-in did not converge (`").append(Problem.NO_CONVERGENCE)
+                .append("` below): Calc's own code for a calculation that does not converge. | `MIX.EXPLAIN` of the "
+                + "same call, as for Err:502. |\n");
         m.append("| Err:504 | Calc's own parameter error: a required argument left out, too many arguments, or an "
                 + "error value inside a range argument (for example a card whose fitted cells show Err:502). Calc "
                 + "does not call the add-in. | `MIX.EXPLAIN` says when the number of arguments is wrong; otherwise "
@@ -217,6 +221,9 @@ public final class MetadataWriter {
                 + "through without calling the add-in. | The argument's cell. |\n");
         m.append("| #NAME? | The extension is not installed in this LibreOffice, or the function name is "
                 + "misspelt. | Tools ▸ Extension Manager; `MIX.EXPLAIN(\"the name\")` lists the names there are. |\n");
+        m.append("| #VALUE! | An unexpected failure: a fault in the add-in, not a refusal (see the last section). | "
+                + "`MIX.EXPLAIN` of the same call, and `MIX.INFO(\"last failure\")` for the last one since the office "
+                + "started. |\n");
         m.append("| text | `MIX.EXPLAIN`, `MIX.CHECK`, `MIX.CHECKPOINT`, `MIX.TRACE` labels, a fit's `\"check\"` "
                 + "and `MIX.ADJUST`'s `\"summary\"` return text by design. | — |\n\n");
         m.append("A range argument left out (`;;`, or `;` at the end, where a range belongs) makes Calc show "
@@ -229,35 +236,40 @@ public final class MetadataWriter {
                 + "functions never take, and `UnreachableProblemsTest` produces each through the library (all but "
                 + "one, for which no input is known). Every card problem is shown by `MIX.CHECK` in a real office "
                 + "(`CardProblemsIT`).\n\n");
-        m.append("The add-in never returns NaN or an infinity (Calc would show #NUM!) and an unexpected failure "
-                + "inside it would show #VALUE!; the tests (`CalcFuzzIT`, the core fuzzers) check that neither "
-                + "occurs.\n\n");
+        m.append("The add-in never returns NaN or an infinity (Calc would show #NUM!); the tests (`CalcFuzzIT`, the "
+                + "core fuzzers) check that it does not, and that no call fails unexpectedly.\n\n");
         m.append("## Problems with a card\n\n");
         m.append("Reported by every function given the card (Err:502) and, in words, by `MIX.CHECK(card)`; each "
                 + "names the card row. The layout rules behind them are in [card-format.md](card-format.md).\n\n");
-        table(m, java.util.EnumSet.range(org.miscela.core.problem.Problem.CARD_EMPTY,
-                org.miscela.core.problem.Problem.NO_COMPOSITION_LIMIT), false);
+        table(m, Problem.of(Problem.Section.CARD), false);
         m.append("\n## Problems with a call\n\n");
-        table(m, java.util.EnumSet.range(org.miscela.core.problem.Problem.NOT_BINARY,
-                org.miscela.core.problem.Problem.NON_PHYSICAL), true);
+        table(m, Problem.of(Problem.Section.CALL), true);
         m.append("\n## Problems with a fit\n\n");
-        table(m, java.util.Arrays.asList(org.miscela.core.fit.FitProblem.values()), true);
+        table(m, Problem.of(Problem.Section.FIT), true);
         m.append("\n## Problems with a blending calculation\n\n");
-        table(m, java.util.Arrays.asList(org.miscela.core.blend.BlendProblem.values()), true);
+        table(m, Problem.of(Problem.Section.BLEND), true);
         m.append("\n## What MIX.EXPLAIN answers about a call it cannot run\n\n");
         m.append("`MIX.EXPLAIN` never refuses: for a call it cannot run it answers one of these instead of "
                 + "\"OK\" or the call's refusal.\n\n");
         m.append("| Answer | Message |\n|---|---|\n");
-        for (Enum<?> p : FunctionCatalog.explainAnswers()) {
+        for (Problem p : FunctionCatalog.explainAnswers()) {
             m.append("| `").append(p.name()).append("` | ").append(pattern(p).replaceAll("%[sd]", "…").replace("%%", "%")
                     .replace("|", "\\|")).append(" |\n");
         }
+        m.append("\n## An unexpected failure\n\n");
+        m.append("Any other exception inside the add-in is a fault in it, never a refusal: Calc shows #VALUE!, and "
+                + "the add-in writes no file and no log. The words are kept instead: `MIX.EXPLAIN` of the same call "
+                + "answers with them, and `MIX.INFO(\"last failure\")` returns the last failure since the office "
+                + "started, with its time (UTC) and function (only the last one is kept, a thousand characters at most): "
+                + "the exception's class and message and where in the add-in's code it happened. Please report them "
+                + "with the call.\n\n");
+        table(m, Problem.of(Problem.Section.FAILURE), false);
         return m.toString();
     }
 
-    private static void table(StringBuilder m, java.util.Collection<? extends Enum<?>> problems, boolean where) {
+    private static void table(StringBuilder m, java.util.List<Problem> problems, boolean where) {
         m.append(where ? "| Problem | Message | Reported by |\n|---|---|---|\n" : "| Problem | Message |\n|---|---|\n");
-        for (Enum<?> p : problems) {
+        for (Problem p : problems) {
             m.append("| `").append(p.name()).append("` | ")
                     .append(pattern(p).replaceAll("%[sd]", "…").replace("%%", "%").replace("|", "\\|"));
             if (where) {
@@ -275,15 +287,9 @@ public final class MetadataWriter {
         }
     }
 
-    /** The message pattern of a Problem or FitProblem entry. */
-    static String pattern(Enum<?> problem) {
-        if (problem instanceof org.miscela.core.problem.Problem) {
-            return ((org.miscela.core.problem.Problem) problem).pattern();
-        }
-        if (problem instanceof org.miscela.core.blend.BlendProblem) {
-            return ((org.miscela.core.blend.BlendProblem) problem).pattern();
-        }
-        return ((org.miscela.core.fit.FitProblem) problem).pattern();
+    /** The message pattern of a catalogue entry. */
+    static String pattern(Problem problem) {
+        return problem.pattern();
     }
 
     private static String anchor(String displayName) {

@@ -113,7 +113,7 @@ final class Explanations {
 
     /**
      * "OK" when the call of the named function with these arguments gives a result, otherwise the message of its
-     * refusal. Throws {@link org.miscela.core.problem.MiscelaException} only when there is no such function or Calc itself
+     * refusal, or the words of its unexpected failure. Throws {@link org.miscela.core.problem.MiscelaException} only when there is no such function or Calc itself
      * would refuse the call: for its number of arguments (Err:504) or a range argument left out (Err:502).
      */
     static String explain(MixtureAddIn addIn, Object name, Object[] arguments) {
@@ -136,8 +136,14 @@ final class Explanations {
         try {
             t.call.on(addIn, p);
             return CardFunctions.OK;
-        } catch (IllegalArgumentException refused) {
+        } catch (IllegalArgumentException | UnexpectedFailure refused) {
             return refused.getMessage();
+        } catch (Exception undeclared) {
+            // NoConvergenceException (Err:523): no method declares it, so it can only be caught as an Exception
+            if (undeclared instanceof com.sun.star.sheet.NoConvergenceException) {
+                return undeclared.getMessage();
+            }
+            throw undeclared;
         }
     }
 

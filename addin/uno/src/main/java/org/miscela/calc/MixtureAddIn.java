@@ -10,18 +10,19 @@ import org.miscela.core.card.CardCache;
 import org.miscela.core.card.CardReader;
 import org.miscela.core.functions.FitFunctions;
 import org.miscela.core.functions.FitOutput;
-import org.miscela.core.blend.BlendException;
 import org.miscela.core.blend.BlendFunctions;
 import org.miscela.core.blend.CompositionBasis;
-import org.miscela.core.fit.FitException;
 import org.miscela.core.functions.CardFunctions;
 import org.miscela.core.card.Extrapolation;
+import org.miscela.core.fit.RedlichKisterFitter;
 import org.miscela.core.problem.MiscelaException;
 import org.miscela.core.problem.Problem;
 
 /**
- * The UNO face of the add-in: each method decodes Calc's arguments, calls the core, and encodes the result.
- * A {@link MiscelaException} becomes an IllegalArgumentException, which Calc shows as Err:502.
+ * The UNO face of the add-in: each method decodes Calc's arguments, calls the core, and encodes the result. Whatever
+ * a call throws goes to {@link Failures} by the method's one catch, with the method's IDL name: a refusal becomes an
+ * IllegalArgumentException (Err:502), a search that did not converge a NoConvergenceException (Err:523), anything
+ * else an {@link UnexpectedFailure} (#VALUE!) whose words MIX.EXPLAIN and MIX.INFO("last failure") give.
  */
 public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, XServiceInfo {
     private static final String[] TEMPERATURE = {"temperature"};
@@ -39,8 +40,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Extrapolation e = Arguments.extrapolation(extrapolate);
             return CompositionArguments.overCompositions(c, moleFraction, temperature,
                     (k, x, t) -> CardFunctions.excessMolarVolume(k, x, t, e));
-        } catch (MiscelaException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "excessMolarVolume");
         }
     }
 
@@ -53,8 +54,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Extrapolation e = Arguments.extrapolation(extrapolate);
             return CompositionArguments.overCompositions(c, moleFraction, temperature,
                     (k, x, t) -> CardFunctions.partialMolarVolume(k, i, x, t, e));
-        } catch (MiscelaException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "partialMolarVolume");
         }
     }
 
@@ -67,8 +68,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Extrapolation e = Arguments.extrapolation(extrapolate);
             return CompositionArguments.overCompositions(c, moleFraction, temperature,
                     (k, x, t) -> CardFunctions.partialExcessMolarVolume(k, i, x, t, e));
-        } catch (MiscelaException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "partialExcessMolarVolume");
         }
     }
 
@@ -80,8 +81,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Extrapolation e = Arguments.extrapolation(extrapolate);
             return CompositionArguments.overCompositions(c, moleFraction, temperature,
                     (k, x, t) -> CardFunctions.molarVolume(k, x, t, e));
-        } catch (MiscelaException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "mixtureMolarVolume");
         }
     }
 
@@ -93,8 +94,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Extrapolation e = Arguments.extrapolation(extrapolate);
             return CompositionArguments.overCompositions(c, moleFraction, temperature,
                     (k, x, t) -> CardFunctions.density(k, x, t, e));
-        } catch (MiscelaException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "mixtureDensity");
         }
     }
 
@@ -107,8 +108,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Extrapolation e = Arguments.extrapolation(extrapolate);
             return Arguments.broadcast(c, TEMPERATURE, new Object[][][] {temperature},
                     (k, p) -> CardFunctions.pureDensity(k, i, p[0], e));
-        } catch (MiscelaException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "pureDensity");
         }
     }
 
@@ -116,8 +117,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     public String checkCard(Object[][] card) {
         try {
             return CardFunctions.check(Arguments.card(card), Double.NaN, Double.NaN, Extrapolation.AS_CARD);
-        } catch (MiscelaException ex) {
-            return ex.getMessage();
+        } catch (RuntimeException ex) {
+            return Failures.words(ex, "checkCard");
         }
     }
 
@@ -127,8 +128,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Card c = Arguments.card(card);
             return CardFunctions.check(c, CompositionArguments.singleComposition(c, "composition", moleFraction),
                     Arguments.single("temperature", temperature), Arguments.extrapolation(extrapolate));
-        } catch (MiscelaException ex) {
-            return ex.getMessage();
+        } catch (RuntimeException ex) {
+            return Failures.words(ex, "checkPoint");
         }
     }
 
@@ -140,8 +141,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Extrapolation e = Arguments.extrapolation(extrapolate);
             return CompositionArguments.overCompositions(c, moleFraction, temperature,
                     (k, x, t) -> CardFunctions.excessEnthalpy(k, x, t, e));
-        } catch (MiscelaException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "excessEnthalpy");
         }
     }
 
@@ -154,8 +155,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Extrapolation e = Arguments.extrapolation(extrapolate);
             return CompositionArguments.overCompositions(c, moleFraction, temperature,
                     (k, x, t) -> CardFunctions.partialExcessEnthalpy(k, i, x, t, e));
-        } catch (MiscelaException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "partialExcessEnthalpy");
         }
     }
 
@@ -168,8 +169,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Extrapolation e = Arguments.extrapolation(extrapolate);
             return CompositionArguments.overRows(c, "amount", amounts, temperature,
                     (k, n, t) -> CardFunctions.mixingHeat(k, n, b, t, e));
-        } catch (MiscelaException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "mixingHeat");
         }
     }
 
@@ -184,8 +185,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Extrapolation e = Arguments.extrapolation(extrapolate);
             return CompositionArguments.overRows(c, "amount", amounts, temperature,
                     (k, n, t) -> CardFunctions.additionHeat(k, n, i, more, b, t, e));
-        } catch (MiscelaException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "additionHeat");
         }
     }
 
@@ -198,8 +199,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Extrapolation e = Arguments.extrapolation(extrapolate);
             return CompositionArguments.overRows(c, "amount", amounts, temperature,
                     (k, n, t) -> CardFunctions.adiabaticRise(k, n, b, t, e));
-        } catch (MiscelaException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "adiabaticRise");
         }
     }
 
@@ -209,8 +210,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
         try {
             Card c = Arguments.card(card);
             return CompositionArguments.overCompositions(c, moleFraction, temperature, CardFunctions::inside);
-        } catch (MiscelaException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "insideValidity");
         }
     }
 
@@ -222,8 +223,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             return Arguments.table(CardFunctions.trace(c, CompositionArguments.singleComposition(c, "composition", moleFraction),
                     Arguments.single("temperature", temperature), Arguments.property(quantity),
                     Arguments.extrapolation(extrapolate)));
-        } catch (MiscelaException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "traceEvaluation");
         }
     }
 
@@ -233,15 +234,15 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             throws IllegalArgumentException {
         try {
             FitOutput output = Arguments.fitOutput(result);
-            int m = Arguments.requiredCount("order", order, MAX_ORDER_IN_X);
-            int mt = Arguments.count("order in T", orderInTemperature, MAX_ORDER_IN_T, 0);
+            int m = Arguments.requiredCount("order", order, RedlichKisterFitter.MAX_ORDER_IN_X);
+            int mt = Arguments.count("order in T", orderInTemperature, RedlichKisterFitter.MAX_ORDER_IN_T, 0);
             double[][] d = DataArguments.dataColumns(new String[] {"mole fraction", "excess volume", "temperature",
                 "weight"}, new Object[][][] {moleFraction, excessVolume, Arguments.optionalRange(temperature),
                     Arguments.optionalRange(weights)}, new boolean[] {false, false, false, false});
             return Arguments.table(FitFunctions.excess(d[0], d[1], m, d[2], mt,
                     Arguments.optionalNumber("reference temperature", referenceTemperature), d[3], output));
-        } catch (MiscelaException | FitException ex) {
-            return checkOrRefuse(result, ex);
+        } catch (RuntimeException ex) {
+            return checkOrRefuse(result, ex, "fitExcessVolume");
         }
     }
 
@@ -253,15 +254,15 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             FitOutput output = Arguments.fitOutput(result);
             Card c = CardReader.readPureComponents(pure);
             int[] p = Arguments.pair(c, pair);
-            int m = Arguments.requiredCount("order", order, MAX_ORDER_IN_X);
-            int mt = Arguments.count("order in T", orderInTemperature, MAX_ORDER_IN_T, 0);
+            int m = Arguments.requiredCount("order", order, RedlichKisterFitter.MAX_ORDER_IN_X);
+            int mt = Arguments.count("order in T", orderInTemperature, RedlichKisterFitter.MAX_ORDER_IN_T, 0);
             double[][] d = DataArguments.dataColumns(new String[] {"mole fraction", "density", "temperature", "weight"},
                     new Object[][][] {moleFraction, density, temperature, Arguments.optionalRange(weights)},
                     new boolean[] {false, false, true, false});
             return Arguments.table(FitFunctions.density(c, p[0], p[1], d[0], d[1], d[2], m, mt,
                     Arguments.optionalNumber("reference temperature", referenceTemperature), d[3], output));
-        } catch (MiscelaException | FitException ex) {
-            return checkOrRefuse(result, ex);
+        } catch (RuntimeException ex) {
+            return checkOrRefuse(result, ex, "fitDensity");
         }
     }
 
@@ -273,8 +274,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             return Arguments.table(FitFunctions.leastSquares(DataArguments.numbers("design", design),
                     DataArguments.values("response", response), w == null ? null : DataArguments.values("weights", w),
                     Arguments.fitOutput(result)));
-        } catch (MiscelaException | FitException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "leastSquares");
         }
     }
 
@@ -288,8 +289,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Extrapolation e = Arguments.extrapolation(extrapolate);
             return CompositionArguments.overCompositions(c, moleFraction, temperature,
                     (k, x, t) -> CardFunctions.uncertainty(k, q, i, x, t, e));
-        } catch (MiscelaException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "uncertainty");
         }
     }
 
@@ -308,8 +309,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             return CompositionArguments.overValueLines(c, "values", values, new Object[][] {{0.0}},
                     v -> BlendFunctions.binary(c, v, in), true,
                     (v, unused) -> BlendFunctions.convert(c, v, in, out, e));
-        } catch (MiscelaException | BlendException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "convertComposition");
         }
     }
 
@@ -325,8 +326,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Extrapolation e = Arguments.extrapolation(extrapolate);
             return CompositionArguments.overRows(c, "amount", amounts, temperature,
                     (k, n, t) -> BlendFunctions.batch(k, n, u, storage, t, r, ru, e));
-        } catch (MiscelaException | BlendException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "batchTotals");
         }
     }
 
@@ -347,8 +348,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             return CompositionArguments.overValueLines(c, "composition", composition, new Object[][] {{t}},
                     v -> BlendFunctions.binary(c, v, in), false,
                     (v, at) -> BlendFunctions.recipe(c, q, u, at, v, in, storage, ru, e));
-        } catch (MiscelaException | BlendException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "recipe");
         }
     }
 
@@ -372,8 +373,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
                     Arguments.text("result unit", resultUnit, null), Arguments.extrapolation(extrapolate));
             return r instanceof double[] ? CompositionArguments.row((double[]) r)
                     : r instanceof Double ? Arguments.finite((Double) r) : r;
-        } catch (MiscelaException | BlendException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "adjustBatch");
         }
     }
 
@@ -390,8 +391,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
                     Arguments.component(c, component), Arguments.number("amount added", added), u,
                     Arguments.number("temperature", temperature), Arguments.text("result", result, null),
                     Arguments.text("result unit", resultUnit, null), Arguments.extrapolation(extrapolate)));
-        } catch (MiscelaException | BlendException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "additionVolume");
         }
     }
 
@@ -413,8 +414,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
                     new Object[][][] {density, temperature}, (card1, p) -> BlendFunctions.fromDensity(card1, p[0],
                             p[1], k, ref, lo, hi, BlendFunctions.basis(card1, basisText, Double.isNaN(tb) ? p[1] : tb,
                                     b), e));
-        } catch (MiscelaException | BlendException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "compositionFromDensity");
         }
     }
 
@@ -433,8 +434,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             return CompositionArguments.overValueLines(c, "composition", composition, temperature,
                     v -> BlendFunctions.binary(c, v, in), true,
                     (v, t) -> new double[] {BlendFunctions.volumeCorrection(c, v, in, t, tRef, r, e)});
-        } catch (MiscelaException | BlendException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "volumeCorrection");
         }
     }
 
@@ -442,13 +443,14 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     public String explainCall(Object functionName, Object[] arguments) {
         try {
             return Explanations.explain(this, functionName, arguments);
-        } catch (MiscelaException ex) {
-            return ex.getMessage();
+        } catch (RuntimeException ex) {
+            return Failures.words(ex, "explainCall");
         }
     }
 
-    /** A fit's problem: the message itself when the "check" result was asked for, Err:502 otherwise. */
-    private static Object checkOrRefuse(Object result, RuntimeException ex) throws IllegalArgumentException {
+    /** A fit's problem: its words when the "check" result was asked for, a refusal (Err:502) otherwise. */
+    private static Object checkOrRefuse(Object result, RuntimeException ex, String method)
+            throws IllegalArgumentException {
         boolean check;
         try {
             check = Arguments.fitOutput(result) == FitOutput.CHECK;
@@ -456,9 +458,9 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             check = false;
         }
         if (check) {
-            return ex.getMessage();
+            return Failures.words(ex, method);
         }
-        throw refused(ex);
+        throw Failures.refusal(ex, method);
     }
 
     @Override
@@ -472,11 +474,13 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
                     return (double) CardCache.shared().parseCount();
                 case "cards kept":
                     return (double) CardCache.shared().size();
+                case "last failure":
+                    return Failures.last();
                 default:
-                    throw Problem.UNKNOWN_INFO_ITEM.raise(what, "version, card reads, cards kept");
+                    throw Problem.UNKNOWN_INFO_ITEM.raise(what, "version, card reads, cards kept, last failure");
             }
-        } catch (MiscelaException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "addInInfo");
         }
     }
 
@@ -486,17 +490,9 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             // no temperature: each composition is paired with 0, which the molar mass never reads
             return CompositionArguments.overCompositions(Arguments.card(card), moleFraction, new Object[][] {{0.0}},
                     (k, x, unused) -> CardFunctions.meanMolarMass(k, x));
-        } catch (MiscelaException ex) {
-            throw refused(ex);
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "mixtureMolarMass");
         }
-    }
-
-    /** The fit engine's limits on the orders (beyond them the power basis is too ill-conditioned). */
-    private static final int MAX_ORDER_IN_X = 30;
-    private static final int MAX_ORDER_IN_T = 10;
-
-    private static IllegalArgumentException refused(RuntimeException ex) {
-        return new IllegalArgumentException(ex.getMessage());
     }
 
     // --- XServiceInfo

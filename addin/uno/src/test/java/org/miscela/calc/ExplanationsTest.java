@@ -16,6 +16,7 @@ import org.junit.jupiter.api.Test;
 import org.miscela.core.catalog.FunctionCatalog;
 import org.miscela.core.catalog.FunctionInfo;
 import org.miscela.core.catalog.IdlType;
+import org.miscela.core.problem.Problem;
 import org.miscela.core.problem.Catalogue;
 import org.miscela.core.card.TestCards;
 
@@ -95,7 +96,7 @@ class ExplanationsTest {
         IllegalArgumentException unit = assertThrows(IllegalArgumentException.class, () -> addIn.batchTotals(CARD,
                 new Object[][] {{50.0, 50.0}}, "lb", one(20.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID));
         assertEquals(unit.getMessage(), explain("MIX.BATCH", CARD, new Object[][] {{50.0, 50.0}}, "lb", 20.0));
-        assertEquals("BlendProblem.UNKNOWN_UNIT", Catalogue.entryOf(unit.getMessage()));
+        assertEquals("Problem.BLEND_UNKNOWN_UNIT", Catalogue.entryOf(unit.getMessage()));
     }
 
     @Test

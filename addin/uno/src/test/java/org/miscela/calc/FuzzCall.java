@@ -95,8 +95,11 @@ final class FuzzCall {
         return all;
     }
 
-    /** Calls the method the catalogue names through the interface; the add-in's own exceptions pass unchanged. */
-    Object invoke(MixtureAddIn a) throws IllegalArgumentException {
+    /**
+     * Calls the method the catalogue names through the interface; the add-in's own exceptions pass unchanged (a UNO
+     * exception such as NoConvergenceException included, which the IDL methods do not declare).
+     */
+    Object invoke(MixtureAddIn a) throws com.sun.star.uno.Exception {
         java.lang.reflect.Method m = METHODS.get(method());
         if (m == null) {
             throw new AssertionError("the interface has no method " + method());
@@ -110,8 +113,8 @@ final class FuzzCall {
             return m.invoke(a, all);
         } catch (InvocationTargetException e) {
             Throwable cause = e.getCause();
-            if (cause instanceof IllegalArgumentException) {
-                throw (IllegalArgumentException) cause;
+            if (cause instanceof com.sun.star.uno.Exception) {
+                throw (com.sun.star.uno.Exception) cause;
             }
             if (cause instanceof RuntimeException) {
                 throw (RuntimeException) cause;

@@ -1,5 +1,6 @@
 package org.miscela.calc;
 
+import org.miscela.core.problem.Problem;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -221,7 +222,7 @@ class FuzzFindingsTest {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> addIn.adjustBatch(card,
                 range(row(1.0, 1.0)), "mol", range(row(0.05, 0.95)), "mole fraction", 300.0, "make up", 10.0, "mL",
                 Any.VOID, Any.VOID, Any.VOID, Any.VOID));
-        assertEquals("BlendProblem.LIMIT_UNREACHABLE", Catalogue.entryOf(e.getMessage()), e.getMessage());
+        assertEquals("Problem.LIMIT_UNREACHABLE", Catalogue.entryOf(e.getMessage()), e.getMessage());
     }
 
     /**
@@ -242,7 +243,7 @@ class FuzzFindingsTest {
         assertEquals("Problem.AMOUNT_TOO_LARGE", Catalogue.entryOf(added.getMessage()), added.getMessage());
         IllegalArgumentException batch = assertThrows(IllegalArgumentException.class, () -> addIn.batchTotals(card,
                 range(row(1e308, 1e308)), "kg", one(300.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID));
-        assertEquals("BlendProblem.AMOUNT_TOO_LARGE", Catalogue.entryOf(batch.getMessage()), batch.getMessage());
+        assertEquals("Problem.BLEND_AMOUNT_TOO_LARGE", Catalogue.entryOf(batch.getMessage()), batch.getMessage());
         IllegalArgumentException zero = assertThrows(IllegalArgumentException.class,
                 () -> addIn.mixingHeat(card, range(row(0.0, 0.0)), one(300.0), "kg", Any.VOID));
         assertEquals("Problem.AMOUNT_ZERO", Catalogue.entryOf(zero.getMessage()), "nothing is still nothing");

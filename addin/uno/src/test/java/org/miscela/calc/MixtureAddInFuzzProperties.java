@@ -39,10 +39,12 @@ import org.miscela.core.card.FuzzTally;
  *       component (a row, a column, or a row per line) or the shape of an argument; MIX.ADJUST may also return its
  *       summary sentence;</li>
  *   <li>anything else ends in com.sun.star.lang.IllegalArgumentException (Calc's Err:502) carrying a message of the
- *       catalogue ({@code Problem}, {@code FitProblem} or {@code BlendProblem});</li>
+ *       catalogue ({@code Problem}), or in com.sun.star.sheet.NoConvergenceException (Err:523) carrying the words of
+ *       {@code Problem.NO_CONVERGENCE};</li>
  * </ul>
  *
- * never another exception, never NaN or infinity, and each call within {@link FuzzTally#CALL_BOUND_NANOS}.
+ * never another exception (an unexpected failure, #VALUE! in Calc, fails), never NaN or infinity, and each call within
+ * {@link FuzzTally#CALL_BOUND_NANOS}.
  */
 class MixtureAddInFuzzProperties {
     private static final FuzzTally TALLY = new FuzzTally("adapter");
@@ -90,6 +92,14 @@ class MixtureAddInFuzzProperties {
             return;
         } catch (RuntimeException | Error e) {
             throw new AssertionError("MixtureAddIn." + call.method() + " threw " + e + " for " + call, e);
+        } catch (Exception e) {
+            // a checked UNO exception no method declares: only NoConvergenceException, with its catalogued words
+            if (!(e instanceof com.sun.star.sheet.NoConvergenceException)
+                    || !"Problem.NO_CONVERGENCE".equals(Catalogue.entryOf(e.getMessage()))) {
+                throw new AssertionError("MixtureAddIn." + call.method() + " threw " + e + " for " + call, e);
+            }
+            TALLY.count(target, "error Problem.NO_CONVERGENCE", System.nanoTime() - start, call::toString);
+            return;
         }
         long nanos = System.nanoTime() - start;
         TALLY.count(target, classify(call, result), nanos, call::toString);

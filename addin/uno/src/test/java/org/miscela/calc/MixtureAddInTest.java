@@ -99,7 +99,7 @@ class MixtureAddInTest {
         assertEquals(before + 1, (Double) addIn.addInInfo("card reads"), "fifty calls on one new card parse it once");
         assertTrue((Double) addIn.addInInfo("cards kept") >= 1);
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> addIn.addInInfo("colour"));
-        assertEquals("The item \"colour\" is not recognised; use one of: version, card reads, cards kept.",
+        assertEquals("The item \"colour\" is not recognised; use one of: version, card reads, cards kept, last failure.",
                 e.getMessage());
         assertThrows(IllegalArgumentException.class, () -> addIn.addInInfo(3.0));
     }

@@ -11,19 +11,16 @@ import org.junit.jupiter.api.Test;
 import org.miscela.core.catalog.FunctionCatalog;
 import org.miscela.core.card.Card;
 import org.miscela.core.functions.CardFunctions;
+import org.miscela.core.functions.SolverAccess;
 import org.miscela.core.problem.Catalogue;
 import org.miscela.core.card.Extrapolation;
 import org.miscela.core.problem.MiscelaException;
 import org.miscela.core.problem.Problem;
 import org.miscela.core.model.RedlichKister;
 import org.miscela.core.card.TestCards;
-import org.miscela.core.blend.BlendException;
 import org.miscela.core.blend.BlendFunctions;
-import org.miscela.core.blend.BlendProblem;
 import org.miscela.core.blend.CompositionBasis;
 import org.miscela.core.fit.ExcessVolumeUncertainty;
-import org.miscela.core.fit.FitException;
-import org.miscela.core.fit.FitProblem;
 import org.miscela.core.fit.LeastSquaresFit;
 import org.miscela.core.fit.LinearLeastSquares;
 import org.miscela.core.fit.OrderSelection;
@@ -45,8 +42,8 @@ class UnreachableProblemsTest {
         void run();
     }
 
-    private static Map<Enum<?>, Raise> cases() {
-        Map<Enum<?>, Raise> m = new LinkedHashMap<>();
+    private static Map<Problem, Raise> cases() {
+        Map<Problem, Raise> m = new LinkedHashMap<>();
         m.put(Problem.ARG_NOT_FINITE, () -> CardFunctions.binary(EW, NAN));
         m.put(Problem.CHECK_NEEDS_BOTH, () -> {
             // the check answers in words, as MIX.CHECKPOINT does; raise it to compare like the others
@@ -54,43 +51,44 @@ class UnreachableProblemsTest {
             assertTrue(Catalogue.isInstanceOf(Problem.CHECK_NEEDS_BOTH, answer), answer);
             throw new Checked(Problem.CHECK_NEEDS_BOTH, answer);
         });
-        m.put(FitProblem.RAGGED_DESIGN, () -> LinearLeastSquares.fit(new double[][] {{1, 0}, {1}}, new double[2],
+        m.put(Problem.NO_CONVERGENCE, () -> SolverAccess.finalTemperature(t -> 1.0, 300.0, 1324.0));
+        m.put(Problem.RAGGED_DESIGN, () -> LinearLeastSquares.fit(new double[][] {{1, 0}, {1}}, new double[2],
                 null));
-        m.put(FitProblem.NO_PARAMETERS, () -> LinearLeastSquares.fit(new double[][] {{}}, new double[1], null));
-        m.put(FitProblem.BAD_ORDER, () -> RedlichKisterFitter.excessVolumes(new double[] {0.2, 0.5, 0.8},
+        m.put(Problem.NO_PARAMETERS, () -> LinearLeastSquares.fit(new double[][] {{}}, new double[1], null));
+        m.put(Problem.BAD_ORDER, () -> RedlichKisterFitter.excessVolumes(new double[] {0.2, 0.5, 0.8},
                 new double[] {-0.7, -1.0, -0.5}, -1, 298.15, null));
         LeastSquaresFit one = line(1);
         LeastSquaresFit two = line(2);
-        m.put(FitProblem.BAD_SIGNIFICANCE, () -> OrderSelection.compare(Arrays.asList(one, two), 1.0));
-        m.put(FitProblem.NOT_NESTED, () -> OrderSelection.compare(Arrays.asList(two, one), 0.05));
-        m.put(FitProblem.NOT_SAME_POINTS, () -> OrderSelection.compare(Arrays.asList(one,
+        m.put(Problem.BAD_SIGNIFICANCE, () -> OrderSelection.compare(Arrays.asList(one, two), 1.0));
+        m.put(Problem.NOT_NESTED, () -> OrderSelection.compare(Arrays.asList(two, one), 0.05));
+        m.put(Problem.NOT_SAME_POINTS, () -> OrderSelection.compare(Arrays.asList(one,
                 LinearLeastSquares.fit(new double[][] {{1, 0, 0}, {1, 1, 1}, {1, 2, 4}}, new double[] {1, 2, 3.1},
                         null)),
                 0.05));
         RedlichKister rk = new RedlichKister(298.15, new double[][] {{-4.2}, {-0.9}});
         double[][] c = {{1e-4, 0}, {0, 1e-4}};
-        m.put(FitProblem.COVARIANCE_SHAPE, () -> new ExcessVolumeUncertainty(rk, 0, new double[3][3]));
-        m.put(FitProblem.COVARIANCE_NOT_FINITE, () -> new ExcessVolumeUncertainty(rk, 0,
+        m.put(Problem.COVARIANCE_SHAPE, () -> new ExcessVolumeUncertainty(rk, 0, new double[3][3]));
+        m.put(Problem.COVARIANCE_NOT_FINITE, () -> new ExcessVolumeUncertainty(rk, 0,
                 new double[][] {{NAN, 0}, {0, 1e-4}}));
-        m.put(FitProblem.COVARIANCE_NOT_SYMMETRIC, () -> new ExcessVolumeUncertainty(rk, 0,
+        m.put(Problem.FIT_COVARIANCE_NOT_SYMMETRIC, () -> new ExcessVolumeUncertainty(rk, 0,
                 new double[][] {{1e-4, 1e-5}, {0, 1e-4}}));
-        m.put(FitProblem.COVARIANCE_NEGATIVE_VARIANCE, () -> new ExcessVolumeUncertainty(rk, 0,
+        m.put(Problem.COVARIANCE_NEGATIVE_VARIANCE, () -> new ExcessVolumeUncertainty(rk, 0,
                 new double[][] {{-1e-4, 0}, {0, 1e-4}}));
-        m.put(FitProblem.MOLE_FRACTION, () -> new ExcessVolumeUncertainty(rk, 0, c).excessVolume(1.2, 298.15));
-        m.put(FitProblem.TEMPERATURE, () -> new ExcessVolumeUncertainty(rk, 0, c).excessVolume(0.5, -1));
-        m.put(FitProblem.BAD_COMPONENT, () -> new ExcessVolumeUncertainty(rk, 0, c).partialExcessVolume(3, 0.5,
+        m.put(Problem.MOLE_FRACTION, () -> new ExcessVolumeUncertainty(rk, 0, c).excessVolume(1.2, 298.15));
+        m.put(Problem.TEMPERATURE, () -> new ExcessVolumeUncertainty(rk, 0, c).excessVolume(0.5, -1));
+        m.put(Problem.BAD_COMPONENT, () -> new ExcessVolumeUncertainty(rk, 0, c).partialExcessVolume(3, 0.5,
                 298.15));
-        m.put(BlendProblem.ARGUMENT_NOT_FINITE, () -> CompositionBasis.molarity(Double.POSITIVE_INFINITY, 1));
-        m.put(BlendProblem.NO_SUCH_COMPONENT, () -> BlendFunctions.fromDensity(EW, 900, 20, 5, null, NAN, NAN,
+        m.put(Problem.ARGUMENT_NOT_FINITE, () -> CompositionBasis.molarity(Double.POSITIVE_INFINITY, 1));
+        m.put(Problem.NO_SUCH_COMPONENT, () -> BlendFunctions.fromDensity(EW, 900, 20, 5, null, NAN, NAN,
                 CompositionBasis.moleFraction(), E));
-        m.put(BlendProblem.VALUE_NOT_FINITE, () -> BlendFunctions.convert(EW,
+        m.put(Problem.VALUE_NOT_FINITE, () -> BlendFunctions.convert(EW,
                 new double[] {Double.POSITIVE_INFINITY, NAN}, CompositionBasis.molarity(20, 1),
                 CompositionBasis.moleFraction(), E));
-        m.put(BlendProblem.NEEDS_BALANCE, () -> BlendFunctions.convert(EW, new double[] {5, NAN},
+        m.put(Problem.NEEDS_BALANCE, () -> BlendFunctions.convert(EW, new double[] {5, NAN},
                 CompositionBasis.molarity(20, -1), CompositionBasis.moleFraction(), E));
-        m.put(BlendProblem.NEEDS_SOLVENT, () -> BlendFunctions.convert(EW, new double[] {5, NAN},
+        m.put(Problem.NEEDS_SOLVENT, () -> BlendFunctions.convert(EW, new double[] {5, NAN},
                 CompositionBasis.molality(-1), CompositionBasis.moleFraction(), E));
-        m.put(BlendProblem.NEEDS_TEMPERATURE, () -> org.miscela.core.blend.Quantity.of(1,
+        m.put(Problem.NEEDS_TEMPERATURE, () -> org.miscela.core.blend.Quantity.of(1,
                 org.miscela.core.blend.AmountUnit.lookup("L")));
         return m;
     }
@@ -108,27 +106,21 @@ class UnreachableProblemsTest {
     }
 
     /** The one declared entry no known input produces. */
-    private static final Enum<?> NO_KNOWN_INPUT = BlendProblem.NO_COMPOSITION;
+    private static final Problem NO_KNOWN_INPUT = Problem.NO_COMPOSITION;
 
     @Test
     void everyEntryDeclaredNotReachableFromACellIsProducedThroughTheLibrary() {
-        Map<Enum<?>, Raise> cases = cases();
-        java.util.Set<Enum<?>> declared = new java.util.LinkedHashSet<>(FunctionCatalog.notFromACell().keySet());
+        Map<Problem, Raise> cases = cases();
+        java.util.Set<Problem> declared = new java.util.LinkedHashSet<>(FunctionCatalog.notFromACell().keySet());
         declared.remove(NO_KNOWN_INPUT);
         assertEquals(declared, cases.keySet(), "a case for every declared entry, and only for those");
         StringBuilder printed = new StringBuilder();
         cases.forEach((problem, raise) -> {
-            Enum<?> raised = null;
+            Problem raised = null;
             String message = null;
             try {
                 raise.run();
             } catch (MiscelaException e) {
-                raised = e.problem();
-                message = e.getMessage();
-            } catch (FitException e) {
-                raised = e.problem();
-                message = e.getMessage();
-            } catch (BlendException e) {
                 raised = e.problem();
                 message = e.getMessage();
             } catch (Checked e) {
@@ -154,9 +146,9 @@ class UnreachableProblemsTest {
     /** An answer in words standing for the problem it names. */
     private static final class Checked extends RuntimeException {
         private static final long serialVersionUID = 1L;
-        final Enum<?> problem;
+        final Problem problem;
 
-        Checked(Enum<?> problem, String message) {
+        Checked(Problem problem, String message) {
             super(message);
             this.problem = problem;
         }

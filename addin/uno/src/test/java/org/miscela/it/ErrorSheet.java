@@ -13,8 +13,6 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.miscela.core.catalog.FunctionCatalog;
 import org.miscela.core.problem.Problem;
-import org.miscela.core.blend.BlendProblem;
-import org.miscela.core.fit.FitProblem;
 
 /**
  * The spreadsheet test of the error catalogue (sheets/errors.spec, built into errors.fods): its "refused" rows, each
@@ -30,7 +28,7 @@ public final class ErrorSheet {
     private ErrorSheet() {
     }
 
-    /** One "refused" row: the call, the catalogue entry ("Problem.X", "FitProblem.X", "BlendProblem.X"), the code. */
+    /** One "refused" row: the call, the catalogue entry ("Problem.X", "Problem.X", "Problem.X"), the code. */
     public static final class Row {
         public final String formula;
         public final String entry;
@@ -67,21 +65,12 @@ public final class ErrorSheet {
         return "=MIX.EXPLAIN(\"" + m.group(1) + "\"" + (args.isEmpty() ? "" : ";" + args) + ")";
     }
 
-    /** The message pattern of a catalogue entry named "Problem.X", "FitProblem.X" or "BlendProblem.X". */
+    /** The message pattern of a catalogue entry named "Problem.X". */
     public static String pattern(String entry) {
-        int dot = entry.indexOf('.');
-        String kind = entry.substring(0, dot);
-        String name = entry.substring(dot + 1);
-        switch (kind) {
-            case "Problem":
-                return Problem.valueOf(name).pattern();
-            case "FitProblem":
-                return FitProblem.valueOf(name).pattern();
-            case "BlendProblem":
-                return BlendProblem.valueOf(name).pattern();
-            default:
-                throw new IllegalArgumentException("not a catalogue entry: " + entry);
+        if (!entry.startsWith("Problem.")) {
+            throw new IllegalArgumentException("not a catalogue entry: " + entry);
         }
+        return Problem.valueOf(entry.substring("Problem.".length())).pattern();
     }
 
     /**
@@ -90,12 +79,12 @@ public final class ErrorSheet {
      */
     public static Set<String> producibleEntries() {
         Set<String> out = new LinkedHashSet<>();
-        for (Enum<?> p : FunctionCatalog.callProblems()) {
+        for (Problem p : FunctionCatalog.callProblems()) {
             if (!FunctionCatalog.notFromACell().containsKey(p)) {
                 out.add(name(p));
             }
         }
-        for (Enum<?> p : FunctionCatalog.explainAnswers()) {
+        for (Problem p : FunctionCatalog.explainAnswers()) {
             out.add(name(p));
         }
         return out;
@@ -104,7 +93,7 @@ public final class ErrorSheet {
     /** The entries declared not reachable from a cell, by name. */
     public static Set<String> notFromACell() {
         Set<String> out = new LinkedHashSet<>();
-        for (Enum<?> p : FunctionCatalog.notFromACell().keySet()) {
+        for (Problem p : FunctionCatalog.notFromACell().keySet()) {
             out.add(name(p));
         }
         return out;
@@ -112,12 +101,13 @@ public final class ErrorSheet {
 
     /** Whether the entry is one of a card's problems (shown by MIX.CHECK; CardProblemsIT covers those). */
     public static boolean isCardProblem(String entry) {
-        return entry.startsWith("Problem.") && Problem.valueOf(entry.substring(8)).compareTo(Problem.NOT_BINARY) < 0;
+        return entry.startsWith("Problem.")
+                && Problem.valueOf(entry.substring(8)).section() == Problem.Section.CARD;
     }
 
     /** The entry's name as the tests write it. */
-    public static String name(Enum<?> problem) {
-        return problem.getDeclaringClass().getSimpleName() + "." + problem.name();
+    public static String name(Problem problem) {
+        return "Problem." + problem.name();
     }
 
     /**

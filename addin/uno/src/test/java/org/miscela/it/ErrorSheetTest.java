@@ -67,7 +67,7 @@ class ErrorSheetTest {
         assertEquals("The * is blank.", ErrorSheet.wildcards("The %s is blank."));
         assertEquals("reach only * % of", ErrorSheet.wildcards("reach only %s %% of"));
         assertEquals("a ~* b ~? c ~~ *", ErrorSheet.wildcards("a * b ? c ~ %d"));
-        for (Enum<?> p : FunctionCatalog.callProblems()) {
+        for (org.miscela.core.problem.Problem p : FunctionCatalog.callProblems()) {
             String pattern = ErrorSheet.pattern(ErrorSheet.name(p));
             String wild = ErrorSheet.wildcards(pattern);
             // a message with "x" in every blank matches the pattern it came from

@@ -1,5 +1,7 @@
 package org.miscela.core.blend;
 
+import org.miscela.core.problem.MiscelaException;
+import org.miscela.core.problem.Problem;
 import java.util.Arrays;
 import java.util.Comparator;
 import org.apache.commons.math3.analysis.UnivariateFunction;
@@ -87,14 +89,14 @@ public final class Adjustments {
         double total;
         if (limit == null) {
             if (!reachable) {
-                throw BlendProblem.NEEDS_REMOVAL.raise(excluded.toString());
+                throw Problem.NEEDS_REMOVAL.raise(excluded.toString());
             }
             total = exactTotal;
         } else {
             double kelvin = limit.isVolume() ? Checks.kelvin(card, limit.temperature(), e) : Double.NaN;
             double current = limit.measureOf(card, n, kelvin);
             if (current > limit.base() * (1.0 + ACCURACY)) {
-                throw BlendProblem.LIMIT_BELOW_BATCH.raise(Show.number(limit.unit().fromBase(current)),
+                throw Problem.LIMIT_BELOW_BATCH.raise(Show.number(limit.unit().fromBase(current)),
                         limit.unit().symbol(), fill ? "final quantity" : "largest final quantity",
                         Show.number(limit.value()), limit.unit().symbol());
             }
@@ -192,8 +194,8 @@ public final class Adjustments {
         }
     }
 
-    private static BlendException unreachable(Quantity limit, boolean fill) {
-        return BlendProblem.LIMIT_UNREACHABLE.raise(fill ? "final quantity" : "largest final quantity",
+    private static MiscelaException unreachable(Quantity limit, boolean fill) {
+        return Problem.LIMIT_UNREACHABLE.raise(fill ? "final quantity" : "largest final quantity",
                 Show.number(limit.value()), limit.unit().symbol());
     }
 }

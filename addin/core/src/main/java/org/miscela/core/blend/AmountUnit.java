@@ -1,5 +1,7 @@
 package org.miscela.core.blend;
 
+import org.miscela.core.problem.Problem;
+
 /**
  * Units of the quantities a batch is measured in: amount of substance, mass or volume. Internally the blending
  * functions work in mol, g and cm³. A volume of a pure component always comes with the temperature it was measured at.
@@ -81,7 +83,7 @@ public enum AmountUnit {
                 }
             }
         }
-        throw BlendProblem.UNKNOWN_UNIT.raise(t, accepted());
+        throw Problem.BLEND_UNKNOWN_UNIT.raise(t, accepted());
     }
 
     static String accepted() {
@@ -97,7 +99,7 @@ public enum AmountUnit {
     /** This unit, checked to measure {@code wanted}; {@code what} names the argument in the message. */
     AmountUnit require(Dimension wanted, String what) {
         if (dimension != wanted) {
-            throw BlendProblem.WRONG_DIMENSION.raise(symbol, dimension.label(), what, wanted.label(), wanted.units());
+            throw Problem.WRONG_DIMENSION.raise(symbol, dimension.label(), what, wanted.label(), wanted.units());
         }
         return this;
     }

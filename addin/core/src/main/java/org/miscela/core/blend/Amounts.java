@@ -1,5 +1,6 @@
 package org.miscela.core.blend;
 
+import org.miscela.core.problem.Problem;
 import org.miscela.core.card.Card;
 import org.miscela.core.card.Extrapolation;
 
@@ -15,10 +16,10 @@ public final class Amounts {
 
     private Amounts(double[] values, AmountUnit unit, double[] temperatures) {
         if (values == null) {
-            throw BlendProblem.BLANK_ARGUMENT.raise("amounts");
+            throw Problem.BLANK_ARGUMENT.raise("amounts");
         }
         if (unit == null) {
-            throw BlendProblem.BLANK_ARGUMENT.raise("unit of the amounts");
+            throw Problem.BLANK_ARGUMENT.raise("unit of the amounts");
         }
         this.values = values.clone();
         this.unit = unit;
@@ -28,7 +29,7 @@ public final class Amounts {
     /** Moles or masses; a volume unit here fails, because a volume needs its temperature. */
     public static Amounts of(double[] values, AmountUnit unit) {
         if (unit != null && unit.dimension() == AmountUnit.Dimension.VOLUME) {
-            throw BlendProblem.NEEDS_TEMPERATURES.raise("amounts");
+            throw Problem.NEEDS_TEMPERATURES.raise("amounts");
         }
         return new Amounts(values, unit, null);
     }
@@ -60,7 +61,7 @@ public final class Amounts {
         boolean volume = unit.dimension() == AmountUnit.Dimension.VOLUME;
         if (volume) {
             if (temperatures == null) {
-                throw BlendProblem.NEEDS_TEMPERATURES.raise(what);
+                throw Problem.NEEDS_TEMPERATURES.raise(what);
             }
             Checks.length(card, temperatures, "temperatures of the " + what);
         }
@@ -69,13 +70,13 @@ public final class Amounts {
             String name = Checks.name(card, k);
             double v = values[k];
             if (Double.isNaN(v)) {
-                throw BlendProblem.BLANK_VALUE.raise("amount", name, "write 0 for a component that is absent");
+                throw Problem.BLANK_VALUE.raise("amount", name, "write 0 for a component that is absent");
             }
             if (Double.isInfinite(v)) {
-                throw BlendProblem.VALUE_NOT_FINITE.raise("amount", name, Show.number(v));
+                throw Problem.VALUE_NOT_FINITE.raise("amount", name, Show.number(v));
             }
             if (v < 0.0) {
-                throw BlendProblem.VALUE_NEGATIVE.raise("amount", name, Show.number(v));
+                throw Problem.VALUE_NEGATIVE.raise("amount", name, Show.number(v));
             }
             double base = unit.toBase(v);
             switch (unit.dimension()) {

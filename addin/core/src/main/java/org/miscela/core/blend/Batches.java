@@ -1,5 +1,6 @@
 package org.miscela.core.blend;
 
+import org.miscela.core.problem.Problem;
 import org.miscela.core.card.Card;
 import org.miscela.core.card.Extrapolation;
 
@@ -57,10 +58,10 @@ public final class Batches {
     static double[] positiveTotal(Card card, double[] moles, String what) {
         double total = Checks.sum(moles);
         if (Double.isInfinite(total)) {
-            throw BlendProblem.AMOUNT_TOO_LARGE.raise(what);
+            throw Problem.BLEND_AMOUNT_TOO_LARGE.raise(what);
         }
         if (!(total > 0.0)) {
-            throw BlendProblem.AMOUNT_ZERO.raise(what);
+            throw Problem.BLEND_AMOUNT_ZERO.raise(what);
         }
         return moles;
     }

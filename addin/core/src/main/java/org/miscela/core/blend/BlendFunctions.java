@@ -1,5 +1,6 @@
 package org.miscela.core.blend;
 
+import org.miscela.core.problem.Problem;
 import org.miscela.core.card.Card;
 import org.miscela.core.card.Extrapolation;
 
@@ -27,7 +28,7 @@ public final class BlendFunctions {
         CompositionBasis.Kind kind = CompositionBasis.Kind.lookup(text);
         int b = balance == DEFAULT_BALANCE ? card.componentCount() - 1 : balance;
         if (kind.needsTemperature() && Double.isNaN(t)) {
-            throw BlendProblem.BLANK_ARGUMENT.raise("temperature of the basis '" + kind.label() + "'");
+            throw Problem.BLANK_ARGUMENT.raise("temperature of the basis '" + kind.label() + "'");
         }
         return CompositionBasis.of(kind, kind.needsTemperature() ? t : Double.NaN, kind.isConcentration() ? b : -1);
     }
@@ -35,7 +36,7 @@ public final class BlendFunctions {
     /** The full composition a single number stands for on a two-component card (see the class comment). */
     public static double[] binary(Card card, double first, CompositionBasis basis) {
         if (card.componentCount() != 2) {
-            throw BlendProblem.LENGTH.raise(basis.plural(), 1, card.componentCount(), Checks.names(card));
+            throw Problem.LENGTH.raise(basis.plural(), 1, card.componentCount(), Checks.names(card));
         }
         if (basis.kind().isConcentration()) {
             double[] v = {Double.NaN, Double.NaN};
@@ -76,7 +77,7 @@ public final class BlendFunctions {
             case "density":
                 return b.density();
             default:
-                throw BlendProblem.UNKNOWN_RESULT.raise(result.trim(),
+                throw Problem.UNKNOWN_RESULT.raise(result.trim(),
                         "volume, mass, moles, density, pure volume, contraction, contraction %");
         }
     }
@@ -95,7 +96,7 @@ public final class BlendFunctions {
         if (out.dimension() != AmountUnit.Dimension.VOLUME) {
             storage = null;
         } else if (storage == null) {
-            throw BlendProblem.NO_STORAGE_TEMPERATURES.raise();
+            throw Problem.NO_STORAGE_TEMPERATURES.raise();
         }
         return Recipes.forTarget(card, target, composition, basis, storage, e).amounts(out);
     }
@@ -120,7 +121,7 @@ public final class BlendFunctions {
             case "within":
             case "make up":
                 if (Double.isNaN(limit) || limitUnit == null) {
-                    throw BlendProblem.BLANK_ARGUMENT.raise("limit and its unit (needed for '" + m + "')");
+                    throw Problem.BLANK_ARGUMENT.raise("limit and its unit (needed for '" + m + "')");
                 }
                 Quantity q = Quantity.of(limit, AmountUnit.lookup(limitUnit), t);
                 double[] storage = perComponent(card, storageTemperatures);
@@ -128,7 +129,7 @@ public final class BlendFunctions {
                         : Adjustments.makeUpTo(card, batch, target, basis, q, t, storage, e);
                 break;
             default:
-                throw BlendProblem.UNKNOWN_RESULT.raise(mode.trim(), "least, within, make up");
+                throw Problem.UNKNOWN_RESULT.raise(mode.trim(), "least, within, make up");
         }
         String r = result == null ? "additions" : result.trim().toLowerCase(java.util.Locale.ROOT);
         switch (r) {
@@ -139,7 +140,7 @@ public final class BlendFunctions {
             case "summary":
                 return a.summary();
             default:
-                throw BlendProblem.UNKNOWN_RESULT.raise(result.trim(), "additions, volume, summary");
+                throw Problem.UNKNOWN_RESULT.raise(result.trim(), "additions, volume, summary");
         }
     }
 
@@ -166,7 +167,7 @@ public final class BlendFunctions {
             case "difference":
                 return v.linearError(out);
             default:
-                throw BlendProblem.UNKNOWN_RESULT.raise(result.trim(), "exact, first order, difference");
+                throw Problem.UNKNOWN_RESULT.raise(result.trim(), "exact, first order, difference");
         }
     }
 
@@ -196,7 +197,7 @@ public final class BlendFunctions {
             case "reference density":
                 return c.referenceDensity();
             default:
-                throw BlendProblem.UNKNOWN_RESULT.raise(result.trim(), "factor, density, reference density");
+                throw Problem.UNKNOWN_RESULT.raise(result.trim(), "factor, density, reference density");
         }
     }
 

@@ -1,5 +1,6 @@
 package org.miscela.core.blend;
 
+import org.miscela.core.problem.Problem;
 import org.miscela.core.card.Card;
 import org.miscela.core.card.Extrapolation;
 
@@ -60,7 +61,7 @@ public final class Charge {
                 break;
             default:
                 if (volumes == null) {
-                    throw BlendProblem.NO_STORAGE_TEMPERATURES.raise();
+                    throw Problem.NO_STORAGE_TEMPERATURES.raise();
                 }
                 source = volumes;
         }

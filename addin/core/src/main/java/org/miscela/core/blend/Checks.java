@@ -1,5 +1,6 @@
 package org.miscela.core.blend;
 
+import org.miscela.core.problem.Problem;
 import org.miscela.core.card.Card;
 import org.miscela.core.functions.CardFunctions;
 import org.miscela.core.card.Extrapolation;
@@ -16,10 +17,10 @@ final class Checks {
     /** A finite temperature (in the card's unit); the range is checked where the card is evaluated. */
     static double temperature(double t, String what) {
         if (Double.isNaN(t)) {
-            throw BlendProblem.BLANK_ARGUMENT.raise(what);
+            throw Problem.BLANK_ARGUMENT.raise(what);
         }
         if (Double.isInfinite(t)) {
-            throw BlendProblem.ARGUMENT_NOT_FINITE.raise(what, Show.number(t));
+            throw Problem.ARGUMENT_NOT_FINITE.raise(what, Show.number(t));
         }
         return t;
     }
@@ -27,10 +28,10 @@ final class Checks {
     /** A finite number greater than zero. */
     static double positive(double v, String what) {
         if (Double.isNaN(v)) {
-            throw BlendProblem.BLANK_ARGUMENT.raise(what);
+            throw Problem.BLANK_ARGUMENT.raise(what);
         }
         if (Double.isInfinite(v) || !(v > 0.0)) {
-            throw BlendProblem.NOT_POSITIVE.raise(what, Show.number(v));
+            throw Problem.BLEND_NOT_POSITIVE.raise(what, Show.number(v));
         }
         return v;
     }
@@ -38,17 +39,17 @@ final class Checks {
     /** A 0-based component index that exists on the card. */
     static int component(Card card, int k, String what) {
         if (k < 0 || k >= card.componentCount()) {
-            throw BlendProblem.NO_SUCH_COMPONENT.raise(what, k + 1, card.componentCount(), names(card));
+            throw Problem.NO_SUCH_COMPONENT.raise(what, k + 1, card.componentCount(), names(card));
         }
         return k;
     }
 
     static void length(Card card, double[] values, String what) {
         if (values == null) {
-            throw BlendProblem.BLANK_ARGUMENT.raise(what);
+            throw Problem.BLANK_ARGUMENT.raise(what);
         }
         if (values.length != card.componentCount()) {
-            throw BlendProblem.LENGTH.raise(what, values.length, card.componentCount(), names(card));
+            throw Problem.LENGTH.raise(what, values.length, card.componentCount(), names(card));
         }
     }
 

@@ -1,5 +1,6 @@
 package org.miscela.core.blend;
 
+import org.miscela.core.problem.Problem;
 import java.util.Locale;
 
 /**
@@ -86,7 +87,7 @@ public final class CompositionBasis {
                     }
                 }
             }
-            throw BlendProblem.UNKNOWN_BASIS.raise(t, accepted());
+            throw Problem.BLEND_UNKNOWN_BASIS.raise(t, accepted());
         }
 
         static String accepted() {

@@ -1,5 +1,6 @@
 package org.miscela.core.blend;
 
+import org.miscela.core.problem.Problem;
 import java.util.ArrayList;
 import java.util.List;
 import org.apache.commons.math3.analysis.UnivariateFunction;
@@ -96,7 +97,7 @@ public final class Compositions {
             case MOLALITY: {
                 int s = solvent(card, basis);
                 if (!(z[s] > 0.0)) {
-                    throw BlendProblem.NO_SOLVENT.raise(Checks.name(card, s), Checks.name(card, s));
+                    throw Problem.NO_SOLVENT.raise(Checks.name(card, s), Checks.name(card, s));
                 }
                 double kgSolvent = z[s] * Checks.molarMass(card, s) / 1000.0;
                 for (int k = 0; k < n; k++) {
@@ -126,7 +127,7 @@ public final class Compositions {
             sum += v[k];
         }
         if (!(Math.abs(sum - 1.0) <= SUM_TOLERANCE)) {
-            throw BlendProblem.FRACTION_SUM.raise(basis.plural(), Show.number(sum));
+            throw Problem.FRACTION_SUM.raise(basis.plural(), Show.number(sum));
         }
         double[] moles = new double[n];
         for (int k = 0; k < n; k++) {
@@ -174,7 +175,7 @@ public final class Compositions {
         }
         if (Double.isInfinite(total)) {
             // Entries whose moles per litre add up beyond the double range: no liquid holds a fraction of that.
-            throw BlendProblem.TOO_CONCENTRATED.raise(basis.plural(), Show.number(t),
+            throw Problem.TOO_CONCENTRATED.raise(basis.plural(), Show.number(t),
                     card.units().temperature().symbol(), Checks.name(card, b), Show.number(0.0));
         }
         double[] r = Checks.scaled(u, 1.0 / total);
@@ -197,7 +198,7 @@ public final class Compositions {
             }
             double reach = 1000.0 / card.mixture().molarVolume(r, kelvin) / total;
             if (Double.isFinite(reach) && reach > 0.0 && reach < 1.0) {
-                throw BlendProblem.TOO_CONCENTRATED.raise(basis.plural(), Show.number(t),
+                throw Problem.TOO_CONCENTRATED.raise(basis.plural(), Show.number(t),
                         card.units().temperature().symbol(), Checks.name(card, b), Show.number(100.0 * reach));
             }
             // No root although the others alone would over-fill the litre: the model breaks down on the way.
@@ -208,7 +209,7 @@ public final class Compositions {
                     Checks.molarVolume(card, x, t, e);
                 }
             }
-            throw BlendProblem.NO_COMPOSITION.raise(basis.plural(), Show.number(t),
+            throw Problem.NO_COMPOSITION.raise(basis.plural(), Show.number(t),
                     card.units().temperature().symbol(), Checks.name(card, b));
         }
         if (usable.size() > 1) {
@@ -216,7 +217,7 @@ public final class Compositions {
             for (int i = 0; i < list.length; i++) {
                 list[i] = usable.get(i);
             }
-            throw BlendProblem.SEVERAL_COMPOSITIONS.raise(basis.plural(), usable.size(), Show.number(t),
+            throw Problem.SEVERAL_COMPOSITIONS.raise(basis.plural(), usable.size(), Show.number(t),
                     card.units().temperature().symbol(), Checks.name(card, b), Show.numbers(list));
         }
         double[] x = along(r, b, usable.get(0));
@@ -239,13 +240,13 @@ public final class Compositions {
     private static double entry(Card card, double v, int k, CompositionBasis basis, String hint) {
         String what = basis.kind().label() + (basis.kind().unit().isEmpty() ? "" : " (" + basis.kind().unit() + ")");
         if (Double.isNaN(v)) {
-            throw BlendProblem.BLANK_VALUE.raise(what, Checks.name(card, k), hint);
+            throw Problem.BLANK_VALUE.raise(what, Checks.name(card, k), hint);
         }
         if (Double.isInfinite(v)) {
-            throw BlendProblem.VALUE_NOT_FINITE.raise(what, Checks.name(card, k), Show.number(v));
+            throw Problem.VALUE_NOT_FINITE.raise(what, Checks.name(card, k), Show.number(v));
         }
         if (v < 0.0) {
-            throw BlendProblem.VALUE_NEGATIVE.raise(what, Checks.name(card, k), Show.number(v));
+            throw Problem.VALUE_NEGATIVE.raise(what, Checks.name(card, k), Show.number(v));
         }
         return v;
     }
@@ -259,21 +260,21 @@ public final class Compositions {
         }
         double implied = fromMoleFractions(card, x, basis, e)[b];
         if (!(Math.abs(given - implied) <= BALANCE_TOLERANCE * Math.max(Math.abs(given), Math.abs(implied)))) {
-            throw BlendProblem.BALANCE_DISAGREES.raise(basis.kind().label(), Checks.name(card, b), Show.number(given),
+            throw Problem.BALANCE_DISAGREES.raise(basis.kind().label(), Checks.name(card, b), Show.number(given),
                     Show.number(implied));
         }
     }
 
     private static int balance(Card card, CompositionBasis basis) {
         if (basis.balance() == CompositionBasis.NO_BALANCE) {
-            throw BlendProblem.NEEDS_BALANCE.raise(basis.plural());
+            throw Problem.NEEDS_BALANCE.raise(basis.plural());
         }
         return Checks.component(card, basis.balance(), "balance component");
     }
 
     private static int solvent(Card card, CompositionBasis basis) {
         if (basis.balance() == CompositionBasis.NO_BALANCE) {
-            throw BlendProblem.NEEDS_SOLVENT.raise();
+            throw Problem.NEEDS_SOLVENT.raise();
         }
         return Checks.component(card, basis.balance(), "solvent");
     }

@@ -1,5 +1,6 @@
 package org.miscela.core.blend;
 
+import org.miscela.core.problem.Problem;
 import java.util.List;
 import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.miscela.core.card.Card;
@@ -52,7 +53,7 @@ public final class DensityInversion {
         List<Double> roots = path.roots();
         if (roots.isEmpty()) {
             double[] span = path.densitySpan();
-            throw BlendProblem.DENSITY_NOT_FOUND.raise(path.name, Show.number(path.lo), Show.number(path.hi),
+            throw Problem.DENSITY_NOT_FOUND.raise(path.name, Show.number(path.lo), Show.number(path.hi),
                     Show.number(density), card.units().density().symbol(), Show.number(t),
                     card.units().temperature().symbol(), Show.number(path.densityOut(span[0])),
                     Show.number(path.densityOut(span[1])), card.units().density().symbol());
@@ -62,7 +63,7 @@ public final class DensityInversion {
             for (int i = 0; i < s.length; i++) {
                 s[i] = roots.get(i);
             }
-            throw BlendProblem.SEVERAL_DENSITIES.raise(Show.number(density), card.units().density().symbol(),
+            throw Problem.SEVERAL_DENSITIES.raise(Show.number(density), card.units().density().symbol(),
                     Show.number(t), card.units().temperature().symbol(), s.length, path.name, Show.numbers(s));
         }
         double[] x = path.at(roots.get(0));
@@ -96,12 +97,12 @@ public final class DensityInversion {
             r[1 - k] = 1.0;
         } else {
             if (reference == null) {
-                throw BlendProblem.NEEDS_REFERENCE.raise(n, Checks.name(card, k));
+                throw Problem.NEEDS_REFERENCE.raise(n, Checks.name(card, k));
             }
             double[] z = CardFunctions.moleFractions(card, reference);
             double rest = 1.0 - z[k];
             if (!(rest > 0.0)) {
-                throw BlendProblem.NO_PROPORTIONS.raise(Checks.name(card, k));
+                throw Problem.NO_PROPORTIONS.raise(Checks.name(card, k));
             }
             for (int j = 0; j < n; j++) {
                 r[j] = j == k ? 0.0 : z[j] / rest;
@@ -120,10 +121,10 @@ public final class DensityInversion {
             }
         } else {
             if (Double.isNaN(from) || Double.isNaN(to)) {
-                throw BlendProblem.RANGE_HALF.raise(Checks.name(card, k));
+                throw Problem.RANGE_HALF.raise(Checks.name(card, k));
             }
             if (!(from >= 0.0 && to <= 1.0 && from < to)) {
-                throw BlendProblem.BAD_RANGE.raise(Checks.name(card, k), Show.number(from), Show.number(to));
+                throw Problem.BLEND_BAD_RANGE.raise(Checks.name(card, k), Show.number(from), Show.number(to));
             }
             lo = from;
             hi = to;
@@ -150,7 +151,7 @@ public final class DensityInversion {
             }
         }
         if (!(lo < hi)) {
-            throw BlendProblem.EMPTY_PATH.raise(Checks.name(card, k));
+            throw Problem.EMPTY_PATH.raise(Checks.name(card, k));
         }
         return new double[] {lo, hi};
     }

@@ -1,5 +1,6 @@
 package org.miscela.core.blend;
 
+import org.miscela.core.problem.Problem;
 import org.miscela.core.card.Card;
 import org.miscela.core.card.Extrapolation;
 
@@ -14,7 +15,7 @@ public final class Quantity {
 
     private Quantity(double value, AmountUnit unit, double temperature, String what) {
         if (unit == null) {
-            throw BlendProblem.BLANK_ARGUMENT.raise("unit of the " + what);
+            throw Problem.BLANK_ARGUMENT.raise("unit of the " + what);
         }
         this.value = Checks.positive(value, what);
         this.unit = unit;
@@ -24,7 +25,7 @@ public final class Quantity {
     /** Moles or mass; a volume unit fails, because a volume needs its temperature. */
     public static Quantity of(double value, AmountUnit unit) {
         if (unit != null && unit.dimension() == AmountUnit.Dimension.VOLUME) {
-            throw BlendProblem.NEEDS_TEMPERATURE.raise("quantity");
+            throw Problem.NEEDS_TEMPERATURE.raise("quantity");
         }
         return new Quantity(value, unit, Double.NaN, "quantity");
     }

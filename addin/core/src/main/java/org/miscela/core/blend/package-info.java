@@ -18,8 +18,8 @@
  * (mol, kmol, g, kg, mL, L, m³); concentrations are in mol/L, g/L, mol/kg and %vol. A volume of a pure component is
  * always at a stated temperature. NaN means a blank cell: it is accepted only where a value is implied by the others
  * (the balance component's entry of a concentration) or not needed (the temperature of a component with no volume),
- * and refused everywhere else, never read as zero. Bad arguments raise {@link org.miscela.core.blend.BlendException};
- * the card's own refusals arrive as {@link org.miscela.core.problem.MiscelaException}.
+ * and refused everywhere else, never read as zero. Bad arguments, like the card's own refusals, raise a
+ * {@link org.miscela.core.problem.MiscelaException} (the blending section of the problem catalogue).
  *
  * <p><b>Caution.</b> Every number here is a model estimate from a card. Where it feeds custody transfer, duty,
  * invoicing or a decision about filling a vessel, defer to calibrated measurement, the prescribed tables and

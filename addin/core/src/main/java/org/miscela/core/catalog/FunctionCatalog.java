@@ -3,11 +3,10 @@ package org.miscela.core.catalog;
 import java.util.Arrays;
 import java.util.Collections;
 import java.util.List;
+import org.miscela.core.fit.RedlichKisterFitter;
 import org.miscela.core.problem.Problem;
-import org.miscela.core.blend.BlendProblem;
 import org.miscela.core.blend.Compositions;
 import org.miscela.core.blend.DensityInversion;
-import org.miscela.core.fit.FitProblem;
 
 /**
  * The single source of every cell function's signature and user-facing metadata, in interface order (new functions go
@@ -60,7 +59,7 @@ public final class FunctionCatalog {
     private static final ArgumentInfo STORAGE_T = optional("storageTemperatures", "storage temperatures",
             "Optional. For volumes of the pure liquids: the temperature of each, in card order (or one for all).");
     private static final ArgumentInfo ORDER = value("order", "order",
-            "The highest k of the coefficients A0..Ak to fit, 0 to 30.");
+            "The highest k of the coefficients A0..Ak to fit, 0 to " + RedlichKisterFitter.MAX_ORDER_IN_X + ".");
     private static final ArgumentInfo ORDER_IN_T = optional("orderInTemperature", "order in T",
             "Optional. The highest power j of (T − T_ref) in each A_k (left out: 0, constant coefficients).");
     private static final ArgumentInfo REFERENCE_T = optional("referenceTemperature", "reference temperature",
@@ -79,63 +78,70 @@ public final class FunctionCatalog {
     private static final String UNCERTAINTY_OF_A_FIT = "raised only by the library's uncertainty of a fitted "
             + "expansion (ExcessVolumeUncertainty), which no cell function calls: MIX.UNCERTAINTY propagates the "
             + "card's own covariance, whose problems are the card's";
-    private static final java.util.Map<Enum<?>, String> NOT_FROM_A_CELL = notFromACell(
+    private static final java.util.Map<Problem, String> NOT_FROM_A_CELL = notFromACell(
             Problem.ARG_NOT_FINITE, "Calc never passes NaN or an infinity (a cell that computes one shows an error, "
                     + "and Calc does not call a function with an error argument); the check guards the library's "
                     + "own callers",
             Problem.CHECK_NEEDS_BOTH, "MIX.CHECKPOINT always passes a composition and a temperature (leaving one "
                     + "out is Calc's own Err:502) and MIX.CHECK neither; the check guards the library's own callers",
-            FitProblem.RAGGED_DESIGN, "a range or an inline array is rectangular, so every row of a design has as "
+            Problem.NO_CONVERGENCE, "the only search that can fail to converge is MIX.TEMPERATURERISE's for the final "
+                    + "temperature: Brent's method on a bracket whose ends differ in sign, at most 1024 K wide (40 "
+                    + "bisection steps), within 200 evaluations, the balance's non-finite values refused before "
+                    + "(NO_TEMPERATURE_ROOT); the hardest balance tried, a triple root in the widest bracket, needs 101 "
+                    + "to 120 (FinalTemperatureSearchTest), and no card is known that reaches it. Calc would show "
+                    + "Err:523",
+            Problem.RAGGED_DESIGN, "a range or an inline array is rectangular, so every row of a design has as "
                     + "many columns as the first",
-            FitProblem.NO_PARAMETERS, "a range has at least one column, and a Redlich–Kister fit at least one "
+            Problem.NO_PARAMETERS, "a range has at least one column, and a Redlich–Kister fit at least one "
                     + "coefficient",
-            FitProblem.BAD_ORDER, "the fit functions refuse an order outside 0 to 30, or an order in T outside 0 to "
-                    + "10, first (NOT_A_COUNT), and a left-out order as blank (ARG_BLANK)",
-            FitProblem.BAD_SIGNIFICANCE, "the order table's F-tests always use the 5 % level",
-            FitProblem.NOT_NESTED, "the order table compares the fits of order 0, 1, 2, …, each with more "
+            Problem.BAD_ORDER, "the fit functions refuse an order outside 0 to " + RedlichKisterFitter.MAX_ORDER_IN_X
+                    + ", or an order in T outside 0 to " + RedlichKisterFitter.MAX_ORDER_IN_T + ", first (NOT_A_COUNT), "
+                    + "and a left-out order as blank (ARG_BLANK)",
+            Problem.BAD_SIGNIFICANCE, "the order table's F-tests always use the 5 % level",
+            Problem.NOT_NESTED, "the order table compares the fits of order 0, 1, 2, …, each with more "
                     + "coefficients than the one before",
-            FitProblem.NOT_SAME_POINTS, "the order table fits every order to the same points",
-            FitProblem.COVARIANCE_SHAPE, UNCERTAINTY_OF_A_FIT,
-            FitProblem.COVARIANCE_NOT_FINITE, UNCERTAINTY_OF_A_FIT,
-            FitProblem.COVARIANCE_NOT_SYMMETRIC, UNCERTAINTY_OF_A_FIT,
-            FitProblem.COVARIANCE_NEGATIVE_VARIANCE, UNCERTAINTY_OF_A_FIT,
-            FitProblem.MOLE_FRACTION, UNCERTAINTY_OF_A_FIT,
-            FitProblem.TEMPERATURE, UNCERTAINTY_OF_A_FIT,
-            FitProblem.BAD_COMPONENT, UNCERTAINTY_OF_A_FIT,
-            BlendProblem.ARGUMENT_NOT_FINITE, "Calc never passes an infinity, and the blending functions compute no "
+            Problem.NOT_SAME_POINTS, "the order table fits every order to the same points",
+            Problem.COVARIANCE_SHAPE, UNCERTAINTY_OF_A_FIT,
+            Problem.COVARIANCE_NOT_FINITE, UNCERTAINTY_OF_A_FIT,
+            Problem.FIT_COVARIANCE_NOT_SYMMETRIC, UNCERTAINTY_OF_A_FIT,
+            Problem.COVARIANCE_NEGATIVE_VARIANCE, UNCERTAINTY_OF_A_FIT,
+            Problem.MOLE_FRACTION, UNCERTAINTY_OF_A_FIT,
+            Problem.TEMPERATURE, UNCERTAINTY_OF_A_FIT,
+            Problem.BAD_COMPONENT, UNCERTAINTY_OF_A_FIT,
+            Problem.ARGUMENT_NOT_FINITE, "Calc never passes an infinity, and the blending functions compute no "
                     + "temperature of their own",
-            BlendProblem.NO_SUCH_COMPONENT, "every component argument is checked against the card first "
+            Problem.NO_SUCH_COMPONENT, "every component argument is checked against the card first "
                     + "(UNKNOWN_COMPONENT_ARG)",
-            BlendProblem.VALUE_NOT_FINITE, "Calc never passes an infinity, and the values are checked as given",
-            BlendProblem.NEEDS_BALANCE, "the cell functions always name a balance: the card's last component when "
+            Problem.VALUE_NOT_FINITE, "Calc never passes an infinity, and the values are checked as given",
+            Problem.NEEDS_BALANCE, "the cell functions always name a balance: the card's last component when "
                     + "the argument is left out",
-            BlendProblem.NEEDS_SOLVENT, "the cell functions always name a solvent: the card's last component when "
+            Problem.NEEDS_SOLVENT, "the cell functions always name a solvent: the card's last component when "
                     + "the balance is left out",
-            BlendProblem.NO_COMPOSITION, "the concentration search's last fallback, for a card whose molar volume "
+            Problem.NO_COMPOSITION, "the concentration search's last fallback, for a card whose molar volume "
                     + "is not physical between two of the " + (Compositions.SCAN_CELLS + 1) + " points the search "
                     + "looks at while physical at all of "
                     + "them; no card or input is known that reaches it, and no test produces it (values too large "
                     + "to add up are TOO_CONCENTRATED)",
-            BlendProblem.NEEDS_TEMPERATURE, "every cell function that takes a quantity also takes the temperature "
+            Problem.NEEDS_TEMPERATURE, "every cell function that takes a quantity also takes the temperature "
                     + "it is measured at, as a required argument");
 
     // --- the problems functions report, by kind (card problems come on top for every function but the fits)
-    private static final List<Enum<?>> COMPOSITION_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
+    private static final List<Problem> COMPOSITION_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
             Problem.ARG_SHAPE, Problem.NOT_BINARY, Problem.MOLE_FRACTION_OUTSIDE_UNIT, Problem.COMPOSITION_NEGATIVE,
             Problem.COMPOSITION_SUM, Problem.COMPOSITION_SHAPE);
-    private static final List<Enum<?>> POINT_PROBLEMS = list(Problem.ARG_NOT_FLAG, Problem.BELOW_ABSOLUTE_ZERO,
+    private static final List<Problem> POINT_PROBLEMS = list(Problem.ARG_NOT_FLAG, Problem.BELOW_ABSOLUTE_ZERO,
             Problem.OUTSIDE_TEMPERATURE, Problem.OUTSIDE_COMPOSITION, Problem.OUTSIDE_PAIR_TEMPERATURE,
             Problem.OUTSIDE_PAIR_COMPOSITION, Problem.NON_PHYSICAL);
-    private static final List<Enum<?>> VOLUME_PROBLEMS = list(Problem.NO_VOLUME);
-    private static final List<Enum<?>> COMPONENT_PROBLEMS = list(Problem.UNKNOWN_COMPONENT_ARG, Problem.ARG_NOT_SINGLE);
-    private static final List<Enum<?>> AMOUNT_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
+    private static final List<Problem> VOLUME_PROBLEMS = list(Problem.NO_VOLUME);
+    private static final List<Problem> COMPONENT_PROBLEMS = list(Problem.UNKNOWN_COMPONENT_ARG, Problem.ARG_NOT_SINGLE);
+    private static final List<Problem> AMOUNT_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
             Problem.ARG_SHAPE, Problem.COMPOSITION_SHAPE,
             Problem.AMOUNT_NEGATIVE, Problem.AMOUNT_ZERO, Problem.AMOUNT_TOO_LARGE, Problem.UNKNOWN_BASIS);
-    private static final List<Enum<?>> DATA_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
+    private static final List<Problem> DATA_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
             Problem.DATA_SHAPE, Problem.DATA_LENGTH, Problem.DATA_PARTLY_BLANK, Problem.NOT_A_COUNT,
             Problem.UNKNOWN_FIT_OUTPUT);
-    private static final List<Enum<?>> FIT_ENGINE_PROBLEMS = fromACell(FitProblem.values());
-    private static final List<Enum<?>> BLEND_PROBLEMS = union(fromACell(BlendProblem.values()), list(Problem.ARG_BLANK,
+    private static final List<Problem> FIT_ENGINE_PROBLEMS = fromACell(Problem.of(Problem.Section.FIT));
+    private static final List<Problem> BLEND_PROBLEMS = union(fromACell(Problem.of(Problem.Section.BLEND)), list(Problem.ARG_BLANK,
             Problem.ARG_NOT_NUMBER, Problem.ARG_NOT_TEXT, Problem.ARG_NOT_SINGLE, Problem.COMPOSITION_SHAPE,
             Problem.UNKNOWN_COMPONENT_ARG));
 
@@ -458,13 +464,17 @@ public final class FunctionCatalog {
                     BALANCE, EXTRAPOLATE)
                     .shows("0.99562").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
             new FunctionInfo("addInInfo", "MIX.INFO",
-                    "the add-in's version (for audit records), or how many cards it has parsed and holds",
-                    "Facts about the add-in itself: its version (for audit records), or how many cards it has "
-                            + "parsed and holds (each distinct card content is parsed once).",
+                    "the add-in's version (for audit records), how many cards it has parsed and holds, or its last "
+                            + "unexpected failure",
+                    "Facts about the add-in itself: its version (for audit records), how many cards it has "
+                            + "parsed and holds (each distinct card content is parsed once), or its last unexpected "
+                            + "failure.",
                     "—",
                     "=MIX.INFO(\"version\")",
                     optional("item", "item", "Optional. \"version\" (left out), \"card reads\" (cards parsed since "
-                            + "the office started) or \"cards kept\" (parsed cards held now)."))
+                            + "the office started), \"cards kept\" (parsed cards held now) or \"last failure\" (the "
+                            + "last unexpected failure since the office started, a #VALUE! cell's words, with its time "
+                            + "in UTC)."))
                     .shows(VERSION).refuses(list(Problem.ARG_NOT_TEXT, Problem.UNKNOWN_INFO_ITEM)),
             new FunctionInfo("explainCall", "MIX.EXPLAIN",
                     "\"OK\" or, for a call that shows Err:502, why: the same arguments after the function's name",
@@ -497,21 +507,19 @@ public final class FunctionCatalog {
     }
 
     /**
-     * The problems of a call rather than of a card, in the error catalogue's order: the call entries of
-     * {@link Problem}, then {@link FitProblem}, then {@link BlendProblem}.
+     * The problems of a call rather than of a card, in the error catalogue's order: the call, fit and blending sections
+     * of {@link Problem}.
      */
-    public static List<Enum<?>> callProblems() {
-        List<Enum<?>> all = new java.util.ArrayList<>(java.util.EnumSet.range(Problem.NOT_BINARY,
-                Problem.NON_PHYSICAL));
-        all.addAll(Arrays.asList(FitProblem.values()));
-        all.addAll(Arrays.asList(BlendProblem.values()));
+    public static List<Problem> callProblems() {
+        List<Problem> all = new java.util.ArrayList<>(Problem.of(Problem.Section.CALL));
+        all.addAll(Problem.of(Problem.Section.FIT));
+        all.addAll(Problem.of(Problem.Section.BLEND));
         return Collections.unmodifiableList(all);
     }
 
     /** What MIX.EXPLAIN answers for a call it cannot run (never a refusal). */
-    public static List<Enum<?>> explainAnswers() {
-        return Collections.unmodifiableList(new java.util.ArrayList<>(java.util.EnumSet.range(
-                Problem.EXPLAIN_UNKNOWN_FUNCTION, Problem.EXPLAIN_RANGE_LEFT_OUT)));
+    public static List<Problem> explainAnswers() {
+        return Problem.of(Problem.Section.EXPLAIN);
     }
 
     /**
@@ -519,7 +527,7 @@ public final class FunctionCatalog {
      * path the add-in never takes. No function lists them; the error catalogue says so, and a plain-JVM test
      * (UnreachableProblemsTest) produces each through the core.
      */
-    public static java.util.Map<Enum<?>, String> notFromACell() {
+    public static java.util.Map<Problem, String> notFromACell() {
         return NOT_FROM_A_CELL;
     }
 
@@ -533,14 +541,14 @@ public final class FunctionCatalog {
         throw new IllegalArgumentException("no function " + method);
     }
 
-    private static List<Enum<?>> list(Enum<?>... problems) {
+    private static List<Problem> list(Problem... problems) {
         return Arrays.asList(problems);
     }
 
     /** The problems a cell can produce, of those given (all but those declared in NOT_FROM_A_CELL). */
-    private static List<Enum<?>> fromACell(Enum<?>... problems) {
-        List<Enum<?>> out = new java.util.ArrayList<>();
-        for (Enum<?> p : problems) {
+    private static List<Problem> fromACell(List<Problem> problems) {
+        List<Problem> out = new java.util.ArrayList<>();
+        for (Problem p : problems) {
             if (!NOT_FROM_A_CELL.containsKey(p)) {
                 out.add(p);
             }
@@ -549,18 +557,18 @@ public final class FunctionCatalog {
     }
 
     /** Pairs of (problem, reason) as an ordered map. */
-    private static java.util.Map<Enum<?>, String> notFromACell(Object... pairs) {
-        java.util.Map<Enum<?>, String> m = new java.util.LinkedHashMap<>();
+    private static java.util.Map<Problem, String> notFromACell(Object... pairs) {
+        java.util.Map<Problem, String> m = new java.util.LinkedHashMap<>();
         for (int i = 0; i < pairs.length; i += 2) {
-            m.put((Enum<?>) pairs[i], (String) pairs[i + 1]);
+            m.put((Problem) pairs[i], (String) pairs[i + 1]);
         }
         return Collections.unmodifiableMap(m);
     }
 
     @SafeVarargs
-    private static List<Enum<?>> union(List<Enum<?>>... lists) {
-        java.util.LinkedHashSet<Enum<?>> all = new java.util.LinkedHashSet<>();
-        for (List<Enum<?>> l : lists) {
+    private static List<Problem> union(List<Problem>... lists) {
+        java.util.LinkedHashSet<Problem> all = new java.util.LinkedHashSet<>();
+        for (List<Problem> l : lists) {
             all.addAll(l);
         }
         return new java.util.ArrayList<>(all);

@@ -3,6 +3,7 @@ package org.miscela.core.catalog;
 import java.util.Arrays;
 import java.util.Collections;
 import java.util.List;
+import org.miscela.core.problem.Problem;
 
 /**
  * One cell function: what a person needs to know about it and its UNO signature. The IDL interface, the wizard
@@ -17,7 +18,7 @@ public final class FunctionInfo {
     private final String example;
     private final List<ArgumentInfo> arguments;
     private String exampleResult = "";
-    private List<Enum<?>> errors = Collections.emptyList();
+    private List<Problem> errors = Collections.emptyList();
     private IdlType returnType = IdlType.ANY;
     private boolean raisesIllegalArgument = true;
 
@@ -38,8 +39,8 @@ public final class FunctionInfo {
         return this;
     }
 
-    /** The problems this function reports besides those of the card itself (Problem or FitProblem entries). */
-    FunctionInfo refuses(List<Enum<?>> problems) {
+    /** The problems this function reports besides those of the card itself (entries of the call, fit and blending sections of the catalogue). */
+    FunctionInfo refuses(List<Problem> problems) {
         this.errors = Collections.unmodifiableList(problems);
         return this;
     }
@@ -71,7 +72,7 @@ public final class FunctionInfo {
         return exampleResult;
     }
 
-    public List<Enum<?>> errors() {
+    public List<Problem> errors() {
         return errors;
     }
 

@@ -1,5 +1,6 @@
 package org.miscela.core.fit;
 
+import org.miscela.core.problem.Problem;
 import org.apache.commons.math3.util.MathArrays;
 import org.miscela.core.model.Component;
 import org.miscela.core.model.RedlichKister;
@@ -64,7 +65,7 @@ public final class ExcessVolumeUncertainty {
     /** V̄1^E = V^E + x2·∂V^E/∂x1 and V̄2^E = V^E − x1·∂V^E/∂x1, differentiated with respect to each a_kj. */
     double[] partialExcessVolumeGradient(int component, double x1, double kelvin) {
         if (component != 1 && component != 2) {
-            throw FitProblem.BAD_COMPONENT.raise(component);
+            throw Problem.BAD_COMPONENT.raise(component);
         }
         double[] value = excessVolumeGradient(x1, kelvin);
         double[] slope = slopeGradient(x1, kelvin - expansion.referenceKelvin());
@@ -107,10 +108,10 @@ public final class ExcessVolumeUncertainty {
 
     private static void checkPoint(double x1, double kelvin) {
         if (!(x1 >= 0 && x1 <= 1)) {
-            throw FitProblem.MOLE_FRACTION.raise(x1);
+            throw Problem.MOLE_FRACTION.raise(x1);
         }
         if (!(kelvin > 0) || !Double.isFinite(kelvin)) {
-            throw FitProblem.TEMPERATURE.raise(kelvin);
+            throw Problem.TEMPERATURE.raise(kelvin);
         }
     }
 
@@ -122,24 +123,24 @@ public final class ExcessVolumeUncertainty {
             }
         }
         if (c.length != size || columns != size) {
-            throw FitProblem.COVARIANCE_SHAPE.raise(size, size, c.length, Math.max(columns, 0));
+            throw Problem.COVARIANCE_SHAPE.raise(size, size, c.length, Math.max(columns, 0));
         }
         double[][] s = new double[size][size];
         for (int i = 0; i < size; i++) {
             for (int j = 0; j < size; j++) {
                 if (!Double.isFinite(c[i][j])) {
-                    throw FitProblem.COVARIANCE_NOT_FINITE.raise(i + 1, j + 1, c[i][j]);
+                    throw Problem.COVARIANCE_NOT_FINITE.raise(i + 1, j + 1, c[i][j]);
                 }
             }
             if (c[i][i] < 0) {
-                throw FitProblem.COVARIANCE_NEGATIVE_VARIANCE.raise(c[i][i], i + 1, i + 1);
+                throw Problem.COVARIANCE_NEGATIVE_VARIANCE.raise(c[i][i], i + 1, i + 1);
             }
         }
         for (int i = 0; i < size; i++) {
             for (int j = 0; j < i; j++) {
                 double allowed = SYMMETRY_TOLERANCE * Math.sqrt(c[i][i] * c[j][j]);
                 if (Math.abs(c[i][j] - c[j][i]) > allowed) {
-                    throw FitProblem.COVARIANCE_NOT_SYMMETRIC.raise(i + 1, j + 1, c[i][j], j + 1, i + 1, c[j][i]);
+                    throw Problem.FIT_COVARIANCE_NOT_SYMMETRIC.raise(i + 1, j + 1, c[i][j], j + 1, i + 1, c[j][i]);
                 }
                 s[i][j] = 0.5 * (c[i][j] + c[j][i]);
                 s[j][i] = s[i][j];

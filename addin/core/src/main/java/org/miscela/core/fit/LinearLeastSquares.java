@@ -1,5 +1,7 @@
 package org.miscela.core.fit;
 
+import org.miscela.core.problem.MiscelaException;
+import org.miscela.core.problem.Problem;
 import java.util.Objects;
 import org.apache.commons.math3.util.MathArrays;
 
@@ -11,7 +13,7 @@ import org.apache.commons.math3.util.MathArrays;
  * <p>Contracts: at least one point and one parameter; every design row of the same length; one response (and one
  * weight, if weights are given) per row; all values finite; weights zero or positive (a zero weight leaves the point
  * out of the fit and of the counts, but its residual is still reported); at least as many points with positive
- * weight as parameters; a design of full column rank. Each violation throws a {@link FitException} that says which.
+ * weight as parameters; a design of full column rank. Each violation throws a {@link MiscelaException} that says which.
  */
 public final class LinearLeastSquares {
     private LinearLeastSquares() {
@@ -38,7 +40,7 @@ public final class LinearLeastSquares {
             }
         }
         if (used < p) {
-            throw FitProblem.TOO_FEW_POINTS.raise(p, used);
+            throw Problem.TOO_FEW_POINTS.raise(p, used);
         }
 
         ScaledQr solver = new ScaledQr(design, response, weights);
@@ -65,23 +67,23 @@ public final class LinearLeastSquares {
     private static int checkShape(double[][] design, double[] response, double[] weights) {
         Objects.requireNonNull(response, "response");
         if (design == null || design.length == 0) {
-            throw FitProblem.NO_POINTS.raise();
+            throw Problem.NO_POINTS.raise();
         }
         int n = design.length;
         int p = design[0].length;
         if (p == 0) {
-            throw FitProblem.NO_PARAMETERS.raise();
+            throw Problem.NO_PARAMETERS.raise();
         }
         for (int i = 1; i < n; i++) {
             if (design[i].length != p) {
-                throw FitProblem.RAGGED_DESIGN.raise(i + 1, design[i].length, p);
+                throw Problem.RAGGED_DESIGN.raise(i + 1, design[i].length, p);
             }
         }
         if (response.length != n) {
-            throw FitProblem.LENGTH_MISMATCH.raise(n, "design rows", response.length, "responses");
+            throw Problem.LENGTH_MISMATCH.raise(n, "design rows", response.length, "responses");
         }
         if (weights != null && weights.length != n) {
-            throw FitProblem.LENGTH_MISMATCH.raise(n, "design rows", weights.length, "weights");
+            throw Problem.LENGTH_MISMATCH.raise(n, "design rows", weights.length, "weights");
         }
         return n;
     }
@@ -90,18 +92,18 @@ public final class LinearLeastSquares {
         for (int i = 0; i < design.length; i++) {
             for (int j = 0; j < design[i].length; j++) {
                 if (!Double.isFinite(design[i][j])) {
-                    throw FitProblem.NOT_FINITE.raise("design value in column " + (j + 1), i + 1, design[i][j]);
+                    throw Problem.FIT_NOT_FINITE.raise("design value in column " + (j + 1), i + 1, design[i][j]);
                 }
             }
             if (!Double.isFinite(response[i])) {
-                throw FitProblem.NOT_FINITE.raise("response", i + 1, response[i]);
+                throw Problem.FIT_NOT_FINITE.raise("response", i + 1, response[i]);
             }
             if (weights != null) {
                 if (!Double.isFinite(weights[i])) {
-                    throw FitProblem.NOT_FINITE.raise("weight", i + 1, weights[i]);
+                    throw Problem.FIT_NOT_FINITE.raise("weight", i + 1, weights[i]);
                 }
                 if (weights[i] < 0) {
-                    throw FitProblem.NEGATIVE_WEIGHT.raise(i + 1, weights[i]);
+                    throw Problem.NEGATIVE_WEIGHT.raise(i + 1, weights[i]);
                 }
             }
         }

@@ -1,5 +1,6 @@
 package org.miscela.core.fit;
 
+import org.miscela.core.problem.Problem;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
@@ -34,7 +35,7 @@ public final class OrderSelection {
     public static OrderSelection compare(int highestOrder, IntFunction<LeastSquaresFit> fitOfOrder,
             double significance) {
         if (highestOrder < 0 || highestOrder > RedlichKisterFitter.MAX_ORDER_IN_X) {
-            throw FitProblem.BAD_ORDER.raise("highest order", RedlichKisterFitter.MAX_ORDER_IN_X, highestOrder);
+            throw Problem.BAD_ORDER.raise("highest order", RedlichKisterFitter.MAX_ORDER_IN_X, highestOrder);
         }
         List<LeastSquaresFit> fits = new ArrayList<>();
         for (int m = 0; m <= highestOrder; m++) {
@@ -50,10 +51,10 @@ public final class OrderSelection {
      */
     public static OrderSelection compare(List<LeastSquaresFit> fits, double significance) {
         if (!(significance > 0 && significance < 1)) {
-            throw FitProblem.BAD_SIGNIFICANCE.raise(significance);
+            throw Problem.BAD_SIGNIFICANCE.raise(significance);
         }
         if (fits.isEmpty()) {
-            throw FitProblem.NO_POINTS.raise();
+            throw Problem.NO_POINTS.raise();
         }
         List<Step> steps = new ArrayList<>();
         int selected = -1;
@@ -64,10 +65,10 @@ public final class OrderSelection {
             if (m > 0) {
                 LeastSquaresFit below = fits.get(m - 1);
                 if (fit.parameterCount() <= below.parameterCount()) {
-                    throw FitProblem.NOT_NESTED.raise(m + 1, fit.parameterCount(), m, below.parameterCount());
+                    throw Problem.NOT_NESTED.raise(m + 1, fit.parameterCount(), m, below.parameterCount());
                 }
                 if (fit.pointCount() != fits.get(0).pointCount()) {
-                    throw FitProblem.NOT_SAME_POINTS.raise(m + 1, fit.pointCount(), fits.get(0).pointCount());
+                    throw Problem.NOT_SAME_POINTS.raise(m + 1, fit.pointCount(), fits.get(0).pointCount());
                 }
                 f = fStatistic(below, fit);
                 p = pValue(f, fit.parameterCount() - below.parameterCount(), fit.degreesOfFreedom());

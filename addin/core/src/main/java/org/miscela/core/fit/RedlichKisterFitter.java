@@ -1,5 +1,6 @@
 package org.miscela.core.fit;
 
+import org.miscela.core.problem.Problem;
 import java.util.Arrays;
 import org.miscela.core.model.Component;
 
@@ -12,9 +13,13 @@ import org.miscela.core.model.Component;
  * weights), zero or positive, one per point.
  */
 public final class RedlichKisterFitter {
-    /** Beyond these the power basis is too ill-conditioned to fit in double precision; the rank test would refuse. */
-    static final int MAX_ORDER_IN_X = 30;
-    static final int MAX_ORDER_IN_T = 10;
+    /**
+     * The highest order in x and in T a fit accepts, the one definition every check and message uses: beyond these
+     * the power basis is too ill-conditioned to fit in double precision, and the rank test would refuse.
+     */
+    public static final int MAX_ORDER_IN_X = 30;
+    /** See {@link #MAX_ORDER_IN_X}. */
+    public static final int MAX_ORDER_IN_T = 10;
 
     private RedlichKisterFitter() {
     }
@@ -43,7 +48,7 @@ public final class RedlichKisterFitter {
             checkTemperature(kelvin[i], i + 1);
         }
         if (!Double.isFinite(referenceKelvin)) {
-            throw FitProblem.NOT_FINITE.raise("reference temperature", 1, referenceKelvin);
+            throw Problem.FIT_NOT_FINITE.raise("reference temperature", 1, referenceKelvin);
         }
         double[][] design = new double[x1.length][];
         for (int i = 0; i < x1.length; i++) {
@@ -66,7 +71,7 @@ public final class RedlichKisterFitter {
         for (int i = 0; i < x1.length; i++) {
             checkMoleFraction(x1[i], i + 1);
             if (!Double.isFinite(tau[i])) {
-                throw FitProblem.NOT_FINITE.raise("temperature", i + 1, tau[i]);
+                throw Problem.FIT_NOT_FINITE.raise("temperature", i + 1, tau[i]);
             }
             design[i] = basis(x1[i], tau[i], orderInX, orderInT);
         }
@@ -98,7 +103,7 @@ public final class RedlichKisterFitter {
             checkMoleFraction(x1[i], i + 1);
             checkTemperature(kelvin[i], i + 1);
             if (!(density[i] > 0) || !Double.isFinite(density[i])) {
-                throw FitProblem.NOT_POSITIVE.raise("density", i + 1, density[i]);
+                throw Problem.FIT_NOT_POSITIVE.raise("density", i + 1, density[i]);
             }
             excess[i] = MixtureVolumes.excessVolume(x1[i], kelvin[i], density[i], first, second);
             double given = weights == null ? 1.0 : weights[i];
@@ -131,28 +136,28 @@ public final class RedlichKisterFitter {
 
     static void checkOrders(int orderInX, int orderInT) {
         if (orderInX < 0 || orderInX > MAX_ORDER_IN_X) {
-            throw FitProblem.BAD_ORDER.raise("order in x", MAX_ORDER_IN_X, orderInX);
+            throw Problem.BAD_ORDER.raise("order in x", MAX_ORDER_IN_X, orderInX);
         }
         if (orderInT < 0 || orderInT > MAX_ORDER_IN_T) {
-            throw FitProblem.BAD_ORDER.raise("order in T", MAX_ORDER_IN_T, orderInT);
+            throw Problem.BAD_ORDER.raise("order in T", MAX_ORDER_IN_T, orderInT);
         }
     }
 
     private static void checkLengths(int n, String what, int m, String other) {
         if (n != m) {
-            throw FitProblem.LENGTH_MISMATCH.raise(n, what, m, other);
+            throw Problem.LENGTH_MISMATCH.raise(n, what, m, other);
         }
     }
 
     private static void checkMoleFraction(double x1, int point) {
         if (!(x1 >= 0 && x1 <= 1)) {
-            throw FitProblem.MOLE_FRACTION_OUTSIDE_UNIT.raise(point, x1);
+            throw Problem.FIT_MOLE_FRACTION_OUTSIDE_UNIT.raise(point, x1);
         }
     }
 
     private static void checkTemperature(double kelvin, int point) {
         if (!(kelvin > 0) || !Double.isFinite(kelvin)) {
-            throw FitProblem.NOT_POSITIVE.raise("temperature in K", point, kelvin);
+            throw Problem.FIT_NOT_POSITIVE.raise("temperature in K", point, kelvin);
         }
     }
 }

@@ -1,5 +1,6 @@
 package org.miscela.core.fit;
 
+import org.miscela.core.problem.Problem;
 import java.util.Locale;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
@@ -52,7 +53,7 @@ final class ScaledQr {
             }
             scale[j] = MathArrays.safeNorm(column);
             if (scale[j] == 0) {
-                throw FitProblem.ZERO_COLUMN.raise(j + 1);
+                throw Problem.ZERO_COLUMN.raise(j + 1);
             }
             for (int i = 0; i < n; i++) {
                 a[i][j] /= scale[j];
@@ -67,7 +68,7 @@ final class ScaledQr {
         // The usual numerical-rank tolerance, σ_min ≤ σ_max·max(n, p)·ε: below it the last digits of the data decide.
         double limit = 1.0 / (Math.max(n, p) * Math.ulp(1.0));
         if (!(conditionNumber < limit)) {
-            throw FitProblem.RANK_DEFICIENT.raise(p, String.format(Locale.ROOT, "%.3g", conditionNumber),
+            throw Problem.RANK_DEFICIENT.raise(p, String.format(Locale.ROOT, "%.3g", conditionNumber),
                     String.format(Locale.ROOT, "%.3g", limit));
         }
     }

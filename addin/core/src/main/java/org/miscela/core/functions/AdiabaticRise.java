@@ -9,11 +9,15 @@ import org.miscela.core.problem.Numbers;
 import org.miscela.core.problem.Problem;
 import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.exception.NoBracketingException;
+import org.apache.commons.math3.exception.TooManyEvaluationsException;
 
 /** The final temperature of an adiabatic mixing: a root of the batch's energy balance, bracketed and then solved. */
 final class AdiabaticRise {
     /** How far the adiabatic search may move from the start temperature, in K. */
     private static final double SEARCH_SPAN = 2000.0;
+    /** The evaluations of the heat balance the final temperature's search may use. */
+    static final int BALANCE_EVALUATIONS = 200;
 
     private AdiabaticRise() {
     }
@@ -66,9 +70,7 @@ final class AdiabaticRise {
                             Numbers.show(Math.max(start, far)));
                 }
             }
-            double lo = Math.min(start, far);
-            double hi = Math.max(start, far);
-            end = new BrentSolver(1e-12, 1e-9).solve(200, balance, lo, hi);
+            end = finalTemperature(balance, Math.min(start, far), Math.max(start, far), BALANCE_EVALUATIONS);
         }
         if (!card.mayExtrapolate(e) && !PointChecks.insideTemperature(card, x, end)) {
             Units.Temperature unit = card.units().temperature();
@@ -83,5 +85,23 @@ final class AdiabaticRise {
                     cp);
         }
         return end - start;
+    }
+
+    /**
+     * The root of the heat balance between lo and hi (K), where its signs differ: Brent's method, to 1e-9 K, within so
+     * many evaluations. The bracket the temperature rise passes is at most 1024 K wide (its search doubles the step up
+     * to SEARCH_SPAN), which bisection alone narrows in 40 steps, and the balance's non-finite values are refused
+     * before (NO_TEMPERATURE_ROOT); no input is known that makes the solver fail within the 200 evaluations it allows.
+     * Should it fail all the same, that is a catalogued refusal (NO_CONVERGENCE, Err:523 in Calc), never an exception
+     * of the solver's own.
+     */
+    static double finalTemperature(UnivariateFunction balance, double lo, double hi, int evaluations) {
+        try {
+            return new BrentSolver(1e-12, 1e-9).solve(evaluations, balance, lo, hi);
+        } catch (TooManyEvaluationsException | NoBracketingException e) {
+            throw Problem.NO_CONVERGENCE.raise("the final temperature between " + Numbers.show(lo) + " and "
+                    + Numbers.show(hi) + " K", e instanceof NoBracketingException ? "the heat balance has the same "
+                    + "sign at both ends" : "no root within " + evaluations + " evaluations of the heat balance");
+        }
     }
 }

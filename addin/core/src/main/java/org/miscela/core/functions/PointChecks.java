@@ -24,7 +24,7 @@ final class PointChecks {
     static double checkPoint(Card card, double[] x, double t, Extrapolation e) {
         double kelvin = checkTemperature(card, t, e);
         if (!card.mayExtrapolate(e) && !within(card, x, kelvin)) {
-            throw violations(card, x, kelvin, t).get(0);
+            throw violations(card, x, kelvin, t).get(0).refusal();
         }
         for (int k = 0; k < x.length; k++) {
             pureDensityAt(card, k, kelvin, t);
@@ -77,18 +77,18 @@ final class PointChecks {
     }
 
     /** Every validity limit the point exceeds, in the order: temperature, components, pairs. */
-    static List<MiscelaException> violations(Card card, double[] x, double kelvin, double t) {
-        List<MiscelaException> out = new ArrayList<>();
+    static List<Violation> violations(Card card, double[] x, double kelvin, double t) {
+        List<Violation> out = new ArrayList<>();
         Validity v = card.validity();
         Units.Temperature unit = card.units().temperature();
         if (!v.containsTemperature(kelvin)) {
-            out.add(Problem.OUTSIDE_TEMPERATURE.raise(Numbers.show(t), unit.symbol(),
+            out.add(new Violation(Problem.OUTSIDE_TEMPERATURE, Numbers.show(t), unit.symbol(),
                     Numbers.show(unit.fromKelvin(v.lowestKelvin())), Numbers.show(unit.fromKelvin(v.highestKelvin())),
                     unit.symbol()));
         }
         for (int k = 0; k < x.length; k++) {
             if (!v.containsFraction(k, x[k])) {
-                out.add(Problem.OUTSIDE_COMPOSITION.raise(card.components().get(k).name(), Numbers.show(x[k]),
+                out.add(new Violation(Problem.OUTSIDE_COMPOSITION, card.components().get(k).name(), Numbers.show(x[k]),
                         Numbers.show(v.lowestFraction(k)), Numbers.show(v.highestFraction(k))));
             }
         }
@@ -97,12 +97,12 @@ final class PointChecks {
             String b = card.components().get(p.second()).name();
             boolean present = x[p.first()] > 0.0 && x[p.second()] > 0.0;
             if (present && !p.containsTemperature(kelvin)) {
-                out.add(Problem.OUTSIDE_PAIR_TEMPERATURE.raise(Numbers.show(t), unit.symbol(),
+                out.add(new Violation(Problem.OUTSIDE_PAIR_TEMPERATURE, Numbers.show(t), unit.symbol(),
                         Numbers.show(unit.fromKelvin(p.lowestKelvin())),
                         Numbers.show(unit.fromKelvin(p.highestKelvin())), unit.symbol(), a + " + " + b));
             }
             if (!p.containsRatio(x)) {
-                out.add(Problem.OUTSIDE_PAIR_COMPOSITION.raise(a + " + " + b, "x(" + a + ")/(x(" + a + ") + x(" + b
+                out.add(new Violation(Problem.OUTSIDE_PAIR_COMPOSITION, a + " + " + b, "x(" + a + ")/(x(" + a + ") + x(" + b
                         + "))", Numbers.show(p.ratio(x)), Numbers.show(p.lowestRatio()),
                         Numbers.show(p.highestRatio())));
             }

@@ -9,7 +9,6 @@ import org.miscela.core.model.ExcessFunction;
 import org.miscela.core.model.HeatCapacity;
 import org.miscela.core.model.RedlichKister;
 import org.miscela.core.model.TernaryTerm;
-import org.miscela.core.problem.MiscelaException;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -25,7 +24,7 @@ final class Trace {
     }
 
     static Object[][] of(Card card, double[] x, double t, double kelvin, PropertyKind property, Extrapolation e,
-            List<MiscelaException> outside) {
+            List<Violation> outside) {
         Trace tr = new Trace();
         Units u = card.units();
         String tu = u.temperature().symbol();
@@ -45,10 +44,8 @@ final class Trace {
         if (outside.isEmpty()) {
             tr.add("outside validity", "none");
         }
-        for (MiscelaException m : outside) {
-            String text = m.getMessage();
-            int cut = text.indexOf(" Extrapolation is refused");
-            tr.add("outside validity", cut > 0 ? text.substring(0, cut) : text);
+        for (Violation v : outside) {
+            tr.add("outside validity", v.limit());
         }
         for (int k = 0; k < x.length; k++) {
             tr.add("mole fraction: " + name(card, k), x[k]);

@@ -1,9 +1,10 @@
 package org.miscela.core.problem;
 
 /**
- * The exception the library throws on bad input: a card that cannot be read, or arguments the card cannot answer.
- * Its message is meant for the person at the spreadsheet. The fitting and blending packages throw their own
- * catalogued exceptions (FitException, BlendException) of the same kind; docs/errors.md lists all three catalogues.
+ * The one exception the library throws on input it refuses: a card that cannot be read, arguments the card cannot
+ * answer, data a fit cannot use, a blend that cannot be made, or a numerical search that did not converge. It carries
+ * one entry of the {@link Problem} catalogue, and its message is meant for the person at the spreadsheet
+ * (docs/errors.md lists them all). Any other exception out of the library is a fault, not a refusal.
  */
 public final class MiscelaException extends RuntimeException {
     private static final long serialVersionUID = 1L;

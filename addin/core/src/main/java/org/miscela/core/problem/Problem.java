@@ -1,103 +1,246 @@
 package org.miscela.core.problem;
 
+import static org.miscela.core.problem.Problem.Section.BLEND;
+import static org.miscela.core.problem.Problem.Section.CALL;
+import static org.miscela.core.problem.Problem.Section.CARD;
+import static org.miscela.core.problem.Problem.Section.EXPLAIN;
+import static org.miscela.core.problem.Problem.Section.FAILURE;
+import static org.miscela.core.problem.Problem.Section.FIT;
+
 import java.util.Locale;
 
 /**
- * The catalogue of every message the library can produce. Each entry is one kind of problem with a message pattern
+ * The catalogue of every message the add-in can produce, in one enum with a section per kind of problem: a card's own
+ * problems, a call's, the fitting engine's, the blending functions', MIX.EXPLAIN's answers about a call it cannot run,
+ * and the words for an unexpected failure. Each entry is one kind of problem with a message pattern
  * ({@link String#format} style) that names what was wrong and how to fix it. Keeping them in one place lets the
- * documentation list them all and lets tests prove each can occur.
+ * documentation list them all (docs/errors.md is generated from it) and lets tests prove each can occur. An entry's
+ * name is unique across the sections; {@link #raise} makes the one exception type that carries it,
+ * {@link MiscelaException}.
  */
 public enum Problem {
     // --- the card as a whole
-    CARD_EMPTY("The card is empty: the range must hold a card whose first row is 'Miscela card | 1'."),
-    CARD_HEADER("Card row %d: a card starts with the row 'Miscela card | 1'; found \"%s\"."),
-    CARD_VERSION("Card row %d: card format version %s is not supported; this add-in reads versions 1 to %d."),
-    NEEDS_VERSION_2("Card row %d: \"%s\" is a card format version 2 row; change the header to 'Miscela card | 2'."),
-    UNKNOWN_LABEL("Card row %d: unknown label \"%s\"."),
-    DUPLICATE_ROW("Card row %d: \"%s\" is given twice (also in row %d)."),
-    MISSING_ROW("The card lacks the row \"%s\"."),
-    NO_LABEL("Card row %d holds values but no label in its first column."),
-    MISSING_VALUE("Card row %d (%s): column %d is empty; a value belongs there."),
-    NOT_A_NUMBER("Card row %d (%s): column %d holds the text \"%s\" where a number belongs."),
-    NOT_TEXT("Card row %d (%s): column %d must hold text; found %s."),
-    NOT_FINITE("Card row %d (%s): column %d is not a finite number."),
-    EXTRA_VALUE("Card row %d (%s): unexpected value in column %d (\"%s\")."),
-    UNKNOWN_UNIT("Card row %d (%s): unit \"%s\" is not recognised; use one of: %s."),
-    BAD_KEYWORD("Card row %d (%s): \"%s\" is not recognised; use one of: %s."),
-    UNKNOWN_COMPONENT("Card row %d (%s): \"%s\" is not declared by a 'component' row."),
-    BAD_TRIPLE("Card row %d (%s): \"%s\" must name three different components joined by '+', e.g. 'ethanol + water + glycerol'."),
-    BAD_PAIR("Card row %d (%s): \"%s\" must name two different components joined by '+', e.g. 'ethanol + water'."),
-    NOT_POSITIVE("Card row %d (%s): %s must be greater than zero; found %s."),
-    BAD_RANGE("Card row %d (%s): the lower limit %s must be below the upper limit %s."),
-    MOLE_FRACTION_LIMIT("Card row %d (%s): mole-fraction limits must lie within 0..1; found %s..%s."),
-    TOO_FEW_COMPONENTS("The card declares %d component(s); a mixture needs at least 2."),
-    MISSING_DENSITY("The card gives no 'density model' row for component \"%s\"."),
-    MODEL_VALUES("Card row %d (%s): the %s model takes %s; %s."),
-    MODEL_RANGE("Card row %d (%s): the %s model is valid from %s to %s K, but the card's 'valid temperature' range runs from %s to %s K."),
-    PAIR_ORDER("Card row %d (%s): the pair is written \"%s\" here but \"%s\" in row %d; write every row of a pair in the same order."),
-    DENSITY_NOT_POSITIVE("Card row %d (%s): the density model of %s gives %s kg/m³ at %s K, inside the card's validity range."),
-    MISSING_PAIR("The card gives no %s for the pair %s + %s: add its '%s A0' row (write 0 for an ideal pair), or write 'missing pairs | ideal' on the card to treat every pair without rows as ideal."),
-    MISSING_PAIR_ROW("The card gives '%s' rows for %s but no '%s' row."),
-    COEFFICIENT_GAP("The card gives '%s' for %s but not '%s'; coefficients must run from the first without gaps (write 0 where needed)."),
-    COVARIANCE_SIZE("Card row %d (%s): the pair %s has %d coefficients, so its covariance takes %d rows of %d values; found %s."),
-    COVARIANCE_NOT_SYMMETRIC("Card row %d (%s): the covariance is not symmetric: entry (%d, %d) is %s but (%d, %d) is %s."),
-    COVARIANCE_NEGATIVE("Card row %d (%s): the variance of coefficient %d is %s; a variance cannot be negative."),
-    NO_COMPOSITION_LIMIT("The card gives no 'valid mole fraction' row; state the composition range the coefficients were fitted over."),
+    CARD_EMPTY(CARD, "The card is empty: the range must hold a card whose first row is 'Miscela card | 1'."),
+    CARD_HEADER(CARD, "Card row %d: a card starts with the row 'Miscela card | 1'; found \"%s\"."),
+    CARD_VERSION(CARD, "Card row %d: card format version %s is not supported; this add-in reads versions 1 to %d."),
+    NEEDS_VERSION_2(CARD, "Card row %d: \"%s\" is a card format version 2 row; change the header to 'Miscela card | 2'."),
+    UNKNOWN_LABEL(CARD, "Card row %d: unknown label \"%s\"."),
+    DUPLICATE_ROW(CARD, "Card row %d: \"%s\" is given twice (also in row %d)."),
+    MISSING_ROW(CARD, "The card lacks the row \"%s\"."),
+    NO_LABEL(CARD, "Card row %d holds values but no label in its first column."),
+    MISSING_VALUE(CARD, "Card row %d (%s): column %d is empty; a value belongs there."),
+    NOT_A_NUMBER(CARD, "Card row %d (%s): column %d holds the text \"%s\" where a number belongs."),
+    NOT_TEXT(CARD, "Card row %d (%s): column %d must hold text; found %s."),
+    NOT_FINITE(CARD, "Card row %d (%s): column %d is not a finite number."),
+    EXTRA_VALUE(CARD, "Card row %d (%s): unexpected value in column %d (\"%s\")."),
+    UNKNOWN_UNIT(CARD, "Card row %d (%s): unit \"%s\" is not recognised; use one of: %s."),
+    BAD_KEYWORD(CARD, "Card row %d (%s): \"%s\" is not recognised; use one of: %s."),
+    UNKNOWN_COMPONENT(CARD, "Card row %d (%s): \"%s\" is not declared by a 'component' row."),
+    BAD_TRIPLE(CARD, "Card row %d (%s): \"%s\" must name three different components joined by '+', e.g. 'ethanol + water + glycerol'."),
+    BAD_PAIR(CARD, "Card row %d (%s): \"%s\" must name two different components joined by '+', e.g. 'ethanol + water'."),
+    NOT_POSITIVE(CARD, "Card row %d (%s): %s must be greater than zero; found %s."),
+    BAD_RANGE(CARD, "Card row %d (%s): the lower limit %s must be below the upper limit %s."),
+    MOLE_FRACTION_LIMIT(CARD, "Card row %d (%s): mole-fraction limits must lie within 0..1; found %s..%s."),
+    TOO_FEW_COMPONENTS(CARD, "The card declares %d component(s); a mixture needs at least 2."),
+    MISSING_DENSITY(CARD, "The card gives no 'density model' row for component \"%s\"."),
+    MODEL_VALUES(CARD, "Card row %d (%s): the %s model takes %s; %s."),
+    MODEL_RANGE(CARD, "Card row %d (%s): the %s model is valid from %s to %s K, but the card's 'valid temperature' range runs from %s to %s K."),
+    PAIR_ORDER(CARD, "Card row %d (%s): the pair is written \"%s\" here but \"%s\" in row %d; write every row of a pair in the same order."),
+    DENSITY_NOT_POSITIVE(CARD, "Card row %d (%s): the density model of %s gives %s kg/m³ at %s K, inside the card's validity range."),
+    MISSING_PAIR(CARD, "The card gives no %s for the pair %s + %s: add its '%s A0' row (write 0 for an ideal pair), or write 'missing pairs | ideal' on the card to treat every pair without rows as ideal."),
+    MISSING_PAIR_ROW(CARD, "The card gives '%s' rows for %s but no '%s' row."),
+    COEFFICIENT_GAP(CARD, "The card gives '%s' for %s but not '%s'; coefficients must run from the first without gaps (write 0 where needed)."),
+    COVARIANCE_SIZE(CARD, "Card row %d (%s): the pair %s has %d coefficients, so its covariance takes %d rows of %d values; found %s."),
+    COVARIANCE_NOT_SYMMETRIC(CARD, "Card row %d (%s): the covariance is not symmetric: entry (%d, %d) is %s but (%d, %d) is %s."),
+    COVARIANCE_NEGATIVE(CARD, "Card row %d (%s): the variance of coefficient %d is %s; a variance cannot be negative."),
+    NO_COMPOSITION_LIMIT(CARD, "The card gives no 'valid mole fraction' row; state the composition range the coefficients were fitted over."),
 
     // --- arguments of a call
-    NOT_BINARY("A single mole fraction describes a mixture only when the card has 2 components; this card has %d: give the mole fractions of all of them, in card order, as a row or column of cells."),
-    COMPOSITION_LENGTH("The composition has %d mole fraction(s) but the card has %d components (%s); give one per component, in card order."),
-    COMPOSITION_NEGATIVE("The mole fraction of %s is %s; mole fractions cannot be negative."),
-    COMPOSITION_SUM("The mole fractions sum to %s; they must sum to 1 (within 1e-6)."),
-    COMPOSITION_SHAPE("The composition range is %d×%d, but the card has %d components: give a row or a column of %d cells, or a block of %d columns with one composition per row."),
-    AMOUNT_NEGATIVE("The amount of %s is %s; amounts cannot be negative."),
-    AMOUNT_ZERO("The amounts add up to nothing; give a positive amount of at least one component."),
-    AMOUNT_TOO_LARGE("The amounts come to more moles than a number can hold (over 1.8e308 in all); check the amounts and their basis."),
-    UNKNOWN_BASIS("The amount basis \"%s\" is not recognised; use one of: %s."),
-    NO_ENTHALPY("The card holds no excess enthalpy data: add an 'enthalpy unit' row and 'excess enthalpy A0' rows (see docs/card-format.md)."),
-    NO_VOLUME("The card holds no excess volume data (it describes enthalpy only), so it gives no volumes or densities: add 'excess volume A0' rows (see docs/card-format.md)."),
-    NO_HEAT_CAPACITY("The card gives no 'heat capacity' row for %s; the temperature rise needs the heat capacity of every component."),
-    NO_TEMPERATURE_ROOT("No temperature between %s and %s K balances the heat of mixing; the card's heat capacities or excess enthalpy are not physical there."),
-    OUTSIDE_PAIR_TEMPERATURE("The temperature %s %s is outside the range %s to %s %s stated for the pair %s. Extrapolation is refused; to accept it, pass TRUE as 'extrapolate' or write 'extrapolation | allow' on the card."),
-    OUTSIDE_PAIR_COMPOSITION("The pair %s is present at the ratio %s = %s, outside the range %s to %s stated for it. Extrapolation is refused; to accept it, pass TRUE as 'extrapolate' or write 'extrapolation | allow' on the card."),
-    OUTSIDE_FINAL_TEMPERATURE("The batch would reach %s %s, outside the card's validity range %s to %s %s. Extrapolation is refused; to accept it, pass TRUE as 'extrapolate' or write 'extrapolation | allow' on the card."),
-    FIT_NEEDS_TEMPERATURE("A fit with temperature-dependent coefficients (order in T above 0) needs a temperature for every point."),
-    FIT_NEEDS_REFERENCE("A fit with temperature-dependent coefficients (order in T above 0) needs a reference temperature: write the one the card's 'reference temperature' row will hold."),
-    FIT_OUTPUT_NOT_HERE("The result \"%s\" is not available from this function."),
-    UNKNOWN_FIT_OUTPUT("The result \"%s\" is not recognised; use one of: %s."),
-    UNKNOWN_PAIR_ARG("The pair \"%s\" does not name two different components of the card (%s); write it as 'first + second'."),
-    DATA_SHAPE("The %s range is %d×%d; give a single column or row of values, one per point."),
-    DATA_LENGTH("The %s range has %d value(s) but the %s range has %d; give one of each per point."),
-    DATA_PARTLY_BLANK("Point %d has a %s but a blank %s; fill it in, or clear the whole point."),
-    NOT_A_COUNT("The %s must be a whole number from 0 to %d; found %s."),
-    NO_COVARIANCE("The card gives no 'excess volume covariance' rows for the pair %s, so the uncertainty cannot be propagated (fit the pair with MIX.FITDENSITY or MIX.FITEXCESS and result \"covariance\")."),
-    UNKNOWN_QUANTITY("The quantity \"%s\" is not recognised; use one of: %s."),
-    UNKNOWN_PROPERTY("The property \"%s\" is not recognised; use one of: %s."),
-    UNKNOWN_INFO_ITEM("The item \"%s\" is not recognised; use one of: %s."),
-    ARG_BLANK("The %s is blank."),
-    ARG_NOT_NUMBER("The %s must be a number; found %s."),
-    ARG_NOT_FINITE("The %s must be a finite number."),
-    ARG_NOT_TEXT("The %s must be text; found %s."),
-    ARG_NOT_FLAG("The %s must be TRUE or FALSE (or left out); found %s."),
-    ARG_NOT_SINGLE("The %s must be a single value here, not a range."),
-    ARG_SHAPE("The %s range is %d×%d but the %s range is %d×%d; give ranges of the same shape, or a single value."),
-    MOLE_FRACTION_OUTSIDE_UNIT("The mole fraction %s lies outside 0..1."),
-    BELOW_ABSOLUTE_ZERO("The temperature %s %s is below absolute zero."),
-    UNKNOWN_COMPONENT_ARG("Component %s is not on the card; give a number from 1 to %d or one of the names: %s."),
-    OUTSIDE_TEMPERATURE("The temperature %s %s is outside the card's validity range %s to %s %s. Extrapolation is refused; to accept it, pass TRUE as 'extrapolate' or write 'extrapolation | allow' on the card."),
-    OUTSIDE_COMPOSITION("The mole fraction of %s, %s, is outside the card's validity range %s to %s. Extrapolation is refused; to accept it, pass TRUE as 'extrapolate' or write 'extrapolation | allow' on the card."),
-    CHECK_NEEDS_BOTH("To check a point, give both the mole fraction and the temperature."),
-    NON_PHYSICAL("At %s %s the card gives a %s of %s, which is not physical; the card is being used where its models do not hold."),
+    NOT_BINARY(CALL, "A single mole fraction describes a mixture only when the card has 2 components; this card has %d: give the mole fractions of all of them, in card order, as a row or column of cells."),
+    COMPOSITION_LENGTH(CALL, "The composition has %d mole fraction(s) but the card has %d components (%s); give one per component, in card order."),
+    COMPOSITION_NEGATIVE(CALL, "The mole fraction of %s is %s; mole fractions cannot be negative."),
+    COMPOSITION_SUM(CALL, "The mole fractions sum to %s; they must sum to 1 (within 1e-6)."),
+    COMPOSITION_SHAPE(CALL, "The composition range is %d×%d, but the card has %d components: give a row or a column of %d cells, or a block of %d columns with one composition per row."),
+    AMOUNT_NEGATIVE(CALL, "The amount of %s is %s; amounts cannot be negative."),
+    AMOUNT_ZERO(CALL, "The amounts add up to nothing; give a positive amount of at least one component."),
+    AMOUNT_TOO_LARGE(CALL, "The amounts come to more moles than a number can hold (over 1.8e308 in all); check the amounts and their basis."),
+    UNKNOWN_BASIS(CALL, "The amount basis \"%s\" is not recognised; use one of: %s."),
+    NO_ENTHALPY(CALL, "The card holds no excess enthalpy data: add an 'enthalpy unit' row and 'excess enthalpy A0' rows (see docs/card-format.md)."),
+    NO_VOLUME(CALL, "The card holds no excess volume data (it describes enthalpy only), so it gives no volumes or densities: add 'excess volume A0' rows (see docs/card-format.md)."),
+    NO_HEAT_CAPACITY(CALL, "The card gives no 'heat capacity' row for %s; the temperature rise needs the heat capacity of every component."),
+    NO_TEMPERATURE_ROOT(CALL, "No temperature between %s and %s K balances the heat of mixing; the card's heat capacities or excess enthalpy are not physical there."),
+    OUTSIDE_PAIR_TEMPERATURE(CALL, "The temperature %s %s is outside the range %s to %s %s stated for the pair %s.", Advice.EXTRAPOLATION),
+    OUTSIDE_PAIR_COMPOSITION(CALL, "The pair %s is present at the ratio %s = %s, outside the range %s to %s stated for it.", Advice.EXTRAPOLATION),
+    OUTSIDE_FINAL_TEMPERATURE(CALL, "The batch would reach %s %s, outside the card's validity range %s to %s %s.", Advice.EXTRAPOLATION),
+    FIT_NEEDS_TEMPERATURE(CALL, "A fit with temperature-dependent coefficients (order in T above 0) needs a temperature for every point."),
+    FIT_NEEDS_REFERENCE(CALL, "A fit with temperature-dependent coefficients (order in T above 0) needs a reference temperature: write the one the card's 'reference temperature' row will hold."),
+    FIT_OUTPUT_NOT_HERE(CALL, "The result \"%s\" is not available from this function."),
+    UNKNOWN_FIT_OUTPUT(CALL, "The result \"%s\" is not recognised; use one of: %s."),
+    UNKNOWN_PAIR_ARG(CALL, "The pair \"%s\" does not name two different components of the card (%s); write it as 'first + second'."),
+    DATA_SHAPE(CALL, "The %s range is %d×%d; give a single column or row of values, one per point."),
+    DATA_LENGTH(CALL, "The %s range has %d value(s) but the %s range has %d; give one of each per point."),
+    DATA_PARTLY_BLANK(CALL, "Point %d has a %s but a blank %s; fill it in, or clear the whole point."),
+    NOT_A_COUNT(CALL, "The %s must be a whole number from 0 to %d; found %s."),
+    NO_COVARIANCE(CALL, "The card gives no 'excess volume covariance' rows for the pair %s, so the uncertainty cannot be propagated (fit the pair with MIX.FITDENSITY or MIX.FITEXCESS and result \"covariance\")."),
+    UNKNOWN_QUANTITY(CALL, "The quantity \"%s\" is not recognised; use one of: %s."),
+    UNKNOWN_PROPERTY(CALL, "The property \"%s\" is not recognised; use one of: %s."),
+    UNKNOWN_INFO_ITEM(CALL, "The item \"%s\" is not recognised; use one of: %s."),
+    ARG_BLANK(CALL, "The %s is blank."),
+    ARG_NOT_NUMBER(CALL, "The %s must be a number; found %s."),
+    ARG_NOT_FINITE(CALL, "The %s must be a finite number."),
+    ARG_NOT_TEXT(CALL, "The %s must be text; found %s."),
+    ARG_NOT_FLAG(CALL, "The %s must be TRUE or FALSE (or left out); found %s."),
+    ARG_NOT_SINGLE(CALL, "The %s must be a single value here, not a range."),
+    ARG_SHAPE(CALL, "The %s range is %d×%d but the %s range is %d×%d; give ranges of the same shape, or a single value."),
+    MOLE_FRACTION_OUTSIDE_UNIT(CALL, "The mole fraction %s lies outside 0..1."),
+    BELOW_ABSOLUTE_ZERO(CALL, "The temperature %s %s is below absolute zero."),
+    UNKNOWN_COMPONENT_ARG(CALL, "Component %s is not on the card; give a number from 1 to %d or one of the names: %s."),
+    OUTSIDE_TEMPERATURE(CALL, "The temperature %s %s is outside the card's validity range %s to %s %s.", Advice.EXTRAPOLATION),
+    OUTSIDE_COMPOSITION(CALL, "The mole fraction of %s, %s, is outside the card's validity range %s to %s.", Advice.EXTRAPOLATION),
+    CHECK_NEEDS_BOTH(CALL, "To check a point, give both the mole fraction and the temperature."),
+    NON_PHYSICAL(CALL, "At %s %s the card gives a %s of %s, which is not physical; the card is being used where its models do not hold."),
+    NO_CONVERGENCE(CALL, "The numerical search for %s did not converge (%s), so there is no result; the card's models "
+            + "may be irregular there: check them near this point."),
+
+    // --- the fitting engine (point numbers count from 1, as a user reads rows)
+    NO_POINTS(FIT, "No data points were given."),
+    LENGTH_MISMATCH(FIT, "There are %d %s but %d %s; give one of each per point."),
+    RAGGED_DESIGN(FIT, "Row %d of the design has %d column(s) but row 1 has %d."),
+    NO_PARAMETERS(FIT, "The design has no column: a fit needs at least one parameter."),
+    FIT_NOT_FINITE(FIT, "The %s at point %d is not a finite number (%s)."),
+    NEGATIVE_WEIGHT(FIT, "The weight at point %d is %s; weights must be zero or positive."),
+    TOO_FEW_POINTS(FIT, "The fit has %d parameter(s) but only %d point(s) with positive weight; give at least as many "
+            + "points as parameters, or lower the order."),
+    ZERO_COLUMN(FIT, "Parameter %d multiplies zero at every point with positive weight, so the data say nothing about it; "
+            + "spread the points or lower the order."),
+    RANK_DEFICIENT(FIT, "The points cannot separate the %d parameters: the design is rank deficient (condition number %s "
+            + "after column scaling, limit %s); spread the points or lower the order."),
+    FIT_MOLE_FRACTION_OUTSIDE_UNIT(FIT, "The mole fraction at point %d, %s, lies outside 0..1."),
+    FIT_NOT_POSITIVE(FIT, "The %s at point %d is %s; it must be greater than zero."),
+    BAD_ORDER(FIT, "The %s must be a whole number from 0 to %d; found %d."),
+    BAD_SIGNIFICANCE(FIT, "The significance level must lie strictly between 0 and 1; found %s."),
+    NOT_NESTED(FIT, "Fit %d of the order comparison has %d parameter(s), no more than fit %d with %d; each order must "
+            + "add parameters to the one before."),
+    NOT_SAME_POINTS(FIT, "Fit %d of the order comparison uses %d point(s) but fit 1 uses %d; compare fits to the same data."),
+    COVARIANCE_SHAPE(FIT, "The covariance must be %d×%d for this expansion; found %d×%d."),
+    COVARIANCE_NOT_FINITE(FIT, "The covariance entry (%d, %d) is not a finite number (%s)."),
+    FIT_COVARIANCE_NOT_SYMMETRIC(FIT, "The covariance is not symmetric: entry (%d, %d) is %s but (%d, %d) is %s."),
+    COVARIANCE_NEGATIVE_VARIANCE(FIT, "The covariance has a negative variance %s at (%d, %d)."),
+    MOLE_FRACTION(FIT, "The mole fraction %s lies outside 0..1."),
+    TEMPERATURE(FIT, "The temperature %s K is not a finite value above absolute zero."),
+    BAD_COMPONENT(FIT, "The component must be 1 or 2; found %d."),
+
+    // --- the blending functions (the card's own checks, such as the validity range, are the call entries above)
+    // ... their arguments
+    BLANK_ARGUMENT(BLEND, "The %s is blank."),
+    ARGUMENT_NOT_FINITE(BLEND, "The %s must be a finite number; found %s."),
+    BLEND_NOT_POSITIVE(BLEND, "The %s must be a number greater than zero; found %s."),
+    NO_SUCH_COMPONENT(BLEND, "The %s, component %d, is not on the card; it has %d components (%s), counted from 1 in card "
+            + "order."),
+    LENGTH(BLEND, "The %s have %d value(s) but the card has %d components (%s); give one per component, in card order."),
+    BLANK_VALUE(BLEND, "The %s of %s is blank; %s."),
+    VALUE_NOT_FINITE(BLEND, "The %s of %s must be a finite number; found %s."),
+    VALUE_NEGATIVE(BLEND, "The %s of %s is %s; it cannot be negative."),
+    BLEND_UNKNOWN_UNIT(BLEND, "The unit \"%s\" is not recognised; use one of: %s."),
+    WRONG_DIMENSION(BLEND, "%s is a unit of %s, but the %s needs a unit of %s (%s)."),
+    BLEND_UNKNOWN_BASIS(BLEND, "The composition basis \"%s\" is not recognised; use one of: %s."),
+    UNKNOWN_RESULT(BLEND, "The choice \"%s\" is not recognised; use one of: %s."),
+
+    // ... compositions
+    FRACTION_SUM(BLEND, "The %s sum to %s; they must sum to 1 (within 1e-6)."),
+    NEEDS_BALANCE(BLEND, "Reading %s needs a balance component: name the component that makes up the rest of the mixture "
+            + "(usually the solvent); its own entry may then be left blank."),
+    NEEDS_SOLVENT(BLEND, "Molalities need a solvent: name the component per kilogram of which the moles are counted."),
+    NO_SOLVENT(BLEND, "The composition holds no %s, so molalities (moles per kilogram of %s) are undefined; choose a "
+            + "solvent that is present."),
+    BALANCE_DISAGREES(BLEND, "The %s given for the balance component %s is %s, but the other entries imply %s; leave that "
+            + "entry blank, or correct it."),
+    TOO_CONCENTRATED(BLEND, "No composition gives these %s at %s %s: even with no %s at all, the other components in the "
+            + "proportions given reach only %s %% of the values entered; lower them."),
+    NO_COMPOSITION(BLEND, "No composition of this card gives these %s at %s %s with %s as the balance: the card's molar "
+            + "volume is not physical along the way; check the card and the values."),
+    SEVERAL_COMPOSITIONS(BLEND, "The %s entered fit %d compositions of this card at %s %s (mole fraction of %s: %s), so "
+            + "they do not say which is meant; give the composition on another basis, such as mass fractions."),
+
+    // ... batches
+    NEEDS_TEMPERATURES(BLEND, "The %s are volumes, so each needs the temperature it was measured at: give one temperature "
+            + "per component (a component with no volume needs none)."),
+    NEEDS_TEMPERATURE(BLEND, "The %s is a volume, so it needs the temperature it was measured at."),
+    NO_STORAGE_TEMPERATURES(BLEND, "No storage temperatures were given, so the volumes of the pure components to draw are "
+            + "not known; give one temperature per component."),
+    BLEND_AMOUNT_ZERO(BLEND, "The %s add up to nothing; give a positive amount of at least one component."),
+    BLEND_AMOUNT_TOO_LARGE(BLEND, "The %s come to more moles than a number can hold (over 1.8e308 in all); check them and their "
+            + "unit."),
+    NEEDS_REMOVAL(BLEND, "The target cannot be reached by additions alone: the batch holds %s, which the target excludes. "
+            + "Give a final quantity, or the largest the vessel can take, to get the closest composition within it."),
+    LIMIT_BELOW_BATCH(BLEND, "The batch already amounts to %s %s, more than the %s of %s %s; additions can only increase "
+            + "it."),
+    LIMIT_UNREACHABLE(BLEND, "Additions cannot bring the batch to the %s of %s %s: the card's volumes are not physical "
+            + "along the way."),
+
+    // ... composition from density
+    NEEDS_REFERENCE(BLEND, "With %d components, varying %s alone does not fix a composition: give a reference composition "
+            + "(mole fractions) whose other components keep their ratios."),
+    NO_PROPORTIONS(BLEND, "The reference composition holds nothing but %s, so it gives no ratios for the other components; "
+            + "give one that contains some of them."),
+    RANGE_HALF(BLEND, "Give both ends of the range of the mole fraction of %s, or neither."),
+    BLEND_BAD_RANGE(BLEND, "The range of the mole fraction of %s must run from 'from' to 'to' with 0 ≤ from < to ≤ 1; found %s "
+            + "to %s."),
+    EMPTY_PATH(BLEND, "No composition along this path, varying %s with the others in the reference's ratios, lies inside "
+            + "the card's validity range.", Advice.EXTRAPOLATION),
+    DENSITY_NOT_FOUND(BLEND, "No composition with the mole fraction of %s from %s to %s has the density %s %s at %s %s; "
+            + "along that range the card gives %s to %s %s."),
+    SEVERAL_DENSITIES(BLEND, "The density %s %s at %s %s occurs at %d compositions along this path, mole fraction of %s = "
+            + "%s; give a range (from, to) that contains only the one you mean."),
 
     // --- what MIX.EXPLAIN answers about a call it cannot run (its answers, never a refusal)
-    EXPLAIN_UNKNOWN_FUNCTION("%s names no function that MIX.EXPLAIN can explain; give one of these names, with or without 'MIX.': %s."),
-    EXPLAIN_ARGUMENT_COUNT("%s takes %s (%s), not %d: Calc shows Err:504 for such a call without calling the function."),
-    EXPLAIN_RANGE_LEFT_OUT("The %s, argument %d of %s, is left out; a range argument cannot be, so Calc shows Err:502 for the call without calling the function: give a value, a cell or a range.");
+    EXPLAIN_UNKNOWN_FUNCTION(EXPLAIN, "%s names no function that MIX.EXPLAIN can explain; give one of these names, with or without 'MIX.': %s."),
+    EXPLAIN_ARGUMENT_COUNT(EXPLAIN, "%s takes %s (%s), not %d: Calc shows Err:504 for such a call without calling the function."),
+    EXPLAIN_RANGE_LEFT_OUT(EXPLAIN, "The %s, argument %d of %s, is left out; a range argument cannot be, so Calc shows Err:502 for the call without calling the function: give a value, a cell or a range."),
 
+    // --- the words for an unexpected failure (the adapter fills them in; never raised as a refusal)
+    UNEXPECTED_FAILURE(FAILURE, "Unexpected failure in %s: %s. This is a fault in the add-in, not in the data: "
+            + "please report it with the call.");
+
+    /** The kind of problem an entry is; docs/errors.md has a table for each. */
+    public enum Section {
+        /** A card that cannot be read: reported by every function given the card, and by MIX.CHECK in words. */
+        CARD,
+        /** The arguments of a call: what a cell can get wrong, or a point the card cannot answer. */
+        CALL,
+        /** The fitting engine's problems with the data (MIX.FITEXCESS, MIX.FITDENSITY, MIX.LEASTSQUARES). */
+        FIT,
+        /** The blending functions' problems with their arguments and with the compositions asked for. */
+        BLEND,
+        /** What MIX.EXPLAIN answers about a call it cannot run: its answers, never a refusal. */
+        EXPLAIN,
+        /** The words for a failure that is no refusal (a fault in the add-in); never raised as a problem. */
+        FAILURE
+    }
+
+    /** The advice shared by several entries, appended after the statement of what went wrong. */
+    private interface Advice {
+        String EXTRAPOLATION = "Extrapolation is refused; to accept it, pass TRUE as 'extrapolate' or write "
+                + "'extrapolation | allow' on the card.";
+    }
+
+    private final Section section;
+    private final String statement;
     private final String pattern;
 
-    Problem(String pattern) {
-        this.pattern = pattern;
+    Problem(Section section, String pattern) {
+        this(section, pattern, null);
+    }
+
+    Problem(Section section, String statement, String advice) {
+        this.section = section;
+        this.statement = statement;
+        this.pattern = advice == null ? statement : statement + " " + advice;
+    }
+
+    /** Which kind of problem this is. */
+    public Section section() {
+        return section;
     }
 
     /** The message pattern, for documentation. */
@@ -108,6 +251,25 @@ public enum Problem {
     /** The message with its blanks filled in; numbers are formatted by the caller. */
     public String format(Object... args) {
         return String.format(Locale.ROOT, pattern, args);
+    }
+
+    /**
+     * What went wrong without the advice that follows it in the message (for an entry without advice, the message
+     * itself): the audit trace lists a validity limit crossed this way, as a fact rather than a refusal.
+     */
+    public String statement(Object... args) {
+        return String.format(Locale.ROOT, statement, args);
+    }
+
+    /** The entries of one section, in catalogue order. */
+    public static java.util.List<Problem> of(Section section) {
+        java.util.List<Problem> out = new java.util.ArrayList<>();
+        for (Problem p : values()) {
+            if (p.section == section) {
+                out.add(p);
+            }
+        }
+        return java.util.Collections.unmodifiableList(out);
     }
 
     /** A {@link MiscelaException} carrying this problem. */

@@ -1,5 +1,7 @@
 package org.miscela.core.blend;
 
+import org.miscela.core.problem.MiscelaException;
+import org.miscela.core.problem.Problem;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -57,7 +59,7 @@ class AdjustmentsTest {
     /** Pure ethanol cannot be reached from a blend by adding; the message names the component in the way. */
     @Test
     void removalIsRefused() {
-        BlendException ex = AlcoholometryTest.assertRefused(BlendProblem.NEEDS_REMOVAL, () -> Adjustments
+        MiscelaException ex = AlcoholometryTest.assertRefused(Problem.NEEDS_REMOVAL, () -> Adjustments
                 .leastAdditions(CARD, HALF_AND_HALF, new double[] {1, 0}, MASS, 20, null, E));
         assertTrue(ex.getMessage().contains("water"), ex.getMessage());
     }
@@ -99,7 +101,7 @@ class AdjustmentsTest {
 
     @Test
     void aFinalQuantityBelowTheBatchIsRefused() {
-        AlcoholometryTest.assertRefused(BlendProblem.LIMIT_BELOW_BATCH, () -> Adjustments.makeUpTo(CARD,
+        AlcoholometryTest.assertRefused(Problem.LIMIT_BELOW_BATCH, () -> Adjustments.makeUpTo(CARD,
                 HALF_AND_HALF, new double[] {0.4, 0.6}, MASS, Quantity.of(0.9, AmountUnit.KG), 20, null, E));
     }
 
@@ -117,7 +119,7 @@ class AdjustmentsTest {
         assertArrayEquals(new double[] {1.5, 1.5, 0}, a.additions().amounts(AmountUnit.MOL), 1e-12);
         assertArrayEquals(new double[] {5 / 12.0, 5 / 12.0, 1 / 6.0}, a.achieved(), 1e-15);
         assertEquals(1 / 6.0, a.largestDeviation(), 1e-15);
-        AlcoholometryTest.assertRefused(BlendProblem.NEEDS_REMOVAL, () -> Adjustments.leastAdditions(Cards.TERNARY,
+        AlcoholometryTest.assertRefused(Problem.NEEDS_REMOVAL, () -> Adjustments.leastAdditions(Cards.TERNARY,
                 batch, new double[] {0.5, 0.5, 0}, CompositionBasis.moleFraction(), 20, null, E));
     }
 

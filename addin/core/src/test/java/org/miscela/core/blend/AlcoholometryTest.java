@@ -1,5 +1,7 @@
 package org.miscela.core.blend;
 
+import org.miscela.core.problem.MiscelaException;
+import org.miscela.core.problem.Problem;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
@@ -79,7 +81,7 @@ class AlcoholometryTest {
         double[] w = Compositions.convert(CARD, s, STRENGTH_20, MASS, E);
         assertEquals(0.5, w[0], 1e-12);
         s[1] += 0.01;
-        BlendException ex = assertRefused(BlendProblem.BALANCE_DISAGREES,
+        MiscelaException ex = assertRefused(Problem.BALANCE_DISAGREES,
                 () -> Compositions.convert(CARD, s, STRENGTH_20, MASS, E));
         assertEquals(true, ex.getMessage().contains("water"), ex.getMessage());
     }
@@ -138,8 +140,8 @@ class AlcoholometryTest {
         }
     }
 
-    static BlendException assertRefused(BlendProblem problem, org.junit.jupiter.api.function.Executable call) {
-        BlendException ex = org.junit.jupiter.api.Assertions.assertThrows(BlendException.class, call);
+    static MiscelaException assertRefused(Problem problem, org.junit.jupiter.api.function.Executable call) {
+        MiscelaException ex = org.junit.jupiter.api.Assertions.assertThrows(MiscelaException.class, call);
         assertEquals(problem, ex.problem(), ex.getMessage());
         return ex;
     }

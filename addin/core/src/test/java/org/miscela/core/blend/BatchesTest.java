@@ -1,5 +1,6 @@
 package org.miscela.core.blend;
 
+import org.miscela.core.problem.Problem;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -60,7 +61,7 @@ class BatchesTest {
         assertEquals(g.volume(AmountUnit.ML) / 1000, kg.volume(AmountUnit.L), 1e-15);
         assertEquals(g.volume(AmountUnit.ML) / 1e6, kg.volume(AmountUnit.M3), 1e-18);
         assertEquals(g.totalMoles(AmountUnit.MOL) / 1000, kg.totalMoles(AmountUnit.KMOL), 1e-18);
-        AlcoholometryTest.assertRefused(BlendProblem.WRONG_DIMENSION, () -> g.volume(AmountUnit.KG));
+        AlcoholometryTest.assertRefused(Problem.WRONG_DIMENSION, () -> g.volume(AmountUnit.KG));
     }
 
     /**
@@ -104,24 +105,24 @@ class BatchesTest {
 
     @Test
     void refusals() {
-        AlcoholometryTest.assertRefused(BlendProblem.AMOUNT_ZERO,
+        AlcoholometryTest.assertRefused(Problem.BLEND_AMOUNT_ZERO,
                 () -> Batches.totals(CARD, Amounts.of(new double[] {0, 0}, AmountUnit.G), 20, E));
-        AlcoholometryTest.assertRefused(BlendProblem.VALUE_NEGATIVE,
+        AlcoholometryTest.assertRefused(Problem.VALUE_NEGATIVE,
                 () -> Batches.totals(CARD, Amounts.of(new double[] {-1, 2}, AmountUnit.G), 20, E));
-        AlcoholometryTest.assertRefused(BlendProblem.BLANK_VALUE,
+        AlcoholometryTest.assertRefused(Problem.BLANK_VALUE,
                 () -> Batches.totals(CARD, Amounts.of(new double[] {Double.NaN, 2}, AmountUnit.G), 20, E));
-        AlcoholometryTest.assertRefused(BlendProblem.NEEDS_TEMPERATURES,
+        AlcoholometryTest.assertRefused(Problem.NEEDS_TEMPERATURES,
                 () -> Amounts.of(new double[] {1, 2}, AmountUnit.L));
-        AlcoholometryTest.assertRefused(BlendProblem.NEEDS_TEMPERATURES,
+        AlcoholometryTest.assertRefused(Problem.NEEDS_TEMPERATURES,
                 () -> Batches.totals(CARD, Amounts.of(new double[] {1, 2}, AmountUnit.L, null), 20, E));
-        AlcoholometryTest.assertRefused(BlendProblem.BLANK_ARGUMENT, () -> Batches.totals(CARD,
+        AlcoholometryTest.assertRefused(Problem.BLANK_ARGUMENT, () -> Batches.totals(CARD,
                 Amounts.of(new double[] {1, 2}, AmountUnit.L, new double[] {20, Double.NaN}), 20, E));
-        AlcoholometryTest.assertRefused(BlendProblem.LENGTH,
+        AlcoholometryTest.assertRefused(Problem.LENGTH,
                 () -> Batches.totals(CARD, Amounts.of(new double[] {1, 2, 3}, AmountUnit.G), 20, E));
-        AlcoholometryTest.assertRefused(BlendProblem.NO_SUCH_COMPONENT, () -> Batches.addition(CARD,
+        AlcoholometryTest.assertRefused(Problem.NO_SUCH_COMPONENT, () -> Batches.addition(CARD,
                 Amounts.of(new double[] {1, 2}, AmountUnit.G), 2, Quantity.of(1, AmountUnit.G), 20, E));
-        AlcoholometryTest.assertRefused(BlendProblem.NOT_POSITIVE, () -> Quantity.of(0, AmountUnit.G));
-        AlcoholometryTest.assertRefused(BlendProblem.NEEDS_TEMPERATURE, () -> Quantity.of(1, AmountUnit.L));
+        AlcoholometryTest.assertRefused(Problem.BLEND_NOT_POSITIVE, () -> Quantity.of(0, AmountUnit.G));
+        AlcoholometryTest.assertRefused(Problem.NEEDS_TEMPERATURE, () -> Quantity.of(1, AmountUnit.L));
         // a tank volume with no temperature is not read when the component is absent
         BatchTotals b = Batches.totals(CARD, Amounts.of(new double[] {0, 2}, AmountUnit.L,
                 new double[] {Double.NaN, 20}), 20, E);

@@ -1,5 +1,7 @@
 package org.miscela.core.blend;
 
+import org.miscela.core.problem.MiscelaException;
+import org.miscela.core.problem.Problem;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -16,7 +18,7 @@ import org.miscela.core.problem.Catalogue;
 import org.miscela.core.card.Extrapolation;
 
 /**
- * Every message of {@link BlendProblem} can occur: one call per problem that raises it, its text fully filled in.
+ * Every message of the blending section of {@link Problem} can occur: one call per problem that raises it, its text fully filled in.
  * The messages are printed for the record. Two cards here are invented for the purpose.
  */
 class BlendProblemTest {
@@ -26,7 +28,7 @@ class BlendProblemTest {
     private static final CompositionBasis MASS = CompositionBasis.massFraction();
 
     /** Problems only a broken card could raise and that no test card reaches; kept as fallbacks. */
-    private static final EnumSet<BlendProblem> FALLBACKS = EnumSet.of(BlendProblem.NO_COMPOSITION);
+    private static final EnumSet<Problem> FALLBACKS = EnumSet.of(Problem.NO_COMPOSITION);
 
     /**
      * Invented: R (60 g/mol) and S (18 g/mol), both 1000 kg/m³, V^E = −40·x_R·x_S cm³/mol. S's partial molar volume
@@ -46,80 +48,80 @@ class BlendProblemTest {
             {"valid mole fraction", "R", 0.0, 1.0}, {"excess volume A0", "R + S", a0}, {"extrapolation", "allow"}});
     }
 
-    private static Map<BlendProblem, Executable> cases() {
-        Map<BlendProblem, Executable> m = new EnumMap<>(BlendProblem.class);
+    private static Map<Problem, Executable> cases() {
+        Map<Problem, Executable> m = new EnumMap<>(Problem.class);
         Amounts half = Amounts.of(new double[] {500, 500}, AmountUnit.G);
-        m.put(BlendProblem.BLANK_ARGUMENT, () -> CompositionBasis.volumeFraction(NAN));
-        m.put(BlendProblem.UNKNOWN_RESULT, () -> BlendFunctions.batch(EW, new double[] {1, 1}, "mol", null, 20,
+        m.put(Problem.BLANK_ARGUMENT, () -> CompositionBasis.volumeFraction(NAN));
+        m.put(Problem.UNKNOWN_RESULT, () -> BlendFunctions.batch(EW, new double[] {1, 1}, "mol", null, 20,
                 "weight", null, E));
-        m.put(BlendProblem.ARGUMENT_NOT_FINITE, () -> CompositionBasis.molarity(Double.POSITIVE_INFINITY, 1));
-        m.put(BlendProblem.NOT_POSITIVE, () -> Quantity.of(-1, AmountUnit.G));
-        m.put(BlendProblem.NO_SUCH_COMPONENT, () -> Compositions.toMoleFractions(EW, new double[] {1, NAN},
+        m.put(Problem.ARGUMENT_NOT_FINITE, () -> CompositionBasis.molarity(Double.POSITIVE_INFINITY, 1));
+        m.put(Problem.BLEND_NOT_POSITIVE, () -> Quantity.of(-1, AmountUnit.G));
+        m.put(Problem.NO_SUCH_COMPONENT, () -> Compositions.toMoleFractions(EW, new double[] {1, NAN},
                 CompositionBasis.molality(4), E));
-        m.put(BlendProblem.LENGTH, () -> Compositions.toMoleFractions(EW, new double[] {1},
+        m.put(Problem.LENGTH, () -> Compositions.toMoleFractions(EW, new double[] {1},
                 CompositionBasis.moleFraction(), E));
-        m.put(BlendProblem.BLANK_VALUE, () -> Compositions.toMoleFractions(EW, new double[] {NAN, 0.5}, MASS, E));
-        m.put(BlendProblem.VALUE_NOT_FINITE, () -> Compositions.toMoleFractions(EW,
+        m.put(Problem.BLANK_VALUE, () -> Compositions.toMoleFractions(EW, new double[] {NAN, 0.5}, MASS, E));
+        m.put(Problem.VALUE_NOT_FINITE, () -> Compositions.toMoleFractions(EW,
                 new double[] {Double.POSITIVE_INFINITY, NAN}, CompositionBasis.molarity(20, 1), E));
-        m.put(BlendProblem.VALUE_NEGATIVE, () -> Compositions.toMoleFractions(EW, new double[] {-1, NAN},
+        m.put(Problem.VALUE_NEGATIVE, () -> Compositions.toMoleFractions(EW, new double[] {-1, NAN},
                 CompositionBasis.molarity(20, 1), E));
-        m.put(BlendProblem.UNKNOWN_UNIT, () -> AmountUnit.lookup("gallon"));
-        m.put(BlendProblem.WRONG_DIMENSION, () -> Batches.totals(EW, half, 20, E).mass(AmountUnit.L));
-        m.put(BlendProblem.UNKNOWN_BASIS, () -> CompositionBasis.Kind.lookup("ppm"));
-        m.put(BlendProblem.FRACTION_SUM, () -> Compositions.toMoleFractions(EW, new double[] {0.5, 0.6}, MASS, E));
-        m.put(BlendProblem.NEEDS_BALANCE, () -> Compositions.toMoleFractions(EW, new double[] {5, NAN},
+        m.put(Problem.BLEND_UNKNOWN_UNIT, () -> AmountUnit.lookup("gallon"));
+        m.put(Problem.WRONG_DIMENSION, () -> Batches.totals(EW, half, 20, E).mass(AmountUnit.L));
+        m.put(Problem.BLEND_UNKNOWN_BASIS, () -> CompositionBasis.Kind.lookup("ppm"));
+        m.put(Problem.FRACTION_SUM, () -> Compositions.toMoleFractions(EW, new double[] {0.5, 0.6}, MASS, E));
+        m.put(Problem.NEEDS_BALANCE, () -> Compositions.toMoleFractions(EW, new double[] {5, NAN},
                 CompositionBasis.of(CompositionBasis.Kind.MOLARITY, 20, -1), E));
-        m.put(BlendProblem.NEEDS_SOLVENT, () -> Compositions.toMoleFractions(EW, new double[] {5, NAN},
+        m.put(Problem.NEEDS_SOLVENT, () -> Compositions.toMoleFractions(EW, new double[] {5, NAN},
                 CompositionBasis.of(CompositionBasis.Kind.MOLALITY, NAN, -1), E));
-        m.put(BlendProblem.NO_SOLVENT, () -> Compositions.fromMoleFractions(EW, new double[] {1, 0},
+        m.put(Problem.NO_SOLVENT, () -> Compositions.fromMoleFractions(EW, new double[] {1, 0},
                 CompositionBasis.molality(1), E));
         // water's own molality is 1000/18.01528 = 55.508 mol/kg
-        m.put(BlendProblem.BALANCE_DISAGREES, () -> Compositions.toMoleFractions(EW, new double[] {1, 50},
+        m.put(Problem.BALANCE_DISAGREES, () -> Compositions.toMoleFractions(EW, new double[] {1, 50},
                 CompositionBasis.molality(1), E));
         // pure ethanol at 20 °C holds 789.239/46.06844 = 17.13 mol/L, so 30 mol/L is out of reach
-        m.put(BlendProblem.TOO_CONCENTRATED, () -> Compositions.toMoleFractions(EW, new double[] {30, NAN},
+        m.put(Problem.TOO_CONCENTRATED, () -> Compositions.toMoleFractions(EW, new double[] {30, NAN},
                 CompositionBasis.molarity(20, 1), E));
-        m.put(BlendProblem.SEVERAL_COMPOSITIONS, () -> Compositions.toMoleFractions(MOLARITY_MAXIMUM,
+        m.put(Problem.SEVERAL_COMPOSITIONS, () -> Compositions.toMoleFractions(MOLARITY_MAXIMUM,
                 new double[] {17, NAN}, CompositionBasis.molarity(20, 1), E));
-        m.put(BlendProblem.NEEDS_TEMPERATURES, () -> Amounts.of(new double[] {1, 2}, AmountUnit.L));
-        m.put(BlendProblem.NEEDS_TEMPERATURE, () -> Quantity.of(1, AmountUnit.L));
-        m.put(BlendProblem.NO_STORAGE_TEMPERATURES, () -> Recipes.forTarget(EW, Quantity.of(1, AmountUnit.KG),
+        m.put(Problem.NEEDS_TEMPERATURES, () -> Amounts.of(new double[] {1, 2}, AmountUnit.L));
+        m.put(Problem.NEEDS_TEMPERATURE, () -> Quantity.of(1, AmountUnit.L));
+        m.put(Problem.NO_STORAGE_TEMPERATURES, () -> Recipes.forTarget(EW, Quantity.of(1, AmountUnit.KG),
                 new double[] {0.5, 0.5}, MASS, null, E).amounts(AmountUnit.L));
-        m.put(BlendProblem.AMOUNT_ZERO, () -> Batches.totals(EW, Amounts.of(new double[] {0, 0}, AmountUnit.G), 20,
+        m.put(Problem.BLEND_AMOUNT_ZERO, () -> Batches.totals(EW, Amounts.of(new double[] {0, 0}, AmountUnit.G), 20,
                 E));
-        m.put(BlendProblem.AMOUNT_TOO_LARGE, () -> Batches.totals(EW, Amounts.of(new double[] {1e308, 1e308},
+        m.put(Problem.BLEND_AMOUNT_TOO_LARGE, () -> Batches.totals(EW, Amounts.of(new double[] {1e308, 1e308},
                 AmountUnit.KG), 20, E));
-        m.put(BlendProblem.NEEDS_REMOVAL, () -> Adjustments.leastAdditions(EW, half, new double[] {1, 0}, MASS, 20,
+        m.put(Problem.NEEDS_REMOVAL, () -> Adjustments.leastAdditions(EW, half, new double[] {1, 0}, MASS, 20,
                 null, E));
-        m.put(BlendProblem.LIMIT_BELOW_BATCH, () -> Adjustments.within(EW, half, new double[] {0.4, 0.6}, MASS,
+        m.put(Problem.LIMIT_BELOW_BATCH, () -> Adjustments.within(EW, half, new double[] {0.4, 0.6}, MASS,
                 Quantity.of(0.5, AmountUnit.L, 20), 20, null, E));
         // from pure R towards x = (0.5, 0.5) the invented card's volume turns negative
-        m.put(BlendProblem.LIMIT_UNREACHABLE, () -> Adjustments.within(NOT_PHYSICAL,
+        m.put(Problem.LIMIT_UNREACHABLE, () -> Adjustments.within(NOT_PHYSICAL,
                 Amounts.of(new double[] {1, 0}, AmountUnit.MOL), new double[] {0.5, 0.5},
                 CompositionBasis.moleFraction(), Quantity.of(1, AmountUnit.L, 20), 20, null, E));
-        m.put(BlendProblem.NEEDS_REFERENCE, () -> DensityInversion.composition(Cards.TERNARY, 900, 25, 0, null, NAN,
+        m.put(Problem.NEEDS_REFERENCE, () -> DensityInversion.composition(Cards.TERNARY, 900, 25, 0, null, NAN,
                 NAN, E));
-        m.put(BlendProblem.NO_PROPORTIONS, () -> DensityInversion.composition(Cards.TERNARY, 900, 25, 0,
+        m.put(Problem.NO_PROPORTIONS, () -> DensityInversion.composition(Cards.TERNARY, 900, 25, 0,
                 new double[] {1, 0, 0}, NAN, NAN, E));
-        m.put(BlendProblem.RANGE_HALF, () -> DensityInversion.composition(EW, 900, 20, 0, null, 0.1, NAN, E));
-        m.put(BlendProblem.BAD_RANGE, () -> DensityInversion.composition(EW, 900, 20, 0, null, 0.5, 0.2, E));
-        m.put(BlendProblem.EMPTY_PATH, () -> DensityInversion.composition(Cards.LIMITED_TERNARY, 900, 20, 0,
+        m.put(Problem.RANGE_HALF, () -> DensityInversion.composition(EW, 900, 20, 0, null, 0.1, NAN, E));
+        m.put(Problem.BLEND_BAD_RANGE, () -> DensityInversion.composition(EW, 900, 20, 0, null, 0.5, 0.2, E));
+        m.put(Problem.EMPTY_PATH, () -> DensityInversion.composition(Cards.LIMITED_TERNARY, 900, 20, 0,
                 new double[] {0.5, 0.5, 0}, NAN, NAN, E));
-        m.put(BlendProblem.DENSITY_NOT_FOUND, () -> DensityInversion.composition(EW, 1200, 20, 0, null, NAN, NAN, E));
-        m.put(BlendProblem.SEVERAL_DENSITIES, () -> DensityInversion.composition(Cards.DENSITY_MAXIMUM, 1020, 20, 0,
+        m.put(Problem.DENSITY_NOT_FOUND, () -> DensityInversion.composition(EW, 1200, 20, 0, null, NAN, NAN, E));
+        m.put(Problem.SEVERAL_DENSITIES, () -> DensityInversion.composition(Cards.DENSITY_MAXIMUM, 1020, 20, 0,
                 null, NAN, NAN, E));
         return m;
     }
 
     @Test
     void everyProblemCanOccur() {
-        Map<BlendProblem, Executable> cases = cases();
-        EnumSet<BlendProblem> covered = EnumSet.copyOf(cases.keySet());
+        Map<Problem, Executable> cases = cases();
+        EnumSet<Problem> covered = EnumSet.copyOf(cases.keySet());
         covered.addAll(FALLBACKS);
-        assertEquals(EnumSet.allOf(BlendProblem.class), covered, "a problem without a case");
+        assertEquals(EnumSet.copyOf(Problem.of(Problem.Section.BLEND)), covered, "a problem without a case");
         StringBuilder b = new StringBuilder();
         cases.forEach((problem, call) -> {
-            BlendException ex = assertThrows(BlendException.class, call, problem.name());
+            MiscelaException ex = assertThrows(MiscelaException.class, call, problem.name());
             assertEquals(problem, ex.problem(), ex.getMessage());
             assertTrue(Catalogue.isInstance(problem.pattern(), ex.getMessage()), "the test's matcher: " + ex.getMessage());
             assertFalse(ex.getMessage().matches("(?s).*%[sdf].*"), "unfilled placeholder: " + ex.getMessage());
@@ -135,16 +137,16 @@ class BlendProblemTest {
      */
     @Test
     void molaritiesBeyondTheDoubleRangeAreTooConcentrated() {
-        BlendException ex = assertThrows(BlendException.class, () -> Compositions.toMoleFractions(Cards.TERNARY,
+        MiscelaException ex = assertThrows(MiscelaException.class, () -> Compositions.toMoleFractions(Cards.TERNARY,
                 new double[] {1e308, 1e308, NAN}, CompositionBasis.molarity(20, 2), E));
-        assertEquals(BlendProblem.TOO_CONCENTRATED, ex.problem(), ex.getMessage());
+        assertEquals(Problem.TOO_CONCENTRATED, ex.problem(), ex.getMessage());
         assertTrue(ex.getMessage().contains("reach only 0 %"), ex.getMessage());
     }
 
     /** The pair's two compositions at 17 mol/L are each a true root (checked with the forward conversion). */
     @Test
     void severalCompositionsAreRealRoots() {
-        BlendException ex = assertThrows(BlendException.class, () -> Compositions.toMoleFractions(MOLARITY_MAXIMUM,
+        MiscelaException ex = assertThrows(MiscelaException.class, () -> Compositions.toMoleFractions(MOLARITY_MAXIMUM,
                 new double[] {17, NAN}, CompositionBasis.molarity(20, 1), E));
         assertTrue(ex.getMessage().contains("2 compositions"), ex.getMessage());
         String list = ex.getMessage().replaceAll(".*mole fraction of S: ([^)]*)\\).*", "$1");

@@ -1,5 +1,7 @@
 package org.miscela.core.blend;
 
+import org.miscela.core.problem.MiscelaException;
+import org.miscela.core.problem.Problem;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -63,7 +65,7 @@ class DensityInversionTest {
         for (double r : roots) {
             assertEquals(1020, CardFunctions.density(Cards.DENSITY_MAXIMUM, r, 20, E), 1e-9);
         }
-        BlendException ex = AlcoholometryTest.assertRefused(BlendProblem.SEVERAL_DENSITIES, () -> DensityInversion
+        MiscelaException ex = AlcoholometryTest.assertRefused(Problem.SEVERAL_DENSITIES, () -> DensityInversion
                 .composition(Cards.DENSITY_MAXIMUM, 1020, 20, 0, null, NAN, NAN, E));
         assertTrue(ex.getMessage().contains(Show.number(roots[0])) && ex.getMessage().contains(Show.number(roots[1])),
                 ex.getMessage());
@@ -89,7 +91,7 @@ class DensityInversionTest {
     /** Above the maximum no composition fits; the message gives the densities the card covers. */
     @Test
     void densityAboveTheMaximumIsRefused() {
-        BlendException ex = AlcoholometryTest.assertRefused(BlendProblem.DENSITY_NOT_FOUND, () -> DensityInversion
+        MiscelaException ex = AlcoholometryTest.assertRefused(Problem.DENSITY_NOT_FOUND, () -> DensityInversion
                 .composition(Cards.DENSITY_MAXIMUM, 1040, 20, 0, null, NAN, NAN, E));
         assertTrue(ex.getMessage().contains("1000 to 1031"), ex.getMessage());
     }
@@ -108,18 +110,18 @@ class DensityInversionTest {
 
     @Test
     void refusals() {
-        AlcoholometryTest.assertRefused(BlendProblem.NEEDS_REFERENCE, () -> DensityInversion.composition(Cards.TERNARY,
+        AlcoholometryTest.assertRefused(Problem.NEEDS_REFERENCE, () -> DensityInversion.composition(Cards.TERNARY,
                 900, 25, 0, null, NAN, NAN, E));
-        AlcoholometryTest.assertRefused(BlendProblem.NO_PROPORTIONS, () -> DensityInversion.composition(Cards.TERNARY,
+        AlcoholometryTest.assertRefused(Problem.NO_PROPORTIONS, () -> DensityInversion.composition(Cards.TERNARY,
                 900, 25, 0, new double[] {1, 0, 0}, NAN, NAN, E));
-        AlcoholometryTest.assertRefused(BlendProblem.RANGE_HALF, () -> DensityInversion.composition(
+        AlcoholometryTest.assertRefused(Problem.RANGE_HALF, () -> DensityInversion.composition(
                 Cards.ETHANOL_WATER, 900, 20, 0, null, 0.1, NAN, E));
-        AlcoholometryTest.assertRefused(BlendProblem.BAD_RANGE, () -> DensityInversion.composition(
+        AlcoholometryTest.assertRefused(Problem.BLEND_BAD_RANGE, () -> DensityInversion.composition(
                 Cards.ETHANOL_WATER, 900, 20, 0, null, 0.5, 0.2, E));
-        AlcoholometryTest.assertRefused(BlendProblem.NOT_POSITIVE, () -> DensityInversion.composition(
+        AlcoholometryTest.assertRefused(Problem.BLEND_NOT_POSITIVE, () -> DensityInversion.composition(
                 Cards.ETHANOL_WATER, -900, 20, 0, null, NAN, NAN, E));
         // invented card: C must be at least 0.1, so a path without C has no valid composition
-        AlcoholometryTest.assertRefused(BlendProblem.EMPTY_PATH, () -> DensityInversion.composition(Cards.LIMITED_TERNARY, 900, 20,
+        AlcoholometryTest.assertRefused(Problem.EMPTY_PATH, () -> DensityInversion.composition(Cards.LIMITED_TERNARY, 900, 20,
                 0, new double[] {0.5, 0.5, 0}, NAN, NAN, E));
     }
 }

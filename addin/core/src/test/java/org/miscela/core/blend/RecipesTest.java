@@ -1,5 +1,6 @@
 package org.miscela.core.blend;
 
+import org.miscela.core.problem.Problem;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import org.junit.jupiter.api.Test;
@@ -54,7 +55,7 @@ class RecipesTest {
                 CompositionBasis.moleFraction(), null, E);
         assertEquals(2, c.amounts(AmountUnit.MOL)[0], 1e-15);
         assertEquals(8 * Oiml22.M_WATER, c.amounts(AmountUnit.G)[1], 1e-12);
-        AlcoholometryTest.assertRefused(BlendProblem.NO_STORAGE_TEMPERATURES, () -> c.amounts(AmountUnit.L));
+        AlcoholometryTest.assertRefused(Problem.NO_STORAGE_TEMPERATURES, () -> c.amounts(AmountUnit.L));
     }
 
     /** The recipe's charge, mixed, gives back the target: volume at its temperature and composition. */

@@ -1,5 +1,7 @@
 package org.miscela.core.fit;
 
+import org.miscela.core.problem.MiscelaException;
+import org.miscela.core.problem.Problem;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -150,30 +152,30 @@ class ExcessVolumeUncertaintyTest {
     @Test
     void rejectsUnusableCovariance() {
         RedlichKister rk = new RedlichKister(T_REF, A);
-        assertEquals("The covariance must be 6×6 for this expansion; found 3×3.", assertThrows(FitException.class,
+        assertEquals("The covariance must be 6×6 for this expansion; found 3×3.", assertThrows(MiscelaException.class,
                 () -> new ExcessVolumeUncertainty(rk, 1, new double[3][3])).getMessage());
         double[][] c = new double[6][6];
         for (int i = 0; i < 6; i++) {
             c[i][i] = 1;
         }
         c[0][1] = 0.5;
-        assertEquals(FitProblem.COVARIANCE_NOT_SYMMETRIC,
-                assertThrows(FitException.class, () -> new ExcessVolumeUncertainty(rk, 1, c)).problem());
+        assertEquals(Problem.FIT_COVARIANCE_NOT_SYMMETRIC,
+                assertThrows(MiscelaException.class, () -> new ExcessVolumeUncertainty(rk, 1, c)).problem());
         c[1][0] = 0.5;
         c[2][2] = -1;
-        assertEquals(FitProblem.COVARIANCE_NEGATIVE_VARIANCE,
-                assertThrows(FitException.class, () -> new ExcessVolumeUncertainty(rk, 1, c)).problem());
+        assertEquals(Problem.COVARIANCE_NEGATIVE_VARIANCE,
+                assertThrows(MiscelaException.class, () -> new ExcessVolumeUncertainty(rk, 1, c)).problem());
         c[2][2] = Double.NaN;
-        assertEquals(FitProblem.COVARIANCE_NOT_FINITE,
-                assertThrows(FitException.class, () -> new ExcessVolumeUncertainty(rk, 1, c)).problem());
+        assertEquals(Problem.COVARIANCE_NOT_FINITE,
+                assertThrows(MiscelaException.class, () -> new ExcessVolumeUncertainty(rk, 1, c)).problem());
         c[2][2] = 1;
         ExcessVolumeUncertainty u = new ExcessVolumeUncertainty(rk, 1, c);
-        assertEquals(FitProblem.BAD_COMPONENT,
-                assertThrows(FitException.class, () -> u.partialExcessVolume(3, 0.5, 300)).problem());
+        assertEquals(Problem.BAD_COMPONENT,
+                assertThrows(MiscelaException.class, () -> u.partialExcessVolume(3, 0.5, 300)).problem());
         assertEquals("The mole fraction 1.2 lies outside 0..1.",
-                assertThrows(FitException.class, () -> u.excessVolume(1.2, 300)).getMessage());
+                assertThrows(MiscelaException.class, () -> u.excessVolume(1.2, 300)).getMessage());
         assertEquals("The temperature -1.0 K is not a finite value above absolute zero.",
-                assertThrows(FitException.class, () -> u.density(0.5, -1, FIRST, SECOND)).getMessage());
+                assertThrows(MiscelaException.class, () -> u.density(0.5, -1, FIRST, SECOND)).getMessage());
     }
 
     /** {V^E, V̄1^E, V̄2^E} from the library's own expansion and its analytic slope. */

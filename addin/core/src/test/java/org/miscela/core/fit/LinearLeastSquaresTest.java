@@ -1,5 +1,7 @@
 package org.miscela.core.fit;
 
+import org.miscela.core.problem.MiscelaException;
+import org.miscela.core.problem.Problem;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -129,59 +131,59 @@ class LinearLeastSquaresTest {
 
     @Test
     void rejectsFewerPointsThanParameters() {
-        FitException e = assertThrows(FitException.class,
+        MiscelaException e = assertThrows(MiscelaException.class,
                 () -> LinearLeastSquares.fit(new double[][] {{1, 0, 0}, {1, 1, 1}}, new double[] {1, 2}));
-        assertEquals(FitProblem.TOO_FEW_POINTS, e.problem());
+        assertEquals(Problem.TOO_FEW_POINTS, e.problem());
         assertEquals("The fit has 3 parameter(s) but only 2 point(s) with positive weight; give at least as many "
                 + "points as parameters, or lower the order.", e.getMessage());
-        FitException zeroWeights = assertThrows(FitException.class,
+        MiscelaException zeroWeights = assertThrows(MiscelaException.class,
                 () -> LinearLeastSquares.fit(LINE, new double[5], new double[] {1, 0, 0, 0, 0}));
-        assertEquals(FitProblem.TOO_FEW_POINTS, zeroWeights.problem());
+        assertEquals(Problem.TOO_FEW_POINTS, zeroWeights.problem());
     }
 
     @Test
     void rejectsRankDeficiency() {
         double[][] twice = {{1, 2, 2}, {1, 3, 3}, {1, 5, 5}, {1, 7, 7}};
-        FitException e = assertThrows(FitException.class, () -> LinearLeastSquares.fit(twice, new double[4]));
-        assertEquals(FitProblem.RANK_DEFICIENT, e.problem());
+        MiscelaException e = assertThrows(MiscelaException.class, () -> LinearLeastSquares.fit(twice, new double[4]));
+        assertEquals(Problem.RANK_DEFICIENT, e.problem());
         assertTrue(e.getMessage().startsWith("The points cannot separate the 3 parameters: the design is rank "
                 + "deficient (condition number "), e.getMessage());
         double[][] zero = {{1, 0}, {1, 0}, {1, 0}};
-        assertEquals(FitProblem.ZERO_COLUMN,
-                assertThrows(FitException.class, () -> LinearLeastSquares.fit(zero, new double[3])).problem());
+        assertEquals(Problem.ZERO_COLUMN,
+                assertThrows(MiscelaException.class, () -> LinearLeastSquares.fit(zero, new double[3])).problem());
     }
 
     @Test
     void rejectsNonFiniteValues() {
         double[][] nan = {{1, 0}, {1, Double.NaN}, {1, 2}};
-        FitException e = assertThrows(FitException.class, () -> LinearLeastSquares.fit(nan, new double[3]));
+        MiscelaException e = assertThrows(MiscelaException.class, () -> LinearLeastSquares.fit(nan, new double[3]));
         assertEquals("The design value in column 2 at point 2 is not a finite number (NaN).", e.getMessage());
-        FitException inf = assertThrows(FitException.class, () -> LinearLeastSquares.fit(LINE,
+        MiscelaException inf = assertThrows(MiscelaException.class, () -> LinearLeastSquares.fit(LINE,
                 new double[] {1, 2, Double.POSITIVE_INFINITY, 4, 5}));
         assertEquals("The response at point 3 is not a finite number (Infinity).", inf.getMessage());
-        assertEquals(FitProblem.NOT_FINITE, assertThrows(FitException.class, () -> LinearLeastSquares.fit(LINE,
+        assertEquals(Problem.FIT_NOT_FINITE, assertThrows(MiscelaException.class, () -> LinearLeastSquares.fit(LINE,
                 new double[5], new double[] {1, 1, 1, 1, Double.NaN})).problem());
     }
 
     @Test
     void rejectsNegativeWeights() {
-        FitException e = assertThrows(FitException.class,
+        MiscelaException e = assertThrows(MiscelaException.class,
                 () -> LinearLeastSquares.fit(LINE, new double[5], new double[] {1, -0.5, 1, 1, 1}));
         assertEquals("The weight at point 2 is -0.5; weights must be zero or positive.", e.getMessage());
     }
 
     @Test
     void rejectsMismatchedShapes() {
-        assertEquals(FitProblem.LENGTH_MISMATCH,
-                assertThrows(FitException.class, () -> LinearLeastSquares.fit(LINE, new double[4])).problem());
-        assertEquals(FitProblem.LENGTH_MISMATCH, assertThrows(FitException.class,
+        assertEquals(Problem.LENGTH_MISMATCH,
+                assertThrows(MiscelaException.class, () -> LinearLeastSquares.fit(LINE, new double[4])).problem());
+        assertEquals(Problem.LENGTH_MISMATCH, assertThrows(MiscelaException.class,
                 () -> LinearLeastSquares.fit(LINE, new double[5], new double[3])).problem());
-        assertEquals(FitProblem.RAGGED_DESIGN, assertThrows(FitException.class,
+        assertEquals(Problem.RAGGED_DESIGN, assertThrows(MiscelaException.class,
                 () -> LinearLeastSquares.fit(new double[][] {{1, 0}, {1}}, new double[2])).problem());
-        assertEquals(FitProblem.NO_POINTS,
-                assertThrows(FitException.class, () -> LinearLeastSquares.fit(new double[0][], new double[0]))
+        assertEquals(Problem.NO_POINTS,
+                assertThrows(MiscelaException.class, () -> LinearLeastSquares.fit(new double[0][], new double[0]))
                         .problem());
-        assertEquals(FitProblem.NO_PARAMETERS, assertThrows(FitException.class,
+        assertEquals(Problem.NO_PARAMETERS, assertThrows(MiscelaException.class,
                 () -> LinearLeastSquares.fit(new double[][] {{}}, new double[1])).problem());
     }
 

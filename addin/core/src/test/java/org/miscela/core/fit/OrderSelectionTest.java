@@ -1,5 +1,7 @@
 package org.miscela.core.fit;
 
+import org.miscela.core.problem.MiscelaException;
+import org.miscela.core.problem.Problem;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -84,18 +86,18 @@ class OrderSelectionTest {
         double[][] d = noisyExcessVolumes(new double[][] {{-3.1}, {0.8}}, 10, 0.01, 1, 1);
         LeastSquaresFit one = RedlichKisterFitter.excessVolumes(d[0], d[2], 1, T_REF, null).leastSquares();
         LeastSquaresFit two = RedlichKisterFitter.excessVolumes(d[0], d[2], 2, T_REF, null).leastSquares();
-        assertEquals(FitProblem.NOT_NESTED,
-                assertThrows(FitException.class, () -> OrderSelection.compare(Arrays.asList(two, one), 0.05))
+        assertEquals(Problem.NOT_NESTED,
+                assertThrows(MiscelaException.class, () -> OrderSelection.compare(Arrays.asList(two, one), 0.05))
                         .problem());
         double[] fewer = Arrays.copyOf(d[0], 9);
         LeastSquaresFit other = RedlichKisterFitter.excessVolumes(fewer, Arrays.copyOf(d[2], 9), 2, T_REF, null)
                 .leastSquares();
-        assertEquals(FitProblem.NOT_SAME_POINTS,
-                assertThrows(FitException.class, () -> OrderSelection.compare(Arrays.asList(one, other), 0.05))
+        assertEquals(Problem.NOT_SAME_POINTS,
+                assertThrows(MiscelaException.class, () -> OrderSelection.compare(Arrays.asList(one, other), 0.05))
                         .problem());
         assertEquals("The significance level must lie strictly between 0 and 1; found 1.0.", assertThrows(
-                FitException.class, () -> OrderSelection.compare(Arrays.asList(one, two), 1.0)).getMessage());
-        assertEquals(FitProblem.BAD_ORDER, assertThrows(FitException.class,
+                MiscelaException.class, () -> OrderSelection.compare(Arrays.asList(one, two), 1.0)).getMessage());
+        assertEquals(Problem.BAD_ORDER, assertThrows(MiscelaException.class,
                 () -> OrderSelection.compare(-1, m -> one, 0.05)).problem());
     }
 

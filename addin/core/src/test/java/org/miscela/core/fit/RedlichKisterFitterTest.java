@@ -1,5 +1,7 @@
 package org.miscela.core.fit;
 
+import org.miscela.core.problem.MiscelaException;
+import org.miscela.core.problem.Problem;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -156,31 +158,31 @@ class RedlichKisterFitterTest {
     void rejectsBadInput() {
         double[] x = grid(6);
         double[] ve = new double[6];
-        assertEquals("The mole fraction at point 2, 1.5, lies outside 0..1.", assertThrows(FitException.class,
+        assertEquals("The mole fraction at point 2, 1.5, lies outside 0..1.", assertThrows(MiscelaException.class,
                 () -> RedlichKisterFitter.excessVolumes(new double[] {0.1, 1.5}, new double[2], 0, T_REF, null))
                 .getMessage());
-        assertEquals(FitProblem.BAD_ORDER, assertThrows(FitException.class,
+        assertEquals(Problem.BAD_ORDER, assertThrows(MiscelaException.class,
                 () -> RedlichKisterFitter.excessVolumes(x, ve, -1, T_REF, null)).problem());
-        assertEquals(FitProblem.BAD_ORDER, assertThrows(FitException.class,
+        assertEquals(Problem.BAD_ORDER, assertThrows(MiscelaException.class,
                 () -> RedlichKisterFitter.excessVolumes(x, new double[6], x, 2, 11, T_REF, null)).problem());
-        assertEquals(FitProblem.TOO_FEW_POINTS, assertThrows(FitException.class,
+        assertEquals(Problem.TOO_FEW_POINTS, assertThrows(MiscelaException.class,
                 () -> RedlichKisterFitter.excessVolumes(x, ve, 6, T_REF, null)).problem());
-        assertEquals(FitProblem.LENGTH_MISMATCH, assertThrows(FitException.class,
+        assertEquals(Problem.LENGTH_MISMATCH, assertThrows(MiscelaException.class,
                 () -> RedlichKisterFitter.excessVolumes(x, new double[5], 1, T_REF, null)).problem());
         double[] rho = {900, 900, -1, 900, 900, 900};
         assertEquals("The density at point 3 is -1.0; it must be greater than zero.", assertThrows(
-                FitException.class, () -> RedlichKisterFitter.densities(x, rho, FIRST, SECOND, T_REF, 1,
+                MiscelaException.class, () -> RedlichKisterFitter.densities(x, rho, FIRST, SECOND, T_REF, 1,
                         DeviationMeasure.DENSITY, null)).getMessage());
-        assertEquals(FitProblem.NOT_POSITIVE, assertThrows(FitException.class,
+        assertEquals(Problem.FIT_NOT_POSITIVE, assertThrows(MiscelaException.class,
                 () -> RedlichKisterFitter.excessVolumes(x, ve, 1, -3, null)).problem());
         // one temperature only: a slope in T cannot be told from the constant
         double[] oneT = new double[6];
         java.util.Arrays.fill(oneT, 300);
-        assertEquals(FitProblem.RANK_DEFICIENT, assertThrows(FitException.class,
+        assertEquals(Problem.RANK_DEFICIENT, assertThrows(MiscelaException.class,
                 () -> RedlichKisterFitter.excessVolumes(x, oneT, ve, 1, 1, T_REF, null)).problem());
         // ... and at T_ref itself the slope's basis is zero
         assertEquals("Parameter 2 multiplies zero at every point with positive weight, so the data say nothing about "
-                + "it; spread the points or lower the order.", assertThrows(FitException.class,
+                + "it; spread the points or lower the order.", assertThrows(MiscelaException.class,
                 () -> RedlichKisterFitter.excessVolumes(x, oneT, ve, 1, 1, 300, null)).getMessage());
     }
 

@@ -2,13 +2,11 @@ package org.miscela.core.problem;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.miscela.core.blend.BlendProblem;
-import org.miscela.core.fit.FitProblem;
 
 /**
- * Recognises a message as an instance of one catalogue entry ({@link Problem}, {@link FitProblem} or
- * {@link BlendProblem}): the entry's
- * literal text, in order, with anything in its blanks. Literal matching rather than a regular expression per entry,
+ * Recognises a message as an instance of one catalogue entry of {@link Problem}: the entry's literal text, in order,
+ * with anything in its blanks. The words of an unexpected failure (its FAILURE section) are left out: they are never
+ * an acceptable answer, so no oracle may take them for a catalogued message. Literal matching rather than a regular expression per entry,
  * because messages quote cell text of any length and a pattern with several wildcards would backtrack over it.
  */
 public final class Catalogue {
@@ -56,13 +54,9 @@ public final class Catalogue {
 
     static {
         for (Problem p : Problem.values()) {
-            ENTRIES.add(new Entry("Problem." + p.name(), p.pattern()));
-        }
-        for (FitProblem p : FitProblem.values()) {
-            ENTRIES.add(new Entry("FitProblem." + p.name(), p.pattern()));
-        }
-        for (BlendProblem p : BlendProblem.values()) {
-            ENTRIES.add(new Entry("BlendProblem." + p.name(), p.pattern()));
+            if (p.section() != Problem.Section.FAILURE) {
+                ENTRIES.add(new Entry("Problem." + p.name(), p.pattern()));
+            }
         }
     }
 
@@ -70,7 +64,7 @@ public final class Catalogue {
     }
 
     /**
-     * The catalogue entry this message is an instance of ("Problem.CARD_EMPTY", "FitProblem.NO_POINTS"), the most
+     * The catalogue entry this message is an instance of ("Problem.CARD_EMPTY", "Problem.NO_POINTS"), the most
      * specific when several fit; null when it is none of them.
      */
     public static String entryOf(String message) {
