@@ -48,8 +48,8 @@ class ExplainProperties {
         try {
             call.invoke(addIn);
             expected = "OK";
-        } catch (com.sun.star.uno.Exception e) {
-            // a refusal (IllegalArgumentException) or a catalogued non-convergence: MIX.EXPLAIN gives its words
+        } catch (IllegalArgumentException | com.sun.star.uno.Exception e) {
+            // a refusal, or a catalogued non-convergence (a checked UNO exception): MIX.EXPLAIN gives its words
             expected = e.getMessage();
         }
         String name = call.function.displayName();
