@@ -134,7 +134,8 @@ final class CardBuilder {
         }
         double[] c = r.numbersFrom(1);
         for (int j = 0; j < c.length; j++) {
-            c[j] = units.enthalpy().toJoulePerMol(c[j]);
+            // per degree of the card's scale (Cp itself) times per degree^j (its temperature polynomial)
+            c[j] = units.temperature().toPerKelvin(units.enthalpy().toJoulePerMol(c[j]), j + 1);
         }
         double tRef = 298.15; // irrelevant for a constant heat capacity
         if (reference != null) {
@@ -243,7 +244,7 @@ final class CardBuilder {
             double tRef = units.temperature().toKelvin(reference.number(1));
             double[] c = coefficients.numbersFrom(1);
             for (int j = 0; j < c.length; j++) {
-                c[j] = units.density().toKgPerM3(c[j]);
+                c[j] = units.temperature().toPerKelvin(units.density().toKgPerM3(c[j]), j);
             }
             d = new PolynomialDensity(tRef, c);
         } else if (kind.equals(normalise(Tanaka2001WaterDensity.NAME))) {

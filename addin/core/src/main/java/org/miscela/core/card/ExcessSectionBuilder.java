@@ -129,7 +129,7 @@ final class ExcessSectionBuilder {
                 double[] c = r.numbersFrom(1);
                 double sign = toCardOrder && p[0] > p[1] && k % 2 == 1 ? -1.0 : 1.0;
                 for (int j = 0; j < c.length; j++) {
-                    c[j] *= sign * factor;
+                    c[j] = temperature.toPerKelvin(c[j] * sign * factor, j);
                 }
                 out.computeIfAbsent(key, x -> new TreeMap<>()).put(k, c);
                 CardRow before = seen.put(key + "/" + k, r);
@@ -170,7 +170,8 @@ final class ExcessSectionBuilder {
 
     /**
      * A pair's coefficient covariance, one row per coefficient in the order a_00, a_01, …, a_10, … (each A_k's
-     * temperature terms in turn), converted to the card's component order and to internal units.
+     * temperature terms in turn), converted to the card's component order and to internal units (entry (p, q) is per
+     * degree to the power j_p + j_q).
      */
     private double[][] covariance(List<CardRow> rows, double[][] a, String pairName) {
         double squared = factor * factor;
@@ -179,8 +180,10 @@ final class ExcessSectionBuilder {
             size += row.length;
         }
         int[] k = new int[size]; // the A_k each parameter belongs to
+        int[] power = new int[size]; // and its power of the temperature difference
         for (int kk = 0, q = 0; kk < a.length; kk++) {
             for (int j = 0; j < a[kk].length; j++) {
+                power[q] = j;
                 k[q++] = kk;
             }
         }
@@ -201,7 +204,7 @@ final class ExcessSectionBuilder {
             }
             for (int q = 0; q < size; q++) {
                 double sign = reversed && (k[r] + k[q]) % 2 == 1 ? -1.0 : 1.0;
-                c[r][q] *= sign * squared;
+                c[r][q] = temperature.toPerKelvin(c[r][q] * sign * squared, power[r] + power[q]);
             }
         }
         for (int r = 0; r < size; r++) {
@@ -213,8 +216,10 @@ final class ExcessSectionBuilder {
                 double tolerance = 1e-9 * Math.sqrt(c[r][r] * c[q][q]);
                 if (!(Math.abs(c[r][q] - c[q][r]) <= tolerance)) {
                     CardRow row = rows.get(r);
+                    int j = power[r] + power[q];
                     throw Problem.COVARIANCE_NOT_SYMMETRIC.raise(row.number, row.label, r + 1, q + 1,
-                            Numbers.show(c[r][q] / squared), q + 1, r + 1, Numbers.show(c[q][r] / squared));
+                            Numbers.show(temperature.fromPerKelvin(c[r][q], j) / squared), q + 1, r + 1,
+                            Numbers.show(temperature.fromPerKelvin(c[q][r], j) / squared));
                 }
             }
         }

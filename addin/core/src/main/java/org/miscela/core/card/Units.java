@@ -9,15 +9,26 @@ import java.util.Locale;
  */
 public final class Units {
 
-    /** Temperature scales: the offset to kelvin (a temperature difference is the same in both). */
+    /**
+     * Temperature scales: T/K = (t − zero)·factor + offset, so a difference of one degree is {@code factor} kelvin.
+     * Every temperature coefficient on a card (per degree to the power j) is per degree of the card's own scale.
+     *
+     * <p>Kelvin and Celsius are the SI Brochure's (9th edition, 2019, 2.3.1: t/°C = T/K − 273.15). Fahrenheit is
+     * NIST SP 811 (2008), B.9: T/K = (t/°F + 459.67)/1.8, so a degree Fahrenheit is 5/9 K exactly; it is computed as
+     * (t/°F − 32)·5/9 + 273.15, the same in exact arithmetic, so that a Fahrenheit temperature of a whole Celsius
+     * value (104 °F, 40 °C) lands on the same double as the Celsius one. The degree sign may
+     * be typed as the ordinal indicator º (U+00BA) or the ring above ˚ (U+02DA), which look alike in most fonts, or as
+     * the one-character signs ℃ and ℉.
+     */
     public enum Temperature implements Spelled {
-        CELSIUS("°C", 273.15, "°C", "degC", "C"),
-        KELVIN("K", 0.0, "K");
+        CELSIUS("°C", 0.0, 1.0, 273.15, "°C", "ºC", "˚C", "℃", "degC", "C"),
+        KELVIN("K", 0.0, 1.0, 0.0, "K"),
+        FAHRENHEIT("°F", 32.0, 5.0 / 9.0, 273.15, "°F", "ºF", "˚F", "℉", "degF", "F");
 
         private final Scale scale;
 
-        Temperature(String symbol, double offset, String... spellings) {
-            this.scale = new Scale(symbol, offset, spellings);
+        Temperature(String symbol, double zero, double factor, double offset, String... spellings) {
+            this.scale = new Scale(symbol, zero, factor, offset, spellings);
         }
 
         @Override
@@ -26,18 +37,53 @@ public final class Units {
         }
 
         public double toKelvin(double t) {
-            return t + scale.factor;
+            return scale.toInternal(t);
         }
 
         public double fromKelvin(double k) {
-            return k - scale.factor;
+            return scale.fromInternal(k);
+        }
+
+        /** The unit of a temperature difference on this scale: K for kelvin and Celsius, °F for Fahrenheit. */
+        public String degree() {
+            return scale.factor == 1.0 ? "K" : scale.symbol;
+        }
+
+        /** A difference of {@code d} degrees of this scale, in K. */
+        public double differenceToKelvin(double d) {
+            return d * scale.factor;
+        }
+
+        /** A difference of {@code k} kelvin in degrees of this scale. */
+        public double differenceFromKelvin(double k) {
+            return k / scale.factor;
+        }
+
+        /**
+         * A coefficient per degree of this scale to the power {@code power} (of a temperature polynomial, or a heat
+         * capacity per degree) in the same per kelvin to that power; unchanged for kelvin and Celsius.
+         */
+        public double toPerKelvin(double c, int power) {
+            return scale.factor == 1.0 ? c : c / Math.pow(scale.factor, power);
+        }
+
+        /** The inverse of {@link #toPerKelvin}: a coefficient per K^power in the same per degree^power. */
+        public double fromPerKelvin(double c, int power) {
+            return scale.factor == 1.0 ? c : c * Math.pow(scale.factor, power);
         }
     }
 
-    /** Density units: the factor to kg/m³. */
+    /**
+     * Density units: the factor to kg/m³. 1 L = 1 dm³ = 10⁻³ m³ and 1 t = 10³ kg (SI Brochure, 9th edition, table 8);
+     * the pound is the avoirdupois pound, 0.453 592 37 kg exactly, and the gallon the US liquid gallon,
+     * 3.785 411 784 L exactly (NIST SP 811 (2008), B.8; NIST Handbook 44, appendix C), so 1 lb/gal is
+     * 0.45359237/0.003785411784 kg/m³ (about 119.826 43).
+     */
     public enum Density implements Spelled {
-        KG_PER_M3("kg/m³", 1.0, "kg/m³", "kg/m3", "g/L", "g/l"),
-        G_PER_CM3("g/cm³", 1000.0, "g/cm³", "g/cm3", "g/mL", "g/ml");
+        KG_PER_M3("kg/m³", 1.0, "kg/m³", "kg/m3", "g/L", "g/l", "g/litre", "g/liter"),
+        G_PER_CM3("g/cm³", 1000.0, "g/cm³", "g/cm3", "g/mL", "g/ml", "g/cc"),
+        KG_PER_L("kg/L", 1000.0, "kg/L", "kg/l", "kg/litre", "kg/liter", "kg/dm³", "kg/dm3", "t/m³", "t/m3"),
+        LB_PER_GAL("lb/gal", Definitions.POUND_KG / Definitions.US_GALLON_M3, "lb/gal", "lb/US gal");
 
         private final Scale scale;
 
@@ -59,10 +105,10 @@ public final class Units {
         }
     }
 
-    /** Molar volume units: the factor to cm³/mol. */
+    /** Molar volume units: the factor to cm³/mol (1 L = 1 dm³ = 10³ cm³, 1 m³ = 10⁶ cm³). */
     public enum MolarVolume implements Spelled {
         CM3_PER_MOL("cm³/mol", 1.0, "cm³/mol", "cm3/mol", "mL/mol", "ml/mol"),
-        L_PER_MOL("L/mol", 1000.0, "L/mol", "l/mol", "dm³/mol", "dm3/mol"),
+        L_PER_MOL("L/mol", 1000.0, "L/mol", "l/mol", "litre/mol", "liter/mol", "dm³/mol", "dm3/mol"),
         M3_PER_MOL("m³/mol", 1.0e6, "m³/mol", "m3/mol");
 
         private final Scale scale;
@@ -87,7 +133,7 @@ public final class Units {
 
     /** Molar mass units: the factor to g/mol. */
     public enum MolarMass implements Spelled {
-        G_PER_MOL("g/mol", 1.0, "g/mol"),
+        G_PER_MOL("g/mol", 1.0, "g/mol", "kg/kmol"),
         KG_PER_MOL("kg/mol", 1000.0, "kg/mol");
 
         private final Scale scale;
@@ -142,7 +188,7 @@ public final class Units {
 
     /** A unit with a display symbol and the spellings a card may use for it. */
     public interface Spelled {
-        /** The unit's symbol, spellings and its factor (or, for a temperature scale, its offset) to internal units. */
+        /** The unit's symbol, spellings, and its factor (and, for a temperature scale, offset) to internal units. */
         Scale scale();
 
         default String symbol() {
@@ -154,16 +200,67 @@ public final class Units {
         }
     }
 
-    /** What every unit enum holds: its display symbol, its factor (or offset) to internal units, its spellings. */
+    /**
+     * What every unit enum holds: its display symbol, its spellings, and how a value converts to internal units,
+     * internal = (value − zero)·factor + offset. Zero and offset are 0 except for the temperature scales, where a
+     * value is a point on the scale rather than an amount.
+     */
     public static final class Scale {
         final String symbol;
+        final double zero;
         final double factor;
+        final double offset;
         final String[] spellings;
 
-        Scale(String symbol, double factor, String[] spellings) {
+        /** A unit whose value converts by a factor alone. */
+        public Scale(String symbol, double factor, String[] spellings) {
+            this(symbol, 0.0, factor, 0.0, spellings);
+        }
+
+        Scale(String symbol, double zero, double factor, double offset, String[] spellings) {
             this.symbol = symbol;
+            this.zero = zero;
             this.factor = factor;
+            this.offset = offset;
             this.spellings = spellings;
+        }
+
+        /** (value − zero)·factor + offset; for a unit without zero and offset, exactly value·factor. */
+        double toInternal(double v) {
+            return zero == 0.0 && offset == 0.0 ? v * factor : (v - zero) * factor + offset;
+        }
+
+        /** The inverse of {@link #toInternal}. */
+        double fromInternal(double v) {
+            return zero == 0.0 && offset == 0.0 ? v / factor : (v - offset) / factor + zero;
+        }
+
+        /** Whether {@code text} is one of the spellings, exactly. */
+        public boolean spells(String text) {
+            for (String s : spellings) {
+                if (s.equals(text)) {
+                    return true;
+                }
+            }
+            return false;
+        }
+
+        /** Internal units per unit of this one (per degree, for a temperature scale). */
+        public double factor() {
+            return factor;
+        }
+    }
+
+    /** Exact definitions of the trade's units, shared by density, mass and volume units (NIST SP 811 (2008), B.8). */
+    public static final class Definitions {
+        /** The avoirdupois pound in kg, exact. */
+        public static final double POUND_KG = 0.45359237;
+        /** The US liquid gallon in m³ (231 in³), exact. */
+        public static final double US_GALLON_M3 = 3.785411784e-3;
+        /** The imperial gallon in m³, exact. */
+        public static final double IMPERIAL_GALLON_M3 = 4.54609e-3;
+
+        private Definitions() {
         }
     }
 
@@ -213,10 +310,8 @@ public final class Units {
     static <E extends Enum<E> & Spelled> E lookup(Class<E> type, String text) {
         String t = text.trim();
         for (E e : type.getEnumConstants()) {
-            for (String s : e.spellings()) {
-                if (s.equals(t)) {
-                    return e;
-                }
+            if (e.scale().spells(t)) {
+                return e;
             }
         }
         return null;
@@ -224,13 +319,25 @@ public final class Units {
 
     /** All accepted spellings, for messages. */
     static <E extends Enum<E> & Spelled> String accepted(Class<E> type) {
+        return Units.accepted(type.getEnumConstants());
+    }
+
+    /**
+     * The accepted spellings of these units, grouped by unit for a message: "K; °C (or ºC, degC, C); …", each unit's
+     * symbol first and its other spellings in brackets.
+     */
+    public static String accepted(Spelled... units) {
         StringBuilder b = new StringBuilder();
-        for (E e : type.getEnumConstants()) {
-            for (String s : e.spellings()) {
-                if (b.length() > 0) {
-                    b.append(", ");
+        for (Spelled u : units) {
+            b.append(b.length() == 0 ? "" : "; ").append(u.symbol());
+            String others = "";
+            for (String s : u.spellings()) {
+                if (!s.equals(u.symbol())) {
+                    others += (others.isEmpty() ? "" : ", ") + s;
                 }
-                b.append(s);
+            }
+            if (!others.isEmpty()) {
+                b.append(" (or ").append(others).append(')');
             }
         }
         return b.toString();

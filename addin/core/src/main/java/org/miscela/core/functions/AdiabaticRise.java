@@ -23,9 +23,10 @@ final class AdiabaticRise {
     }
 
     /**
-     * {@link CardFunctions#adiabaticRise}: the balance Σ n_k ∫_T^T_f Cp_k dT + N·H^E(x, T_f) = 0 is bracketed by
-     * steps doubling away from T (at most {@link #SEARCH_SPAN} K) on the side the heat of mixing drives the batch,
-     * then solved by Brent's method; T_f must lie inside the card's validity range unless it may extrapolate.
+     * {@link CardFunctions#adiabaticRise}, in degrees of the card's temperature scale: the balance
+     * Σ n_k ∫_T^T_f Cp_k dT + N·H^E(x, T_f) = 0 is bracketed by steps doubling away from T (at most
+     * {@link #SEARCH_SPAN} K) on the side the heat of mixing drives the batch, then solved by Brent's method; T_f must
+     * lie inside the card's validity range unless it may extrapolate.
      */
     static double of(Card card, double[] amounts, AmountBasis basis, double t, Extrapolation e) {
         double[] n = CardFunctions.amountsToMoles(card, amounts, basis);
@@ -84,7 +85,7 @@ final class AdiabaticRise {
             throw PointChecks.nonPhysical(card, card.units().temperature().fromKelvin(end), "mixture heat capacity",
                     cp);
         }
-        return end - start;
+        return card.units().temperature().differenceFromKelvin(end - start);
     }
 
     /**

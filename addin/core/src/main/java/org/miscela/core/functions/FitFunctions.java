@@ -48,7 +48,8 @@ public final class FitFunctions {
         }
         RedlichKisterFit fit = RedlichKisterFitter.excessVolumesAtOffsets(x1, tau, excess, orderInX, orderInT,
                 weights);
-        return rkOutput(fit, output, 1.0, fit.leastSquares().residuals(), 1.0, "", "excess volumes");
+        return rkOutput(fit, output, 1.0, Units.Temperature.KELVIN, fit.leastSquares().residuals(), 1.0, "",
+                "excess volumes");
     }
 
     /**
@@ -117,7 +118,7 @@ public final class FitFunctions {
             return statistics(fit.leastSquares(), u.density().fromKgPerM3(1.0), " [" + densityUnit + "]",
                     "densities (deviations in density)", residuals[worst], worst);
         }
-        return rkOutput(fit, output, volumeScale, residuals, u.density().fromKgPerM3(1.0),
+        return rkOutput(fit, output, volumeScale, u.temperature(), residuals, u.density().fromKgPerM3(1.0),
                 " [" + densityUnit + "]", "densities (deviations in density)");
     }
 
@@ -142,15 +143,30 @@ public final class FitFunctions {
         }
     }
 
+    /**
+     * One output of a Redlich–Kister fit whose coefficients are per K^j: volumes scaled by {@code volumeScale}, and
+     * each coefficient a_kj made per degree^j of {@code scale} (the temperature scale of the card, for a density fit;
+     * kelvin, which changes nothing, for a fit in the data's own units).
+     */
     private static Object[][] rkOutput(RedlichKisterFit fit, FitOutput output, double volumeScale,
-            double[] residuals, double deviationScale, String deviationUnit, String fittedTo) {
+            Units.Temperature scale, double[] residuals, double deviationScale, String deviationUnit,
+            String fittedTo) {
         switch (output) {
             case COEFFICIENTS:
-                return matrix(fit.coefficients(), volumeScale);
+                return matrix(perDegree(fit.coefficients(), scale), volumeScale);
             case STANDARD_ERRORS:
-                return matrix(fit.standardErrors(), volumeScale);
-            case COVARIANCE:
-                return matrix(fit.leastSquares().covariance(), volumeScale * volumeScale);
+                return matrix(perDegree(fit.standardErrors(), scale), volumeScale);
+            case COVARIANCE: {
+                double[][] c = fit.leastSquares().covariance();
+                int terms = fit.orderInT() + 1;
+                double[][] out = new double[c.length][c.length];
+                for (int p = 0; p < c.length; p++) {
+                    for (int q = 0; q < c.length; q++) {
+                        out[p][q] = scale.fromPerKelvin(c[p][q], p % terms + q % terms);
+                    }
+                }
+                return matrix(out, volumeScale * volumeScale);
+            }
             case RESIDUALS:
                 return column(residuals);
             case STATISTICS:
@@ -238,6 +254,18 @@ public final class FitFunctions {
             tau[i] = temperatures[i] - reference;
         }
         return tau;
+    }
+
+    /** a[k][j] per K^j as per degree^j of the scale. */
+    private static double[][] perDegree(double[][] a, Units.Temperature scale) {
+        double[][] out = new double[a.length][];
+        for (int k = 0; k < a.length; k++) {
+            out[k] = new double[a[k].length];
+            for (int j = 0; j < a[k].length; j++) {
+                out[k][j] = scale.fromPerKelvin(a[k][j], j);
+            }
+        }
+        return out;
     }
 
     private static Object[][] column(double[] v) {

@@ -101,12 +101,14 @@ final class Trace {
             tr.add("mixture density [" + u.density().symbol() + "]",
                     u.density().fromKgPerM3(PointChecks.physicalDensity(card, x, kelvin, t)));
         } else {
-            String cpUnit = u.enthalpy().symbol() + "/K";
-            tr.add("excess heat capacity dHE/dT [" + cpUnit + "]", scale * m.excessHeatCapacity(x, kelvin));
+            Units.Temperature scaleT = u.temperature();
+            String cpUnit = u.enthalpy().symbol() + "/" + scaleT.degree();
+            tr.add("excess heat capacity dHE/dT [" + cpUnit + "]",
+                    scaleT.fromPerKelvin(scale * m.excessHeatCapacity(x, kelvin), 1));
             for (int k = 0; k < x.length; k++) {
                 HeatCapacity c = card.components().get(k).heatCapacity();
                 tr.add("heat capacity: " + name(card, k) + " [" + cpUnit + "]",
-                        c == null ? "not on the card" : (Object) (scale * c.at(kelvin)));
+                        c == null ? "not on the card" : (Object) scaleT.fromPerKelvin(scale * c.at(kelvin), 1));
             }
         }
         return tr.rows.toArray(new Object[0][]);

@@ -112,6 +112,9 @@ class CardReaderTest {
                         base(c -> c.set(13, "density coefficients", "alpha", 789.3, 0.1))),
                 bad("unknown temperature unit", Problem.UNKNOWN_UNIT, 4, "\"kelvin\"",
                         base(c -> c.set(4, "temperature unit", "kelvin"))),
+                bad("the accepted temperature units, grouped by unit", Problem.UNKNOWN_UNIT, 4,
+                        "use one of: °C (or ºC, ˚C, ℃, degC, C); K; °F (or ºF, ˚F, ℉, degF, F).",
+                        base(c -> c.set(4, "temperature unit", "°R"))),
                 bad("unit spelling is case sensitive", Problem.UNKNOWN_UNIT, 5, "\"KG/M3\"",
                         base(c -> c.set(5, "density unit", "KG/M3"))),
                 bad("unknown molar volume unit", Problem.UNKNOWN_UNIT, 6, "cm³/mol",
@@ -239,7 +242,7 @@ class CardReaderTest {
                         ternary(c -> c.row("missing pairs", "zero"))),
                 bad("excess enthalpy without an enthalpy unit", Problem.MISSING_ROW, 0, "\"enthalpy unit\"",
                         v2(c -> c.row("excess enthalpy A0", "alpha + beta", -800))),
-                bad("unknown enthalpy unit", Problem.UNKNOWN_UNIT, 20, "J/mol, kJ/mol",
+                bad("unknown enthalpy unit", Problem.UNKNOWN_UNIT, 20, "J/mol; kJ/mol",
                         v2(c -> c.row("enthalpy unit", "cal/mol"))),
                 bad("heat capacity without an enthalpy unit", Problem.MISSING_ROW, 0, "\"enthalpy unit\"",
                         v2(c -> c.row("heat capacity", "alpha", 112.0))),
@@ -336,7 +339,8 @@ class CardReaderTest {
     @Test
     void densityInGramPerCm3EqualsKgPerM3Internally() {
         Card kg = TestCard.base().read();
-        for (String spelling : new String[] {"g/cm³", "g/cm3", "g/mL", "g/ml"}) {
+        for (String spelling : new String[] {"g/cm³", "g/cm3", "g/mL", "g/ml", "g/cc", "kg/L", "kg/l", "kg/litre",
+            "kg/liter", "kg/dm³", "kg/dm3", "t/m³", "t/m3"}) {
             Card g = TestCard.base().set(5, "density unit", spelling)
                     .set(13, "density coefficients", "alpha", 0.7893)
                     .set(15, "density coefficients", "beta", 0.997).read();
@@ -349,10 +353,34 @@ class CardReaderTest {
             double rhoG = CardFunctions.density(g, 0.4, T, Extrapolation.AS_CARD);
             assertEquals(rhoKg / 1000.0, rhoG, 1e-12, spelling);
         }
-        for (String spelling : new String[] {"kg/m3", "g/L", "g/l"}) {
+        for (String spelling : new String[] {"kg/m3", "g/L", "g/l", "g/litre", "g/liter"}) {
             Card same = TestCard.base().set(5, "density unit", spelling).read();
             assertEquals(789.3, same.components().get(0).density().at(T), 0.0, spelling);
         }
+        // a card in kg/L answers in kg/L and says so
+        Card kgPerL = TestCard.base().set(5, "density unit", "kg/L").set(13, "density coefficients", "alpha", 0.7893)
+                .set(15, "density coefficients", "beta", 0.997).read();
+        assertEquals("kg/L", kgPerL.units().density().symbol());
+    }
+
+    /**
+     * Pounds per US gallon: 1 lb/gal = 0.45359237 kg / 0.003785411784 m³ = 119.826 427 3 kg/m³ (both factors exact,
+     * NIST SP 811 (2008), B.8; its table lists lb/gal (U.S.) as 1.198 264 E+02 kg/m³). Water of 997 kg/m³ is
+     * 997/119.826427 = 8.32037 lb/gal.
+     */
+    @Test
+    void densityInPoundsPerUsGallon() {
+        Card kg = TestCard.base().read();
+        for (String spelling : new String[] {"lb/gal", "lb/US gal"}) {
+            Card lb = TestCard.base().set(5, "density unit", spelling)
+                    .set(13, "density coefficients", "alpha", 789.3 / 119.826427316897)
+                    .set(15, "density coefficients", "beta", 997.0 / 119.826427316897).read();
+            assertEquals(997.0, lb.components().get(1).density().at(T), 1e-9, spelling);
+            assertEquals(CardFunctions.density(kg, 0.4, T, Extrapolation.AS_CARD) / 119.826427316897,
+                    CardFunctions.density(lb, 0.4, T, Extrapolation.AS_CARD), 1e-12, spelling);
+        }
+        assertEquals(1.198264e2, Units.Density.LB_PER_GAL.toKgPerM3(1.0), 1e-4, "NIST SP 811 B.8, rounded there");
+        assertEquals(8.32037, Units.Density.LB_PER_GAL.fromKgPerM3(997.0), 5e-6);
     }
 
     @Test
@@ -369,7 +397,8 @@ class CardReaderTest {
 
     @Test
     void celsiusTemperatureUnit() {
-        for (String spelling : new String[] {"°C", "degC", "C"}) {
+        // "ºC" (ordinal indicator) and "˚C" (ring above) are what keyboards give for a degree sign that looks right
+        for (String spelling : new String[] {"°C", "ºC", "˚C", "℃", "degC", "C"}) {
             Card c = TestCard.base().set(4, "temperature unit", spelling)
                     .set(8, "valid temperature", 15, 35)
                     .set(12, "density model", "alpha", "polynomial")
@@ -396,11 +425,53 @@ class CardReaderTest {
         assertEquals(Units.Temperature.KELVIN, TestCard.base().read().units().temperature());
     }
 
+    /**
+     * A card in °F (NIST SP 811 (2008), B.9: T/K = (t/°F + 459.67)/1.8; one °F is 5/9 K): 59 to 95 °F is 288.15 to
+     * 308.15 K; a density slope of −0.8 kg/m³ per K is −0.8·5/9 per °F about 68 °F (293.15 K); A0's slope of 0.02
+     * cm³/mol per K is 0.02·5/9 per °F about 77 °F (298.15 K). Function arguments are read in °F: 80.6 °F is
+     * 300.15 K.
+     */
+    @Test
+    void fahrenheitTemperatureUnit() {
+        Card k = TestCard.base().set(12, "density model", "alpha", "polynomial")
+                .set(13, "density coefficients", "alpha", 790, -0.8)
+                .row("density reference temperature", "alpha", 293.15)
+                .set(17, "excess volume A0", "alpha + beta", -4.0, 0.02)
+                .row("excess volume reference temperature", "alpha + beta", 298.15).read();
+        for (String spelling : new String[] {"°F", "ºF", "˚F", "℉", "degF", "F"}) {
+            Card f = TestCard.base().set(4, "temperature unit", spelling)
+                    .set(8, "valid temperature", 59, 95)
+                    .set(12, "density model", "alpha", "polynomial")
+                    .set(13, "density coefficients", "alpha", 790, -0.8 * 5 / 9)
+                    .row("density reference temperature", "alpha", 68)
+                    .set(17, "excess volume A0", "alpha + beta", -4.0, 0.02 * 5 / 9)
+                    .row("excess volume reference temperature", "alpha + beta", 77).read();
+            assertEquals(Units.Temperature.FAHRENHEIT, f.units().temperature(), spelling);
+            assertEquals(288.15, f.validity().lowestKelvin(), 1e-12, spelling);
+            assertEquals(308.15, f.validity().highestKelvin(), 1e-12, spelling);
+            assertEquals(790.0, f.components().get(0).density().at(293.15), 1e-9, spelling);
+            assertEquals(782.0, f.components().get(0).density().at(303.15), 1e-9, spelling);
+            assertEquals(298.15, f.excessVolume(0, 1).referenceKelvin(), 1e-12, spelling);
+            assertEquals(-4.0 + 0.02 * 5, f.excessVolume(0, 1).coefficientAt(0, 303.15), 1e-12, spelling);
+            assertEquals(CardFunctions.density(k, 0.3, 300.15, Extrapolation.AS_CARD),
+                    CardFunctions.density(f, 0.3, 80.6, Extrapolation.AS_CARD), 1e-9, spelling);
+        }
+        assertEquals(273.15, Units.Temperature.FAHRENHEIT.toKelvin(32), 1e-12, "ice point, NIST SP 811 B.9");
+        assertEquals(373.15, Units.Temperature.FAHRENHEIT.toKelvin(212), 1e-12, "steam point, 212 °F");
+        assertEquals(0.0, Units.Temperature.FAHRENHEIT.toKelvin(-459.67), 1e-12, "absolute zero, −459.67 °F");
+        assertEquals(-40.0, Units.Temperature.FAHRENHEIT.fromKelvin(Units.Temperature.CELSIUS.toKelvin(-40)), 1e-12,
+                "−40 °F is −40 °C");
+        assertEquals(1.8, Units.Temperature.FAHRENHEIT.differenceFromKelvin(1.0), 1e-15, "1 K = 1.8 °F");
+        assertEquals("°F", Units.Temperature.FAHRENHEIT.degree());
+        assertEquals("K", Units.Temperature.CELSIUS.degree());
+    }
+
     @Test
     void molarVolumeUnits() {
         Card cm3 = TestCard.base().read();
         Object[][] spellings = {{"L/mol", 1e-3}, {"l/mol", 1e-3}, {"dm³/mol", 1e-3}, {"dm3/mol", 1e-3},
-            {"m³/mol", 1e-6}, {"m3/mol", 1e-6}, {"mL/mol", 1.0}, {"ml/mol", 1.0}, {"cm3/mol", 1.0}};
+            {"m³/mol", 1e-6}, {"m3/mol", 1e-6}, {"mL/mol", 1.0}, {"ml/mol", 1.0}, {"cm3/mol", 1.0},
+            {"litre/mol", 1e-3}, {"liter/mol", 1e-3}};
         for (Object[] s : spellings) {
             double f = (Double) s[1];
             Card c = TestCard.base().set(6, "molar volume unit", s[0])
@@ -424,6 +495,10 @@ class CardReaderTest {
                 .set(10, "component", "alpha", 0.04607).set(11, "component", "beta", 0.018015).read();
         assertEquals(46.07, c.components().get(0).molarMass(), 1e-9);
         assertEquals(18.015, c.components().get(1).molarMass(), 1e-9);
+        // kg/kmol is g/mol (10³/10³)
+        Card kmol = TestCard.base().set(7, "molar mass unit", "kg/kmol").read();
+        assertEquals(46.07, kmol.components().get(0).molarMass(), 0.0);
+        assertEquals("g/mol", kmol.units().molarMass().symbol());
     }
 
     @Test

@@ -90,6 +90,47 @@ class FitFunctionsTest {
         assertTrue(Math.abs((Double) stats[5][1]) > s, "largest |residual| " + stats[5][1] + " against SD " + s);
     }
 
+    /**
+     * A density fit on a card in °F takes temperatures in °F and gives each a_kj per °F^j: the same data as in °C
+     * (OIML R 22 at 15 and 25 °C, 59 and 77 °F, with seeded noise), fitted about 20 °C = 68 °F, give a_kj(°F) =
+     * a_kj(°C)·(5/9)^j, standard errors alike, covariance entries times (5/9)^(j+j'), and the same residuals (one
+     * degree Fahrenheit is 5/9 K, NIST SP 811 (2008), B.9).
+     */
+    @Test
+    void densityFitOnACardInFahrenheit() {
+        Card celsius = CardReader.readPureComponents(CARD);
+        Card fahrenheit = CardReader.readPureComponents(TestCards.cells("ethanol-water-oiml-fahrenheit.tsv"));
+        Random r = new Random(7);
+        int n = 30;
+        double[] xs = new double[n];
+        double[] rho = new double[n];
+        double[] t = new double[n];
+        double[] tf = new double[n];
+        for (int i = 0; i < n; i++) {
+            double p = (i % 15 + 0.5) / 15;
+            t[i] = i < 15 ? 15 : 25;
+            tf[i] = i < 15 ? 59 : 77;
+            xs[i] = x(p);
+            rho[i] = Oiml22.density(p, t[i]) + 0.05 * r.nextGaussian();
+        }
+        int orderInT = 1;
+        for (FitOutput out : new FitOutput[] {FitOutput.COEFFICIENTS, FitOutput.STANDARD_ERRORS,
+            FitOutput.COVARIANCE, FitOutput.RESIDUALS}) {
+            Object[][] c = FitFunctions.density(celsius, 0, 1, xs, rho, t, 3, orderInT, 20, null, out);
+            Object[][] f = FitFunctions.density(fahrenheit, 0, 1, xs, rho, tf, 3, orderInT, 68, null, out);
+            assertEquals(c.length, f.length);
+            for (int i = 0; i < c.length; i++) {
+                for (int j = 0; j < c[i].length; j++) {
+                    int power = out == FitOutput.COVARIANCE ? i % (orderInT + 1) + j % (orderInT + 1)
+                            : out == FitOutput.RESIDUALS ? 0 : j;
+                    double expected = (Double) c[i][j] * Math.pow(5.0 / 9.0, power);
+                    assertEquals(expected, (Double) f[i][j], 1e-9 * Math.abs(expected) + 1e-15,
+                            out + " " + i + "," + j);
+                }
+            }
+        }
+    }
+
     static double worstBetween(Card pure, double[] xs, double[] rho, double[] t, int order) {
         Object[][] a = FitFunctions.density(pure, 0, 1, xs, rho, t, order, 0, Double.NaN, null, FitOutput.COEFFICIENTS);
         double[][] c = new double[order + 1][1];
