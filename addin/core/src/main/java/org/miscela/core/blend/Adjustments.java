@@ -31,8 +31,9 @@ import org.miscela.core.card.Extrapolation;
  * and, for positive partial molar volumes, the volume grow with N' along the family, since every component's moles
  * do.
  *
- * <p>Temperatures in the card's unit; a volume limit is at its own temperature; the resulting batch is reported at
- * the temperature t. Model estimates: where they feed custody transfer or filling decisions, defer to calibrated
+ * <p>Temperatures in the card's unit; a volume limit is at its own temperature, and a limit in conventional mass is
+ * weighed at its own temperature (the mixture's density there converts it); the resulting batch is reported at the
+ * temperature t. Model estimates: where they feed custody transfer or filling decisions, defer to calibrated
  * measurement, local codes and licensed practice.
  */
 public final class Adjustments {
@@ -93,7 +94,7 @@ public final class Adjustments {
             }
             total = exactTotal;
         } else {
-            double kelvin = limit.isVolume() ? Checks.kelvin(card, limit.temperature(), e) : Double.NaN;
+            double kelvin = limit.needsTemperature() ? Checks.kelvin(card, limit.temperature(), e) : Double.NaN;
             double current = limit.measureOf(card, n, kelvin);
             if (current > limit.base() * (1.0 + ACCURACY)) {
                 throw Problem.LIMIT_BELOW_BATCH.raise(Show.number(limit.unit().fromBase(current)),
@@ -159,7 +160,10 @@ public final class Adjustments {
         return after;
     }
 
-    /** N' at which the closest composition's measure (moles, mass, or volume at the limit's temperature) is the limit. */
+    /**
+     * N' at which the closest composition's measure (moles, mass, or volume or conventional mass at the limit's
+     * temperature) is the limit.
+     */
     private static double totalAtLimit(Card card, double[] n, double[] goal, Quantity limit, double kelvin,
             double exactTotal, boolean fill) {
         double wanted = limit.base();

@@ -6,8 +6,9 @@ import org.miscela.core.card.Extrapolation;
 
 /**
  * Amounts of each component of a batch, in card order: moles, masses, or volumes of the pure liquids, each volume at
- * the temperature it was measured at (its tank's temperature). Immutable; the values are checked against a card when
- * used, so the message can name the component.
+ * the temperature it was measured at (its tank's temperature). Masses weighed in air (conventional mass) come with
+ * the temperature each was weighed at too, whose pure density turns them into true masses. Immutable; the values are
+ * checked against a card when used, so the message can name the component.
  */
 public final class Amounts {
     private final double[] values;
@@ -26,17 +27,17 @@ public final class Amounts {
         this.temperatures = temperatures == null ? null : temperatures.clone();
     }
 
-    /** Moles or masses; a volume unit here fails, because a volume needs its temperature. */
+    /** Moles or true masses; a volume or a conventional mass here fails, because it needs its temperature. */
     public static Amounts of(double[] values, AmountUnit unit) {
-        if (unit != null && unit.dimension() == AmountUnit.Dimension.VOLUME) {
-            throw Problem.NEEDS_TEMPERATURES.raise("amounts");
+        if (unit != null && unit.needsTemperature()) {
+            throw Problem.NEEDS_TEMPERATURES.raise("amounts", unit.needingTemperature(true));
         }
         return new Amounts(values, unit, null);
     }
 
     /**
-     * Any amounts; {@code temperatures} (card unit, one per component) are read only when the unit is a volume, and
-     * then only for components whose volume is not zero.
+     * Any amounts; {@code temperatures} (card unit, one per component) are read only when the unit is a volume or a
+     * conventional mass, and then only for components whose amount is not zero.
      */
     public static Amounts of(double[] values, AmountUnit unit, double[] temperatures) {
         return new Amounts(values, unit, temperatures);
@@ -58,10 +59,9 @@ public final class Amounts {
     /** Moles of each component, checked; {@code what} names the amounts in messages ("amounts in the batch"). */
     double[] moles(Card card, String what, Extrapolation e) {
         Checks.length(card, values, what);
-        boolean volume = unit.dimension() == AmountUnit.Dimension.VOLUME;
-        if (volume) {
+        if (unit.needsTemperature()) {
             if (temperatures == null) {
-                throw Problem.NEEDS_TEMPERATURES.raise(what);
+                throw Problem.NEEDS_TEMPERATURES.raise(what, unit.needingTemperature(true));
             }
             Checks.length(card, temperatures, "temperatures of the " + what);
         }
@@ -84,6 +84,10 @@ public final class Amounts {
                     moles[k] = base;
                     break;
                 case MASS:
+                    if (unit.isConventional() && v > 0.0) {
+                        double t = Checks.temperature(temperatures[k], "temperature of the weighing of " + name);
+                        base *= Checks.trueMassPerConventional(card, k, t, e);
+                    }
                     moles[k] = base / Checks.molarMass(card, k);
                     break;
                 default:

@@ -1,5 +1,7 @@
 package org.miscela.core.blend;
 
+import org.miscela.core.card.Card;
+
 /**
  * A mixed batch at one temperature: its components' moles, total moles and mass, volume and density, and the
  * contraction on mixing. Immutable; values are kept in mol, g, cm³ and returned in the unit asked for.
@@ -20,8 +22,12 @@ public final class BatchTotals {
     private final double pureVolume;
     private final double density;
     private final double temperature;
+    /** The card, for the words of a refusal of a conventional mass. */
+    private final Card card;
 
-    BatchTotals(double[] moles, double mass, double volume, double pureVolume, double density, double temperature) {
+    BatchTotals(Card card, double[] moles, double mass, double volume, double pureVolume, double density,
+            double temperature) {
+        this.card = card;
         this.moles = moles.clone();
         this.totalMoles = Checks.sum(moles);
         this.mass = mass;
@@ -50,8 +56,14 @@ public final class BatchTotals {
         return unit.require(AmountUnit.Dimension.AMOUNT, "total amount").fromBase(totalMoles);
     }
 
+    /** The mass; in a conventional unit, what the batch weighs in air at its temperature (OIML D 28). */
     public double mass(AmountUnit unit) {
-        return unit.require(AmountUnit.Dimension.MASS, "mass").fromBase(mass);
+        unit.require(AmountUnit.Dimension.MASS, "mass");
+        if (!unit.isConventional()) {
+            return unit.fromBase(mass);
+        }
+        double kgPerM3 = 1000.0 * mass / volume;
+        return unit.fromBase(mass / Checks.trueMassPerConventional(card, kgPerM3, "the mixture", temperature));
     }
 
     /** The mixture's volume at {@link #temperature()}. */

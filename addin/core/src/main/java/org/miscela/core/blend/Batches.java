@@ -52,7 +52,7 @@ public final class Batches {
             pure += moles[k] * Checks.pureMolarVolume(card, k, t, e);
         }
         double density = card.units().density().fromKgPerM3(Checks.density(card, x, t, e));
-        return new BatchTotals(moles, mass, total * vm, pure, density, t);
+        return new BatchTotals(card, moles, mass, total * vm, pure, density, t);
     }
 
     static double[] positiveTotal(Card card, double[] moles, String what) {

@@ -59,7 +59,7 @@ public final class BlendFunctions {
      */
     public static double batch(Card card, double[] amounts, String unit, double[] storageTemperatures, double t,
             String result, String resultUnit, Extrapolation e) {
-        BatchTotals b = Batches.totals(card, amounts(card, amounts, unit, storageTemperatures), t, e);
+        BatchTotals b = Batches.totals(card, amounts(card, amounts, unit, storageTemperatures, t), t, e);
         String r = result == null ? "volume" : result.trim().toLowerCase(java.util.Locale.ROOT);
         switch (r) {
             case "volume":
@@ -83,9 +83,10 @@ public final class BlendFunctions {
     }
 
     /**
-     * What to charge of each component to make {@code quantity} (a volume at t, a mass, or moles) of the target
-     * composition: amounts in {@code resultUnit} (kg by default; a volume unit gives each pure liquid's volume at its
-     * storage temperature, which {@code storageTemperatures} then must give).
+     * What to charge of each component to make {@code quantity} (a volume at t, a mass, or moles; a conventional mass
+     * is weighed at t) of the target composition: amounts in {@code resultUnit} (kg by default; a volume unit gives
+     * each pure liquid's volume at its storage temperature, which {@code storageTemperatures} then must give; a
+     * conventional mass is each weighed at its storage temperature, or at t when none is given).
      */
     public static double[] recipe(Card card, double quantity, String unit, double t, double[] composition,
             CompositionBasis basis, double[] storageTemperatures, String resultUnit, Extrapolation e) {
@@ -93,10 +94,12 @@ public final class BlendFunctions {
         Quantity target = Quantity.of(quantity, u, t);
         AmountUnit out = resultUnit == null ? AmountUnit.KG : AmountUnit.lookup(resultUnit);
         double[] storage = perComponent(card, storageTemperatures);
-        if (out.dimension() != AmountUnit.Dimension.VOLUME) {
+        if (out.isConventional()) {
+            storage = weighedAt(card, storage, t);
+        } else if (out.dimension() != AmountUnit.Dimension.VOLUME) {
             storage = null;
         } else if (storage == null) {
-            throw Problem.NO_STORAGE_TEMPERATURES.raise();
+            throw Problem.NO_STORAGE_TEMPERATURES.raise(out.needingTemperature(true));
         }
         return Recipes.forTarget(card, target, composition, basis, storage, e).amounts(out);
     }
@@ -105,18 +108,24 @@ public final class BlendFunctions {
      * How much of each component to add to the batch to reach the target composition: "least" additions (the
      * default), "within" a ceiling quantity (the closest composition when the target does not fit), or "make up" to
      * exactly that quantity. Returns the additions in {@code resultUnit} (kg by default), or with result "volume" the
-     * resulting batch volume in L at t, or with "summary" a sentence saying whether the target is reached.
+     * resulting batch volume in L at t, or with "summary" a sentence saying whether the target is reached. Masses
+     * weighed in air (conventional mass) are weighed at t: the batch's amounts, the limit (the mixture's density at t)
+     * and the additions (each pure component's) alike.
      */
     public static Object adjust(Card card, double[] amounts, String unit, double[] storageTemperatures,
             double[] target, CompositionBasis basis, double t, String mode, double limit, String limitUnit,
             String result, String resultUnit, Extrapolation e) {
-        Amounts batch = amounts(card, amounts, unit, storageTemperatures);
+        Amounts batch = amounts(card, amounts, unit, storageTemperatures, t);
         String m = mode == null ? "least" : mode.trim().toLowerCase(java.util.Locale.ROOT);
+        String r = result == null ? "additions" : result.trim().toLowerCase(java.util.Locale.ROOT);
+        double[] storage = perComponent(card, storageTemperatures);
+        if (r.equals("additions") && resultUnit != null && AmountUnit.lookup(resultUnit).isConventional()) {
+            storage = weighedAt(card, storage, t);
+        }
         Adjustment a;
         switch (m) {
             case "least":
-                a = Adjustments.leastAdditions(card, batch, target, basis, t, perComponent(card, storageTemperatures),
-                        e);
+                a = Adjustments.leastAdditions(card, batch, target, basis, t, storage, e);
                 break;
             case "within":
             case "make up":
@@ -124,14 +133,12 @@ public final class BlendFunctions {
                     throw Problem.BLANK_ARGUMENT.raise("limit and its unit (needed for '" + m + "')");
                 }
                 Quantity q = Quantity.of(limit, AmountUnit.lookup(limitUnit), t);
-                double[] storage = perComponent(card, storageTemperatures);
                 a = m.equals("within") ? Adjustments.within(card, batch, target, basis, q, t, storage, e)
                         : Adjustments.makeUpTo(card, batch, target, basis, q, t, storage, e);
                 break;
             default:
                 throw Problem.UNKNOWN_RESULT.raise(mode.trim(), "least, within, make up");
         }
-        String r = result == null ? "additions" : result.trim().toLowerCase(java.util.Locale.ROOT);
         switch (r) {
             case "additions":
                 return a.additions().amounts(resultUnit == null ? AmountUnit.KG : AmountUnit.lookup(resultUnit));
@@ -152,7 +159,7 @@ public final class BlendFunctions {
     public static double additionVolume(Card card, double[] amounts, String unit, double[] storageTemperatures,
             int component, double added, String addedUnit, double t, String result, String resultUnit,
             Extrapolation e) {
-        Amounts batch = amounts(card, amounts, unit, storageTemperatures);
+        Amounts batch = amounts(card, amounts, unit, storageTemperatures, t);
         AmountUnit au = AmountUnit.lookup(addedUnit == null ? unit : addedUnit);
         double addedAt = storageTemperatures == null ? t
                 : storageTemperatures.length == 1 ? storageTemperatures[0] : storageTemperatures[component];
@@ -211,10 +218,22 @@ public final class BlendFunctions {
         return t;
     }
 
-    private static Amounts amounts(Card card, double[] values, String unit, double[] storageTemperatures) {
+    /**
+     * The batch's amounts: volumes at their storage temperatures (which must be given); conventional masses weighed at
+     * their storage temperatures, or at the batch's temperature t when none are given.
+     */
+    private static Amounts amounts(Card card, double[] values, String unit, double[] storageTemperatures, double t) {
         AmountUnit u = AmountUnit.lookup(unit == null ? "" : unit);
-        double[] t = perComponent(card, storageTemperatures);
-        return u.dimension() == AmountUnit.Dimension.VOLUME ? Amounts.of(values, u, t) : Amounts.of(values, u);
+        double[] storage = perComponent(card, storageTemperatures);
+        if (u.isConventional()) {
+            return Amounts.of(values, u, weighedAt(card, storage, t));
+        }
+        return u.dimension() == AmountUnit.Dimension.VOLUME ? Amounts.of(values, u, storage) : Amounts.of(values, u);
+    }
+
+    /** Where each pure component is weighed: at its storage temperature, or at t for all when none are given. */
+    private static double[] weighedAt(Card card, double[] storage, double t) {
+        return storage != null ? storage : perComponent(card, new double[] {t});
     }
 
     private static AmountUnit unit(String text, AmountUnit absent, AmountUnit.Dimension dimension, String what) {

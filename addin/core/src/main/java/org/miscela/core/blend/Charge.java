@@ -6,7 +6,8 @@ import org.miscela.core.card.Extrapolation;
 
 /**
  * What to charge of each component, in card order: moles, masses and, when storage temperatures are known, the
- * volumes of the pure liquids to draw, each at its own storage temperature. Immutable; mol, g and cm³ inside.
+ * volumes of the pure liquids to draw, each at its own storage temperature, and the masses a balance shows when each
+ * is weighed in air there (conventional mass). Immutable; mol, g and cm³ inside.
  *
  * <p>Model estimates: where they feed custody transfer or filling decisions, defer to calibrated measurement, local
  * codes and licensed practice.
@@ -15,12 +16,19 @@ public final class Charge {
     private final double[] moles;
     private final double[] masses;
     private final double[] volumes;
+    /** Each pure component's density at its storage temperature, kg/m³ (NaN where none is charged), or null. */
+    private final double[] densities;
     private final double[] temperatures;
+    /** The card, for the words of a refusal of conventional masses. */
+    private final Card card;
 
-    private Charge(double[] moles, double[] masses, double[] volumes, double[] temperatures) {
+    private Charge(Card card, double[] moles, double[] masses, double[] volumes, double[] densities,
+            double[] temperatures) {
+        this.card = card;
         this.moles = moles;
         this.masses = masses;
         this.volumes = volumes;
+        this.densities = densities;
         this.temperatures = temperatures;
     }
 
@@ -32,23 +40,28 @@ public final class Charge {
             masses[k] = moles[k] * Checks.molarMass(card, k);
         }
         double[] volumes = null;
+        double[] densities = null;
         if (temperatures != null) {
             Checks.length(card, temperatures, "storage temperatures");
             volumes = new double[n];
+            densities = new double[n];
             for (int k = 0; k < n; k++) {
+                densities[k] = Double.NaN;
                 if (moles[k] > 0.0) {
                     double t = Checks.temperature(temperatures[k], "storage temperature of "
                             + Checks.name(card, k));
                     volumes[k] = moles[k] * Checks.pureMolarVolume(card, k, t, e);
+                    densities[k] = Checks.pureDensity(card, k, t, e);
                 }
             }
         }
-        return new Charge(moles.clone(), masses, volumes, temperatures == null ? null : temperatures.clone());
+        return new Charge(card, moles.clone(), masses, volumes, densities,
+                temperatures == null ? null : temperatures.clone());
     }
 
     /**
      * Each component's amount in {@code unit}: moles, masses, or volumes of the pure liquids at their storage
-     * temperatures (which needs storage temperatures to have been given).
+     * temperatures, or conventional masses weighed there (both need storage temperatures to have been given).
      */
     public double[] amounts(AmountUnit unit) {
         double[] source;
@@ -57,17 +70,29 @@ public final class Charge {
                 source = moles;
                 break;
             case MASS:
-                source = masses;
+                source = unit.isConventional() ? conventionalMasses(unit) : masses;
                 break;
             default:
                 if (volumes == null) {
-                    throw Problem.NO_STORAGE_TEMPERATURES.raise();
+                    throw Problem.NO_STORAGE_TEMPERATURES.raise(unit.needingTemperature(true));
                 }
                 source = volumes;
         }
         double[] out = new double[source.length];
         for (int k = 0; k < out.length; k++) {
             out[k] = unit.fromBase(source[k]);
+        }
+        return out;
+    }
+
+    private double[] conventionalMasses(AmountUnit unit) {
+        if (densities == null) {
+            throw Problem.NO_STORAGE_TEMPERATURES.raise(unit.needingTemperature(true));
+        }
+        double[] out = new double[masses.length];
+        for (int k = 0; k < out.length; k++) {
+            out[k] = masses[k] > 0.0 ? masses[k] / Checks.trueMassPerConventional(card, densities[k],
+                    Checks.name(card, k), temperatures[k]) : masses[k];
         }
         return out;
     }
@@ -82,8 +107,9 @@ public final class Charge {
         return Amounts.of(amounts(unit), unit, temperatures);
     }
 
-    /** Sum of the masses, in a mass unit. */
+    /** Sum of the masses, in a mass unit (of conventional masses, each weighed at its storage temperature). */
     public double totalMass(AmountUnit unit) {
-        return unit.require(AmountUnit.Dimension.MASS, "total mass").fromBase(Checks.sum(masses));
+        unit.require(AmountUnit.Dimension.MASS, "total mass");
+        return unit.fromBase(Checks.sum(unit.isConventional() ? conventionalMasses(unit) : masses));
     }
 }

@@ -4,6 +4,7 @@ import org.miscela.core.problem.Problem;
 import org.miscela.core.card.Card;
 import org.miscela.core.functions.CardFunctions;
 import org.miscela.core.card.Extrapolation;
+import org.miscela.core.model.ConventionalMass;
 
 /**
  * Argument checks and the card's properties in internal units (K, cm³/mol, kg/m³, g/mol), always through
@@ -85,6 +86,25 @@ final class Checks {
     static double pureMolarVolume(Card card, int k, double t, Extrapolation e) {
         double rho = card.units().density().toKgPerM3(CardFunctions.pureDensity(card, k, t, e));
         return 1000.0 * molarMass(card, k) / rho;
+    }
+
+    /** ρ_k(t) of a pure component in kg/m³, checked. */
+    static double pureDensity(Card card, int k, double t, Extrapolation e) {
+        return card.units().density().toKgPerM3(CardFunctions.pureDensity(card, k, t, e));
+    }
+
+    /**
+     * m/m_c for a body of density {@code kgPerM3} weighed in air (OIML D 28, {@link ConventionalMass}); {@code what}
+     * ("ethanol", "the mixture") and t (card unit) name it in the refusal when it is not denser than air.
+     */
+    static double trueMassPerConventional(Card card, double kgPerM3, String what, double t) {
+        return ConventionalMass.trueMassPerConventional(kgPerM3, what, t, card.units().temperature().symbol(),
+                AmountUnit.Dimension.MASS.trueUnits());
+    }
+
+    /** m/m_c of pure component k weighed at t (card unit). */
+    static double trueMassPerConventional(Card card, int k, double t, Extrapolation e) {
+        return trueMassPerConventional(card, pureDensity(card, k, t, e), name(card, k), t);
     }
 
     /** V_m(x, t) in cm³/mol, checked (validity range, physical). */

@@ -3,10 +3,12 @@ package org.miscela.core.blend;
 import org.miscela.core.problem.Problem;
 import org.miscela.core.card.Card;
 import org.miscela.core.card.Extrapolation;
+import org.miscela.core.model.ConventionalMass;
 
 /**
  * One quantity of a batch or of a component: an amount of substance, a mass, or a volume at a stated temperature
- * (card unit). Finite and greater than zero. Immutable.
+ * (card unit). A mass weighed in air (conventional mass) comes with a temperature too: the density of what was weighed
+ * at that temperature turns it into a true mass. Finite and greater than zero. Immutable.
  */
 public final class Quantity {
     private final double value;
@@ -22,19 +24,24 @@ public final class Quantity {
         this.temperature = temperature;
     }
 
-    /** Moles or mass; a volume unit fails, because a volume needs its temperature. */
+    /** Moles or true mass; a volume or conventional mass fails, because it needs its temperature. */
     public static Quantity of(double value, AmountUnit unit) {
-        if (unit != null && unit.dimension() == AmountUnit.Dimension.VOLUME) {
-            throw Problem.NEEDS_TEMPERATURE.raise("quantity");
+        if (unit != null && unit.needsTemperature()) {
+            throw Problem.NEEDS_TEMPERATURE.raise("quantity", unit.needingTemperature(false));
         }
         return new Quantity(value, unit, Double.NaN, "quantity");
     }
 
-    /** Any quantity; the temperature (card unit) is read only when the unit is a volume. */
+    /**
+     * Any quantity; the temperature (card unit) is read only when the unit is a volume (its temperature) or a
+     * conventional mass (the temperature it was weighed at).
+     */
     public static Quantity of(double value, AmountUnit unit, double temperature) {
-        boolean volume = unit != null && unit.dimension() == AmountUnit.Dimension.VOLUME;
-        return new Quantity(value, unit, volume ? Checks.temperature(temperature, "temperature of the volume")
-                : Double.NaN, "quantity");
+        if (unit == null || !unit.needsTemperature()) {
+            return new Quantity(value, unit, Double.NaN, "quantity");
+        }
+        return new Quantity(value, unit, Checks.temperature(temperature, unit.isConventional()
+                ? "temperature of the weighing" : "temperature of the volume"), "quantity");
     }
 
     public double value() {
@@ -45,7 +52,7 @@ public final class Quantity {
         return unit;
     }
 
-    /** The temperature of a volume (card unit); NaN for moles and masses. */
+    /** The temperature of a volume, or of the weighing of a conventional mass (card unit); NaN otherwise. */
     public double temperature() {
         return temperature;
     }
@@ -54,9 +61,23 @@ public final class Quantity {
         return unit.dimension() == AmountUnit.Dimension.VOLUME;
     }
 
-    /** The value in mol, g or cm³. */
+    /** Whether the quantity carries a temperature: a volume, or a conventional mass. */
+    public boolean needsTemperature() {
+        return unit.needsTemperature();
+    }
+
+    /** The value in mol, g or cm³ (g of conventional mass for a conventional mass). */
     double base() {
         return unit.toBase(value);
+    }
+
+    /**
+     * The true mass in g of a mixture of composition x that this conventional mass (weighed at its temperature)
+     * stands for, checked: m = m_c·(1 − 1.2/8000)/(1 − 1.2/ρ(x)).
+     */
+    double trueGramsOfMixture(Card card, double[] x, Extrapolation e) {
+        return base() * Checks.trueMassPerConventional(card, Checks.density(card, x, temperature, e), "the mixture",
+                temperature);
     }
 
     /** Moles of pure component k in this quantity (a volume is of the pure liquid at its temperature). */
@@ -65,7 +86,9 @@ public final class Quantity {
             case AMOUNT:
                 return base();
             case MASS:
-                return base() / Checks.molarMass(card, k);
+                double grams = unit.isConventional()
+                        ? base() * Checks.trueMassPerConventional(card, k, temperature, e) : base();
+                return grams / Checks.molarMass(card, k);
             default:
                 return base() / Checks.pureMolarVolume(card, k, temperature, e);
         }
@@ -73,8 +96,9 @@ public final class Quantity {
 
     /**
      * The same measure of a batch with {@code moles} of each component, unchecked (internal model) so it can be
-     * called inside a solve: mol, g, or cm³ at this quantity's temperature. NaN where the card's volume is not
-     * physical.
+     * called inside a solve: mol, g (of conventional mass for a conventional unit: the mixture's density at this
+     * quantity's temperature converts it), or cm³ at this quantity's temperature. NaN where the card's volume is not
+     * physical or the mixture is not denser than air.
      */
     double measureOf(Card card, double[] moles, double kelvin) {
         double total = Checks.sum(moles);
@@ -86,7 +110,12 @@ public final class Quantity {
                 for (int k = 0; k < moles.length; k++) {
                     mass += moles[k] * Checks.molarMass(card, k);
                 }
-                return mass;
+                if (!unit.isConventional()) {
+                    return mass;
+                }
+                double rho = card.mixture().density(Checks.scaled(moles, 1.0 / total), kelvin);
+                return ConventionalMass.weighable(rho) ? mass / ConventionalMass.trueMassPerConventional(rho)
+                        : Double.NaN;
             }
             default: {
                 double vm = card.mixture().molarVolume(Checks.scaled(moles, 1.0 / total), kelvin);
@@ -97,6 +126,6 @@ public final class Quantity {
 
     @Override
     public String toString() {
-        return Show.number(value) + " " + unit.symbol() + (isVolume() ? " at " + Show.number(temperature) : "");
+        return Show.number(value) + " " + unit.symbol() + (needsTemperature() ? " at " + Show.number(temperature) : "");
     }
 }

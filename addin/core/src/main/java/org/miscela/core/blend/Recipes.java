@@ -16,9 +16,10 @@ public final class Recipes {
     /**
      * The charge that makes {@code target} (moles, a mass, or a volume of mixture at the target's temperature) of
      * the composition {@code composition} written on {@code basis}. With N the total moles (N = Q for moles,
-     * Q/M̄(x) for a mass, V/V_m(x, T) for a volume at T), component k is charged as n_k = N·x_k; its pure volume is
-     * n_k·V_k*(T_k) at its own storage temperature T_k (card unit; pass null when only masses and moles are
-     * needed).
+     * Q/M̄(x) for a mass, V/V_m(x, T) for a volume at T; a conventional mass weighed at T is first made a true mass
+     * with the mixture's density ρ(x, T)), component k is charged as n_k = N·x_k; its pure volume is n_k·V_k*(T_k)
+     * at its own storage temperature T_k (card unit; pass null when only masses and moles are needed), and its
+     * conventional mass is weighed at T_k too.
      */
     public static Charge forTarget(Card card, Quantity target, double[] composition, CompositionBasis basis,
             double[] storageTemperatures, Extrapolation e) {
@@ -29,7 +30,8 @@ public final class Recipes {
                 total = target.base();
                 break;
             case MASS:
-                total = target.base() / Checks.meanMolarMass(card, x);
+                double grams = target.unit().isConventional() ? target.trueGramsOfMixture(card, x, e) : target.base();
+                total = grams / Checks.meanMolarMass(card, x);
                 break;
             default:
                 total = target.base() / Checks.molarVolume(card, x, target.temperature(), e);

@@ -29,7 +29,7 @@ final class AdiabaticRise {
      * lie inside the card's validity range unless it may extrapolate.
      */
     static double of(Card card, double[] amounts, AmountBasis basis, double t, Extrapolation e) {
-        double[] n = CardFunctions.amountsToMoles(card, amounts, basis);
+        double[] n = CardFunctions.amountsToMoles(card, amounts, basis, t, e);
         double total = 0.0;
         for (double v : n) {
             total += v;

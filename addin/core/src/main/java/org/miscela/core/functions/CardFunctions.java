@@ -3,6 +3,7 @@ package org.miscela.core.functions;
 import org.miscela.core.card.Card;
 import org.miscela.core.card.Extrapolation;
 import org.miscela.core.model.Component;
+import org.miscela.core.model.ConventionalMass;
 import org.miscela.core.problem.MiscelaException;
 import org.miscela.core.problem.Numbers;
 import org.miscela.core.problem.Problem;
@@ -67,14 +68,18 @@ public final class CardFunctions {
         return out;
     }
 
-    /** The composition of a batch from amounts of each component (in moles or mass), and its total moles. */
-    public static double[] amountsToMoles(Card card, double[] amounts, AmountBasis basis) {
+    /**
+     * The moles of each component of a batch from its amounts (in moles or mass); conventional masses are weighed at
+     * the batch's temperature t (card unit), whose pure densities turn them into true masses.
+     */
+    public static double[] amountsToMoles(Card card, double[] amounts, AmountBasis basis, double t, Extrapolation e) {
         int n = card.componentCount();
         if (amounts.length != n) {
             throw Problem.COMPOSITION_LENGTH.raise(amounts.length, n, card.componentNames());
         }
         double[] moles = new double[n];
         double total = 0.0;
+        double kelvin = Double.NaN;
         for (int k = 0; k < n; k++) {
             Component c = card.components().get(k);
             if (Double.isNaN(amounts[k]) || Double.isInfinite(amounts[k])) {
@@ -83,7 +88,13 @@ public final class CardFunctions {
             if (amounts[k] < 0.0) {
                 throw Problem.AMOUNT_NEGATIVE.raise(c.name(), Numbers.show(amounts[k]));
             }
-            moles[k] = basis.toMoles(amounts[k], c.molarMass());
+            double buoyancy = 1.0;
+            if (basis.isConventional() && amounts[k] > 0.0) {
+                kelvin = Double.isNaN(kelvin) ? PointChecks.checkTemperature(card, t, e) : kelvin;
+                buoyancy = ConventionalMass.trueMassPerConventional(PointChecks.pureDensityAt(card, k, kelvin, t),
+                        c.name(), t, card.units().temperature().symbol(), AmountBasis.trueMasses());
+            }
+            moles[k] = basis.toMoles(amounts[k], c.molarMass(), buoyancy);
             total += moles[k];
         }
         if (Double.isInfinite(total)) {
@@ -214,7 +225,7 @@ public final class CardFunctions {
      * the card's energy unit (J or kJ); negative when mixing releases heat.
      */
     public static double mixingHeat(Card card, double[] amounts, AmountBasis basis, double t, Extrapolation e) {
-        double[] n = amountsToMoles(card, amounts, basis);
+        double[] n = amountsToMoles(card, amounts, basis, t, e);
         return enthalpyOut(card, batchExcessEnthalpy(card, n, t, e), t);
     }
 
@@ -230,19 +241,20 @@ public final class CardFunctions {
         if (added < 0.0) {
             throw Problem.AMOUNT_NEGATIVE.raise("the addition", Numbers.show(added));
         }
-        double[] before = amountsToMoles(card, amounts, basis);
+        double[] before = amountsToMoles(card, amounts, basis, t, e);
         double[] addition = new double[amounts.length];
         addition[component] = added;
         double[] more = sum(amounts, addition);
         if (Double.isInfinite(more[component])) {
             throw Problem.AMOUNT_TOO_LARGE.raise();
         }
-        double[] after = amountsToMoles(card, more, basis);
+        double[] after = amountsToMoles(card, more, basis, t, e);
         return enthalpyOut(card, batchExcessEnthalpy(card, after, t, e) - batchExcessEnthalpy(card, before, t, e), t);
     }
 
     /**
-     * The temperature rise (in K, the same in °C) of a batch mixed adiabatically from pure components all at T:
+     * The temperature rise (in K, the same in °C; in °F on a card in °F) of a batch mixed adiabatically from pure
+     * components all at T:
      * the final temperature T_f solves Σ n_k ∫_T^T_f Cp_k dT + N·H^E(x, T_f) = 0. Assumes constant pressure, no heat
      * exchange with the vessel or surroundings, no evaporation or reaction, and the card's models over T..T_f.
      */

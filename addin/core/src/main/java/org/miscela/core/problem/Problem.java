@@ -163,11 +163,13 @@ public enum Problem {
             + "they do not say which is meant; give the composition on another basis, such as mass fractions."),
 
     // ... batches
-    NEEDS_TEMPERATURES(BLEND, "The %s are volumes, so each needs the temperature it was measured at: give one temperature "
-            + "per component (a component with no volume needs none)."),
-    NEEDS_TEMPERATURE(BLEND, "The %s is a volume, so it needs the temperature it was measured at."),
-    NO_STORAGE_TEMPERATURES(BLEND, "No storage temperatures were given, so the volumes of the pure components to draw are "
+    NEEDS_TEMPERATURES(BLEND, "The %s are %s, so each needs the temperature it was measured at: give one temperature "
+            + "per component (a component with none of it needs none)."),
+    NEEDS_TEMPERATURE(BLEND, "The %s is %s, so it needs the temperature it was measured at."),
+    NO_STORAGE_TEMPERATURES(BLEND, "No storage temperatures were given, so the %s of the pure components to draw are "
             + "not known; give one temperature per component."),
+    LIGHTER_THAN_AIR(BLEND, "The density of %s is %s kg/m³ at %s %s, not above the 1.2 kg/m³ of air that conventional "
+            + "mass assumes, so a mass weighed in air cannot be turned into a true mass; give true masses (%s)."),
     BLEND_AMOUNT_ZERO(BLEND, "The %s add up to nothing; give a positive amount of at least one component."),
     BLEND_AMOUNT_TOO_LARGE(BLEND, "The %s come to more moles than a number can hold (over 1.8e308 in all); check them and their "
             + "unit."),

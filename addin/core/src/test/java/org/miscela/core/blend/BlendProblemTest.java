@@ -87,6 +87,8 @@ class BlendProblemTest {
         m.put(Problem.NEEDS_TEMPERATURE, () -> Quantity.of(1, AmountUnit.L));
         m.put(Problem.NO_STORAGE_TEMPERATURES, () -> Recipes.forTarget(EW, Quantity.of(1, AmountUnit.KG),
                 new double[] {0.5, 0.5}, MASS, null, E).amounts(AmountUnit.L));
+        m.put(Problem.LIGHTER_THAN_AIR, () -> Batches.totals(Cards.LIGHTER_THAN_AIR, Amounts.of(new double[] {1, 1},
+                AmountUnit.KG_AIR, new double[] {20, 20}), 20, E));
         m.put(Problem.BLEND_AMOUNT_ZERO, () -> Batches.totals(EW, Amounts.of(new double[] {0, 0}, AmountUnit.G), 20,
                 E));
         m.put(Problem.BLEND_AMOUNT_TOO_LARGE, () -> Batches.totals(EW, Amounts.of(new double[] {1e308, 1e308},

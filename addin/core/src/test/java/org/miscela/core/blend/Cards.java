@@ -17,6 +17,9 @@ final class Cards {
     /** Invented values: a pair with equal pure densities and a strongly negative V^E, so ρ has a maximum. */
     static final Card DENSITY_MAXIMUM = TestCards.card("invented-density-maximum.tsv");
 
+    /** Invented values: R is lighter than air (1.1 kg/m³), so its conventional mass cannot be converted. */
+    static final Card LIGHTER_THAN_AIR = TestCards.card("invented-lighter-than-air.tsv");
+
     /** Invented values: three constant-density liquids; C's mole fraction must be at least 0.1. */
     static final Card LIMITED_TERNARY = CardReader.read(new Object[][] {{"Miscela card", 1.0},
         {"source", "invented values, for tests"}, {"temperature unit", "°C"}, {"density unit", "kg/m³"},

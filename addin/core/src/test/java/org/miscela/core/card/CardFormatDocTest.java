@@ -228,6 +228,23 @@ public class CardFormatDocTest {
         }
     }
 
+    /** The document's table of amount units lists every spelling of the blending units and the heat bases. */
+    @Test
+    void documentListsEveryAmountUnitSpelling() throws IOException {
+        String text = String.join("\n", lines());
+        for (org.miscela.core.blend.AmountUnit u : org.miscela.core.blend.AmountUnit.values()) {
+            for (String s : u.spellings()) {
+                assertTrue(text.contains("`" + s + "`"), "docs/card-format.md does not list the amount unit " + s);
+            }
+        }
+        for (org.miscela.core.functions.AmountBasis b : org.miscela.core.functions.AmountBasis.values()) {
+            assertTrue(text.contains("`" + b.symbol() + "`"), "docs/card-format.md does not list the basis " + b);
+            assertEquals(b, org.miscela.core.functions.AmountBasis.lookup(b.symbol()));
+            assertEquals(org.miscela.core.blend.AmountUnit.lookup(b.symbol()).isConventional(), b.isConventional(),
+                    "the heat functions' basis " + b + " means what the blending unit of that name means");
+        }
+    }
+
     @Test
     void cellConversion() {
         assertEquals(1.0, cell(" 1 "));

@@ -406,13 +406,8 @@ class CardReaderTest {
                     .row("density reference temperature", "alpha", 20)
                     .set(17, "excess volume A0", "alpha + beta", -4.0, 0.02)
                     .row("excess volume reference temperature", "alpha + beta", 25).read();
-            assertEquals(288.15, c.validity().lowestKelvin(), 1e-9, spelling);
-            assertEquals(308.15, c.validity().highestKelvin(), 1e-9, spelling);
             // a slope per °C is the same as per K; the reference temperature is shifted
-            assertEquals(790.0, c.components().get(0).density().at(293.15), 1e-9, spelling);
-            assertEquals(782.0, c.components().get(0).density().at(303.15), 1e-9, spelling);
-            assertEquals(298.15, c.excessVolume(0, 1).referenceKelvin(), 1e-9, spelling);
-            assertEquals(-4.0 + 0.02 * 5, c.excessVolume(0, 1).coefficientAt(0, 303.15), 1e-12, spelling);
+            assertTheSlopedPair(c, spelling);
             // function arguments are read in the card's temperature unit
             Card k = TestCard.base().set(12, "density model", "alpha", "polynomial")
                     .set(13, "density coefficients", "alpha", 790, -0.8)
@@ -423,6 +418,19 @@ class CardReaderTest {
                     CardFunctions.density(c, 0.3, 27, Extrapolation.AS_CARD), 1e-9, spelling);
         }
         assertEquals(Units.Temperature.KELVIN, TestCard.base().read().units().temperature());
+    }
+
+    /**
+     * The base pair with alpha's density 790 kg/m³ at 293.15 K falling 0.8 kg/m³ per K, A0 = −4 cm³/mol at 298.15 K
+     * rising 0.02 per K, valid from 288.15 to 308.15 K, in whatever temperature unit the card was written.
+     */
+    private static void assertTheSlopedPair(Card c, String spelling) {
+        assertEquals(288.15, c.validity().lowestKelvin(), 1e-12, spelling);
+        assertEquals(308.15, c.validity().highestKelvin(), 1e-12, spelling);
+        assertEquals(790.0, c.components().get(0).density().at(293.15), 1e-9, spelling);
+        assertEquals(782.0, c.components().get(0).density().at(303.15), 1e-9, spelling);
+        assertEquals(298.15, c.excessVolume(0, 1).referenceKelvin(), 1e-12, spelling);
+        assertEquals(-4.0 + 0.02 * 5, c.excessVolume(0, 1).coefficientAt(0, 303.15), 1e-12, spelling);
     }
 
     /**
@@ -447,12 +455,7 @@ class CardReaderTest {
                     .set(17, "excess volume A0", "alpha + beta", -4.0, 0.02 * 5 / 9)
                     .row("excess volume reference temperature", "alpha + beta", 77).read();
             assertEquals(Units.Temperature.FAHRENHEIT, f.units().temperature(), spelling);
-            assertEquals(288.15, f.validity().lowestKelvin(), 1e-12, spelling);
-            assertEquals(308.15, f.validity().highestKelvin(), 1e-12, spelling);
-            assertEquals(790.0, f.components().get(0).density().at(293.15), 1e-9, spelling);
-            assertEquals(782.0, f.components().get(0).density().at(303.15), 1e-9, spelling);
-            assertEquals(298.15, f.excessVolume(0, 1).referenceKelvin(), 1e-12, spelling);
-            assertEquals(-4.0 + 0.02 * 5, f.excessVolume(0, 1).coefficientAt(0, 303.15), 1e-12, spelling);
+            assertTheSlopedPair(f, spelling);
             assertEquals(CardFunctions.density(k, 0.3, 300.15, Extrapolation.AS_CARD),
                     CardFunctions.density(f, 0.3, 80.6, Extrapolation.AS_CARD), 1e-9, spelling);
         }

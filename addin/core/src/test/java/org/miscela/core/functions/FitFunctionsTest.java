@@ -64,17 +64,11 @@ class FitFunctionsTest {
     @Test
     void densityFitStatisticsGiveTheLargestDensityResidual() {
         Card pure = CardReader.readPureComponents(CARD);
-        Random r = new Random(5);
-        int n = 30;
-        double[] xs = new double[n];
-        double[] rho = new double[n];
-        double[] t = new double[n];
-        for (int i = 0; i < n; i++) {
-            double p = (i % 15 + 0.5) / 15;
-            t[i] = i < 15 ? 15 : 25;
-            xs[i] = x(p);
-            rho[i] = Oiml22.density(p, t[i]) + 0.05 * r.nextGaussian();
-        }
+        double[][] data = noisyOiml(5);
+        double[] xs = data[0];
+        double[] rho = data[1];
+        double[] t = data[2];
+        int n = xs.length;
         Object[][] res = FitFunctions.density(pure, 0, 1, xs, rho, t, 4, 1, 20, null, FitOutput.RESIDUALS);
         int worst = 0;
         for (int i = 1; i < n; i++) {
@@ -100,18 +94,13 @@ class FitFunctionsTest {
     void densityFitOnACardInFahrenheit() {
         Card celsius = CardReader.readPureComponents(CARD);
         Card fahrenheit = CardReader.readPureComponents(TestCards.cells("ethanol-water-oiml-fahrenheit.tsv"));
-        Random r = new Random(7);
-        int n = 30;
-        double[] xs = new double[n];
-        double[] rho = new double[n];
-        double[] t = new double[n];
-        double[] tf = new double[n];
-        for (int i = 0; i < n; i++) {
-            double p = (i % 15 + 0.5) / 15;
-            t[i] = i < 15 ? 15 : 25;
-            tf[i] = i < 15 ? 59 : 77;
-            xs[i] = x(p);
-            rho[i] = Oiml22.density(p, t[i]) + 0.05 * r.nextGaussian();
+        double[][] data = noisyOiml(7);
+        double[] xs = data[0];
+        double[] rho = data[1];
+        double[] t = data[2];
+        double[] tf = new double[t.length];
+        for (int i = 0; i < t.length; i++) {
+            tf[i] = 1.8 * t[i] + 32;
         }
         int orderInT = 1;
         for (FitOutput out : new FitOutput[] {FitOutput.COEFFICIENTS, FitOutput.STANDARD_ERRORS,
@@ -129,6 +118,20 @@ class FitFunctionsTest {
                 }
             }
         }
+    }
+
+    /** x, ρ and t of OIML R 22 densities at 15 and 25 °C, 15 mass fractions each, with seeded noise of 0.05 kg/m³. */
+    private static double[][] noisyOiml(long seed) {
+        Random r = new Random(seed);
+        int n = 30;
+        double[][] data = new double[3][n];
+        for (int i = 0; i < n; i++) {
+            double p = (i % 15 + 0.5) / 15;
+            data[2][i] = i < 15 ? 15 : 25;
+            data[0][i] = x(p);
+            data[1][i] = Oiml22.density(p, data[2][i]) + 0.05 * r.nextGaussian();
+        }
+        return data;
     }
 
     static double worstBetween(Card pure, double[] xs, double[] rho, double[] t, int order) {
