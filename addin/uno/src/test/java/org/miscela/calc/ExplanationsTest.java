@@ -94,8 +94,8 @@ class ExplanationsTest {
         assertEquals(e.getMessage(), explain("MIX.DENSITY", CARD, 0.3, 45.0));
         assertEquals("Problem.OUTSIDE_TEMPERATURE", Catalogue.entryOf(e.getMessage()));
         IllegalArgumentException unit = assertThrows(IllegalArgumentException.class, () -> addIn.batchTotals(CARD,
-                new Object[][] {{50.0, 50.0}}, "lb", one(20.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID));
-        assertEquals(unit.getMessage(), explain("MIX.BATCH", CARD, new Object[][] {{50.0, 50.0}}, "lb", 20.0));
+                new Object[][] {{50.0, 50.0}}, "oz", one(20.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+        assertEquals(unit.getMessage(), explain("MIX.BATCH", CARD, new Object[][] {{50.0, 50.0}}, "oz", 20.0));
         assertEquals("Problem.BLEND_UNKNOWN_UNIT", Catalogue.entryOf(unit.getMessage()));
     }
 

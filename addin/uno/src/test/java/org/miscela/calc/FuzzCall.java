@@ -388,9 +388,10 @@ final class FuzzCall {
 
         Object basis() {
             if (clean) {
-                return pick(Any.VOID, "mol", "kmol", "g", "kg");
+                return pick(Any.VOID, "mol", "kmol", "g", "kg", "t", "lb", "kg (conventional)", "lb air");
             }
-            return pick(Any.VOID, Any.VOID, "mol", "kmol", "g", "kg", " KG ", "lb", "", 2.0, Boolean.TRUE);
+            return pick(Any.VOID, Any.VOID, "mol", "kmol", "g", "kg", " KG ", "lb", "Tonnes", "KG AIR", "oz", "", 2.0,
+                    Boolean.TRUE);
         }
 
         Object added() {
@@ -643,9 +644,11 @@ final class FuzzCall {
 
         Object amountUnit() {
             if (!clean && r.nextInt(8) == 0) {
-                return pick("lb", "", Any.VOID, 3.0, "KG");
+                return pick("oz", "gallon", "", Any.VOID, 3.0, "KG", "Litre", "kg conventional");
             }
-            return pick("mol", "kmol", "g", "kg", "mL", "L", "m3", "cm³", "dm3");
+            return pick("mol", "kmol", "g", "kg", "t", "tonne", "lb", "lbs", "kg (conventional)", "g air", "lb air",
+                    "mL", "millilitre", "L", "litre", "liters", "m3", "cm³", "dm3", "gal", "US gal", "imp gal",
+                    "UK gal");
         }
 
         Object balance() {

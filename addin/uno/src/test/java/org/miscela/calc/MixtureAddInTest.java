@@ -108,7 +108,7 @@ class MixtureAddInTest {
     void checkCardReportsTheFirstProblem() {
         assertEquals("OK", addIn.checkCard(CARD));
         Object[][] broken = CARD.clone();
-        broken[3] = new Object[] {"temperature unit", "°F"};
+        broken[3] = new Object[] {"temperature unit", "°R"};
         String message = addIn.checkCard(broken);
         assertTrue(message.startsWith("Card row 4 (temperature unit)"), message);
         assertThrows(IllegalArgumentException.class, () -> addIn.mixtureDensity(broken, one(0.4), one(20.0),
@@ -193,8 +193,19 @@ class MixtureAddInTest {
         assertEquals(CardFunctions.mixingHeat(TERNARY_CARD, new double[] {2, 5, 1}, org.miscela.core.functions.AmountBasis.MOL,
                 25, Extrapolation.AS_CARD), mol, 0.0);
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> addIn.mixingHeat(TERNARY, batch, one(25.0), "lb", Any.VOID));
-        assertTrue(e.getMessage().contains("mol, kmol, g, kg"), e.getMessage());
+                () -> addIn.mixingHeat(TERNARY, batch, one(25.0), "oz", Any.VOID));
+        assertEquals("The amount basis \"oz\" is not recognised; use one of: moles: mol, kmol; masses: g, kg, t, "
+                + "tonne, tonnes, lb, lbs; masses weighed in air (conventional mass, OIML D 28): g (conventional), "
+                + "g air, kg (conventional), kg air, t (conventional), t air, lb (conventional), lb air.",
+                e.getMessage());
+        // pounds and tonnes are masses like kilograms (1 lb = 0.45359237 kg exactly, NIST SP 811 B.8)
+        double kg = (Double) addIn.mixingHeat(TERNARY, new Object[][] {{0.45359237, 1.0, 1.0}}, one(25.0), "kg",
+                Any.VOID);
+        double mixed = (Double) addIn.mixingHeat(TERNARY, new Object[][] {{1.0, 1 / 0.45359237, 1 / 0.45359237}},
+                one(25.0), "lb", Any.VOID);
+        assertEquals(kg, mixed, 1e-9 * Math.abs(kg));
+        assertEquals(1000 * kg, (Double) addIn.mixingHeat(TERNARY, new Object[][] {{0.45359237, 1.0, 1.0}},
+                one(25.0), " Tonne ", Any.VOID), 1e-9 * Math.abs(1000 * kg));
         double added = (Double) addIn.additionHeat(TERNARY, batch, "Q", 1.0, one(25.0), Any.VOID, Any.VOID);
         double direct = CardFunctions.mixingHeat(TERNARY_CARD, new double[] {2, 6, 1},
                 org.miscela.core.functions.AmountBasis.MOL, 25, Extrapolation.AS_CARD) - mol;
@@ -255,6 +266,42 @@ class MixtureAddInTest {
         IllegalArgumentException unit = assertThrows(IllegalArgumentException.class, () -> addIn.batchTotals(CARD,
                 new Object[][] {{50.0, 50.0}}, 5.0, one(20.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID));
         assertEquals("The unit must be text; found 5.", unit.getMessage());
+    }
+
+    /**
+     * Masses weighed in air (conventional mass, OIML D 28 (2004): m·(1 − 1.2/ρ) = m_c·(1 − 1.2/8000)) through the
+     * interface, as a cell passes them: 50 g + 50 g read off a balance at 20 °C are 50·(1 − 1.2/8000)/(1 − 1.2/ρ) g of
+     * each, ρ the OIML R 22 pure densities at 20 °C; a recipe asked for in "kg air" is what the balance must show.
+     */
+    @Test
+    void conventionalMassThroughTheInterface() throws Exception {
+        double kEthanol = (1 - 1.2 / 8000) / (1 - 1.2 / org.miscela.reference.Oiml22.density(1, 20));
+        double kWater = (1 - 1.2 / 8000) / (1 - 1.2 / org.miscela.reference.Oiml22.density(0, 20));
+        Object[][] batch = {{50.0, 50.0}};
+        double grams = (Double) addIn.batchTotals(CARD, batch, "g (conventional)", one(20.0), "mass", "g", Any.VOID,
+                Any.VOID);
+        assertEquals(50 * kEthanol + 50 * kWater, grams, 1e-9);
+        double volume = (Double) addIn.batchTotals(CARD, batch, "g air", one(20.0), Any.VOID, "mL", Any.VOID,
+                Any.VOID);
+        assertEquals((Double) addIn.batchTotals(CARD, new Object[][] {{50 * kEthanol, 50 * kWater}}, "g", one(20.0),
+                Any.VOID, "mL", Any.VOID, Any.VOID), volume, 1e-9);
+        Object[][] recipe = (Object[][]) ((Any) addIn.recipe(CARD, 1.0, "kg", one(0.5), "mass fraction", 20.0,
+                Any.VOID, "kg air", Any.VOID, Any.VOID)).getObject();
+        assertEquals(0.5 / kEthanol, (Double) recipe[0][0], 1e-12);
+        assertEquals(0.5 / kWater, (Double) recipe[0][1], 1e-12);
+        Object[][] added = (Object[][]) ((Any) addIn.adjustBatch(CARD, new Object[][] {{500.0, 500.0}}, "g air",
+                one(0.4), "mass fraction", 20.0, Any.VOID, Any.VOID, Any.VOID, Any.VOID, "g air", Any.VOID, Any.VOID))
+                .getObject();
+        double water = 500 * kEthanol / 0.4 - 500 * kEthanol - 500 * kWater;
+        assertEquals(water / kWater, (Double) added[0][1], 1e-9);
+        // a gallon and a pound: 1 US gal of 40 %vol holds 0.4 gal of ethanol at 20 °C (definition of %vol)
+        Object[][] gallons = (Object[][]) ((Any) addIn.recipe(CARD, 1.0, "gal", one(40.0), "%vol", 20.0, 20.0, "US gal",
+                Any.VOID, Any.VOID)).getObject();
+        assertEquals(0.4, (Double) gallons[0][0], 1e-12);
+        IllegalArgumentException light = assertThrows(IllegalArgumentException.class, () -> addIn.batchTotals(
+                TestCards.cells("invented-lighter-than-air.tsv"), batch, "kg air", one(20.0), Any.VOID, Any.VOID,
+                Any.VOID, Any.VOID));
+        assertEquals("Problem.LIGHTER_THAN_AIR", Catalogue.entryOf(light.getMessage()), light.getMessage());
     }
 
     /** A batch that would cool below absolute zero: the range searched is named from 0 K (it said "-0.85 K"). */

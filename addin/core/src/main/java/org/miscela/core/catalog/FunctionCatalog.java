@@ -53,11 +53,14 @@ public final class FunctionCatalog {
             "Optional. For %vol, mol/L, g/L and mol/kg: the component that makes up the rest (the solvent), by "
                     + "number or name; left out, the card's last component.");
     private static final ArgumentInfo UNIT = value("unit", "unit",
-            "The unit of the amounts: mol, kmol, g, kg, or mL, L, m³ for volumes of the pure liquids.");
+            "The unit of the amounts: mol, kmol; g, kg, t, lb, or a mass weighed in air such as \"kg (conventional)\"; "
+                    + "or mL, L, m³, US gal, imp gal for volumes of the pure liquids.");
     private static final ArgumentInfo RESULT_UNIT = optional("resultUnit", "result unit",
-            "Optional. The unit of the result (left out: L for volumes, kg for masses, mol for moles).");
+            "Optional. The unit of the result, any the amounts take (left out: L for volumes, kg for masses, mol for "
+                    + "moles).");
     private static final ArgumentInfo STORAGE_T = optional("storageTemperatures", "storage temperatures",
-            "Optional. For volumes of the pure liquids: the temperature of each, in card order (or one for all).");
+            "Optional. For volumes of the pure liquids, or masses weighed in air: the temperature of each, in card "
+                    + "order (or one for all; left out, masses weighed in air are at the batch's temperature).");
     private static final ArgumentInfo ORDER = value("order", "order",
             "The highest k of the coefficients A0..Ak to fit, 0 to " + RedlichKisterFitter.MAX_ORDER_IN_X + ".");
     private static final ArgumentInfo ORDER_IN_T = optional("orderInTemperature", "order in T",
@@ -71,8 +74,9 @@ public final class FunctionCatalog {
                     + "\"residuals\", \"orders\" (fits of order 0 to the order given, with F-tests, AIC and BIC) or "
                     + "\"check\" (\"OK\", or why the fit is refused, in words).");
     private static final ArgumentInfo BASIS = optional("basis", "basis",
-            "Optional. The unit of the amounts: \"mol\" (left out), \"kmol\", \"g\" or \"kg\"; masses are "
-                    + "converted with the card's molar masses.");
+            "Optional. The unit of the amounts: \"mol\" (left out), \"kmol\", \"g\", \"kg\", \"t\", \"lb\", or a "
+                    + "mass weighed in air such as \"kg (conventional)\"; masses are converted with the card's molar "
+                    + "masses.");
 
     // --- call problems that no cell can produce (see notFromACell), with the reason; no function lists them
     private static final String UNCERTAINTY_OF_A_FIT = "raised only by the library's uncertainty of a fitted "
@@ -136,7 +140,8 @@ public final class FunctionCatalog {
     private static final List<Problem> COMPONENT_PROBLEMS = list(Problem.UNKNOWN_COMPONENT_ARG, Problem.ARG_NOT_SINGLE);
     private static final List<Problem> AMOUNT_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
             Problem.ARG_SHAPE, Problem.COMPOSITION_SHAPE,
-            Problem.AMOUNT_NEGATIVE, Problem.AMOUNT_ZERO, Problem.AMOUNT_TOO_LARGE, Problem.UNKNOWN_BASIS);
+            Problem.AMOUNT_NEGATIVE, Problem.AMOUNT_ZERO, Problem.AMOUNT_TOO_LARGE, Problem.UNKNOWN_BASIS,
+            Problem.LIGHTER_THAN_AIR);
     private static final List<Problem> DATA_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
             Problem.DATA_SHAPE, Problem.DATA_LENGTH, Problem.DATA_PARTLY_BLANK, Problem.NOT_A_COUNT,
             Problem.UNKNOWN_FIT_OUTPUT);
@@ -237,8 +242,9 @@ public final class FunctionCatalog {
                     BATCH_TEMPERATURE, BASIS, EXTRAPOLATE)
                     .shows("-38.70").refuses(union(AMOUNT_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS, list(Problem.NO_ENTHALPY))),
             new FunctionInfo("adiabaticRise", "MIX.TEMPERATURERISE",
-                    "estimated adiabatic temperature rise of a batch, K",
-                    "Estimated temperature rise, in K (the same in °C), of a batch mixed from pure components all at "
+                    "estimated adiabatic temperature rise of a batch, K (°F on a card in °F)",
+                    "Estimated temperature rise, in K (the same in °C; in °F on a card in °F), of a batch mixed from "
+                            + "pure components all at "
                             + "one temperature with no heat exchanged. An estimate for planning, not a safety "
                             + "rating: it ignores the vessel, losses, evaporation and reaction.",
                     "Σ_k n_k·∫_T^T_f Cp_k dT + N·H^E(x, T_f) = 0, solved for T_f (Brent); result T_f − T",
@@ -372,8 +378,9 @@ public final class FunctionCatalog {
                             + "V_k = n_k V_k*(T_k)",
                     "=INDEX(MIX.RECIPE(card; 1; \"L\"; 40; \"%vol\"; 20; 20; \"mL\"); 1; 1)",
                     CARD, value("quantity", "quantity", "The quantity to make."),
-                    value("unit", "unit", "Its unit: mol, kmol, g, kg, mL, L or m³ (a volume of the mixture at the "
-                            + "temperature)."),
+                    value("unit", "unit", "Its unit: mol, kmol, g, kg, t, lb, mL, L, m³, US gal or imp gal (a volume "
+                            + "of the mixture at the temperature), or a mass weighed in air such as "
+                            + "\"kg (conventional)\"."),
                     range("composition", "composition", "The target composition on the basis, one value per "
                             + "component (a lone number on a two-component card is the first component's); a block "
                             + "gives one recipe per row."),
@@ -400,7 +407,8 @@ public final class FunctionCatalog {
                     optional("mode", "mode", "Optional. \"least\" additions (left out), \"within\" the limit "
                             + "(the closest composition if the target does not fit), or \"make up\" to the limit."),
                     optional("limit", "limit", "For within and make up: the largest, or the final, quantity."),
-                    optional("limitUnit", "limit unit", "The unit of the limit (a volume is at the temperature)."),
+                    optional("limitUnit", "limit unit", "The unit of the limit, any the amounts take (a volume, or a "
+                            + "mass weighed in air, is at the temperature)."),
                     optional("result", "result", "Optional. \"additions\" (left out), \"volume\" (of the batch "
                             + "after the additions) or \"summary\"."),
                     RESULT_UNIT, BALANCE, EXTRAPOLATE)
@@ -482,12 +490,12 @@ public final class FunctionCatalog {
                             + "arguments, otherwise the message of its refusal (why its cell shows Err:502). It runs "
                             + "that function on them, so it always agrees with the call; it never refuses itself.",
                     "—",
-                    "=MIX.EXPLAIN(\"MIX.BATCH\"; card; {50; 50}; \"lb\"; 20)",
+                    "=MIX.EXPLAIN(\"MIX.BATCH\"; card; {50; 50}; \"oz\"; 20)",
                     value("functionName", "function", "The function's name as text: \"MIX.DENSITY\" or "
                             + "\"density\" (case does not matter)."),
                     argumentList("arguments", "arguments", "The same arguments as the call, in its order (one per "
                             + "argument box); leave out here what the call leaves out.")).answersInWords()
-                    .shows("The unit \"lb\" is not recognised").refuses(list()),
+                    .shows("The unit \"oz\" is not recognised").refuses(list()),
             new FunctionInfo("mixtureMolarMass", "MIX.MOLARMASS", "mean molar mass of the mixture",
                     "Mean molar mass of the mixture (mass per mole of mixture) from the molar masses on the card, in "
                             + "the card's molar mass unit. It needs no temperature and no density.",
