@@ -7,7 +7,6 @@ import com.sun.star.container.XIndexAccess;
 import com.sun.star.lang.XComponent;
 import com.sun.star.sheet.FunctionArgument;
 import com.sun.star.sheet.XSpreadsheet;
-import com.sun.star.table.XCell;
 import com.sun.star.uno.UnoRuntime;
 import java.nio.file.Paths;
 import java.util.LinkedHashMap;
@@ -52,7 +51,7 @@ class ArgumentFormsIT {
                 expected.put("=" + functions[f] + "(" + forms[i] + ")", shown[f][i]);
             }
         }
-        Map<String, String> seen = new LinkedHashMap<>();
+        Map<String, String> seen;
         Office office = Office.start(Paths.get(System.getProperty("miscela.probe.oxt")));
         try {
             XComponent doc = office.newSpreadsheet();
@@ -66,16 +65,8 @@ class ArgumentFormsIT {
                 Sheets.cell(sheet, 0, 6).setFormula("=\"\"");
                 Sheets.cell(sheet, 0, 7).setValue(1);
                 Sheets.cell(sheet, 0, 8).setFormula("x");
-                int row = 0;
-                for (String formula : expected.keySet()) {
-                    Sheets.cell(sheet, 2, row++).setFormula(formula);
-                }
-                Sheets.recalculate(doc);
-                row = 0;
-                for (String formula : expected.keySet()) {
-                    XCell c = Sheets.cell(sheet, 2, row++);
-                    seen.put(formula, c.getError() != 0 ? "Err:" + c.getError() : Sheets.text(c));
-                }
+                seen = Sheets.results(doc, sheet, 2, expected.keySet(),
+                    c -> c.getError() != 0 ? "Err:" + c.getError() : Sheets.text(c));
             } finally {
                 Sheets.close(doc);
             }
