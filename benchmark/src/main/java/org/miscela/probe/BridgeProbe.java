@@ -119,6 +119,55 @@ public final class BridgeProbe extends WeakBase implements XBridgeProbe {
         return kind;
     }
 
+    @Override
+    public String describeString(String value) {
+        return "text '" + value + "'";
+    }
+
+    @Override
+    public String describeDouble(double value) {
+        return "number " + value;
+    }
+
+    @Override
+    public String describeCells(Object[][] cells) {
+        StringBuilder b = new StringBuilder();
+        b.append(cells.length).append('x').append(cells.length == 0 ? 0 : cells[0].length);
+        for (Object[] row : cells) {
+            for (Object cell : row) {
+                b.append(' ').append(describe(cell));
+            }
+        }
+        return b.toString();
+    }
+
+    @Override
+    public String describeAny(Object value) {
+        Object v = value instanceof Any ? ((Any) value).getObject() : value;
+        if (v instanceof Object[][]) {
+            return "range " + describeCells((Object[][]) v);
+        }
+        return describe(value);
+    }
+
+    /** One value as the bridge delivered it: its Java type and value. */
+    private static String describe(Object value) {
+        Object v = value instanceof Any ? ((Any) value).getObject() : value;
+        if (v == null || com.sun.star.uno.AnyConverter.isVoid(v)) {
+            return "void";
+        }
+        if (v instanceof String) {
+            return "text '" + v + "'";
+        }
+        if (v instanceof Double) {
+            return "number " + v;
+        }
+        if (v instanceof Boolean) {
+            return "boolean " + v;
+        }
+        return v.getClass().getSimpleName() + " " + v;
+    }
+
     /** The exception a kind names (see XBridgeProbe.idl), or null. */
     private static Throwable failure(double kind) {
         switch ((int) kind) {

@@ -50,8 +50,11 @@ public final class IdlWriter {
             + "the wizard metadata, so they never change: add methods, never rename one.\n\n"
             + "A range parameter is sequence< sequence< any > > (every cell of the range, \"\" for a blank one in a "
             + "multi-cell range), because Calc passes an empty cell to an 'any' parameter as the number 0 and a "
-            + "blank must never count as zero; a single value is 'any' (void when left out). A refused call raises "
-            + "IllegalArgumentException, which Calc shows as Err:502; MIX.EXPLAIN with the same arguments says why.";
+            + "blank must never count as zero. A required single value is sequence< sequence< any > > too (a value, "
+            + "a cell or a formula's result arrives as a one-cell range), because Calc's Function Wizard shows every "
+            + "'any' parameter as optional and a typed one as required; only optional single values are 'any' (void "
+            + "when left out). A refused call raises IllegalArgumentException, which Calc shows as Err:502; "
+            + "MIX.EXPLAIN with the same arguments says why.";
 
     private static void method(StringBuilder b, FunctionInfo f) {
         String doc = INDENT + "    ";

@@ -130,8 +130,12 @@ public final class MetadataWriter {
                 + "actual message fills in) says why, and `MIX.EXPLAIN(\"MIX.…\"; the same arguments)` shows it "
                 + "in a cell (so do `MIX.CHECK` / `MIX.CHECKPOINT` for a card or a point, and a fit's result "
                 + "`\"check\"`). Every function that reads a card also reports the card's own "
-                + "problems (docs/card-format.md). Calc itself shows Err:504 for a missing required argument or "
-                + "an error cell inside a range argument.\n\n");
+                + "problems (docs/card-format.md). Calc itself shows Err:504 for a call that ends before its last "
+                + "required argument or has too many, or with an error cell inside a range argument, and Err:502 for "
+                + "a required argument left out between others (`;;`).\n\n"
+                + "**Optional arguments** are in brackets in the syntax and marked *(optional)* in the tables, as "
+                + "the Function Wizard marks them; every other argument is required, and the wizard shows it in "
+                + "bold.\n\n");
         m.append("| function | what it returns |\n|---|---|\n");
         for (FunctionInfo f : FunctionCatalog.functions()) {
             m.append("| [`").append(f.displayName()).append("`](#").append(anchor(f.displayName())).append(") | ")
@@ -143,8 +147,8 @@ public final class MetadataWriter {
             m.append("Syntax: `").append(syntax(f)).append("`\n\n");
             m.append("| argument | meaning |\n|---|---|\n");
             for (ArgumentInfo a : f.arguments()) {
-                m.append("| ").append(a.displayName()).append(" | ").append(a.description().replace("|", "\\|"))
-                        .append(" |\n");
+                m.append("| ").append(a.displayName()).append(a.optional() ? " *(optional)*" : "").append(" | ")
+                        .append(a.description().replace("|", "\\|")).append(" |\n");
             }
             m.append("\nFormula: ").append(f.formula()).append("\n\n");
             m.append("Example: `").append(f.example()).append("` shows **").append(f.exampleResult())
@@ -226,8 +230,9 @@ public final class MetadataWriter {
                 + "started. |\n");
         m.append("| text | `MIX.EXPLAIN`, `MIX.CHECK`, `MIX.CHECKPOINT`, `MIX.TRACE` labels, a fit's `\"check\"` "
                 + "and `MIX.ADJUST`'s `\"summary\"` return text by design. | — |\n\n");
-        m.append("A range argument left out (`;;`, or `;` at the end, where a range belongs) makes Calc show "
-                + "Err:502 itself, without calling the add-in; `MIX.EXPLAIN` says which argument it is.\n\n");
+        m.append("A required argument left out (`;;`, or `;` at the end, where a range or a required value belongs) "
+                + "makes Calc show Err:502 itself, without calling the add-in; `MIX.EXPLAIN` says which argument it "
+                + "is.\n\n");
         m.append("Every message of the tables of a call, a fit and a blending calculation below, and every answer of "
                 + "`MIX.EXPLAIN` itself, is produced in a real office by a spreadsheet test "
                 + "(`addin/uno/src/test/resources/sheets/errors.spec`, checked by `ErrorCatalogueIT`): the call shows "

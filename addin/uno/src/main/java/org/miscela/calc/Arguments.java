@@ -33,6 +33,20 @@ final class Arguments {
         return CardCache.shared().get(cells);
     }
 
+    /**
+     * A required single value as the decoders read it. Such a parameter is typed as a range in the IDL (so that the
+     * Function Wizard shows it as required, see FunctionCatalog), and Calc passes a value, a cell or a formula's
+     * result as a one-cell range: that range is its cell's value, exactly what an {@code any} parameter would have
+     * received. A larger range stays a range (as an {@code any} would receive it), so each decoder refuses it with its
+     * own words; null (which Calc never passes: it refuses a call that leaves the argument out) stays null.
+     */
+    static Object value(Object[][] cells) {
+        if (cells != null && cells.length == 1 && cells[0] != null && cells[0].length == 1) {
+            return cells[0][0];
+        }
+        return cells;
+    }
+
     /** A component given by number or name (a one-cell range holding one counts as that cell). */
     static int component(Card card, Object value) {
         Object v = unwrap(value);

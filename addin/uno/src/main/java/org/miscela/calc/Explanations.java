@@ -15,11 +15,12 @@ import org.miscela.core.problem.Problem;
 /**
  * MIX.EXPLAIN: runs another function's method on the arguments of a call, exactly as Calc would pass them, and gives
  * the words of its refusal, or "OK". The arguments arrive as Calc's variable argument list: a single cell as its
- * value, a range as {@code Object[][]}, a left-out argument as void. Each method's parameters are either ranges
- * (IDL {@code sequence<sequence<any>>}, here 'R') or single values ({@code any}, here 'V'), as the function catalogue
- * says; a value given for a range parameter becomes a one-cell range, as Calc itself would pass it. A range parameter
- * left out is refused by Calc itself (Err:502, the add-in is not called), and so is a call with too few or too many
- * arguments (Err:504): for those MIX.EXPLAIN says so rather than run the method.
+ * value, a range as {@code Object[][]}, a left-out argument as void. Each method's parameters are either typed as
+ * ranges (IDL {@code sequence<sequence<any>>}, here 'R': the ranges, and every required single value) or optional
+ * single values ({@code any}, here 'V'), as the function catalogue says; a value given for a range parameter becomes
+ * a one-cell range, as Calc itself would pass it. A range parameter left out is refused by Calc itself (Err:502, the
+ * add-in is not called), and so is a call with too few or too many arguments (Err:504): for those MIX.EXPLAIN says
+ * so rather than run the method.
  */
 final class Explanations {
     /** One method called with the decoded arguments, in its parameters' order. */
@@ -27,7 +28,7 @@ final class Explanations {
         Object on(XMixtureFunctions functions, Object[] p) throws IllegalArgumentException;
     }
 
-    /** A method's parameter kinds ('R' range, 'V' value) in IDL order, and how to call it. */
+    /** A method's parameter kinds ('R' typed as a range, 'V' optional value) in IDL order, and how to call it. */
     static final class Target {
         final String kinds;
         final Call call;
@@ -57,7 +58,10 @@ final class Explanations {
         TARGETS.put(method, new Target(kinds(FunctionCatalog.byMethod(method)), call));
     }
 
-    /** A function's parameter kinds as a word of 'R' (range) and 'V' (single value), in IDL order. */
+    /**
+     * A function's parameter kinds as a word of 'R' (typed as a range: a range, or a required single value) and 'V'
+     * (an optional single value), in IDL order.
+     */
     static String kinds(FunctionInfo f) {
         StringBuilder kinds = new StringBuilder();
         for (ArgumentInfo a : f.arguments()) {
@@ -68,37 +72,44 @@ final class Explanations {
 
     static {
         add("excessMolarVolume", (a, p) -> a.excessMolarVolume(r(p[0]), r(p[1]), r(p[2]), p[3]));
-        add("partialMolarVolume", (a, p) -> a.partialMolarVolume(r(p[0]), p[1], r(p[2]), r(p[3]), p[4]));
-        add("partialExcessMolarVolume", (a, p) -> a.partialExcessMolarVolume(r(p[0]), p[1], r(p[2]), r(p[3]), p[4]));
+        add("partialMolarVolume", (a, p) -> a.partialMolarVolume(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4]));
+        add("partialExcessMolarVolume", (a, p) -> a.partialExcessMolarVolume(r(p[0]), r(p[1]), r(p[2]), r(p[3]),
+                p[4]));
         add("mixtureMolarVolume", (a, p) -> a.mixtureMolarVolume(r(p[0]), r(p[1]), r(p[2]), p[3]));
         add("mixtureDensity", (a, p) -> a.mixtureDensity(r(p[0]), r(p[1]), r(p[2]), p[3]));
-        add("pureDensity", (a, p) -> a.pureDensity(r(p[0]), p[1], r(p[2]), p[3]));
+        add("pureDensity", (a, p) -> a.pureDensity(r(p[0]), r(p[1]), r(p[2]), p[3]));
         add("checkCard", (a, p) -> a.checkCard(r(p[0])));
         add("checkPoint", (a, p) -> a.checkPoint(r(p[0]), r(p[1]), r(p[2]), p[3]));
         add("excessEnthalpy", (a, p) -> a.excessEnthalpy(r(p[0]), r(p[1]), r(p[2]), p[3]));
-        add("partialExcessEnthalpy", (a, p) -> a.partialExcessEnthalpy(r(p[0]), p[1], r(p[2]), r(p[3]), p[4]));
+        add("partialExcessEnthalpy", (a, p) -> a.partialExcessEnthalpy(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4]));
         add("mixingHeat", (a, p) -> a.mixingHeat(r(p[0]), r(p[1]), r(p[2]), p[3], p[4]));
-        add("additionHeat", (a, p) -> a.additionHeat(r(p[0]), r(p[1]), p[2], p[3], r(p[4]), p[5], p[6]));
+        add("additionHeat", (a, p) -> a.additionHeat(r(p[0]), r(p[1]), r(p[2]), r(p[3]), r(p[4]), p[5],
+                p[6]));
         add("adiabaticRise", (a, p) -> a.adiabaticRise(r(p[0]), r(p[1]), r(p[2]), p[3], p[4]));
         add("insideValidity", (a, p) -> a.insideValidity(r(p[0]), r(p[1]), r(p[2])));
         add("traceEvaluation", (a, p) -> a.traceEvaluation(r(p[0]), r(p[1]), r(p[2]), p[3], p[4]));
-        add("fitExcessVolume", (a, p) -> a.fitExcessVolume(r(p[0]), r(p[1]), p[2], p[3], p[4], p[5], p[6], p[7]));
+        add("fitExcessVolume", (a, p) -> a.fitExcessVolume(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5], p[6],
+                p[7]));
         add("fitDensity",
-            (a, p) -> a.fitDensity(r(p[0]), p[1], r(p[2]), r(p[3]), r(p[4]), p[5], p[6], p[7], p[8], p[9]));
+            (a, p) -> a.fitDensity(r(p[0]), p[1], r(p[2]), r(p[3]), r(p[4]), r(p[5]), p[6], p[7], p[8], p[9]));
         add("leastSquares", (a, p) -> a.leastSquares(r(p[0]), r(p[1]), p[2], p[3]));
         add("uncertainty", (a, p) -> a.uncertainty(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
         add("convertComposition",
-            (a, p) -> a.convertComposition(r(p[0]), r(p[1]), p[2], p[3], p[4], p[5], p[6], p[7]));
-        add("batchTotals", (a, p) -> a.batchTotals(r(p[0]), r(p[1]), p[2], r(p[3]), p[4], p[5], p[6], p[7]));
-        add("recipe", (a, p) -> a.recipe(r(p[0]), p[1], p[2], r(p[3]), p[4], p[5], p[6], p[7], p[8], p[9]));
-        add("adjustBatch", (a, p) -> a.adjustBatch(r(p[0]), r(p[1]), p[2], r(p[3]), p[4], p[5], p[6], p[7], p[8],
-                p[9], p[10], p[11], p[12]));
+            (a, p) -> a.convertComposition(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5], p[6], p[7]));
+        add("batchTotals", (a, p) -> a.batchTotals(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5], p[6],
+                p[7]));
+        add("recipe", (a, p) -> a.recipe(r(p[0]), r(p[1]), r(p[2]), r(p[3]), r(p[4]), r(p[5]), p[6], p[7],
+                p[8], p[9]));
+        add("adjustBatch", (a, p) -> a.adjustBatch(r(p[0]), r(p[1]), r(p[2]), r(p[3]), r(p[4]), r(p[5]), p[6],
+                p[7], p[8], p[9], p[10], p[11], p[12]));
         add("additionVolume",
-            (a, p) -> a.additionVolume(r(p[0]), r(p[1]), p[2], p[3], p[4], p[5], p[6], p[7], p[8], p[9]));
+            (a, p) -> a.additionVolume(r(p[0]), r(p[1]), r(p[2]), r(p[3]), r(p[4]), r(p[5]), p[6], p[7],
+                p[8], p[9]));
         add("compositionFromDensity", (a, p) -> a.compositionFromDensity(r(p[0]), r(p[1]), r(p[2]), p[3], p[4],
                 p[5], p[6], p[7], p[8], p[9], p[10]));
         add("volumeCorrection",
-            (a, p) -> a.volumeCorrection(r(p[0]), r(p[1]), p[2], r(p[3]), p[4], p[5], p[6], p[7], p[8]));
+            (a, p) -> a.volumeCorrection(r(p[0]), r(p[1]), r(p[2]), r(p[3]), r(p[4]), p[5], p[6], p[7],
+                p[8]));
         add("addInInfo", (a, p) -> a.addInInfo(p[0]));
         add("mixtureMolarMass", (a, p) -> a.mixtureMolarMass(r(p[0]), r(p[1])));
     }

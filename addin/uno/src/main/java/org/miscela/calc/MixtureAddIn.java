@@ -46,11 +46,11 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     }
 
     @Override
-    public Object partialMolarVolume(Object[][] card, Object component, Object[][] moleFraction, Object[][] temperature,
-            Object extrapolate) throws IllegalArgumentException {
+    public Object partialMolarVolume(Object[][] card, Object[][] component, Object[][] moleFraction,
+            Object[][] temperature, Object extrapolate) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
-            int i = Arguments.component(c, component);
+            int i = Arguments.component(c, Arguments.value(component));
             Extrapolation e = Arguments.extrapolation(extrapolate);
             return CompositionArguments.overCompositions(c, moleFraction, temperature,
                     (k, x, t) -> CardFunctions.partialMolarVolume(k, i, x, t, e));
@@ -60,11 +60,11 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     }
 
     @Override
-    public Object partialExcessMolarVolume(Object[][] card, Object component, Object[][] moleFraction,
+    public Object partialExcessMolarVolume(Object[][] card, Object[][] component, Object[][] moleFraction,
             Object[][] temperature, Object extrapolate) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
-            int i = Arguments.component(c, component);
+            int i = Arguments.component(c, Arguments.value(component));
             Extrapolation e = Arguments.extrapolation(extrapolate);
             return CompositionArguments.overCompositions(c, moleFraction, temperature,
                     (k, x, t) -> CardFunctions.partialExcessMolarVolume(k, i, x, t, e));
@@ -100,11 +100,11 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     }
 
     @Override
-    public Object pureDensity(Object[][] card, Object component, Object[][] temperature, Object extrapolate)
+    public Object pureDensity(Object[][] card, Object[][] component, Object[][] temperature, Object extrapolate)
             throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
-            int i = Arguments.component(c, component);
+            int i = Arguments.component(c, Arguments.value(component));
             Extrapolation e = Arguments.extrapolation(extrapolate);
             return Arguments.broadcast(c, TEMPERATURE, new Object[][][] {temperature},
                     (k, p) -> CardFunctions.pureDensity(k, i, p[0], e));
@@ -147,11 +147,11 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     }
 
     @Override
-    public Object partialExcessEnthalpy(Object[][] card, Object component, Object[][] moleFraction,
+    public Object partialExcessEnthalpy(Object[][] card, Object[][] component, Object[][] moleFraction,
             Object[][] temperature, Object extrapolate) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
-            int i = Arguments.component(c, component);
+            int i = Arguments.component(c, Arguments.value(component));
             Extrapolation e = Arguments.extrapolation(extrapolate);
             return CompositionArguments.overCompositions(c, moleFraction, temperature,
                     (k, x, t) -> CardFunctions.partialExcessEnthalpy(k, i, x, t, e));
@@ -175,12 +175,12 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     }
 
     @Override
-    public Object additionHeat(Object[][] card, Object[][] amounts, Object component, Object added,
+    public Object additionHeat(Object[][] card, Object[][] amounts, Object[][] component, Object[][] added,
             Object[][] temperature, Object basis, Object extrapolate) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
-            int i = Arguments.component(c, component);
-            double more = Arguments.number("amount added", added);
+            int i = Arguments.component(c, Arguments.value(component));
+            double more = Arguments.number("amount added", Arguments.value(added));
             AmountBasis b = Arguments.basis(basis);
             Extrapolation e = Arguments.extrapolation(extrapolate);
             return CompositionArguments.overRows(c, "amount", amounts, temperature,
@@ -229,12 +229,12 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     }
 
     @Override
-    public Object fitExcessVolume(Object[][] moleFraction, Object[][] excessVolume, Object order, Object temperature,
-            Object orderInTemperature, Object referenceTemperature, Object weights, Object result)
+    public Object fitExcessVolume(Object[][] moleFraction, Object[][] excessVolume, Object[][] order,
+            Object temperature, Object orderInTemperature, Object referenceTemperature, Object weights, Object result)
             throws IllegalArgumentException {
         try {
             FitOutput output = Arguments.fitOutput(result);
-            int m = Arguments.requiredCount("order", order, RedlichKisterFitter.MAX_ORDER_IN_X);
+            int m = Arguments.requiredCount("order", Arguments.value(order), RedlichKisterFitter.MAX_ORDER_IN_X);
             int mt = Arguments.count("order in T", orderInTemperature, RedlichKisterFitter.MAX_ORDER_IN_T, 0);
             double[][] d = DataArguments.dataColumns(new String[] {"mole fraction", "excess volume", "temperature",
                 "weight"}, new Object[][][] {moleFraction, excessVolume, Arguments.optionalRange(temperature),
@@ -248,13 +248,13 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
 
     @Override
     public Object fitDensity(Object[][] pure, Object pair, Object[][] moleFraction, Object[][] density,
-            Object[][] temperature, Object order, Object orderInTemperature, Object referenceTemperature,
+            Object[][] temperature, Object[][] order, Object orderInTemperature, Object referenceTemperature,
             Object weights, Object result) throws IllegalArgumentException {
         try {
             FitOutput output = Arguments.fitOutput(result);
             Card c = CardReader.readPureComponents(pure);
             int[] p = Arguments.pair(c, pair);
-            int m = Arguments.requiredCount("order", order, RedlichKisterFitter.MAX_ORDER_IN_X);
+            int m = Arguments.requiredCount("order", Arguments.value(order), RedlichKisterFitter.MAX_ORDER_IN_X);
             int mt = Arguments.count("order in T", orderInTemperature, RedlichKisterFitter.MAX_ORDER_IN_T, 0);
             double[][] d = DataArguments.dataColumns(new String[] {"mole fraction", "density", "temperature", "weight"},
                     new Object[][][] {moleFraction, density, temperature, Arguments.optionalRange(weights)},
@@ -295,15 +295,17 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     }
 
     @Override
-    public Object convertComposition(Object[][] card, Object[][] values, Object from, Object to, Object temperature,
-            Object targetTemperature, Object balance, Object extrapolate) throws IllegalArgumentException {
+    public Object convertComposition(Object[][] card, Object[][] values, Object[][] from, Object[][] to,
+            Object temperature, Object targetTemperature, Object balance, Object extrapolate)
+            throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
             int b = Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE);
             double t = Arguments.optionalNumber("temperature", temperature);
             double tTo = Arguments.optionalNumber("to temperature", targetTemperature);
-            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("from", from, ""), t, b);
-            CompositionBasis out = BlendFunctions.basis(c, Arguments.text("to", to, ""), Double.isNaN(tTo) ? t : tTo, b);
+            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("from", Arguments.value(from), ""), t, b);
+            CompositionBasis out = BlendFunctions.basis(c, Arguments.text("to", Arguments.value(to), ""),
+                    Double.isNaN(tTo) ? t : tTo, b);
             Extrapolation e = Arguments.extrapolation(extrapolate);
             // Each basis carries its own temperature, so the lines need none of their own (0 is never read).
             return CompositionArguments.overValueLines(c, "values", values, new Object[][] {{0.0}},
@@ -315,11 +317,12 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     }
 
     @Override
-    public Object batchTotals(Object[][] card, Object[][] amounts, Object unit, Object[][] temperature, Object result,
-            Object resultUnit, Object storageTemperatures, Object extrapolate) throws IllegalArgumentException {
+    public Object batchTotals(Object[][] card, Object[][] amounts, Object[][] unit, Object[][] temperature,
+            Object result, Object resultUnit, Object storageTemperatures, Object extrapolate)
+            throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
-            String u = Arguments.text("unit", unit, null);
+            String u = Arguments.text("unit", Arguments.value(unit), null);
             String r = Arguments.text("result", result, null);
             String ru = Arguments.text("result unit", resultUnit, null);
             double[] storage = CompositionArguments.optionalLine(c, "storage temperatures", storageTemperatures);
@@ -332,15 +335,15 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     }
 
     @Override
-    public Object recipe(Object[][] card, Object quantity, Object unit, Object[][] composition, Object basis,
-            Object temperature, Object storageTemperatures, Object resultUnit, Object balance, Object extrapolate)
-            throws IllegalArgumentException {
+    public Object recipe(Object[][] card, Object[][] quantity, Object[][] unit, Object[][] composition,
+            Object[][] basis, Object[][] temperature, Object storageTemperatures, Object resultUnit, Object balance,
+            Object extrapolate) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
-            double q = Arguments.number("quantity", quantity);
-            String u = Arguments.text("unit", unit, null);
-            double t = Arguments.number("temperature", temperature);
-            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("basis", basis, ""), t,
+            double q = Arguments.number("quantity", Arguments.value(quantity));
+            String u = Arguments.text("unit", Arguments.value(unit), null);
+            double t = Arguments.number("temperature", Arguments.value(temperature));
+            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("basis", Arguments.value(basis), ""), t,
                     Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE));
             double[] storage = CompositionArguments.optionalLine(c, "storage temperatures", storageTemperatures);
             String ru = Arguments.text("result unit", resultUnit, null);
@@ -354,20 +357,21 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     }
 
     @Override
-    public Object adjustBatch(Object[][] card, Object[][] amounts, Object unit, Object[][] target, Object basis,
-            Object temperature, Object mode, Object limit, Object limitUnit, Object result, Object resultUnit,
-            Object balance, Object extrapolate) throws IllegalArgumentException {
+    public Object adjustBatch(Object[][] card, Object[][] amounts, Object[][] unit, Object[][] target,
+            Object[][] basis, Object[][] temperature, Object mode, Object limit, Object limitUnit, Object result,
+            Object resultUnit, Object balance, Object extrapolate) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
-            double t = Arguments.number("temperature", temperature);
-            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("basis", basis, ""), t,
+            double t = Arguments.number("temperature", Arguments.value(temperature));
+            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("basis", Arguments.value(basis), ""), t,
                     Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE));
             double[] batch = CompositionArguments.singleComposition(c, "amounts", amounts);
             double[] goal = CompositionArguments.optionalLine(c, "target", target);
             if (goal.length == 1) {
                 goal = BlendFunctions.binary(c, goal[0], in);
             }
-            Object r = BlendFunctions.adjust(c, batch, Arguments.text("unit", unit, null), null, goal, in, t,
+            Object r = BlendFunctions.adjust(c, batch, Arguments.text("unit", Arguments.value(unit), null), null, goal,
+                    in, t,
                     Arguments.text("mode", mode, null), Arguments.optionalNumber("limit", limit),
                     Arguments.text("limit unit", limitUnit, null), Arguments.text("result", result, null),
                     Arguments.text("result unit", resultUnit, null), Arguments.extrapolation(extrapolate));
@@ -379,17 +383,18 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     }
 
     @Override
-    public Object additionVolume(Object[][] card, Object[][] amounts, Object unit, Object component, Object added,
-            Object temperature, Object result, Object resultUnit, Object storageTemperatures, Object extrapolate)
-            throws IllegalArgumentException {
+    public Object additionVolume(Object[][] card, Object[][] amounts, Object[][] unit, Object[][] component,
+            Object[][] added, Object[][] temperature, Object result, Object resultUnit, Object storageTemperatures,
+            Object extrapolate) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
-            String u = Arguments.text("unit", unit, null);
+            String u = Arguments.text("unit", Arguments.value(unit), null);
             return Arguments.finite(BlendFunctions.additionVolume(c,
                     CompositionArguments.singleComposition(c, "amounts", amounts), u,
                     CompositionArguments.optionalLine(c, "storage temperatures", storageTemperatures),
-                    Arguments.component(c, component), Arguments.number("amount added", added), u,
-                    Arguments.number("temperature", temperature), Arguments.text("result", result, null),
+                    Arguments.component(c, Arguments.value(component)),
+                    Arguments.number("amount added", Arguments.value(added)), u,
+                    Arguments.number("temperature", Arguments.value(temperature)), Arguments.text("result", result, null),
                     Arguments.text("result unit", resultUnit, null), Arguments.extrapolation(extrapolate)));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "additionVolume");
@@ -420,15 +425,16 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     }
 
     @Override
-    public Object volumeCorrection(Object[][] card, Object[][] composition, Object basis, Object[][] temperature,
-            Object referenceTemperature, Object result, Object basisTemperature, Object balance, Object extrapolate)
-            throws IllegalArgumentException {
+    public Object volumeCorrection(Object[][] card, Object[][] composition, Object[][] basis, Object[][] temperature,
+            Object[][] referenceTemperature, Object result, Object basisTemperature, Object balance,
+            Object extrapolate) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
-            double tRef = Arguments.number("reference temperature", referenceTemperature);
+            double tRef = Arguments.number("reference temperature", Arguments.value(referenceTemperature));
             double tb = Arguments.optionalNumber("basis temperature", basisTemperature);
-            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("basis", basis, ""), Double.isNaN(tb) ? tRef
-                    : tb, Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE));
+            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("basis", Arguments.value(basis), ""),
+                    Double.isNaN(tb) ? tRef : tb, Arguments.optionalComponent(c, balance,
+                    BlendFunctions.DEFAULT_BALANCE));
             String r = Arguments.text("result", result, null);
             Extrapolation e = Arguments.extrapolation(extrapolate);
             return CompositionArguments.overValueLines(c, "composition", composition, temperature,
@@ -440,9 +446,9 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     }
 
     @Override
-    public String explainCall(Object functionName, Object[] arguments) {
+    public String explainCall(Object[][] functionName, Object[] arguments) {
         try {
-            return Explanations.explain(this, functionName, arguments);
+            return Explanations.explain(this, Arguments.value(functionName), arguments);
         } catch (RuntimeException ex) {
             return Failures.words(ex, "explainCall");
         }

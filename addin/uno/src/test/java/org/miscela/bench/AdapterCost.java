@@ -23,6 +23,8 @@ public final class AdapterCost {
     }
 
     private static final int BATCH = 2_000;
+    /** The component argument as Calc passes it: a one-cell range (the first component). */
+    private static final Object[][] ONE = {{1.0}};
     private static final com.sun.management.ThreadMXBean THREADS =
             (com.sun.management.ThreadMXBean) ManagementFactory.getThreadMXBean();
 
@@ -36,7 +38,7 @@ public final class AdapterCost {
 
     static Cost partialVolume(int calls) throws Exception {
         MixtureAddIn addIn = new MixtureAddIn();
-        return measure(calls, (card, x, t) -> addIn.partialMolarVolume(card, 1.0, x, t, null));
+        return measure(calls, (card, x, t) -> addIn.partialMolarVolume(card, ONE, x, t, null));
     }
 
     /** One array call over a block of {@code rows} compositions: time and bytes per row. */

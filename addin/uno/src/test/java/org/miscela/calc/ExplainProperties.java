@@ -59,7 +59,7 @@ class ExplainProperties {
             // Calc never calls with a range argument missing (it shows Err:502 itself)
             Assume.that(target.kinds.charAt(i) != 'R' || arguments[i] != null);
         }
-        assertEquals(expected, addIn.explainCall(name, arguments), () -> "MIX.EXPLAIN(\"" + name + "\"; …) of " + call
+        assertEquals(expected, addIn.explainCall(new Object[][] {{name}}, arguments), () -> "MIX.EXPLAIN(\"" + name + "\"; …) of " + call
                 + "\n  as " + Arrays.deepToString(arguments));
     }
 

@@ -32,8 +32,9 @@ class ExplanationsTest {
         return new Object[][] {{v}};
     }
 
+    /** MIX.EXPLAIN of the name (as Calc passes it: a one-cell range) and the arguments. */
     private String explain(Object name, Object... arguments) {
-        return addIn.explainCall(name, arguments);
+        return addIn.explainCall(one(name), arguments);
     }
 
     /**
@@ -78,12 +79,17 @@ class ExplanationsTest {
                 + "catalogue lacks, or in another order");
     }
 
-    /** The kinds word: 'R' for each range parameter and 'V' for each single value, in IDL order. */
+    /**
+     * The kinds word: 'R' for each parameter typed as a range (ranges and required single values) and 'V' for each
+     * optional single value, in IDL order.
+     */
     @Test
     void theKindsAreTheCataloguesTypes() {
         assertEquals("RRRV", Explanations.kinds(FunctionCatalog.byMethod("mixtureDensity")));
-        assertEquals("RVRRV", Explanations.kinds(FunctionCatalog.byMethod("partialMolarVolume")));
-        assertEquals("RVVRVVVVVV", Explanations.kinds(FunctionCatalog.byMethod("recipe")));
+        // a required single value is typed as a range (the component, the recipe's quantity, unit, basis and
+        // temperature), so that the wizard shows it as required
+        assertEquals("RRRRV", Explanations.kinds(FunctionCatalog.byMethod("partialMolarVolume")));
+        assertEquals("RRRRRRVVVV", Explanations.kinds(FunctionCatalog.byMethod("recipe")));
         assertEquals("V", Explanations.kinds(FunctionCatalog.byMethod("addInInfo")));
     }
 
@@ -94,7 +100,7 @@ class ExplanationsTest {
         assertEquals(e.getMessage(), explain("MIX.DENSITY", CARD, 0.3, 45.0));
         assertEquals("Problem.OUTSIDE_TEMPERATURE", Catalogue.entryOf(e.getMessage()));
         IllegalArgumentException unit = assertThrows(IllegalArgumentException.class, () -> addIn.batchTotals(CARD,
-                new Object[][] {{50.0, 50.0}}, "oz", one(20.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+                new Object[][] {{50.0, 50.0}}, one("oz"), one(20.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID));
         assertEquals(unit.getMessage(), explain("MIX.BATCH", CARD, new Object[][] {{50.0, 50.0}}, "oz", 20.0));
         assertEquals("Problem.BLEND_UNKNOWN_UNIT", Catalogue.entryOf(unit.getMessage()));
     }
@@ -142,10 +148,11 @@ class ExplanationsTest {
                 + "Calc shows Err:504 for such a call without calling the function.", few);
         String many = explain("MIX.CHECK", CARD, 1.0);
         assertTrue(many.startsWith("MIX.CHECK takes 1 argument (MIX.CHECK(card)), not 2"), many);
-        assertTrue(explain("MIX.FITEXCESS", one(0.5)).startsWith("MIX.FITEXCESS takes 2 to 8 arguments"));
-        // the order is a value argument: Calc calls the fit without it, and the fit says what is wrong
+        assertTrue(explain("MIX.FITEXCESS", one(0.5)).startsWith("MIX.FITEXCESS takes 3 to 8 arguments"));
+        // the order is required and typed as a range: Calc refuses a call without it (Err:504), as MIX.EXPLAIN says
         String noOrder = explain("MIX.FITEXCESS", new Object[][] {{0.2}, {0.4}}, new Object[][] {{-0.7}, {-1.0}});
-        assertTrue(Catalogue.entryOf(noOrder) != null && !noOrder.contains("Err:504"), noOrder);
+        assertEquals("Problem.EXPLAIN_ARGUMENT_COUNT", Catalogue.entryOf(noOrder), noOrder);
+        assertTrue(noOrder.startsWith("MIX.FITEXCESS takes 3 to 8 arguments"), noOrder);
     }
 
     /**
@@ -156,13 +163,23 @@ class ExplanationsTest {
     void argumentsArriveInCalcsForms() throws Exception {
         assertEquals(explain("MIX.DENSITY", CARD, one(0.3), one(45.0)), explain("MIX.DENSITY", CARD, 0.3, 45.0));
         assertEquals(explain("MIX.DENSITY", CARD, 0.3, 45.0), explain("MIX.DENSITY", CARD, 0.3, 45.0, Any.VOID));
-        assertEquals("The x, argument 2 of MIX.CHECKPOINT, is left out; a range argument cannot be, so Calc shows "
+        assertEquals("The x, argument 2 of MIX.CHECKPOINT, is left out; a required argument cannot be, so Calc shows "
                 + "Err:502 for the call without calling the function: give a value, a cell or a range.",
                 explain("MIX.CHECKPOINT", CARD, Any.VOID, 20.0));
         String card = explain("MIX.DENSITY", Any.VOID, 0.3, 20.0);
         assertEquals("Problem.EXPLAIN_RANGE_LEFT_OUT", Catalogue.entryOf(card), card);
         assertTrue(card.startsWith("The card, argument 1 of MIX.DENSITY"), card);
         assertEquals("OK", explain("MIX.ADDVOLUME", CARD, new Object[][] {{50.0, 50.0}}, "g", "ethanol", 10.0, 20.0,
-                Any.VOID, "mL"), "a value argument left out in the middle");
+                Any.VOID, "mL"), "an optional value argument left out in the middle");
+        // a required single value left out in the middle: Calc's own Err:502, as for a range
+        String quantity = explain("MIX.RECIPE", CARD, Any.VOID, "L", 40.0, "%vol", 20.0);
+        assertEquals("The quantity, argument 2 of MIX.RECIPE, is left out; a required argument cannot be, so Calc "
+                + "shows Err:502 for the call without calling the function: give a value, a cell or a range.",
+                quantity);
+        // given as a value, a one-cell range or inline array, a required single value means the same
+        assertEquals(explain("MIX.PARTIALVOLUME", CARD, "glycol", 0.3, 20.0), explain("MIX.PARTIALVOLUME", CARD,
+                one("glycol"), 0.3, 20.0));
+        assertEquals("Problem.UNKNOWN_COMPONENT_ARG", Catalogue.entryOf(explain("MIX.PARTIALVOLUME", CARD,
+                one("glycol"), 0.3, 20.0)));
     }
 }

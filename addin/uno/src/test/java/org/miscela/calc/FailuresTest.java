@@ -62,7 +62,7 @@ class FailuresTest {
         assertEquals(null, Catalogue.entryOf(words), "no oracle may take an unexpected failure for a refusal");
 
         // MIX.EXPLAIN of the same call answers with the same words
-        assertEquals(words, addIn.explainCall("MIX.DENSITY", new Object[] {CARD, NULL_ROW, TWENTY}));
+        assertEquals(words, addIn.explainCall(new Object[][] {{"MIX.DENSITY"}}, new Object[] {CARD, NULL_ROW, TWENTY}));
 
         // MIX.INFO("last failure"): the time (UTC, to the second) and the words
         String last = (String) addIn.addInInfo("last failure");

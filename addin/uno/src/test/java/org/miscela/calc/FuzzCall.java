@@ -22,8 +22,9 @@ import org.miscela.core.problem.MiscelaException;
 /**
  * One generated call of a {@link MixtureAddIn} method, made from a seed against a fuzz card: arguments in the forms
  * Calc passes them (ranges as rectangular Object[][] of Double and String with "" for blanks, optional arguments as
- * {@link Any#VOID}, scalars as Double, String or Boolean), aimed at the card's components and validity range and at
- * the edges around them, with wrong shapes, blanks, text and non-finite numbers mixed in. All values are invented.
+ * {@link Any#VOID}, scalars as Double, String or Boolean; a scalar for a parameter typed as a range, as every required
+ * single value is, as a one-cell range), aimed at the card's components and validity range and at the edges around
+ * them, with wrong shapes, blanks, text and non-finite numbers mixed in. All values are invented.
  */
 final class FuzzCall {
     /**
@@ -84,15 +85,34 @@ final class FuzzCall {
         return FuzzCards.rectangular(card.cells);
     }
 
-    /** Every argument of the call in the method's order, the card's cells first where the method takes them. */
+    /**
+     * Every argument of the call in the method's order, the card's cells first where the method takes them, each in
+     * the form Calc passes for its parameter's IDL type (the catalogue's): a single value given for a parameter typed
+     * as a range (every required single value is) arrives as a one-cell range. The generators never leave such an
+     * argument out: Calc refuses that call itself.
+     */
     Object[] allArguments() {
-        if (!takesCard()) {
-            return args.clone();
+        Object[] all = new Object[function.arguments().size()];
+        int first = takesCard() ? 1 : 0;
+        if (takesCard()) {
+            all[0] = cardCells();
         }
-        Object[] all = new Object[args.length + 1];
-        all[0] = cardCells();
-        System.arraycopy(args, 0, all, 1, args.length);
+        for (int i = 0; i < args.length && first + i < all.length; i++) {
+            all[first + i] = calcForm(function.arguments().get(first + i), args[i]);
+        }
         return all;
+    }
+
+    /** A generated argument as Calc passes it to a parameter of the argument's IDL type. */
+    private Object calcForm(org.miscela.core.catalog.ArgumentInfo a, Object v) {
+        if (a.kind() != IdlType.Kind.RANGE || v instanceof Object[][]) {
+            return v;
+        }
+        if (v == Any.VOID) {
+            throw new AssertionError("the generator left out " + method() + "'s " + a.name() + ", which Calc never "
+                    + "does for a parameter typed as a range (it shows Err:502 without a call)");
+        }
+        return new Object[][] {{v}};
     }
 
     /**
@@ -317,7 +337,8 @@ final class FuzzCall {
                     if (densities.length > 1 && r.nextBoolean()) {
                         t = new Object[][] {{tValue}, {temperatureValue()}};
                     }
-                    a = new Object[] {densities, t, r.nextBoolean() ? Any.VOID : component(), basisWord(),
+                    a = new Object[] {densities, t, r.nextBoolean() ? Any.VOID : component(),
+                        r.nextInt(4) == 0 ? Any.VOID : basisWord(),
                         temperatureOrVoid(), r.nextInt(3) == 0 ? composition() : Any.VOID,
                         r.nextBoolean() ? Any.VOID : (Object) (0.3 * r.nextDouble()),
                         r.nextBoolean() ? Any.VOID : (Object) (0.7 + 0.3 * r.nextDouble()), balance(), extrapolate()};
@@ -383,7 +404,7 @@ final class FuzzCall {
                 return pick(name, name.toUpperCase(java.util.Locale.ROOT), "  " + name + " ");
             }
             return pick(0.0, (double) card.componentCount() + 1, 1.5, -1.0, Double.NaN, Double.POSITIVE_INFINITY,
-                    "nobody", "", " ", Boolean.TRUE, Any.VOID, new Object[][] {{1.0}}, 1e300);
+                    "nobody", "", " ", Boolean.TRUE, new Object[][] {{1.0}}, new Object[][] {{1.0, 2.0}}, 1e300);
         }
 
         Object basis() {
@@ -399,7 +420,7 @@ final class FuzzCall {
             if (p < 6) {
                 return 10 * r.nextDouble();
             }
-            return pick(0.0, -1.0, Double.NaN, Double.POSITIVE_INFINITY, 1e300, "one", Any.VOID,
+            return pick(0.0, -1.0, Double.NaN, Double.POSITIVE_INFINITY, 1e300, "one", "",
                     new Object[][] {{2.0}}, new Object[][] {{1.0, 2.0}});
         }
 
@@ -614,7 +635,7 @@ final class FuzzCall {
         /** A composition basis by one of its spellings, or (not clean) a word that is none. */
         Object basisWord() {
             if (!clean && r.nextInt(8) == 0) {
-                return pick("ppm", "", Any.VOID, 1.0, "mole  fraction");
+                return pick("ppm", "", 0.0, 1.0, "mole  fraction", new Object[][] {{"x", "w"}});
             }
             return pick("mole fraction", "mass fraction", "volume fraction", "%vol", "mol/L", "g/L", "mol/kg", "x",
                     "w", "phi", " % vol ", "Mass Fraction");
@@ -644,7 +665,7 @@ final class FuzzCall {
 
         Object amountUnit() {
             if (!clean && r.nextInt(8) == 0) {
-                return pick("oz", "gallon", "", Any.VOID, 3.0, "KG", "Litre", "kg conventional");
+                return pick("oz", "gallon", "", 0.0, 3.0, "KG", "Litre", "kg conventional", new Object[][] {{"g"}, {"kg"}});
             }
             return pick("mol", "kmol", "g", "kg", "t", "tonne", "lb", "lbs", "kg (conventional)", "g air", "lb air",
                     "mL", "millilitre", "L", "litre", "liters", "m3", "cm³", "dm3", "gal", "US gal", "imp gal",
@@ -678,7 +699,7 @@ final class FuzzCall {
 
         Object quantity() {
             int p = r.nextInt(clean ? 8 : 10);
-            return p < 8 ? (Object) (1000 * r.nextDouble()) : pick(0.0, -5.0, Double.NaN, 1e300, "ten", Any.VOID);
+            return p < 8 ? (Object) (1000 * r.nextDouble()) : pick(0.0, -5.0, Double.NaN, 1e300, "ten", "");
         }
 
         /** A density the card can have at t (the mixture at a random composition), or any number if it cannot. */
@@ -701,8 +722,8 @@ final class FuzzCall {
             if (p < 15) {
                 return (double) r.nextInt(usual + 1);
             }
-            return pick((double) highest, (double) highest + 1, -1.0, 1.5, Double.NaN, "two", Any.VOID,
-                    new Object[][] {{2.0}}, Boolean.TRUE);
+            return pick((double) highest, (double) highest + 1, -1.0, 1.5, Double.NaN, "two", "",
+                    new Object[][] {{2.0}}, new Object[][] {{1.0}, {2.0}}, Boolean.TRUE);
         }
 
         Object fitResult() {

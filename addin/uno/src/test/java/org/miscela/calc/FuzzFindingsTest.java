@@ -86,7 +86,7 @@ class FuzzFindingsTest {
      */
     @Test
     void rSquaredOfDataThatDoNotVaryIsUndefined() throws Exception {
-        Object[][] statistics = table(addIn.fitExcessVolume(one(0.5988679358961072), one(-1.9274398520227651), 0.0,
+        Object[][] statistics = table(addIn.fitExcessVolume(one(0.5988679358961072), one(-1.9274398520227651), one(0.0),
                 Any.VOID, Any.VOID, Any.VOID, Any.VOID, "statistics"));
         assertEquals("undefined", valueOf(statistics, "R²"));
     }
@@ -174,10 +174,10 @@ class FuzzFindingsTest {
     @Test
     void batchTotalThatOverflowsIsRefusedByDesign() throws Exception {
         Object[][] card = heavyCard();
-        assertTrue((Double) addIn.batchTotals(card, range(row(1.0, 1.0)), "mol", one(300.0), "mass", Any.VOID,
-                Any.VOID, Any.VOID) > 0, "an ordinary batch of the same card");
+        assertTrue((Double) addIn.batchTotals(card, range(row(1.0, 1.0)), one("mol"), one(300.0), "mass",
+                Any.VOID, Any.VOID, Any.VOID) > 0, "an ordinary batch of the same card");
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> addIn.batchTotals(card,
-                range(row(1e6, 1.0)), "kmol", one(300.0), "mass", Any.VOID, Any.VOID, Any.VOID));
+                range(row(1e6, 1.0)), one("kmol"), one(300.0), "mass", Any.VOID, Any.VOID, Any.VOID));
         assertEquals("Problem.NON_PHYSICAL", Catalogue.entryOf(e.getMessage()), e.getMessage());
     }
 
@@ -193,15 +193,17 @@ class FuzzFindingsTest {
         Object[][] card = range(rows.toArray(new Object[0][]));
         assertEquals("OK", addIn.checkCard(card), "the card reads");
         IllegalArgumentException add = assertThrows(IllegalArgumentException.class, () -> addIn.additionVolume(card,
-                range(row(10.0, 10.0)), "kmol", 2.0, 2.0, 300.0, Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+                range(row(10.0, 10.0)), one("kmol"), one(2.0), one(2.0), one(300.0), Any.VOID, Any.VOID, Any.VOID,
+                Any.VOID));
         assertEquals("Problem.NON_PHYSICAL", Catalogue.entryOf(add.getMessage()), add.getMessage());
         IllegalArgumentException adjust = assertThrows(IllegalArgumentException.class, () -> addIn.adjustBatch(card,
-                range(row(10.0, 10.0)), "kmol", range(row(0.4, 0.6)), "mole fraction", 300.0, Any.VOID, Any.VOID,
+                range(row(10.0, 10.0)), one("kmol"), range(row(0.4, 0.6)), one("mole fraction"), one(300.0), Any.VOID,
+                Any.VOID,
                 Any.VOID, "volume", Any.VOID, Any.VOID, Any.VOID));
         assertEquals("Problem.NON_PHYSICAL", Catalogue.entryOf(adjust.getMessage()), adjust.getMessage());
         Object[][] ordinary = range(heatCard().toArray(new Object[0][]));
-        assertTrue(Double.isFinite((Double) addIn.additionVolume(ordinary, range(row(10.0, 10.0)), "kmol", 2.0, 2.0,
-                300.0, Any.VOID, Any.VOID, Any.VOID, Any.VOID)), "the same addition on an ordinary card");
+        assertTrue(Double.isFinite((Double) addIn.additionVolume(ordinary, range(row(10.0, 10.0)), one("kmol"),
+                one(2.0), one(2.0), one(300.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID)), "the same addition on an ordinary card");
     }
 
     /**
@@ -216,11 +218,12 @@ class FuzzFindingsTest {
         rows.set(18, row("excess volume A0", "alpha + beta", -400.0));
         Object[][] card = range(rows.toArray(new Object[0][]));
         IllegalArgumentException batch = assertThrows(IllegalArgumentException.class,
-                () -> addIn.batchTotals(card, range(row(1.0, 1.0)), "mol", one(300.0), "volume", "mL", Any.VOID,
+                () -> addIn.batchTotals(card, range(row(1.0, 1.0)), one("mol"), one(300.0), "volume", "mL", Any.VOID,
                         Any.VOID));
         assertEquals("Problem.NON_PHYSICAL", Catalogue.entryOf(batch.getMessage()), "the batch itself is refused");
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> addIn.adjustBatch(card,
-                range(row(1.0, 1.0)), "mol", range(row(0.05, 0.95)), "mole fraction", 300.0, "make up", 10.0, "mL",
+                range(row(1.0, 1.0)), one("mol"), range(row(0.05, 0.95)), one("mole fraction"), one(300.0), "make up",
+                10.0, "mL",
                 Any.VOID, Any.VOID, Any.VOID, Any.VOID));
         assertEquals("Problem.LIMIT_UNREACHABLE", Catalogue.entryOf(e.getMessage()), e.getMessage());
     }
@@ -239,10 +242,11 @@ class FuzzFindingsTest {
                 () -> addIn.mixingHeat(card, range(row(1e308, 1e308)), one(300.0), "kg", Any.VOID));
         assertEquals("Problem.AMOUNT_TOO_LARGE", Catalogue.entryOf(heat.getMessage()), heat.getMessage());
         IllegalArgumentException added = assertThrows(IllegalArgumentException.class,
-                () -> addIn.additionHeat(card, range(row(1e308, 1.0)), 1.0, 1e308, one(300.0), "mol", Any.VOID));
+                () -> addIn.additionHeat(card, range(row(1e308, 1.0)), one(1.0), one(1e308), one(300.0), "mol",
+                        Any.VOID));
         assertEquals("Problem.AMOUNT_TOO_LARGE", Catalogue.entryOf(added.getMessage()), added.getMessage());
         IllegalArgumentException batch = assertThrows(IllegalArgumentException.class, () -> addIn.batchTotals(card,
-                range(row(1e308, 1e308)), "kg", one(300.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+                range(row(1e308, 1e308)), one("kg"), one(300.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID));
         assertEquals("Problem.BLEND_AMOUNT_TOO_LARGE", Catalogue.entryOf(batch.getMessage()), batch.getMessage());
         IllegalArgumentException zero = assertThrows(IllegalArgumentException.class,
                 () -> addIn.mixingHeat(card, range(row(0.0, 0.0)), one(300.0), "kg", Any.VOID));
@@ -261,10 +265,9 @@ class FuzzFindingsTest {
                 () -> addIn.partialMolarVolume(card, range(row(1.0, 2.0)), one(0.5), one(300.0), Any.VOID));
         assertEquals("Problem.ARG_NOT_SINGLE", Catalogue.entryOf(e.getMessage()), e.getMessage());
         assertTrue(e.getMessage().contains("component"), e.getMessage());
-        assertEquals(addIn.partialMolarVolume(card, 2.0, one(0.5), one(300.0), Any.VOID),
-                addIn.partialMolarVolume(card, one(2.0), one(0.5), one(300.0), Any.VOID), "a one-cell range");
-        assertEquals(addIn.partialMolarVolume(card, "beta", one(0.5), one(300.0), Any.VOID),
-                addIn.partialMolarVolume(card, one("beta"), one(0.5), one(300.0), Any.VOID), "a one-cell name");
+        assertEquals(addIn.partialMolarVolume(card, one(2.0), one(0.5), one(300.0), Any.VOID),
+                addIn.partialMolarVolume(card, one("beta"), one(0.5), one(300.0), Any.VOID),
+                "a one-cell range: the number and the name of the same component");
     }
 
     /**

@@ -60,11 +60,11 @@ class MixtureAddInTest {
 
     @Test
     void componentByNumberOrName() throws Exception {
-        Object byNumber = addIn.partialMolarVolume(CARD, 2.0, one(0.4), one(25.0), Any.VOID);
-        Object byName = addIn.partialMolarVolume(CARD, "Water", one(0.4), one(25.0), Any.VOID);
+        Object byNumber = addIn.partialMolarVolume(CARD, one(2.0), one(0.4), one(25.0), Any.VOID);
+        Object byName = addIn.partialMolarVolume(CARD, one("Water"), one(0.4), one(25.0), Any.VOID);
         assertEquals((Double) byNumber, (Double) byName, 0.0);
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> addIn.partialMolarVolume(CARD, 3.0, one(0.4), one(25.0), Any.VOID));
+                () -> addIn.partialMolarVolume(CARD, one(3.0), one(0.4), one(25.0), Any.VOID));
         assertTrue(e.getMessage().contains("ethanol, water"), e.getMessage());
     }
 
@@ -206,7 +206,7 @@ class MixtureAddInTest {
         assertEquals(kg, mixed, 1e-9 * Math.abs(kg));
         assertEquals(1000 * kg, (Double) addIn.mixingHeat(TERNARY, new Object[][] {{0.45359237, 1.0, 1.0}},
                 one(25.0), " Tonne ", Any.VOID), 1e-9 * Math.abs(1000 * kg));
-        double added = (Double) addIn.additionHeat(TERNARY, batch, "Q", 1.0, one(25.0), Any.VOID, Any.VOID);
+        double added = (Double) addIn.additionHeat(TERNARY, batch, one("Q"), one(1.0), one(25.0), Any.VOID, Any.VOID);
         double direct = CardFunctions.mixingHeat(TERNARY_CARD, new double[] {2, 6, 1},
                 org.miscela.core.functions.AmountBasis.MOL, 25, Extrapolation.AS_CARD) - mol;
         assertEquals(direct, added, 1e-9 * Math.abs(direct));
@@ -237,21 +237,25 @@ class MixtureAddInTest {
         assertTrue(e.getMessage().contains("volume, enthalpy"), e.getMessage());
     }
 
-    /** A fit whose order is left out says so (it used to say "found -1", a number nobody wrote). */
+    /**
+     * A fit whose order is blank says so (it used to say "found -1", a number nobody wrote). Calc itself refuses a
+     * call that leaves the order out (Err:504: it is typed as a range); a cell holding empty text gives "", and a
+     * caller of the library may pass nothing.
+     */
     @Test
     void aFitWithoutItsOrderSaysTheOrderIsBlank() throws Exception {
         Object[][] x = {{0.2}, {0.4}, {0.6}, {0.8}};
         Object[][] v = {{-0.736}, {-1.008}, {-0.912}, {-0.544}};
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> addIn.fitExcessVolume(x, v, Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+                () -> addIn.fitExcessVolume(x, v, one(""), Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID));
         assertEquals("The order is blank.", e.getMessage());
-        assertEquals("The order is blank.", addIn.fitExcessVolume(x, v, Any.VOID, Any.VOID, Any.VOID, Any.VOID,
+        assertEquals("The order is blank.", addIn.fitExcessVolume(x, v, null, Any.VOID, Any.VOID, Any.VOID,
                 Any.VOID, "check"));
         IllegalArgumentException d = assertThrows(IllegalArgumentException.class, () -> addIn.fitDensity(CARD,
-                Any.VOID, x, new Object[][] {{960.0}, {930.0}, {890.0}, {850.0}}, one(20.0), Any.VOID, Any.VOID,
+                Any.VOID, x, new Object[][] {{960.0}, {930.0}, {890.0}, {850.0}}, one(20.0), one(" "), Any.VOID,
                 Any.VOID, Any.VOID, Any.VOID));
         assertEquals("The order is blank.", d.getMessage());
-        Object ok = addIn.fitExcessVolume(x, v, 1.0, Any.VOID, Any.VOID, Any.VOID, Any.VOID, "check");
+        Object ok = addIn.fitExcessVolume(x, v, one(1.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID, "check");
         assertEquals("OK", ((Object[][]) ((Any) ok).getObject())[0][0], "with the order given");
     }
 
@@ -261,10 +265,10 @@ class MixtureAddInTest {
         Object[][] x = {{0.2}, {0.4}, {0.6}, {0.8}};
         Object[][] v = {{-0.736}, {-1.008}, {-0.912}, {-0.544}};
         IllegalArgumentException order = assertThrows(IllegalArgumentException.class,
-                () -> addIn.fitExcessVolume(x, v, 31.0, Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+                () -> addIn.fitExcessVolume(x, v, one(31.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID));
         assertEquals("The order must be a whole number from 0 to 30; found 31.", order.getMessage());
         IllegalArgumentException unit = assertThrows(IllegalArgumentException.class, () -> addIn.batchTotals(CARD,
-                new Object[][] {{50.0, 50.0}}, 5.0, one(20.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+                new Object[][] {{50.0, 50.0}}, one(5.0), one(20.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID));
         assertEquals("The unit must be text; found 5.", unit.getMessage());
     }
 
@@ -278,28 +282,29 @@ class MixtureAddInTest {
         double kEthanol = (1 - 1.2 / 8000) / (1 - 1.2 / org.miscela.reference.Oiml22.density(1, 20));
         double kWater = (1 - 1.2 / 8000) / (1 - 1.2 / org.miscela.reference.Oiml22.density(0, 20));
         Object[][] batch = {{50.0, 50.0}};
-        double grams = (Double) addIn.batchTotals(CARD, batch, "g (conventional)", one(20.0), "mass", "g", Any.VOID,
+        double grams = (Double) addIn.batchTotals(CARD, batch, one("g (conventional)"), one(20.0), "mass", "g", Any.VOID,
                 Any.VOID);
         assertEquals(50 * kEthanol + 50 * kWater, grams, 1e-9);
-        double volume = (Double) addIn.batchTotals(CARD, batch, "g air", one(20.0), Any.VOID, "mL", Any.VOID,
+        double volume = (Double) addIn.batchTotals(CARD, batch, one("g air"), one(20.0), Any.VOID, "mL", Any.VOID,
                 Any.VOID);
-        assertEquals((Double) addIn.batchTotals(CARD, new Object[][] {{50 * kEthanol, 50 * kWater}}, "g", one(20.0),
+        assertEquals((Double) addIn.batchTotals(CARD, new Object[][] {{50 * kEthanol, 50 * kWater}}, one("g"), one(20.0),
                 Any.VOID, "mL", Any.VOID, Any.VOID), volume, 1e-9);
-        Object[][] recipe = (Object[][]) ((Any) addIn.recipe(CARD, 1.0, "kg", one(0.5), "mass fraction", 20.0,
+        Object[][] recipe = (Object[][]) ((Any) addIn.recipe(CARD, one(1.0), one("kg"), one(0.5), one("mass fraction"), one(20.0),
                 Any.VOID, "kg air", Any.VOID, Any.VOID)).getObject();
         assertEquals(0.5 / kEthanol, (Double) recipe[0][0], 1e-12);
         assertEquals(0.5 / kWater, (Double) recipe[0][1], 1e-12);
-        Object[][] added = (Object[][]) ((Any) addIn.adjustBatch(CARD, new Object[][] {{500.0, 500.0}}, "g air",
-                one(0.4), "mass fraction", 20.0, Any.VOID, Any.VOID, Any.VOID, Any.VOID, "g air", Any.VOID, Any.VOID))
+        Object[][] added = (Object[][]) ((Any) addIn.adjustBatch(CARD, new Object[][] {{500.0, 500.0}}, one("g air"),
+                one(0.4), one("mass fraction"), one(20.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID, "g air", Any.VOID, Any.VOID))
                 .getObject();
         double water = 500 * kEthanol / 0.4 - 500 * kEthanol - 500 * kWater;
         assertEquals(water / kWater, (Double) added[0][1], 1e-9);
         // a gallon and a pound: 1 US gal of 40 %vol holds 0.4 gal of ethanol at 20 °C (definition of %vol)
-        Object[][] gallons = (Object[][]) ((Any) addIn.recipe(CARD, 1.0, "gal", one(40.0), "%vol", 20.0, 20.0, "US gal",
+        Object[][] gallons = (Object[][]) ((Any) addIn.recipe(CARD, one(1.0), one("gal"), one(40.0), one("%vol"), one(20.0), 20.0,
+                "US gal",
                 Any.VOID, Any.VOID)).getObject();
         assertEquals(0.4, (Double) gallons[0][0], 1e-12);
         IllegalArgumentException light = assertThrows(IllegalArgumentException.class, () -> addIn.batchTotals(
-                TestCards.cells("invented-lighter-than-air.tsv"), batch, "kg air", one(20.0), Any.VOID, Any.VOID,
+                TestCards.cells("invented-lighter-than-air.tsv"), batch, one("kg air"), one(20.0), Any.VOID, Any.VOID,
                 Any.VOID, Any.VOID));
         assertEquals("Problem.LIGHTER_THAN_AIR", Catalogue.entryOf(light.getMessage()), light.getMessage());
     }
@@ -334,8 +339,8 @@ class MixtureAddInTest {
         assertEquals("", column[1][0]);
         assertEquals(62.07, (Double) column[2][0], 1e-12);
         Object[][] batch = {{0.3, 0.7}};
-        double grams = (Double) addIn.batchTotals(CARD, batch, "mol", one(20.0), "mass", "g", Any.VOID, Any.VOID);
-        double moles = (Double) addIn.batchTotals(CARD, batch, "mol", one(20.0), "moles", "mol", Any.VOID, Any.VOID);
+        double grams = (Double) addIn.batchTotals(CARD, batch, one("mol"), one(20.0), "mass", "g", Any.VOID, Any.VOID);
+        double moles = (Double) addIn.batchTotals(CARD, batch, one("mol"), one(20.0), "moles", "mol", Any.VOID, Any.VOID);
         assertEquals(grams / moles, (Double) addIn.mixtureMolarMass(CARD, batch), 1e-12);
     }
 

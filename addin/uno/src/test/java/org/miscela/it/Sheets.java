@@ -82,6 +82,30 @@ public final class Sheets {
         return b.toString();
     }
 
+    /** What a test reads from a cell. */
+    public interface CellReader<T> {
+        T read(XCell cell) throws Exception;
+    }
+
+    /**
+     * Enters the formulas down a column from its first row, recalculates the document, and reads each cell back: the
+     * result per formula, in the formulas' order.
+     */
+    public static <T> java.util.Map<String, T> results(XComponent doc, XSpreadsheet sheet, int col,
+            Iterable<String> formulas, CellReader<T> reader) throws Exception {
+        int row = 0;
+        for (String formula : formulas) {
+            cell(sheet, col, row++).setFormula(formula);
+        }
+        recalculate(doc);
+        java.util.Map<String, T> out = new java.util.LinkedHashMap<>();
+        row = 0;
+        for (String formula : formulas) {
+            out.put(formula, reader.read(cell(sheet, col, row++)));
+        }
+        return out;
+    }
+
     public static void recalculate(XComponent doc) {
         UnoRuntime.queryInterface(XCalculatable.class, doc).calculateAll();
     }

@@ -3,7 +3,7 @@ package org.miscela.it;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import com.sun.star.lang.XComponent;
-import com.sun.star.sheet.XSpreadsheet;
+import com.sun.star.table.XCell;
 import java.nio.file.Paths;
 import java.util.LinkedHashMap;
 import java.util.Map;
@@ -36,21 +36,12 @@ class UnoExceptionCodesIT {
         // a Java subclass of the UNO RuntimeException, as the add-in's UnexpectedFailure is
         expected.put("=PROBE.FAILUNDECLARED(5)", NO_VALUE);
         expected.put("=PROBE.FAILUNDECLARED(0)", 0);
-        Map<String, Integer> shown = new LinkedHashMap<>();
+        Map<String, Integer> shown;
         Office office = Office.start(Paths.get(System.getProperty("miscela.probe.oxt")));
         try {
             XComponent doc = office.newSpreadsheet();
             try {
-                XSpreadsheet sheet = Sheets.sheet(doc, 0);
-                int row = 0;
-                for (String formula : expected.keySet()) {
-                    Sheets.cell(sheet, 0, row++).setFormula(formula);
-                }
-                Sheets.recalculate(doc);
-                row = 0;
-                for (String formula : expected.keySet()) {
-                    shown.put(formula, Sheets.cell(sheet, 0, row++).getError());
-                }
+                shown = Sheets.results(doc, Sheets.sheet(doc, 0), 0, expected.keySet(), XCell::getError);
             } finally {
                 Sheets.close(doc);
             }

@@ -11,7 +11,9 @@ import com.sun.star.lang.XComponent;
 import com.sun.star.lang.XMultiServiceFactory;
 import com.sun.star.sheet.FunctionArgument;
 import com.sun.star.uno.UnoRuntime;
+import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
@@ -20,8 +22,11 @@ import org.miscela.core.catalog.FunctionCatalog;
 import org.miscela.core.catalog.FunctionInfo;
 
 /**
- * What the Function Wizard shows, read from the running office, equals the catalogue: names and every help text; and
- * the office's configuration holds every function's CompatibilityName.
+ * What the Function Wizard shows, read from the running office (com.sun.star.sheet.FunctionDescriptions, the data the
+ * wizard itself shows), equals the catalogue: names, every help text and every argument's optional flag (Calc shows an
+ * argument as "(optional)" and not bold when its IsOptional is true, which Calc decides from the IDL type: every
+ * {@code any} parameter is optional to it, whatever the XCU says); and the office's configuration holds every
+ * function's CompatibilityName.
  */
 @ExtendWith(OfficeParameterResolver.class)
 class WizardMetadataIT {
@@ -38,21 +43,40 @@ class WizardMetadataIT {
             }
             byName.put((String) props.get("Name"), props);
         }
+        List<String> requiredShownOptional = new ArrayList<>();
+        List<String> optionalShownRequired = new ArrayList<>();
+        int arguments = 0;
+        int optional = 0;
         for (FunctionInfo f : FunctionCatalog.functions()) {
             Map<String, Object> props = byName.get(f.displayName());
             assertNotNull(props, f.displayName() + " is not in the wizard");
             assertEquals(f.summary(), props.get("Description"), f.displayName());
             FunctionArgument[] args = (FunctionArgument[]) props.get("Arguments");
             assertEquals(f.arguments().size(), args.length, f.displayName() + " argument count");
+            List<String> wrongHere = new ArrayList<>();
             for (int a = 0; a < args.length; a++) {
                 ArgumentInfo expected = f.arguments().get(a);
                 assertEquals(expected.displayName(), args[a].Name, f.displayName() + " argument " + (a + 1));
                 assertFalse(args[a].Description.trim().isEmpty(), f.displayName() + "." + args[a].Name);
                 assertEquals(expected.description(), args[a].Description, f.displayName() + "." + args[a].Name);
+                arguments++;
+                optional += args[a].IsOptional ? 1 : 0;
+                if (args[a].IsOptional != expected.optional()) {
+                    wrongHere.add(args[a].Name);
+                    (expected.optional() ? optionalShownRequired : requiredShownOptional).add(f.displayName()
+                            + "." + args[a].Name);
+                }
+            }
+            if (!wrongHere.isEmpty()) {
+                System.out.printf("wizard: %s shows %s with the wrong optional flag%n", f.displayName(), wrongHere);
             }
         }
-        System.out.printf("wizard: %d Miscela functions with all argument help present%n",
-                FunctionCatalog.functions().size());
+        System.out.printf("wizard: %d Miscela functions with all argument help present; %d arguments, %d shown as "
+                + "optional; %d required arguments shown as optional, %d optional ones shown as required%n",
+                FunctionCatalog.functions().size(), arguments, optional, requiredShownOptional.size(),
+                optionalShownRequired.size());
+        assertEquals(List.of(), requiredShownOptional, "required arguments the wizard shows as optional");
+        assertEquals(List.of(), optionalShownRequired, "optional arguments the wizard shows as required");
     }
 
     /**

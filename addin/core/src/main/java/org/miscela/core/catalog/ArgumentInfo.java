@@ -12,6 +12,10 @@ public final class ArgumentInfo {
     private final IdlType type;
 
     ArgumentInfo(String name, String displayName, String description, boolean optional, IdlType type) {
+        if (!optional && type == IdlType.ANY) {
+            // Calc's Function Wizard shows every 'any' parameter as optional: a required one must be typed
+            throw new IllegalArgumentException("the required argument " + name + " cannot be an 'any'");
+        }
         this.name = name;
         this.displayName = displayName;
         this.description = description;

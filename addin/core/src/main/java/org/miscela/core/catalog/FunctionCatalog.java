@@ -25,15 +25,15 @@ public final class FunctionCatalog {
     private static final ArgumentInfo CARD = range("card", "card",
             "The named range holding the mixture's card: labels in the first column, values to their right.");
     private static final ArgumentInfo MOLE_FRACTION = range("moleFraction", "x",
-            "Composition: the mole fractions of all components in card order, as a row or column; or a block with "
-                    + "one composition per row (the result is a column). For a two-component card, x1 alone, "
-                    + "or a range of x1 values.");
+            "The mole fractions of all components in card order, as a row or column, or a block with one "
+                    + "composition per row. For a two-component card, x1 alone, or a range of x1 values. A block gives "
+                    + "a column of results.");
     private static final ArgumentInfo TEMPERATURE = range("temperature", "temperature",
-            "Temperature in the card's temperature unit: a single value, or one per composition (a column for a "
-                    + "block, the same shape for a range of x1).");
+            "Temperature in the card's unit: one value, or one per composition (a column for a block, the same "
+                    + "shape for a range of x1).");
     private static final ArgumentInfo EXTRAPOLATE = optional("extrapolate", "extrapolate",
-            "Optional. TRUE accepts a result outside the card's validity range; FALSE refuses it; "
-                    + "left out, the card's 'extrapolation' row decides (refuse when absent).");
+            "TRUE accepts a result outside the card's validity range, FALSE refuses it; left out, the card's "
+                    + "'extrapolation' row decides. Without that row, such a result is refused.");
     private static final ArgumentInfo MOLE_FRACTION_ONE = range("moleFraction", "x",
             "One composition: the mole fractions of all components in card order, as a row or column; "
                     + "for a two-component card, x1 alone.");
@@ -42,41 +42,40 @@ public final class FunctionCatalog {
     private static final ArgumentInfo COMPONENT = value("component", "component",
             "The component: its number on the card (1 for the first) or its name as written on the card.");
     private static final ArgumentInfo AMOUNTS = range("amounts", "amounts",
-            "Amount of each component in card order, as a row or column (one batch); or a block with one batch "
-                    + "per row (the result is a column).");
+            "Amount of each component in card order, as a row or column (one batch), or a block with one batch "
+                    + "per row. A block gives a column of results.");
     private static final ArgumentInfo BATCH_TEMPERATURE = range("temperature", "temperature",
-            "Temperature of the components and of the mixture, in the card's temperature unit: a single value, "
-                    + "or a column with one per batch.");
+            "Temperature of the components and of the mixture, in the card's unit: one value, or a column with "
+                    + "one per batch.");
     private static final String BASES = "One of: \"mole fraction\" (\"x\"), \"mass fraction\" (\"w\"), "
             + "\"volume fraction\" (\"phi\"), \"%vol\", \"mol/L\", \"g/L\", \"mol/kg\".";
     private static final ArgumentInfo BALANCE = optional("balance", "balance",
-            "Optional. For %vol, mol/L, g/L and mol/kg: the component that makes up the rest (the solvent), by "
-                    + "number or name; left out, the card's last component.");
+            "The solvent that makes up the rest for %vol, mol/L, g/L and mol/kg, by number or name; left out, the "
+                    + "card's last component.");
     private static final ArgumentInfo UNIT = value("unit", "unit",
             "The unit of the amounts: mol, kmol; g, kg, t, lb, or a mass weighed in air such as \"kg (conventional)\"; "
                     + "or mL, L, m³, US gal, imp gal for volumes of the pure liquids.");
     private static final ArgumentInfo RESULT_UNIT = optional("resultUnit", "result unit",
-            "Optional. The unit of the result, any the amounts take (left out: L for volumes, kg for masses, mol for "
-                    + "moles).");
+            "The unit of the result, any the amounts take (left out: L for volumes, kg for masses, mol for moles).");
     private static final ArgumentInfo STORAGE_T = optional("storageTemperatures", "storage temperatures",
-            "Optional. For volumes of the pure liquids, or masses weighed in air: the temperature of each, in card "
-                    + "order (or one for all; left out, masses weighed in air are at the batch's temperature).");
+            "For volumes of the pure liquids, or masses weighed in air: the temperature of each, in card order (or one "
+                    + "for all). Left out, masses weighed in air are at the batch's temperature.");
     private static final ArgumentInfo ORDER = value("order", "order",
             "The highest k of the coefficients A0..Ak to fit, 0 to " + RedlichKisterFitter.MAX_ORDER_IN_X + ".");
     private static final ArgumentInfo ORDER_IN_T = optional("orderInTemperature", "order in T",
-            "Optional. The highest power j of (T − T_ref) in each A_k (left out: 0, constant coefficients).");
+            "The highest power j of (T − T_ref) in each A_k (left out: 0, constant coefficients).");
     private static final ArgumentInfo REFERENCE_T = optional("referenceTemperature", "reference temperature",
-            "Optional. T_ref of the temperature polynomials; needed when the order in T is above 0.");
+            "T_ref of the temperature polynomials; needed when the order in T is above 0.");
     private static final ArgumentInfo WEIGHTS = optional("weights", "weights",
-            "Optional. A weight per point, zero or positive (left out: 1 each); a zero weight leaves the point out.");
+            "A weight per point, zero or positive (left out: 1 each); a zero weight leaves the point out.");
     private static final ArgumentInfo RESULT = optional("result", "result",
-            "Optional. \"coefficients\" (left out), \"standard errors\", \"statistics\", \"covariance\", "
-                    + "\"residuals\", \"orders\" (fits of order 0 to the order given, with F-tests, AIC and BIC) or "
-                    + "\"check\" (\"OK\", or why the fit is refused, in words).");
+            "What to return: \"coefficients\" (left out), \"standard errors\", \"statistics\", \"covariance\", "
+                    + "\"residuals\", \"orders\" or \"check\". \"orders\" gives the fits of order 0 to the order "
+                    + "given, with F-tests, AIC and BIC; \"check\" gives \"OK\", or why the fit is refused, in "
+                    + "words.");
     private static final ArgumentInfo BASIS = optional("basis", "basis",
-            "Optional. The unit of the amounts: \"mol\" (left out), \"kmol\", \"g\", \"kg\", \"t\", \"lb\", or a "
-                    + "mass weighed in air such as \"kg (conventional)\"; masses are converted with the card's molar "
-                    + "masses.");
+            "The unit of the amounts: \"mol\" (left out), \"kmol\", \"g\", \"kg\", \"t\", \"lb\" or a mass weighed in "
+                    + "air (\"kg (conventional)\"). Masses are converted with the card's molar masses.");
 
     // --- call problems that no cell can produce (see notFromACell), with the reason; no function lists them
     private static final String UNCERTAINTY_OF_A_FIT = "raised only by the library's uncertainty of a fitted "
@@ -100,7 +99,8 @@ public final class FunctionCatalog {
                     + "coefficient",
             Problem.BAD_ORDER, "the fit functions refuse an order outside 0 to " + RedlichKisterFitter.MAX_ORDER_IN_X
                     + ", or an order in T outside 0 to " + RedlichKisterFitter.MAX_ORDER_IN_T + ", first (NOT_A_COUNT), "
-                    + "and a left-out order as blank (ARG_BLANK)",
+                    + "and an order given as empty text as blank (ARG_BLANK); leaving the order out is Calc's own "
+                    + "error (Err:504), before any call",
             Problem.BAD_SIGNIFICANCE, "the order table's F-tests always use the 5 % level",
             Problem.NOT_NESTED, "the order table compares the fits of order 0, 1, 2, …, each with more "
                     + "coefficients than the one before",
@@ -143,7 +143,7 @@ public final class FunctionCatalog {
             Problem.AMOUNT_NEGATIVE, Problem.AMOUNT_ZERO, Problem.AMOUNT_TOO_LARGE, Problem.UNKNOWN_BASIS,
             Problem.LIGHTER_THAN_AIR);
     private static final List<Problem> DATA_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
-            Problem.DATA_SHAPE, Problem.DATA_LENGTH, Problem.DATA_PARTLY_BLANK, Problem.NOT_A_COUNT,
+            Problem.ARG_NOT_SINGLE, Problem.DATA_SHAPE, Problem.DATA_LENGTH, Problem.DATA_PARTLY_BLANK, Problem.NOT_A_COUNT,
             Problem.UNKNOWN_FIT_OUTPUT);
     private static final List<Problem> FIT_ENGINE_PROBLEMS = fromACell(Problem.of(Problem.Section.FIT));
     private static final List<Problem> BLEND_PROBLEMS = union(fromACell(Problem.of(Problem.Section.BLEND)), list(Problem.ARG_BLANK,
@@ -226,7 +226,7 @@ public final class FunctionCatalog {
             new FunctionInfo("mixingHeat", "MIX.MIXINGHEAT",
                     "enthalpy change on mixing given amounts (negative: heat released)",
                     "Enthalpy change when the given amounts of the pure components, all at one temperature, are mixed "
-                            + "and kept at that temperature: J or kJ as the card's enthalpy unit; negative means heat "
+                            + "and kept at that temperature. J or kJ as the card's enthalpy unit; negative means heat "
                             + "is released and must be removed.",
                     "ΔH = N·H^E(x, T), N = Σ n_k, x_k = n_k/N",
                     "=MIX.MIXINGHEAT(acid; {1; 10}; 25)",
@@ -250,8 +250,8 @@ public final class FunctionCatalog {
                     "Σ_k n_k·∫_T^T_f Cp_k dT + N·H^E(x, T_f) = 0, solved for T_f (Brent); result T_f − T",
                     "=MIX.TEMPERATURERISE(acid; {1; 10}; 25; \"mol\"; TRUE())",
                     CARD, AMOUNTS, range("temperature", "temperature",
-                            "Starting temperature of every component, in the card's temperature unit: a single "
-                                    + "value, or a column with one per batch."), BASIS, EXTRAPOLATE)
+                            "Starting temperature of every component, in the card's unit: one value, or a column "
+                                    + "with one per batch."), BASIS, EXTRAPOLATE)
                     .shows("74.57").refuses(union(AMOUNT_PROBLEMS, POINT_PROBLEMS, list(Problem.NO_ENTHALPY, Problem.NO_HEAT_CAPACITY, Problem.NO_TEMPERATURE_ROOT, Problem.OUTSIDE_FINAL_TEMPERATURE))),
             new FunctionInfo("insideValidity", "MIX.INSIDE",
                     "1 (TRUE) when the point is inside every validity limit of the card, else 0",
@@ -268,14 +268,15 @@ public final class FunctionCatalog {
                     "—",
                     "=MIX.TRACE(card; 0.3; 20)",
                     CARD, MOLE_FRACTION_ONE, TEMPERATURE_ONE, optional("quantity", "property",
-                            "Optional. \"volume\" (left out) or \"enthalpy\": which of the card's properties to "
+                            "\"volume\" (left out) or \"enthalpy\": which of the card's properties to "
                                     + "trace."), EXTRAPOLATE)
                     .shows("card").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, list(Problem.NO_ENTHALPY, Problem.UNKNOWN_PROPERTY, Problem.ARG_NOT_SINGLE))),
             new FunctionInfo("fitExcessVolume", "MIX.FITEXCESS",
                     "Redlich–Kister coefficients fitted to excess volumes (or their statistics)",
-                    "Redlich–Kister coefficients fitted by least squares to excess volumes: an array of A0..Am "
-                            + "(one row each, one column per power of T − T_ref) to enter over a card's coefficient "
-                            + "cells, or the fit's standard errors, statistics, covariance, residuals or order table.",
+                    "Redlich–Kister coefficients fitted by least squares to excess volumes, or the fit's standard "
+                            + "errors, statistics, covariance, residuals or order table. The coefficients are an array "
+                            + "of A0..Am (one row each, one column per power of T − T_ref) to enter over a card's "
+                            + "coefficient cells.",
                     "min Σ w_i (V^E_i − x1·x2·Σ_k Σ_j a_kj (x1 − x2)^k (T_i − T_ref)^j)², Householder QR with column "
                             + "scaling and iterative refinement",
                     "=INDEX(MIX.FITEXCESS({0.2|0.4|0.6|0.8}; {-0.736|-1.008|-0.912|-0.544}; 1); 2; 1)",
@@ -284,21 +285,21 @@ public final class FunctionCatalog {
                     range("excessVolume", "excess volume", "The excess molar volume at each point, in any unit: "
                             + "the coefficients come out in the same unit."),
                     ORDER,
-                    optional("temperature", "temperature", "Optional. The temperature of each point, needed for "
-                            + "temperature-dependent coefficients; any scale (only differences from T_ref are used)."),
+                    optional("temperature", "temperature", "The temperature of each point, for "
+                            + "temperature-dependent coefficients. Any scale: only differences from T_ref are used."),
                     ORDER_IN_T, REFERENCE_T, WEIGHTS, RESULT)
                     .shows("1.0000").refuses(union(DATA_PROBLEMS, FIT_ENGINE_PROBLEMS, list(Problem.FIT_NEEDS_TEMPERATURE, Problem.FIT_NEEDS_REFERENCE))),
             new FunctionInfo("fitDensity", "MIX.FITDENSITY",
                     "Redlich–Kister coefficients of a pair fitted to measured densities",
-                    "Redlich–Kister coefficients of one pair fitted to measured densities, with the pure liquids' "
-                            + "molar masses and densities taken from a card: an array to enter over the card's "
-                            + "coefficient cells (in its molar volume unit), or the fit's statistics.",
+                    "Redlich–Kister coefficients of one pair fitted to measured densities: an array to enter over the "
+                            + "card's coefficient cells (in its molar volume unit), or the fit's statistics. The pure "
+                            + "liquids' molar masses and densities are taken from a card.",
                     "V^E_i = Σ x M / ρ_i − x1·V_1*(T_i) − x2·V_2*(T_i); min Σ w_i (ρ_i − ρ_fit,i)² to first order "
                             + "(each V^E residual weighted by (ρ_i²/M_i)²)",
                     "=INDEX(MIX.FITDENSITY(card; \"ethanol + water\"; {0.1|0.3|0.5|0.7|0.9}; {965.728|908.666|863.096|829.229|801.749}; 20; 2); 1; 1)",
                     range("pure", "pure data", "The cells of a card's pure-component part: header, units, "
-                            + "components and density models (put the coefficient rows, which hold this formula, "
-                            + "below it)."),
+                            + "components and density models. Put the coefficient rows, which hold this formula, "
+                            + "below it."),
                     optional("pair", "pair", "The pair as \"first + second\"; may be left out for a card of two "
                             + "components."),
                     range("moleFraction", "x", "Mole fraction of the pair's first component at each point (a "
@@ -318,62 +319,63 @@ public final class FunctionCatalog {
                     range("design", "X", "The design matrix: one row per point, one column per parameter "
                             + "(include a column of 1s for an intercept)."),
                     range("response", "y", "The observed values, one per point (a column)."),
-                    WEIGHTS, optional("result", "result", "Optional. \"coefficients\" (left out), \"standard "
+                    WEIGHTS, optional("result", "result", "\"coefficients\" (left out), \"standard "
                             + "errors\", \"statistics\", \"covariance\", \"residuals\" or \"check\"."))
                     .shows("1.95").refuses(union(list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER, Problem.DATA_SHAPE, Problem.UNKNOWN_FIT_OUTPUT, Problem.FIT_OUTPUT_NOT_HERE), FIT_ENGINE_PROBLEMS)),
             new FunctionInfo("uncertainty", "MIX.UNCERTAINTY",
                     "standard uncertainty of a result from the card's coefficient covariance",
-                    "Standard uncertainty of the density, excess volume, molar volume or a partial molar volume, "
-                            + "propagated linearly from the coefficient covariance the card holds (the pure liquids "
-                            + "taken as exact), in the result's unit.",
+                    "Standard uncertainty of the density, excess volume, molar volume or a partial molar volume, in "
+                            + "the result's unit. It is propagated linearly from the coefficient covariance the card "
+                            + "holds (the pure liquids taken as exact).",
                     "u²(Q) = Σ_pairs gᵀ·C·g, g = ∂Q/∂a (GUM, JCGM 100:2008, law of propagation of uncertainty)",
                     "=MIX.UNCERTAINTY(cov; 0.3; 20)",
                     CARD, MOLE_FRACTION, TEMPERATURE, optional("quantity", "quantity",
-                            "Optional. \"density\" (left out), \"excess volume\", \"molar volume\" or "
+                            "\"density\" (left out), \"excess volume\", \"molar volume\" or "
                                     + "\"partial volume\" (then give the component)."),
                     optional("component", "component", "For a partial volume: the component's number on the card "
                             + "or its name."), EXTRAPOLATE)
                     .shows("0.178").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, COMPONENT_PROBLEMS, list(Problem.NO_COVARIANCE, Problem.UNKNOWN_QUANTITY, Problem.ARG_NOT_TEXT))),
             new FunctionInfo("convertComposition", "MIX.CONVERT",
                     "a composition on another basis: mole, mass or volume fraction, %vol, mol/L, g/L, mol/kg",
-                    "A composition written on one basis, written on another: mole fraction, mass fraction, volume "
-                            + "fraction of the unmixed liquids, strength (%vol), molarity (mol/L), mass concentration "
-                            + "(g/L) or molality (mol/kg of the balance component).",
+                    "A composition on one basis written on another: mole, mass or volume fraction, %vol, mol/L, g/L "
+                            + "or mol/kg. Volume fractions are of the unmixed liquids; %vol is the strength, mol/L the "
+                            + "molarity, g/L the mass concentration and mol/kg the molality (per kg of the balance "
+                            + "component).",
                     "x_k ↔ w_k = x_k M_k/Σ x M; φ_k = x_k V_k*(T)/Σ x V*; %vol_k = 100 x_k V_k*(T)/V_m(T); "
                             + "c_k = x_k/V_m(T); ρ_k = x_k M_k/V_m(T); b_k = x_k/(x_s M_s); concentrations read back by "
                             + "Brent's method on the balance's mole fraction",
                     "=MIX.CONVERT(card; 0.5; \"mass fraction\"; \"%vol\"; 20)",
                     CARD, range("values", "values", "The composition on the from basis: one value per component in "
-                            + "card order (a row or column, or a block with one composition per row). On a "
-                            + "concentration basis the balance's own entry may be blank. A lone number on a "
-                            + "two-component card is the first component's value."),
+                            + "card order (a row or column), or a block with one per row. On a concentration basis "
+                            + "the balance's own entry may be blank. A lone number on a two-component card is the "
+                            + "first component's value."),
                     value("from", "from", BASES), value("to", "to", BASES),
                     optional("temperature", "temperature", "The temperature of the from basis, and of the to basis "
-                            + "unless the next argument gives one, in the card's unit; needed for volume fraction, "
+                            + "unless the next argument gives one, in the card's unit. Needed for volume fraction, "
                             + "%vol, mol/L and g/L."),
-                    optional("targetTemperature", "to temperature", "Optional. The temperature of the to basis."),
+                    optional("targetTemperature", "to temperature", "The temperature of the to basis."),
                     BALANCE, EXTRAPOLATE)
                     .shows("57.889").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
             new FunctionInfo("batchTotals", "MIX.BATCH",
                     "volume, mass, moles, density or contraction of a batch made from amounts",
-                    "One total of the batch made from the given amounts of the components, mixed and brought to a "
-                            + "temperature: its volume, mass, moles, density, the pure liquids' volume before mixing, "
-                            + "or the contraction on mixing (absolute or %).",
+                    "The volume, mass, moles, density, pure-liquid volume or contraction on mixing (absolute or %) "
+                            + "of a batch made from the given amounts. The batch is mixed and brought to the "
+                            + "temperature given; the pure-liquid volume is the liquids' volume before mixing.",
                     "V = N·V_m(x, T); contraction = Σ n_k V_k*(T) − V (positive when the mixture shrinks)",
                     "=MIX.BATCH(card; {50; 50}; \"g\"; 20; \"contraction\"; \"mL\")",
                     CARD, AMOUNTS, UNIT, range("temperature", "temperature",
                             "The temperature of the mixed batch, in the card's unit: one value, or a column with one "
                                     + "per batch."),
-                    optional("result", "result", "Optional. \"volume\" (left out), \"mass\", \"moles\", "
+                    optional("result", "result", "\"volume\" (left out), \"mass\", \"moles\", "
                             + "\"density\", \"pure volume\", \"contraction\" or \"contraction %\"."),
                     RESULT_UNIT, STORAGE_T, EXTRAPOLATE)
                     .shows("4.006").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
             new FunctionInfo("recipe", "MIX.RECIPE",
                     "what to charge of each component for a target quantity and composition",
                     "What to charge of each component to make a quantity (a volume at a temperature, a mass or moles) "
-                            + "of a target composition: a row of amounts in card order, masses in kg unless another "
-                            + "unit is asked for (a volume unit gives each pure liquid's volume at its storage "
-                            + "temperature).",
+                            + "of a target composition. The result is a row of amounts in card order: masses in kg "
+                            + "unless another unit is asked for (a volume unit gives each pure liquid's volume at its "
+                            + "storage temperature).",
                     "N = Q (moles), Q/Σ x M (mass) or V/V_m(x, T) (volume); n_k = N·x_k; m_k = n_k M_k; "
                             + "V_k = n_k V_k*(T_k)",
                     "=INDEX(MIX.RECIPE(card; 1; \"L\"; 40; \"%vol\"; 20; 20; \"mL\"); 1; 1)",
@@ -382,7 +384,7 @@ public final class FunctionCatalog {
                             + "of the mixture at the temperature), or a mass weighed in air such as "
                             + "\"kg (conventional)\"."),
                     range("composition", "composition", "The target composition on the basis, one value per "
-                            + "component (a lone number on a two-component card is the first component's); a block "
+                            + "component; on a two-component card a lone number is the first component's. A block "
                             + "gives one recipe per row."),
                     value("basis", "basis", BASES),
                     value("temperature", "temperature", "The temperature of the quantity (when a volume) and of "
@@ -391,10 +393,10 @@ public final class FunctionCatalog {
                     .shows("400.00").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
             new FunctionInfo("adjustBatch", "MIX.ADJUST",
                     "what to add to an existing batch to reach a target composition",
-                    "How much of each component to add to an existing batch to reach a target composition: the "
-                            + "least additions, the closest composition within a limit, or additions making up to a "
-                            + "final quantity; or the resulting volume, or a sentence saying whether the target is "
-                            + "reached.",
+                    "How much of each component to add to an existing batch to reach a target composition, or the "
+                            + "resulting volume, or a sentence saying whether the target is reached. The additions "
+                            + "are the least ones, those giving the closest composition within a limit, or those "
+                            + "making up to a final quantity.",
                     "n'_k = n_k + a_k, a_k ≥ 0; least: N' = max_k n_k/x_k; otherwise the composition closest to the "
                             + "target in mole fraction (least squares) at the limit's total",
                     "=INDEX(MIX.ADJUST(card; {500; 500}; \"g\"; 0.4; \"mass fraction\"; 20); 1; 2)",
@@ -404,26 +406,27 @@ public final class FunctionCatalog {
                     value("basis", "basis", BASES),
                     value("temperature", "temperature", "The temperature of the batch and of the basis, in the "
                             + "card's unit."),
-                    optional("mode", "mode", "Optional. \"least\" additions (left out), \"within\" the limit "
-                            + "(the closest composition if the target does not fit), or \"make up\" to the limit."),
+                    optional("mode", "mode", "\"least\" additions (left out), \"within\" the limit (the closest "
+                            + "composition if the target does not fit) or \"make up\" to it."),
                     optional("limit", "limit", "For within and make up: the largest, or the final, quantity."),
                     optional("limitUnit", "limit unit", "The unit of the limit, any the amounts take (a volume, or a "
                             + "mass weighed in air, is at the temperature)."),
-                    optional("result", "result", "Optional. \"additions\" (left out), \"volume\" (of the batch "
+                    optional("result", "result", "\"additions\" (left out), \"volume\" (of the batch "
                             + "after the additions) or \"summary\"."),
                     RESULT_UNIT, BALANCE, EXTRAPOLATE)
                     .shows("0.2500").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
             new FunctionInfo("additionVolume", "MIX.ADDVOLUME",
                     "volume change on adding a component, exact and to first order",
-                    "The volume change of a batch when an amount of one component is added: exact (the difference "
-                            + "of the two totals), to first order (partial molar volume × amount), or the difference "
-                            + "of the two, so one sees when the linear estimate is good enough.",
+                    "The volume change of a batch when an amount of one component is added: exact, to first order, or "
+                            + "the difference of the two. Exact is the difference of the two totals, first order the "
+                            + "partial molar volume × amount; the difference shows when the linear estimate is good "
+                            + "enough.",
                     "exact ΔV = V(n + Δn·e_k) − V(n); first order ΔV ≈ V̄_k(x)·Δn",
                     "=MIX.ADDVOLUME(card; {50; 50}; \"g\"; \"ethanol\"; 10; 20; ; \"mL\")",
                     CARD, range("amounts", "amounts", "The batch: the amount of each component in card order."),
                     UNIT, COMPONENT, value("added", "added", "The amount added, in the unit of the amounts."),
                     value("temperature", "temperature", "The temperature of the batch, in the card's unit."),
-                    optional("result", "result", "Optional. \"exact\" (left out), \"first order\" or "
+                    optional("result", "result", "\"exact\" (left out), \"first order\" or "
                             + "\"difference\" (first order minus exact)."),
                     RESULT_UNIT, STORAGE_T, EXTRAPOLATE)
                     .shows("12.302").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS)),
@@ -439,35 +442,36 @@ public final class FunctionCatalog {
                             + "range for an array result."),
                     range("temperature", "temperature", "The temperature of the measurement in the card's unit: "
                             + "a value, or a range of the same shape."),
-                    optional("component", "component", "Optional. The component whose content is sought (left out: "
+                    optional("component", "component", "The component whose content is sought (left out: "
                             + "the first)."),
-                    optional("basis", "basis", "Optional. The basis of the result (left out: mole fraction). " + BASES),
-                    optional("basisTemperature", "basis temperature", "Optional. The temperature of that basis "
+                    optional("basis", "basis", "The basis of the result (left out: mole fraction). " + BASES),
+                    optional("basisTemperature", "basis temperature", "The temperature of that basis "
                             + "(left out: the measurement's)."),
-                    optional("reference", "reference", "For three or more components: a composition (mole "
-                            + "fractions) whose other components keep their ratios while the component varies."),
-                    optional("from", "from", "Optional. The lowest mole fraction of the component to consider."),
-                    optional("to", "to", "Optional. The highest mole fraction of the component to consider."),
+                    optional("reference", "reference", "For three or more components: mole fractions whose other "
+                            + "components keep their ratios while the component varies."),
+                    optional("from", "from", "The lowest mole fraction of the component to consider."),
+                    optional("to", "to", "The highest mole fraction of the component to consider."),
                     BALANCE, EXTRAPOLATE)
                     .shows("0.5000").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS,
                             list(Problem.COMPOSITION_LENGTH))),
             new FunctionInfo("volumeCorrection", "MIX.VOLUMEFACTOR",
                     "volume correction factor to a reference temperature, or the density at either",
-                    "Temperature correction of a blend of known composition: the factor that turns a volume "
-                            + "measured at one temperature into the volume at a reference temperature (15 °C or "
-                            + "20 °C for quotes and custody transfer), or the blend's density at either temperature.",
+                    "Temperature correction of a blend of known composition: the factor turning a volume measured at "
+                            + "one temperature into the volume at a reference temperature, or the density at either. "
+                            + "The reference is 15 °C or 20 °C for quotes and custody transfer.",
                     "factor = V(T_ref)/V(T) = ρ(T)/ρ(T_ref) at fixed composition",
                     "=MIX.VOLUMEFACTOR(card; 0.5; \"mass fraction\"; 25; 20)",
-                    CARD, range("composition", "composition", "The blend's composition on the basis (a lone number "
-                            + "on a two-component card is the first component's; a block gives one factor per row)."),
+                    CARD, range("composition", "composition", "The blend's composition on the basis; on a "
+                            + "two-component card a lone number is the first component's. A block gives one factor "
+                            + "per row."),
                     value("basis", "basis", BASES),
                     range("temperature", "temperature", "The measured temperature in the card's unit (one, or "
                             + "one per row of a block)."),
                     value("referenceTemperature", "reference temperature", "The reference temperature in the "
                             + "card's unit."),
-                    optional("result", "result", "Optional. \"factor\" (left out), \"density\" (at the measured "
+                    optional("result", "result", "\"factor\" (left out), \"density\" (at the measured "
                             + "temperature) or \"reference density\"."),
-                    optional("basisTemperature", "basis temperature", "Optional. The temperature of the basis (left "
+                    optional("basisTemperature", "basis temperature", "The temperature of the basis (left "
                             + "out: the reference temperature)."),
                     BALANCE, EXTRAPOLATE)
                     .shows("0.99562").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
@@ -479,10 +483,10 @@ public final class FunctionCatalog {
                             + "failure.",
                     "—",
                     "=MIX.INFO(\"version\")",
-                    optional("item", "item", "Optional. \"version\" (left out), \"card reads\" (cards parsed since "
-                            + "the office started), \"cards kept\" (parsed cards held now) or \"last failure\" (the "
-                            + "last unexpected failure since the office started, a #VALUE! cell's words, with its time "
-                            + "in UTC)."))
+                    optional("item", "item", "What to report: \"version\" (left out), \"card reads\", \"cards "
+                            + "kept\" or \"last failure\". Card reads: cards parsed since the office started; cards "
+                            + "kept: parsed cards held now; last failure: the last unexpected failure since the office "
+                            + "started (a #VALUE! cell's words, with its time in UTC)."))
                     .shows(VERSION).refuses(list(Problem.ARG_NOT_TEXT, Problem.UNKNOWN_INFO_ITEM)),
             new FunctionInfo("explainCall", "MIX.EXPLAIN",
                     "\"OK\" or, for a call that shows Err:502, why: the same arguments after the function's name",
@@ -587,12 +591,18 @@ public final class FunctionCatalog {
         return new ArgumentInfo(name, displayName, description, false, IdlType.RANGE);
     }
 
-    /** A required single value (IDL {@code any}); Calc's wizard still shows every {@code any} as optional. */
+    /**
+     * A required single value (a number, a text or a flag). Its IDL type is a range's, {@code sequence< sequence<
+     * any > >}, not {@code any}: Calc's Function Wizard shows every {@code any} parameter as optional, whatever the
+     * metadata says, and a typed one as required. A value, a cell or a formula's result arrives as a one-cell range
+     * (an empty cell as 0, as it would for an {@code any}); leaving the argument out is Calc's own error, before any
+     * call (Err:502, or Err:504 at the end). The adapter reads a one-cell range as its cell's value.
+     */
     private static ArgumentInfo value(String name, String displayName, String description) {
-        return new ArgumentInfo(name, displayName, description, false, IdlType.ANY);
+        return new ArgumentInfo(name, displayName, description, false, IdlType.RANGE);
     }
 
-    /** An optional single value (IDL {@code any}): left out, it arrives as void. */
+    /** An optional single value (IDL {@code any}): left out, it arrives as void; the wizard shows it as optional. */
     private static ArgumentInfo optional(String name, String displayName, String description) {
         return new ArgumentInfo(name, displayName, description, true, IdlType.ANY);
     }

@@ -6,12 +6,18 @@ package org.miscela.core.catalog;
  */
 public enum IdlType {
     /**
-     * A cell range, a single cell or an inline array: Calc passes every cell, a blank one in a multi-cell range as "".
-     * Compositions, temperatures that may be ranges, cards and lab data are ranges, because Calc passes an empty cell
-     * to an {@code any} parameter as the number 0, and a blank must never count as zero.
+     * A cell range, a single cell or an inline array: Calc passes every cell, a blank one in a multi-cell range as "",
+     * and a single value as a one-cell range. Compositions, temperatures that may be ranges, cards and lab data are
+     * ranges, because a blank must never count as zero; so is every required single value, because the Function
+     * Wizard shows a typed parameter as required and an {@code any} as optional. Left out, Calc refuses the call
+     * itself (Err:502, or Err:504 at the end of the call).
      */
     RANGE("sequence< sequence< any > >", Kind.RANGE),
-    /** One value (number, text or boolean); Calc passes a left-out argument as void and shows it as optional. */
+    /**
+     * One value (number, text or boolean), or a range's cells when given one: the type of the optional single values
+     * only. Calc passes a left-out argument as void, and its Function Wizard shows every such parameter as
+     * optional.
+     */
     ANY("any", Kind.VALUE),
     /** A variable argument list: every further argument of the call, each as Calc passes it. */
     ARGUMENT_LIST("sequence< any >", Kind.ARGUMENT_LIST),

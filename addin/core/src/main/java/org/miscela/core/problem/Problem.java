@@ -198,7 +198,7 @@ public enum Problem {
     // --- what MIX.EXPLAIN answers about a call it cannot run (its answers, never a refusal)
     EXPLAIN_UNKNOWN_FUNCTION(EXPLAIN, "%s names no function that MIX.EXPLAIN can explain; give one of these names, with or without 'MIX.': %s."),
     EXPLAIN_ARGUMENT_COUNT(EXPLAIN, "%s takes %s (%s), not %d: Calc shows Err:504 for such a call without calling the function."),
-    EXPLAIN_RANGE_LEFT_OUT(EXPLAIN, "The %s, argument %d of %s, is left out; a range argument cannot be, so Calc shows Err:502 for the call without calling the function: give a value, a cell or a range."),
+    EXPLAIN_RANGE_LEFT_OUT(EXPLAIN, "The %s, argument %d of %s, is left out; a required argument cannot be, so Calc shows Err:502 for the call without calling the function: give a value, a cell or a range."),
 
     // --- the words for an unexpected failure (the adapter fills them in; never raised as a refusal)
     UNEXPECTED_FAILURE(FAILURE, "Unexpected failure in %s: %s. This is a fault in the add-in, not in the data: "
