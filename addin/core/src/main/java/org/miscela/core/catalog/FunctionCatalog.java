@@ -53,8 +53,8 @@ public final class FunctionCatalog {
             "The solvent that makes up the rest for %vol, mol/L, g/L and mol/kg, by number or name; left out, the "
                     + "card's last component.");
     private static final ArgumentInfo UNIT = value("unit", "unit",
-            "The unit of the amounts: mol, kmol; g, kg, t, lb, or a mass weighed in air such as \"kg (conventional)\"; "
-                    + "or mL, L, m³, US gal, imp gal for volumes of the pure liquids.");
+            "The unit of the amounts: mol, kmol, g, kg, t, lb; mL, L, m³, US gal, imp gal for pure-liquid volumes. "
+                    + "Masses weighed in air: \"kg (conventional)\" and the like.");
     private static final ArgumentInfo RESULT_UNIT = optional("resultUnit", "result unit",
             "The unit of the result, any the amounts take (left out: L for volumes, kg for masses, mol for moles).");
     private static final ArgumentInfo STORAGE_T = optional("storageTemperatures", "storage temperatures",
@@ -380,9 +380,9 @@ public final class FunctionCatalog {
                             + "V_k = n_k V_k*(T_k)",
                     "=INDEX(MIX.RECIPE(card; 1; \"L\"; 40; \"%vol\"; 20; 20; \"mL\"); 1; 1)",
                     CARD, value("quantity", "quantity", "The quantity to make."),
-                    value("unit", "unit", "Its unit: mol, kmol, g, kg, t, lb, mL, L, m³, US gal or imp gal (a volume "
-                            + "of the mixture at the temperature), or a mass weighed in air such as "
-                            + "\"kg (conventional)\"."),
+                    value("unit", "unit", "Its unit: mol, kmol, g, kg, t, lb, or mL, L, m³, US gal, imp gal for a "
+                            + "volume of the mixture at the temperature. Masses weighed in air: \"kg (conventional)\" "
+                            + "and the like."),
                     range("composition", "composition", "The target composition on the basis, one value per "
                             + "component; on a two-component card a lone number is the first component's. A block "
                             + "gives one recipe per row."),
