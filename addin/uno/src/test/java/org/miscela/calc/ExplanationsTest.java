@@ -117,7 +117,7 @@ class ExplanationsTest {
         String check = (String) addIn.checkCard(heavy, Any.VOID);
         assertTrue(check.startsWith("OK with 1 warning: Card row 8 (component): the molar mass of ethanol"), check);
         assertEquals(check, explain("MIX.DENSITY", heavy, 0.3, 20.0));
-        assertEquals(check, explain("MIX.CHECK", heavy));
+        assertEquals(check, explain("MIX.CHECK", (Object) heavy));
         assertEquals(check, explain("MIX.CHECK", heavy, "extent"), "the warnings are the card's, whatever the result");
         // a refusal is a refusal: the warnings do not hide it
         assertTrue(explain("MIX.DENSITY", heavy, 0.3, 45.0).startsWith("The temperature 45 °C is outside"));

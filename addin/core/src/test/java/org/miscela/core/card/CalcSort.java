@@ -7,7 +7,8 @@ import java.util.List;
 
 /**
  * Data ▸ Sort as Calc does it on a card's cells, for tests: by one column, ascending or descending, stable; numbers
- * before text, text without regard to case, blank cells last either way; with "Range contains column labels" the first
+ * before text, text in the order {@link CardSanity#compareText} approximates Calc's collation by, blank cells last
+ * either way; with "Range contains column labels" the first
  * row stays on top. (CardSanityIT sorts with the office itself.)
  */
 public final class CalcSort {
@@ -22,7 +23,7 @@ public final class CalcSort {
         if (a instanceof Double || b instanceof Double) {
             return a instanceof Double ? -1 : 1;
         }
-        return a.toString().toLowerCase(java.util.Locale.ROOT).compareTo(b.toString().toLowerCase(java.util.Locale.ROOT));
+        return CardSanity.compareText(a.toString(), b.toString());
     };
 
     /** The rows sorted by column {@code column} (0-based); the header row kept first when {@code header}. */

@@ -209,9 +209,9 @@ public class CardFormatDocTest {
 
     /**
      * The section on MIX.CHECK's warnings: each line {@code <!-- check-example: example N; result W; edits -->} takes
-     * example card N of this document, applies the edits ({@code set R = a | b} replaces row R, {@code add a | b}
-     * appends a row, {@code pad R} pads with blank rows to R rows, {@code sort C} sorts the rows below the header by
-     * column C as Calc does) and asks MIX.CHECK for result W; the next line quoted with "> " must be the answer,
+     * example card N of this document, applies the edits ({@link CardEdits}: {@code set R = a | b} replaces row R,
+     * {@code add a | b} appends a row, {@code pad R} pads with blank rows to R rows, {@code sort C} sorts the rows below
+     * the header by column C as Calc does) and asks MIX.CHECK for result W; the next line quoted with "> " must be the answer,
      * exactly. Every entry of the catalogue's CHECK section must be shown this way.
      */
     @Test
@@ -229,11 +229,11 @@ public class CardFormatDocTest {
             String[] fields = m.group(1).split(";");
             int example = Integer.parseInt(fields[0].trim().substring("example ".length()));
             String result = fields[1].trim().substring("result ".length());
-            List<Object[]> rows = new ArrayList<>(Arrays.asList(examples.get(example - 1).cells));
+            StringBuilder edits = new StringBuilder();
             for (int f = 2; f < fields.length; f++) {
-                edit(rows, fields[f].trim());
+                edits.append(fields[f]).append(';');
             }
-            Object[][] cells = rows.toArray(new Object[0][]);
+            Object[][] cells = CardEdits.apply(examples.get(example - 1).cells, edits.toString());
             int a = i + 1;
             while (a < lines.size() && lines.get(a).trim().isEmpty()) {
                 a++;
@@ -258,42 +258,6 @@ public class CardFormatDocTest {
         java.util.Set<Problem> missing = EnumSet.copyOf(Problem.of(Problem.Section.CHECK));
         missing.removeAll(shown);
         assertTrue(missing.isEmpty(), "docs/card-format.md shows no example of " + missing);
-    }
-
-    /** One edit of a check-example (see {@link #everyCheckExampleShowsMixChecksAnswer}). */
-    private static void edit(List<Object[]> rows, String edit) {
-        if (edit.startsWith("set ")) {
-            int eq = edit.indexOf('=');
-            int row = Integer.parseInt(edit.substring(4, eq).trim());
-            rows.set(row - 1, cells(edit.substring(eq + 1)));
-        } else if (edit.startsWith("add ")) {
-            rows.add(cells(edit.substring(4)));
-        } else if (edit.startsWith("pad ")) {
-            int to = Integer.parseInt(edit.substring(4).trim());
-            int width = rows.get(0).length;
-            Object[] blank = new Object[width];
-            Arrays.fill(blank, "");
-            while (rows.size() < to) {
-                rows.add(blank);
-            }
-        } else if (edit.startsWith("sort ")) {
-            int column = Integer.parseInt(edit.substring(5).trim());
-            Object[][] sorted = CalcSort.sorted(rows.toArray(new Object[0][]), column - 1, true, false);
-            rows.clear();
-            rows.addAll(Arrays.asList(sorted));
-        } else {
-            throw new IllegalArgumentException("unknown edit: " + edit);
-        }
-    }
-
-    /** The cells of an edit, "a | b | c". */
-    private static Object[] cells(String text) {
-        String[] parts = text.split("\\|", -1);
-        Object[] out = new Object[parts.length];
-        for (int i = 0; i < parts.length; i++) {
-            out[i] = cell(parts[i]);
-        }
-        return out;
     }
 
     /** The document's table of problems names every card problem of the catalogue. */

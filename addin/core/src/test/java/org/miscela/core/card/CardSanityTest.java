@@ -210,7 +210,19 @@ class CardSanityTest {
         assertEquals("descending", CardSanity.order(Arrays.asList("c", "B", "a", 2.0, 1.0, null)));
         assertEquals(null, CardSanity.order(Arrays.asList("a", null, "b", "c")), "a blank in the middle");
         assertEquals(null, CardSanity.order(Arrays.asList("a", "a", "b", "b")), "two different keys say nothing");
-        assertEquals(null, CardSanity.order(Arrays.asList("b", "a", "c", "d")));
+        assertEquals(null, CardSanity.order(Arrays.asList("title", "source", "temperature unit", "density unit",
+                "molar volume unit", "molar mass unit", "valid temperature", "component", "component",
+                "density model")), "the labels of a card as written");
+        assertEquals("ascending", CardSanity.order(Arrays.asList("a", "c", "b", "d", "e", "f", "g", "h")),
+                "one step against the order is let pass (Calc's collation is only approximated)");
+        assertEquals(null, CardSanity.order(Arrays.asList("a", "c", "b", "e", "d", "f", "g", "h")));
+        // text: case and accents aside, spaces before punctuation before symbols before digits before letters
+        assertTrue(CardSanity.compareText("°C", "cm³/mol") < 0);
+        assertTrue(CardSanity.compareText("kg/m³", "kg/m3") == 0);
+        assertTrue(CardSanity.compareText("Water", "water + ethanol") < 0);
+        assertTrue(CardSanity.compareText("a b", "a/b") < 0 && CardSanity.compareText("a/b", "a1") < 0);
+        assertTrue(CardSanity.compareText("A9", "a10") > 0, "no natural sort: Calc's default");
+        assertTrue(CardSanity.compareText("é", "E") == 0);
     }
 
     // ------------------------------------------------------------------ extent

@@ -102,7 +102,7 @@ public final class TestCard {
         return out;
     }
 
-    Object[][] cells() {
+    public Object[][] cells() {
         return cells(0);
     }
 
