@@ -26,27 +26,25 @@ import org.miscela.core.problem.Catalogue;
  */
 @ExtendWith(OfficeParameterResolver.class)
 class CardSanityIT {
-    /** Water first, so that a sort by column 2 puts the partner ("ethanol") first and changes what x1 is. */
+    /** Water first, then ethanol: a sort by column 2 puts ethanol first and changes what x1 is. */
     private static Object[][] card(boolean stated) {
-        TestCard c = TestCard.empty().row("Miscela card", stated ? 2 : 1).row("title", "Water + ethanol (invented)")
-                .row("source", "invented values, for tests").row("temperature unit", "°C")
-                .row("density unit", "kg/m³").row("molar volume unit", "cm³/mol").row("molar mass unit", "g/mol")
-                .row("valid temperature", 10, 30).row("component", "water", 18.015).row("component", "ethanol", 46.07);
-        if (stated) {
-            c.row("component order", "water", "ethanol");
-        }
-        return c.row("density model", "water", "Tanaka 2001").row("density model", "ethanol", "constant")
-                .row("density coefficients", "ethanol", 789.3).row("valid mole fraction", "water", 0, 1)
-                .row("excess volume A0", "water + ethanol", -4.2).row("excess volume A1", "water + ethanol", 0.9)
-                .cells();
+        return TestCard.waterThenEthanol(stated).cells();
     }
 
-    private static XSpreadsheet put(XComponent doc, Object[][] cells) throws Exception {
+    /**
+     * The card on a sheet "Card", its cells named "card"; the formulas down column A of the first sheet, calculated.
+     * Returns the first sheet.
+     */
+    private static XSpreadsheet withFormulas(XComponent doc, Object[][] cells, String... formulas) throws Exception {
         XSpreadsheetDocument sd = UnoRuntime.queryInterface(XSpreadsheetDocument.class, doc);
         sd.getSheets().insertNewByName("Card", (short) 1);
-        XSpreadsheet sheet = Sheets.sheet(doc, "Card");
-        Sheets.putCard(doc, sheet, "Card", "card", cells, 0, 0);
-        return sheet;
+        Sheets.putCard(doc, Sheets.sheet(doc, "Card"), "Card", "card", cells, 0, 0);
+        XSpreadsheet s = Sheets.sheet(doc, 0);
+        for (int i = 0; i < formulas.length; i++) {
+            s.getCellByPosition(0, i).setFormula(formulas[i]);
+        }
+        Sheets.recalculate(doc);
+        return s;
     }
 
     /** The office's Data ▸ Sort over the card's cells, by one column (0-based), ascending. */
@@ -65,12 +63,9 @@ class CardSanityIT {
         Object[][] cells = card(false);
         XComponent doc = office.newSpreadsheet();
         try {
-            XSpreadsheet card = put(doc, cells);
-            XSpreadsheet s = Sheets.sheet(doc, 0);
-            s.getCellByPosition(0, 0).setFormula("=MIX.CHECK(card)");
-            s.getCellByPosition(0, 1).setFormula("=MIX.PUREDENSITY(card;1;20)");
-            s.getCellByPosition(0, 2).setFormula("=INDEX(MIX.CHECK(card;\"warnings\");1;1)&\"\"");
-            Sheets.recalculate(doc);
+            XSpreadsheet s = withFormulas(doc, cells, "=MIX.CHECK(card)", "=MIX.PUREDENSITY(card;1;20)",
+                    "=INDEX(MIX.CHECK(card;\"warnings\");1;1)&\"\"");
+            XSpreadsheet card = Sheets.sheet(doc, "Card");
             assertEquals("OK", Sheets.text(s.getCellByPosition(0, 0)));
             assertEquals(998.2067, s.getCellByPosition(0, 1).getValue(), 1e-4, "component 1 is water (Tanaka 2001)");
 
@@ -100,11 +95,8 @@ class CardSanityIT {
         Object[][] cells = card(true);
         XComponent doc = office.newSpreadsheet();
         try {
-            XSpreadsheet card = put(doc, cells);
-            XSpreadsheet s = Sheets.sheet(doc, 0);
-            s.getCellByPosition(0, 0).setFormula("=MIX.CHECK(card)");
-            s.getCellByPosition(0, 1).setFormula("=MIX.DENSITY(card;0.5;20)");
-            Sheets.recalculate(doc);
+            XSpreadsheet s = withFormulas(doc, cells, "=MIX.CHECK(card)", "=MIX.DENSITY(card;0.5;20)");
+            XSpreadsheet card = Sheets.sheet(doc, "Card");
             assertEquals("OK", Sheets.text(s.getCellByPosition(0, 0)));
             sort(card, cells.length, 1, true);
             Sheets.recalculate(doc);
@@ -127,12 +119,9 @@ class CardSanityIT {
         Object[][] cells = card(false);
         XComponent doc = office.newSpreadsheet();
         try {
-            XSpreadsheet card = put(doc, cells);
-            XSpreadsheet s = Sheets.sheet(doc, 0);
-            s.getCellByPosition(0, 0).setFormula("=MIX.CHECK(card;\"extent\")");
-            s.getCellByPosition(0, 1).setFormula("=MIX.DENSITY(card;0.5;35)");
-            s.getCellByPosition(0, 2).setFormula("=MIX.EXPLAIN(\"MIX.DENSITY\";card;0.5;35)");
-            Sheets.recalculate(doc);
+            XSpreadsheet s = withFormulas(doc, cells, "=MIX.CHECK(card;\"extent\")", "=MIX.DENSITY(card;0.5;35)",
+                    "=MIX.EXPLAIN(\"MIX.DENSITY\";card;0.5;35)");
+            XSpreadsheet card = Sheets.sheet(doc, "Card");
             String extent = Sheets.text(s.getCellByPosition(0, 0));
             assertEquals("Problem.CHECK_EXTENT_TIGHT", Catalogue.entryOf(extent), extent);
             assertEquals(502, s.getCellByPosition(0, 1).getError(), "35 °C is outside 10 to 30 °C");

@@ -8,7 +8,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.regex.Matcher;
 import org.miscela.core.model.ExcessFunction;
 import org.miscela.core.model.TernaryTerm;
 import org.miscela.core.problem.Numbers;
@@ -29,9 +28,10 @@ import org.miscela.core.problem.Problem;
  * for cancellation: a coefficient written with fewer digits than it needs whose term is more than
  * {@link #CANCELLATION} times the whole contribution of its pair (or ternary term, or the pure density), as in a
  * high-order fit whose terms of 10⁶ add up to 1; and only when such coefficients, rounded in their last written
- * digits all at once, can move the property by more than its tolerance. Sensitivities are taken along each pair's binary mixtures (a triple's
- * for ternary terms; the edges of a component for its density), within the components' and the pair's limits, at
- * {@value #FRACTION_STEPS} + 1 compositions and {@value #TEMPERATURE_STEPS} + 1 temperatures.
+ * digits all at once, can move the property by more than its tolerance. Sensitivities are taken along each pair's
+ * binary mixtures (a triple's triangle for ternary terms; the edges of a component for its density), within the
+ * components' and the pair's limits, at {@value #FRACTION_STEPS} + 1 compositions and
+ * {@value #TEMPERATURE_STEPS} + 1 temperatures.
  */
 final class CardDigits {
     /** The density a card's coefficients must carry: 0.01 kg/m³, the last digit of density tables (common practice). */
@@ -46,17 +46,18 @@ final class CardDigits {
     static final int TEMPERATURE_STEPS = 8;
     private static final int SIMPLEX_STEPS = 12;
 
+    /** What a pair coefficient's term is compared with. */
+    private static final String PAIR = "the pair's whole contribution";
+
     /** The property a coefficient's digits are weighed in. */
     enum Property {
-        DENSITY("density", "the pair's whole contribution"),
-        ENTHALPY("excess enthalpy", "the pair's whole contribution");
+        DENSITY("density"),
+        ENTHALPY("excess enthalpy");
 
         final String word;
-        final String whole;
 
-        Property(String word, String whole) {
+        Property(String word) {
             this.word = word;
-            this.whole = whole;
         }
     }
 
@@ -299,7 +300,7 @@ final class CardDigits {
                 int k = orders.get(r);
                 for (int t = 0; t + 1 < r.values.length; t++) {
                     if (r.number(t + 1) != 0.0) {
-                        add(out, new Coefficient(r, t + 1, property, property.whole, best[k][t] * unit, scale));
+                        add(out, new Coefficient(r, t + 1, property, PAIR, best[k][t] * unit, scale));
                     }
                 }
             }

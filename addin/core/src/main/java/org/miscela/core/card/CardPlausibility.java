@@ -65,73 +65,76 @@ final class CardPlausibility {
                         Numbers.show(LIGHTEST_MOLAR_MASS), Numbers.show(HEAVIEST_MOLAR_MASS)));
             }
             PureDensity d = c.density();
-            double lightest = Double.POSITIVE_INFINITY;
-            double heaviest = Double.NEGATIVE_INFINITY;
-            double lightAt = lo;
-            double heavyAt = lo;
-            double leastAlpha = Double.POSITIVE_INFINITY;
-            double mostAlpha = Double.NEGATIVE_INFINITY;
-            double leastAt = lo;
-            double mostAt = lo;
+            Span density = new Span();
+            Span expansion = new Span();
             double h = (hi - lo) / (SAMPLES * 16.0);
             for (int s = 0; s <= SAMPLES; s++) {
                 double t = s == SAMPLES ? hi : lo + (hi - lo) * s / SAMPLES;
                 double rho = d.at(t);
-                if (rho < lightest) {
-                    lightest = rho;
-                    lightAt = t;
-                }
-                if (rho > heaviest) {
-                    heaviest = rho;
-                    heavyAt = t;
-                }
+                density.see(rho, t);
                 if (h > 0.0) {
                     double t1 = Math.max(lo, t - h);
                     double t2 = Math.min(hi, t + h);
                     double alpha = -(d.at(t2) - d.at(t1)) / ((t2 - t1) * rho);
-                    if (!Double.isFinite(alpha)) {
-                        continue;
-                    }
-                    if (alpha < leastAlpha) {
-                        leastAlpha = alpha;
-                        leastAt = t;
-                    }
-                    if (alpha > mostAlpha) {
-                        mostAlpha = alpha;
-                        mostAt = t;
+                    if (Double.isFinite(alpha)) {
+                        expansion.see(alpha, t);
                     }
                 }
             }
             Units.Density du = units.density();
             Units.Temperature tu = units.temperature();
-            if (lightest < LIGHTEST_DENSITY || heaviest > HEAVIEST_DENSITY) {
+            if (density.outside(LIGHTEST_DENSITY, HEAVIEST_DENSITY)) {
                 plausible = false;
-                boolean light = lightest < LIGHTEST_DENSITY;
+                boolean light = density.least < LIGHTEST_DENSITY;
                 out.add(Problem.WARN_DENSITY.format(densityRow.number, densityRow.label, c.name(),
-                        shown(du.fromKgPerM3(light ? lightest : heaviest), 4), du.symbol(),
-                        shown(tu.fromKelvin(light ? lightAt : heavyAt), 6), tu.symbol(),
+                        shown(du.fromKgPerM3(light ? density.least : density.most), 4), du.symbol(),
+                        shown(tu.fromKelvin(light ? density.leastAt : density.mostAt), 6), tu.symbol(),
                         shown(du.fromKgPerM3(LIGHTEST_DENSITY), 4), shown(du.fromKgPerM3(HEAVIEST_DENSITY), 4),
                         du.symbol()));
             }
-            if (leastAlpha < LEAST_EXPANSION || mostAlpha > MOST_EXPANSION) {
-                boolean least = leastAlpha < LEAST_EXPANSION;
-                double t = least ? leastAt : mostAt;
-                double alpha = least ? leastAlpha : mostAlpha;
+            if (expansion.outside(LEAST_EXPANSION, MOST_EXPANSION)) {
+                boolean least = expansion.least < LEAST_EXPANSION;
+                double t = least ? expansion.leastAt : expansion.mostAt;
+                double alpha = least ? expansion.least : expansion.most;
                 out.add(Problem.WARN_EXPANSION.format(densityRow.number, densityRow.label, c.name(),
                         shown(du.fromKgPerM3(-alpha * d.at(t)), 3) + " " + du.symbol(), shown(tu.fromKelvin(t), 6),
                         tu.symbol(), shown(alpha, 3), Numbers.show(LEAST_EXPANSION), Numbers.show(MOST_EXPANSION)));
             }
             if (plausible) {
-                double smallest = 1000.0 * m / heaviest;
-                double largest = 1000.0 * m / lightest;
+                double smallest = 1000.0 * m / density.most;
+                double largest = 1000.0 * m / density.least;
                 if (smallest < SMALLEST_MOLAR_VOLUME || largest > LARGEST_MOLAR_VOLUME) {
                     boolean small = smallest < SMALLEST_MOLAR_VOLUME;
                     out.add(Problem.WARN_MOLAR_VOLUME.format(c.name(), shown(small ? smallest : largest, 4),
-                            shown(tu.fromKelvin(small ? heavyAt : lightAt), 6), tu.symbol(),
+                            shown(tu.fromKelvin(small ? density.mostAt : density.leastAt), 6), tu.symbol(),
                             Numbers.show(SMALLEST_MOLAR_VOLUME), Numbers.show(LARGEST_MOLAR_VOLUME), row.number,
                             densityRow.number));
                 }
             }
+        }
+    }
+
+    /** The least and the most of a quantity over the temperatures looked at, and where each was. */
+    private static final class Span {
+        double least = Double.POSITIVE_INFINITY;
+        double most = Double.NEGATIVE_INFINITY;
+        double leastAt;
+        double mostAt;
+
+        void see(double v, double t) {
+            if (v < least) {
+                least = v;
+                leastAt = t;
+            }
+            if (v > most) {
+                most = v;
+                mostAt = t;
+            }
+        }
+
+        /** Whether any value seen lies outside lo to hi. */
+        boolean outside(double lo, double hi) {
+            return least < lo || most > hi;
         }
     }
 

@@ -149,17 +149,7 @@ class CardSanityTest {
 
     /** Water first, then ethanol: a sort by column 2 puts ethanol first and changes what x1 is. */
     private static Object[][] waterFirst(boolean stated) {
-        TestCard c = TestCard.empty().row("Miscela card", stated ? 2 : 1).row("title", "Water + ethanol")
-                .row("source", "invented values, for tests").row("temperature unit", "°C")
-                .row("density unit", "kg/m³").row("molar volume unit", "cm³/mol").row("molar mass unit", "g/mol")
-                .row("valid temperature", 10, 30).row("component", "water", 18.015).row("component", "ethanol", 46.07);
-        if (stated) {
-            c.row("component order", "water", "ethanol");
-        }
-        return c.row("density model", "water", "Tanaka 2001").row("density model", "ethanol", "constant")
-                .row("density coefficients", "ethanol", 789.3).row("valid mole fraction", "water", 0, 1)
-                .row("excess volume A0", "water + ethanol", -4.2).row("excess volume A1", "water + ethanol", 0.9)
-                .cells();
+        return TestCard.waterThenEthanol(stated).cells();
     }
 
     @Test
