@@ -247,6 +247,16 @@ public final class MetadataWriter {
         m.append("Reported by every function given the card (Err:502) and, in words, by `MIX.CHECK(card)`; each "
                 + "names the card row. The layout rules behind them are in [card-format.md](card-format.md).\n\n");
         table(m, Problem.of(Problem.Section.CARD), false);
+        m.append("\n## Warnings and details of MIX.CHECK\n\n");
+        m.append("A card that reads but looks like a mistake (a value outside the range of common liquids, rows in "
+                + "sorted order, coefficients written with too few digits for a card whose terms cancel, a range far "
+                + "larger than the card) is never refused: every function computes as before, and `MIX.CHECK(card)` "
+                + "says `OK with n warnings: …` instead of `OK` (so a formula comparing it with \"OK\" is TRUE only for "
+                + "a card with nothing to report). `MIX.CHECK(card; \"warnings\")` lists them one per row, "
+                + "`MIX.EXPLAIN` of a call on the card that gives a result says them too, and `MIX.CHECK(card; "
+                + "\"extent\")` answers with one of the two texts at the end of this table. The bounds and their "
+                + "sources are in [card-format.md](card-format.md#warnings-of-mixcheck).\n\n");
+        table(m, Problem.of(Problem.Section.CHECK), false);
         m.append("\n## Problems with a call\n\n");
         table(m, Problem.of(Problem.Section.CALL), true);
         m.append("\n## Problems with a fit\n\n");

@@ -7,6 +7,7 @@ import org.miscela.core.functions.AmountBasis;
 import org.miscela.core.card.Card;
 import org.miscela.core.card.CardCache;
 import org.miscela.core.functions.CardFunctions;
+import org.miscela.core.functions.CheckOutput;
 import org.miscela.core.card.Extrapolation;
 import org.miscela.core.functions.FitOutput;
 import org.miscela.core.problem.Problem;
@@ -246,6 +247,18 @@ final class Arguments {
             throw Problem.ARG_NOT_TEXT.raise(what, describe(v));
         }
         return (String) v;
+    }
+
+    /** MIX.CHECK's result argument: the summary when left out. */
+    static CheckOutput checkOutput(Object value) {
+        Object v = unwrap(value);
+        if (v == null) {
+            return CheckOutput.SUMMARY;
+        }
+        if (!(v instanceof String)) {
+            throw Problem.UNKNOWN_FIT_OUTPUT.raise(describe(v), CheckOutput.words());
+        }
+        return CheckOutput.lookup((String) v);
     }
 
     /** The fit output argument: coefficients when left out. */

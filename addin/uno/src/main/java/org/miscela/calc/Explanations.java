@@ -9,7 +9,10 @@ import org.miscela.core.catalog.ArgumentInfo;
 import org.miscela.core.catalog.FunctionCatalog;
 import org.miscela.core.catalog.FunctionInfo;
 import org.miscela.core.catalog.IdlType;
+import org.miscela.core.card.Card;
+import org.miscela.core.card.CardSanity;
 import org.miscela.core.functions.CardFunctions;
+import org.miscela.core.problem.MiscelaException;
 import org.miscela.core.problem.Problem;
 
 /**
@@ -78,7 +81,7 @@ final class Explanations {
         add("mixtureMolarVolume", (a, p) -> a.mixtureMolarVolume(r(p[0]), r(p[1]), r(p[2]), p[3]));
         add("mixtureDensity", (a, p) -> a.mixtureDensity(r(p[0]), r(p[1]), r(p[2]), p[3]));
         add("pureDensity", (a, p) -> a.pureDensity(r(p[0]), r(p[1]), r(p[2]), p[3]));
-        add("checkCard", (a, p) -> a.checkCard(r(p[0])));
+        add("checkCard", (a, p) -> a.checkCard(r(p[0]), p[1]));
         add("checkPoint", (a, p) -> a.checkPoint(r(p[0]), r(p[1]), r(p[2]), p[3]));
         add("excessEnthalpy", (a, p) -> a.excessEnthalpy(r(p[0]), r(p[1]), r(p[2]), p[3]));
         add("partialExcessEnthalpy", (a, p) -> a.partialExcessEnthalpy(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4]));
@@ -146,7 +149,7 @@ final class Explanations {
         }
         try {
             t.call.on(addIn, p);
-            return CardFunctions.OK;
+            return cardWarnings(f, p);
         } catch (IllegalArgumentException | UnexpectedFailure refused) {
             return refused.getMessage();
         } catch (Exception undeclared) {
@@ -156,6 +159,25 @@ final class Explanations {
             }
             throw undeclared;
         }
+    }
+
+    /**
+     * What MIX.EXPLAIN says about a call that gives a result: "OK", or, when the call's card reads but has warnings,
+     * MIX.CHECK's summary of them ("OK with n warnings: …"), so a result from a suspicious card is not taken on trust.
+     * A card that cannot be read leaves "OK": only MIX.CHECK gives a result on one, its problem in words.
+     */
+    private static String cardWarnings(FunctionInfo f, Object[] p) {
+        if (f.arguments().isEmpty() || !f.arguments().get(0).name().equals("card")) {
+            return CardFunctions.OK;
+        }
+        Object[][] cells = (Object[][]) p[0];
+        Card card;
+        try {
+            card = Arguments.card(cells);
+        } catch (MiscelaException unreadable) {
+            return CardFunctions.OK;
+        }
+        return CardFunctions.summary(CardSanity.warnings(cells, card));
     }
 
     /** The function a name gives, with or without "MIX.", in any case; MIX.EXPLAIN itself is not one. */

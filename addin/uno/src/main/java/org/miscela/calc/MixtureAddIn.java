@@ -8,6 +8,8 @@ import org.miscela.core.functions.AmountBasis;
 import org.miscela.core.card.Card;
 import org.miscela.core.card.CardCache;
 import org.miscela.core.card.CardReader;
+import org.miscela.core.card.CardSanity;
+import org.miscela.core.functions.CheckOutput;
 import org.miscela.core.functions.FitFunctions;
 import org.miscela.core.functions.FitOutput;
 import org.miscela.core.blend.BlendFunctions;
@@ -114,9 +116,14 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     }
 
     @Override
-    public String checkCard(Object[][] card) {
+    public Object checkCard(Object[][] card, Object result) {
         try {
-            return CardFunctions.check(Arguments.card(card), Double.NaN, Double.NaN, Extrapolation.AS_CARD);
+            CheckOutput output = Arguments.checkOutput(result);
+            if (output == CheckOutput.EXTENT) {
+                return CardSanity.extent(card).words(); // needs no readable card
+            }
+            Object answer = CardFunctions.checkCard(card, Arguments.card(card), output);
+            return answer instanceof Object[][] ? Arguments.table((Object[][]) answer) : answer;
         } catch (RuntimeException ex) {
             return Failures.words(ex, "checkCard");
         }

@@ -47,7 +47,7 @@ class ExplainProperties {
         String expected;
         try {
             call.invoke(addIn);
-            expected = "OK";
+            expected = cardWarnings(call);
         } catch (IllegalArgumentException | com.sun.star.uno.Exception e) {
             // a refusal, or a catalogued non-convergence (a checked UNO exception): MIX.EXPLAIN gives its words
             expected = e.getMessage();
@@ -61,6 +61,21 @@ class ExplainProperties {
         }
         assertEquals(expected, addIn.explainCall(new Object[][] {{name}}, arguments), () -> "MIX.EXPLAIN(\"" + name + "\"; …) of " + call
                 + "\n  as " + Arrays.deepToString(arguments));
+    }
+
+    /** "OK", or the summary of the warnings of the call's card when it reads and has any (its first argument). */
+    private static String cardWarnings(FuzzCall call) {
+        if (!call.function.arguments().get(0).name().equals("card")) {
+            return "OK";
+        }
+        org.miscela.core.card.Card card;
+        try {
+            card = org.miscela.core.card.CardReader.read(call.cardCells());
+        } catch (org.miscela.core.problem.MiscelaException unreadable) {
+            return "OK";
+        }
+        return org.miscela.core.functions.CardFunctions.summary(
+                org.miscela.core.card.CardSanity.warnings(call.cardCells(), card));
     }
 
     /** The call's arguments as Calc's variable argument list could hold them. */

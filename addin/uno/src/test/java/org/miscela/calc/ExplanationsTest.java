@@ -115,6 +115,22 @@ class ExplanationsTest {
         assertEquals("OK", explain("MIX.CHECK", one("not a card")));
     }
 
+    /** A call that gives a result on a card with warnings: MIX.EXPLAIN says them, as MIX.CHECK does. */
+    @Test
+    void aCallThatGivesAResultOnACardWithWarningsSaysThem() {
+        Object[][] heavy = CARD.clone();
+        heavy[7] = new Object[] {"component", "ethanol", 46068.44};
+        String check = (String) addIn.checkCard(heavy, Any.VOID);
+        assertTrue(check.startsWith("OK with 1 warning: Card row 8 (component): the molar mass of ethanol"), check);
+        assertEquals(check, explain("MIX.DENSITY", heavy, 0.3, 20.0));
+        assertEquals(check, explain("MIX.CHECK", (Object) heavy));
+        assertEquals(check, explain("MIX.CHECK", heavy, "extent"), "the warnings are the card's, whatever the result");
+        // a refusal is a refusal: the warnings do not hide it
+        assertTrue(explain("MIX.DENSITY", heavy, 0.3, 45.0).startsWith("The temperature 45 °C is outside"));
+        // a function whose first argument is no card says OK
+        assertEquals("OK", explain("MIX.INFO"));
+    }
+
     @Test
     void theNameMayLackThePrefixAndIgnoresCase() {
         String expected = explain("MIX.DENSITY", CARD, 0.3, 45.0);
@@ -146,8 +162,8 @@ class ExplanationsTest {
         assertEquals("Problem.EXPLAIN_ARGUMENT_COUNT", Catalogue.entryOf(few), few);
         assertEquals("MIX.DENSITY takes 3 or 4 arguments (MIX.DENSITY(card; x; temperature; [extrapolate])), not 2: "
                 + "Calc shows Err:504 for such a call without calling the function.", few);
-        String many = explain("MIX.CHECK", CARD, 1.0);
-        assertTrue(many.startsWith("MIX.CHECK takes 1 argument (MIX.CHECK(card)), not 2"), many);
+        String many = explain("MIX.CHECK", CARD, "warnings", 1.0);
+        assertTrue(many.startsWith("MIX.CHECK takes 1 or 2 arguments (MIX.CHECK(card; [result])), not 3"), many);
         assertTrue(explain("MIX.FITEXCESS", one(0.5)).startsWith("MIX.FITEXCESS takes 3 to 8 arguments"));
         // the order is required and typed as a range: Calc refuses a call without it (Err:504), as MIX.EXPLAIN says
         String noOrder = explain("MIX.FITEXCESS", new Object[][] {{0.2}, {0.4}}, new Object[][] {{-0.7}, {-1.0}});

@@ -248,7 +248,8 @@ final class FuzzCall {
                     break;
                 }
                 case "checkCard":
-                    a = new Object[0];
+                    a = new Object[] {pick(Any.VOID, "warnings", "extent", "digits", " Summary ", "colour", "",
+                        2.0)};
                     break;
                 case "checkPoint":
                 case "insideValidity": {

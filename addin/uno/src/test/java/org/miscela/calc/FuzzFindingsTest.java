@@ -148,7 +148,7 @@ class FuzzFindingsTest {
         rows.set(6, row("enthalpy unit", "kJ/mol"));
         rows.set(19, row("excess enthalpy A0", "alpha + beta", -1e306));
         Object[][] card = range(rows.toArray(new Object[0][]));
-        assertEquals("OK", addIn.checkCard(card), "the card reads");
+        assertTrue(((String) addIn.checkCard(card, Any.VOID)).startsWith("OK"), "the card reads (its values look odd)");
         IllegalArgumentException enthalpy = assertThrows(IllegalArgumentException.class,
                 () -> addIn.excessEnthalpy(card, one(0.5), one(300.0), Any.VOID));
         assertEquals("Problem.NON_PHYSICAL", Catalogue.entryOf(enthalpy.getMessage()), enthalpy.getMessage());
@@ -191,7 +191,7 @@ class FuzzFindingsTest {
         List<Object[]> rows = heatCard();
         rows.set(14, row("density coefficients", "beta", 1e-300));
         Object[][] card = range(rows.toArray(new Object[0][]));
-        assertEquals("OK", addIn.checkCard(card), "the card reads");
+        assertTrue(((String) addIn.checkCard(card, Any.VOID)).startsWith("OK"), "the card reads (its values look odd)");
         IllegalArgumentException add = assertThrows(IllegalArgumentException.class, () -> addIn.additionVolume(card,
                 range(row(10.0, 10.0)), one("kmol"), one(2.0), one(2.0), one(300.0), Any.VOID, Any.VOID, Any.VOID,
                 Any.VOID));

@@ -111,6 +111,8 @@ class MixtureAddInFuzzProperties {
             return text(call, result);
         }
         switch (call.method()) {
+            case "checkCard":
+                return check(call, result);
             case "traceEvaluation":
                 return trace(call, result);
             case "fitExcessVolume":
@@ -171,6 +173,37 @@ class MixtureAddInFuzzProperties {
             }
         }
         return "array";
+    }
+
+    /**
+     * MIX.CHECK: "OK" or a catalogued text (a card's problem, the warnings' summary, the extent, an unknown result),
+     * a column of catalogued warnings, or the digits table (a text header, then rows of numbers and texts).
+     */
+    private static String check(FuzzCall call, Object result) {
+        if (result instanceof String) {
+            return text(call, result);
+        }
+        Object[][] grid = grid(call, result);
+        if ("digits written".equals(grid[0][grid[0].length > 5 ? 5 : 0])) {
+            for (Object[] row : grid) {
+                if (row.length != grid[0].length) {
+                    unexpected("returned a ragged digits table", call, null);
+                }
+                for (Object v : row) {
+                    cell(call, v);
+                }
+            }
+            return "table digits";
+        }
+        for (Object[] row : grid) {
+            String entry = row.length == 1 && row[0] instanceof String ? Catalogue.entryOf((String) row[0]) : null;
+            if (entry == null || org.miscela.core.problem.Problem.valueOf(entry.substring(8)).section()
+                    != org.miscela.core.problem.Problem.Section.CHECK) {
+                unexpected("returned a warning that is none of the catalogue's: " + java.util.Arrays.toString(row),
+                        call, null);
+            }
+        }
+        return "array warnings";
     }
 
     private static String text(FuzzCall call, Object result) {

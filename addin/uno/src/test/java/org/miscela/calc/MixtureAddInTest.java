@@ -106,13 +106,73 @@ class MixtureAddInTest {
 
     @Test
     void checkCardReportsTheFirstProblem() {
-        assertEquals("OK", addIn.checkCard(CARD));
+        assertEquals("OK", addIn.checkCard(CARD, Any.VOID));
+        assertEquals("OK", addIn.checkCard(CARD, "warnings"), "no warning to list");
         Object[][] broken = CARD.clone();
         broken[3] = new Object[] {"temperature unit", "°R"};
-        String message = addIn.checkCard(broken);
+        String message = (String) addIn.checkCard(broken, Any.VOID);
         assertTrue(message.startsWith("Card row 4 (temperature unit)"), message);
+        assertEquals(message, addIn.checkCard(broken, "warnings"), "an unreadable card has its problem, not warnings");
         assertThrows(IllegalArgumentException.class, () -> addIn.mixtureDensity(broken, one(0.4), one(20.0),
                 Any.VOID));
+    }
+
+    /** A card that reads with a warning: MIX.CHECK says so in words or as a column; the other functions compute. */
+    @Test
+    void checkCardWarnsAndListsWithoutChangingResults() throws Exception {
+        Object[][] heavy = CARD.clone();
+        int row = rowOf(heavy, "component", "ethanol");
+        heavy[row] = new Object[] {"component", "ethanol", 46068.44}; // g/mol values under kg/mol, as if
+        String summary = (String) addIn.checkCard(heavy, Any.VOID);
+        assertTrue(summary.startsWith("OK with 1 warning: Card row " + (row + 1) + " (component): the molar mass of "
+                + "ethanol comes to 46070 g/mol"), summary);
+        Object[][] list = (Object[][]) ((Any) addIn.checkCard(heavy, " Warnings ")).getObject();
+        assertEquals(1, list.length);
+        assertEquals(summary, "OK with 1 warning: " + list[0][0]);
+        assertEquals("Problem.WARN_MOLAR_MASS", Catalogue.entryOf((String) list[0][0]));
+        // the warning changes no result: the density is the mean molar mass over the molar volume as before
+        double x = 0.3;
+        double v = (Double) addIn.mixtureMolarVolume(heavy, one(x), one(20.0), Any.VOID);
+        assertEquals((x * 46068.44 + (1 - x) * 18.01528) / v * 1000,
+                (Double) addIn.mixtureDensity(heavy, one(x), one(20.0), Any.VOID), 1e-9);
+    }
+
+    @Test
+    void checkCardGivesTheExtentEvenOfAnUnreadableCardAndRefusesAnUnknownResultInWords() {
+        Object[][] spare = java.util.Arrays.copyOf(CARD, CARD.length + 5);
+        for (int i = CARD.length; i < spare.length; i++) {
+            spare[i] = new Object[] {"", ""};
+        }
+        String extent = (String) addIn.checkCard(spare, "extent");
+        assertEquals("Problem.CHECK_EXTENT_SPARE", Catalogue.entryOf(extent), extent);
+        assertTrue(extent.contains("Rows " + (CARD.length + 1) + " to " + (CARD.length + 5) + " are blank"), extent);
+        Object[][] broken = CARD.clone();
+        broken[3] = new Object[] {"temperature unit", "°F"};
+        assertEquals("Problem.CHECK_EXTENT_TIGHT", Catalogue.entryOf((String) addIn.checkCard(broken, "extent")));
+        String unknown = (String) addIn.checkCard(CARD, "colour");
+        assertEquals("The result \"colour\" is not recognised; use one of: summary, warnings, extent, digits.", unknown);
+        assertEquals("Problem.UNKNOWN_FIT_OUTPUT", Catalogue.entryOf((String) addIn.checkCard(CARD, 2.0)));
+    }
+
+    @Test
+    void checkCardDigitsIsATableWithAHeaderRow() {
+        Object[][] table = (Object[][]) ((Any) addIn.checkCard(CARD, "digits")).getObject();
+        assertEquals("digits written", table[0][5]);
+        assertTrue(table.length > 10, "every non-zero coefficient of the OIML card has a row");
+        for (int i = 1; i < table.length; i++) {
+            assertTrue((Double) table[i][5] >= (Double) table[i][6], "the fitted card carries the digits it needs: "
+                    + java.util.Arrays.toString(table[i]));
+        }
+    }
+
+    /** The index of the row with this label and subject. */
+    private static int rowOf(Object[][] cells, String label, String subject) {
+        for (int i = 0; i < cells.length; i++) {
+            if (cells[i].length > 1 && label.equals(cells[i][0]) && subject.equals(cells[i][1])) {
+                return i;
+            }
+        }
+        throw new AssertionError("no row " + label + " | " + subject);
     }
 
     // --- compositions of any size (ternary test card, invented values)

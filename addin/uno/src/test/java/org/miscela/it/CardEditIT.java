@@ -72,6 +72,13 @@ class CardEditIT {
             String content = contentXml(saved);
             assertTrue(content.contains("of:=ORG.MISCELA.CALC.MIXTUREFUNCTIONS.MIXTUREDENSITY(card;0.4;20)"),
                     "saved formula uses the permanent service and method name");
+            // MIX.CHECK's trailing optional argument (added after workbooks were saved with one argument) and its
+            // result type, now any: stored under the same method name, with the argument
+            assertTrue(content.contains("of:=ORG.MISCELA.CALC.MIXTUREFUNCTIONS.CHECKCARD(card)"), "one argument");
+            assertTrue(content.contains("of:=ORG.MISCELA.CALC.MIXTUREFUNCTIONS.CHECKCARD(card;&quot;extent&quot;)"),
+                    "the result argument");
+            String extent = Sheets.text(Sheets.cell(sheet, 0, 3));
+            assertTrue(extent.startsWith("The range is " + cells.length + " rows"), extent);
             XComponent reloaded = office.load(saved);
             try {
                 Sheets.recalculate(reloaded);
@@ -79,6 +86,7 @@ class CardEditIT {
                 assertEquals(before, Sheets.cell(s, 0, 0).getValue(), 1e-12, "density after reload");
                 assertEquals(0, Sheets.cell(s, 0, 0).getError());
                 assertEquals("OK", Sheets.text(Sheets.cell(s, 0, 2)));
+                assertEquals(extent, Sheets.text(Sheets.cell(s, 0, 3)), "MIX.CHECK(card; \"extent\") after reload");
             } finally {
                 Sheets.close(reloaded);
             }
@@ -95,6 +103,7 @@ class CardEditIT {
         Sheets.cell(sheet, 0, 0).setFormula(DENSITY);
         Sheets.cell(sheet, 0, 1).setFormula(EXCESS);
         Sheets.cell(sheet, 0, 2).setFormula("=MIX.CHECK(card)");
+        Sheets.cell(sheet, 0, 3).setFormula("=MIX.CHECK(card;\"extent\")");
         return sheet;
     }
 

@@ -12,6 +12,7 @@ import java.nio.file.Paths;
 import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
+import org.miscela.core.card.CardEdits;
 import org.miscela.core.card.TestCards;
 
 /**
@@ -19,10 +20,18 @@ import org.miscela.core.card.TestCards;
  * every check passes; sheet "Checks" has per row the formula's result, the expected value, the tolerance, a pass
  * cell, the formula as text and the source of the expected value; sheet "Cards" holds the named card ranges.
  * A "refused" row (see {@link ErrorSheet}) has its expected error code in the expected column and, in three more
- * columns, MIX.EXPLAIN of the same call, the catalogue message as a wildcard pattern, and the catalogue entry.
+ * columns, MIX.EXPLAIN of the same call, the catalogue message as a wildcard pattern, and the catalogue entry. A
+ * "warned" row's result is a text that must be an instance of a catalogue entry (a warning of MIX.CHECK): its pattern
+ * with wildcards is the expected value and the entry is in the entry column. A card line may edit its test card
+ * ({@link CardEdits}, a fourth field); a card of more than {@value #TALL} rows gets columns of its own.
  * The office writes the file itself, so it is valid ODF. Usage: CheckSheetBuilder SPEC... (writes SPEC → .fods).
  */
 public final class CheckSheetBuilder {
+    /** Cards of more rows than this (ranges named far larger than their card) get columns of their own. */
+    private static final int TALL = 1000;
+    /** The first column of those. */
+    private static final int TALL_COLUMN = 12;
+
     private CheckSheetBuilder() {
     }
 
@@ -69,9 +78,20 @@ public final class CheckSheetBuilder {
         UnoRuntime.queryInterface(com.sun.star.container.XNamed.class, first).setName("Summary");
         XSpreadsheet cardSheet = Sheets.sheet(doc, "Cards");
         int row = 0;
+        int tall = 0;
         for (String[] c : cards) {
-            Object[][] cells = TestCards.cells(c[2]);
-            Sheets.put(cardSheet, 0, row, "card range '" + c[1] + "' (test resource cards/" + c[2] + ")");
+            String edits = c.length > 3 ? c[3] : "";
+            Object[][] cells = CardEdits.apply(TestCards.cells(c[2]), edits);
+            String what = "card range '" + c[1] + "' (test resource cards/" + c[2]
+                    + (edits.isEmpty() ? "" : ", edited: " + edits) + ")";
+            if (cells.length > TALL) {
+                // a range named far larger than its card gets columns of its own, from the sheet's first row
+                int col = TALL_COLUMN + 8 * tall++;
+                Sheets.putCard(doc, cardSheet, "Cards", c[1], cells, col, 0);
+                Sheets.put(first, 0, 6 + tall, what + " in column " + Sheets.column(col) + " of sheet Cards");
+                continue;
+            }
+            Sheets.put(cardSheet, 0, row, what);
             Sheets.putCard(doc, cardSheet, "Cards", c[1], cells, 0, row + 1);
             row += cells.length + 3;
         }
@@ -80,7 +100,7 @@ public final class CheckSheetBuilder {
         for (int i = 0; i < headers.length; i++) {
             Sheets.put(sheet, i, 0, headers[i]);
         }
-        if (checks.stream().anyMatch(c -> c[0].equals("refused"))) {
+        if (checks.stream().anyMatch(c -> c[0].equals("refused") || c[0].equals("warned"))) {
             String[] more = {"MIX.EXPLAIN of the same call", "catalogue message (wildcards)", "catalogue entry"};
             for (int i = 0; i < more.length; i++) {
                 Sheets.put(sheet, 7 + i, 0, more[i]);
@@ -121,6 +141,13 @@ public final class CheckSheetBuilder {
                     String h = "H" + (r + 1);
                     String p = "I" + (r + 1);
                     pass = "=IFERROR(AND(ERRORTYPE(" + a + ")=" + b + ";COUNTIF(" + h + ";" + p + ")=1);FALSE())";
+                    break;
+                }
+                case "warned": {
+                    // c[2] the catalogue entry (a warning of MIX.CHECK): the result, a text, must be its message
+                    Sheets.put(sheet, 1, r, ErrorSheet.wildcards(ErrorSheet.pattern(c[2])));
+                    Sheets.put(sheet, 9, r, c[2]);
+                    pass = "=IFERROR(COUNTIF(" + a + ";" + b + ")=1;FALSE())";
                     break;
                 }
                 default:

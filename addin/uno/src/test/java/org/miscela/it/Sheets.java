@@ -56,7 +56,9 @@ public final class Sheets {
         int width = 0;
         for (int r = 0; r < cells.length; r++) {
             for (int c = 0; c < cells[r].length; c++) {
-                put(sheet, col + c, row + r, cells[r][c]);
+                if (!"".equals(cells[r][c])) { // a blank cell stays untouched (a range of a million rows is quick)
+                    put(sheet, col + c, row + r, cells[r][c]);
+                }
             }
             width = Math.max(width, cells[r].length);
         }

@@ -1,6 +1,7 @@
 package org.miscela.core.card;
 
 import static org.miscela.core.card.CardLabels.COMPONENT;
+import static org.miscela.core.card.CardLabels.COMPONENT_ORDER;
 import static org.miscela.core.card.CardLabels.DENSITY_COEFFICIENTS;
 import static org.miscela.core.card.CardLabels.DENSITY_MODEL;
 import static org.miscela.core.card.CardLabels.DENSITY_REFERENCE;
@@ -73,7 +74,12 @@ final class CardBuilder {
         List<String> names = new ArrayList<>();
         List<Double> masses = new ArrayList<>();
         for (CardRow r : componentRows.values()) {
-            names.add(r.text(0).trim());
+            String name = r.text(0).trim();
+            if (name.indexOf('+') >= 0) {
+                // refused here, on its own row: otherwise the first pair row naming it would be blamed
+                throw Problem.NAME_WITH_PLUS.raise(r.number, r.label, name);
+            }
+            names.add(name);
             double mass = r.number(1);
             if (!(mass > 0)) {
                 throw Problem.NOT_POSITIVE.raise(r.number, r.label, "the molar mass", Numbers.show(mass));
@@ -84,6 +90,7 @@ final class CardBuilder {
         if (names.size() < 2) {
             throw Problem.TOO_FEW_COMPONENTS.raise(names.size());
         }
+        checkOrder(names);
         checkSubjects(componentRows);
         Subjects subjects = new Subjects(names);
         Validity validity = new ValidityBuilder(rows, subjects, units.temperature()).validity(pureOnly);
@@ -193,6 +200,36 @@ final class CardBuilder {
             return false;
         }
         throw Problem.BAD_KEYWORD.raise(r.number, r.label, r.text(0).trim(), no + ", " + yes);
+    }
+
+    /**
+     * The 'component order' row, when the card has one: its names, in its columns, must be the 'component' rows'
+     * names in their order. A sort moves rows but not the cells within a row, so a sorted card fails here.
+     */
+    private void checkOrder(List<String> names) {
+        CardRow r = rows.global(COMPONENT_ORDER);
+        if (r == null) {
+            return;
+        }
+        List<String> stated = new ArrayList<>();
+        boolean same = r.values.length == names.size();
+        for (int i = 0; i < Math.max(r.values.length, 1); i++) {
+            String s = r.text(i).trim();
+            stated.add(s);
+            same &= i < names.size() && normalise(s).equals(normalise(names.get(i)));
+        }
+        if (!same) {
+            throw Problem.COMPONENT_ORDER.raise(r.number, r.label, quoted(stated), quoted(names));
+        }
+    }
+
+    /** Names as a message lists them: "a", "b", "c". */
+    private static String quoted(List<String> names) {
+        StringBuilder b = new StringBuilder();
+        for (String n : names) {
+            b.append(b.length() == 0 ? "" : ", ").append('"').append(n).append('"');
+        }
+        return b.toString();
     }
 
     /** Every keyed row must name a declared component (or, for excess rows, a pair of them). */

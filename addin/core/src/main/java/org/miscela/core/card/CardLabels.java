@@ -20,6 +20,7 @@ final class CardLabels {
     static final String VALID_TEMPERATURE = "valid temperature";
     static final String EXTRAPOLATION = "extrapolation";
     static final String COMPONENT = "component";
+    static final String COMPONENT_ORDER = "component order";
     static final String DENSITY_MODEL = "density model";
     static final String DENSITY_REFERENCE = "density reference temperature";
     static final String DENSITY_COEFFICIENTS = "density coefficients";
@@ -44,13 +45,14 @@ final class CardLabels {
 
     /** Rows whose values start in column 2. */
     private static final String[] GLOBAL = {TITLE, SOURCE, TEMPERATURE_UNIT, DENSITY_UNIT, MOLAR_VOLUME_UNIT,
-        MOLAR_MASS_UNIT, VALID_TEMPERATURE, EXTRAPOLATION, MODEL, MISSING_PAIRS, ENTHALPY_UNIT};
+        MOLAR_MASS_UNIT, VALID_TEMPERATURE, EXTRAPOLATION, MODEL, MISSING_PAIRS, ENTHALPY_UNIT, COMPONENT_ORDER};
     /** Rows whose column 2 names a component (or a pair) and whose values follow. */
     private static final String[] KEYED = {COMPONENT, DENSITY_MODEL, DENSITY_REFERENCE, DENSITY_COEFFICIENTS,
         VALID_MOLE_FRACTION, HEAT_CAPACITY, HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION};
     /** Labels of version 2 beyond the excess-enthalpy and ternary rows. */
     private static final String[] VERSION_2 = {MODEL, MISSING_PAIRS, ENTHALPY_UNIT, HEAT_CAPACITY,
-        EXCESS_VOLUME + " covariance", HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION};
+        EXCESS_VOLUME + " covariance", HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION,
+        COMPONENT_ORDER};
     /** Keyed rows whose subject is a pair "a + b" rather than one component. */
     private static final String[] PAIR_KEYED = {VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION};
 

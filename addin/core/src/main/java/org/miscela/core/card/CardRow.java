@@ -11,6 +11,9 @@ import org.miscela.core.problem.Problem;
  * <p>Values are null (blank), {@link Double} (numbers and logical cells) or {@link String} (text).
  */
 final class CardRow {
+    /** A decimal number written with one separator, a point or a comma, and digits on both sides: "0,998", "-4.2". */
+    private static final java.util.regex.Pattern ONE_SEPARATOR =
+            java.util.regex.Pattern.compile("([-+]?\\d{1,20})([.,])(\\d{1,20})");
     final int number;
     final String label;
     final String key;
@@ -47,7 +50,15 @@ final class CardRow {
             throw Problem.MISSING_VALUE.raise(number, label, column(i));
         }
         if (!(v instanceof Double)) {
-            throw Problem.NOT_A_NUMBER.raise(number, label, column(i), ((String) v).trim());
+            String text = ((String) v).trim();
+            java.util.regex.Matcher m = ONE_SEPARATOR.matcher(text);
+            if (m.matches()) {
+                // a number with one decimal separator, kept as text: a locale mix-up, an apostrophe, a text cell
+                String separator = m.group(2);
+                throw Problem.NUMBER_AS_TEXT.raise(number, label, column(i), text,
+                        Numbers.show(Double.parseDouble(m.group(1) + "." + m.group(3))), separator);
+            }
+            throw Problem.NOT_A_NUMBER.raise(number, label, column(i), text);
         }
         double d = (Double) v;
         if (Double.isNaN(d) || Double.isInfinite(d)) {

@@ -194,12 +194,21 @@ public final class FunctionCatalog {
                             "Temperature in the card's temperature unit. A single value, or a range for an array "
                                     + "result."), EXTRAPOLATE)
                     .shows("998.201").refuses(union(COMPONENT_PROBLEMS, list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER, Problem.ARG_NOT_FLAG, Problem.BELOW_ABSOLUTE_ZERO, Problem.OUTSIDE_TEMPERATURE, Problem.NON_PHYSICAL))),
-            new FunctionInfo("checkCard", "MIX.CHECK", "\"OK\" or the card's first problem, naming its row",
-                    "\"OK\" when the card can be read and used; otherwise its first problem, naming the row.",
+            new FunctionInfo("checkCard", "MIX.CHECK",
+                    "\"OK\", the card's first problem naming its row, or \"OK with n warnings: …\"",
+                    "\"OK\" when the card can be read and nothing on it looks like a mistake; its first problem, "
+                            + "naming the row, when it cannot be read; \"OK with n warnings: …\" when it reads but "
+                            + "values look odd (warnings change no other function's result). Asked for, the "
+                            + "warnings one per row, the rows of the range that hold the card, or each "
+                            + "coefficient's significant digits.",
                     "—",
                     "=MIX.CHECK(card)",
-                    CARD).answersInWords()
-                    .shows("OK").refuses(list()),
+                    CARD, optional("result", "result", "Optional. \"summary\" (left out): one text as described; "
+                            + "\"warnings\": one warning per row (\"OK\" when none); \"extent\": which rows and "
+                            + "columns of the range hold the card; \"digits\": every coefficient's significant "
+                            + "digits, written and needed."))
+                    .answersInWordsOrTables()
+                    .shows("OK").refuses(list(Problem.UNKNOWN_FIT_OUTPUT)),
             new FunctionInfo("checkPoint", "MIX.CHECKPOINT", "\"OK\" or why the functions refuse at that point",
                     "\"OK\" when the functions can answer at this composition and temperature; otherwise why they "
                             + "refuse (for example the validity limit that is exceeded).",

@@ -55,6 +55,16 @@ public final class FunctionInfo {
         return this;
     }
 
+    /**
+     * A function that answers in words or, asked for a detail, in a table: its result is {@code any} (a text or an
+     * array) and it raises nothing, so a problem is its answer, never Err:502.
+     */
+    FunctionInfo answersInWordsOrTables() {
+        this.returnType = IdlType.ANY;
+        this.raisesIllegalArgument = false;
+        return this;
+    }
+
     /** The IDL result type: {@code any} (a number, a text or an array), or {@code string}. */
     public IdlType returnType() {
         return returnType;

@@ -1,6 +1,8 @@
 package org.miscela.core.functions;
 
+import java.util.List;
 import org.miscela.core.card.Card;
+import org.miscela.core.card.CardSanity;
 import org.miscela.core.card.Extrapolation;
 import org.miscela.core.model.Component;
 import org.miscela.core.model.ConventionalMass;
@@ -306,6 +308,56 @@ public final class CardFunctions {
         } catch (MiscelaException ex) {
             return ex.getMessage();
         }
+    }
+
+    /**
+     * MIX.CHECK about a card that reads (a card that does not is answered with its problem): for
+     * {@link CheckOutput#SUMMARY} "OK" or "OK with n warnings: …" ({@link #summary}); for WARNINGS "OK" or a column
+     * with one warning per row; for EXTENT the words of {@link CardSanity.Extent}; for DIGITS the table of
+     * {@link CardSanity#digits}. A text or an {@code Object[][]}.
+     *
+     * @param cells the range as Calc passes it
+     * @param card the card those cells hold
+     */
+    public static Object checkCard(Object[][] cells, Card card, CheckOutput output) {
+        switch (output) {
+            case EXTENT:
+                return CardSanity.extent(cells).words();
+            case DIGITS:
+                return CardSanity.digits(cells, card);
+            case WARNINGS: {
+                List<String> warnings = CardSanity.warnings(cells, card);
+                if (warnings.isEmpty()) {
+                    return OK;
+                }
+                Object[][] column = new Object[warnings.size()][];
+                for (int i = 0; i < column.length; i++) {
+                    column[i] = new Object[] {warnings.get(i)};
+                }
+                return column;
+            }
+            default:
+                return summary(CardSanity.warnings(cells, card));
+        }
+    }
+
+    /**
+     * "OK" for no warnings; otherwise "OK with 1 warning: …" or "OK with 3 warnings: (1) … (2) … (3) …", every
+     * warning in full: what MIX.CHECK says about a card that reads, and MIX.EXPLAIN about a call on it that succeeds.
+     * A formula comparing MIX.CHECK(card) with "OK" stays TRUE exactly for a card with nothing to report.
+     */
+    public static String summary(List<String> warnings) {
+        if (warnings.isEmpty()) {
+            return OK;
+        }
+        if (warnings.size() == 1) {
+            return Problem.CHECK_WARNINGS.format("1 warning", warnings.get(0));
+        }
+        StringBuilder all = new StringBuilder();
+        for (int i = 0; i < warnings.size(); i++) {
+            all.append(i == 0 ? "" : " ").append('(').append(i + 1).append(") ").append(warnings.get(i));
+        }
+        return Problem.CHECK_WARNINGS.format(warnings.size() + " warnings", all);
     }
 
     /** {@link #check} for a binary card's first mole fraction; NaN for both checks only the card. */

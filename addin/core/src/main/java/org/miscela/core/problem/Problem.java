@@ -3,6 +3,7 @@ package org.miscela.core.problem;
 import static org.miscela.core.problem.Problem.Section.BLEND;
 import static org.miscela.core.problem.Problem.Section.CALL;
 import static org.miscela.core.problem.Problem.Section.CARD;
+import static org.miscela.core.problem.Problem.Section.CHECK;
 import static org.miscela.core.problem.Problem.Section.EXPLAIN;
 import static org.miscela.core.problem.Problem.Section.FAILURE;
 import static org.miscela.core.problem.Problem.Section.FIT;
@@ -26,10 +27,14 @@ public enum Problem {
     NEEDS_VERSION_2(CARD, "Card row %d: \"%s\" is a card format version 2 row; change the header to 'Miscela card | 2'."),
     UNKNOWN_LABEL(CARD, "Card row %d: unknown label \"%s\"."),
     DUPLICATE_ROW(CARD, "Card row %d: \"%s\" is given twice (also in row %d)."),
-    MISSING_ROW(CARD, "The card lacks the row \"%s\"."),
+    MISSING_ROW(CARD, "The card lacks the row \"%s\".", Advice.INSIDE_RANGE),
     NO_LABEL(CARD, "Card row %d holds values but no label in its first column."),
     MISSING_VALUE(CARD, "Card row %d (%s): column %d is empty; a value belongs there."),
     NOT_A_NUMBER(CARD, "Card row %d (%s): column %d holds the text \"%s\" where a number belongs."),
+    NUMBER_AS_TEXT(CARD, "Card row %d (%s): column %d holds the text \"%s\" where a number belongs; it reads as %s "
+            + "with '%s' as the decimal separator. Calc keeps a number as text when it is typed with the decimal "
+            + "separator its locale does not use, after an apostrophe, or in a cell formatted as text: enter it as a "
+            + "number, with the decimal separator of Calc's locale (Tools ▸ Options ▸ Language Settings ▸ Languages)."),
     NOT_TEXT(CARD, "Card row %d (%s): column %d must hold text; found %s."),
     NOT_FINITE(CARD, "Card row %d (%s): column %d is not a finite number."),
     EXTRA_VALUE(CARD, "Card row %d (%s): unexpected value in column %d (\"%s\")."),
@@ -38,22 +43,63 @@ public enum Problem {
     UNKNOWN_COMPONENT(CARD, "Card row %d (%s): \"%s\" is not declared by a 'component' row."),
     BAD_TRIPLE(CARD, "Card row %d (%s): \"%s\" must name three different components joined by '+', e.g. 'ethanol + water + glycerol'."),
     BAD_PAIR(CARD, "Card row %d (%s): \"%s\" must name two different components joined by '+', e.g. 'ethanol + water'."),
+    NAME_WITH_PLUS(CARD, "Card row %d (%s): the component name \"%s\" contains '+', which joins the components of a "
+            + "pair ('a + b'); remove it from the name. Calc's AutoInput may have put it there: typing a name under a "
+            + "cell whose text starts the same way (a title such as 'ethanol + water') completes it to that text. "
+            + "Retype the name and press Delete before Enter, or switch off Tools ▸ AutoInput."),
     NOT_POSITIVE(CARD, "Card row %d (%s): %s must be greater than zero; found %s."),
     BAD_RANGE(CARD, "Card row %d (%s): the lower limit %s must be below the upper limit %s."),
     MOLE_FRACTION_LIMIT(CARD, "Card row %d (%s): mole-fraction limits must lie within 0..1; found %s..%s."),
     TOO_FEW_COMPONENTS(CARD, "The card declares %d component(s); a mixture needs at least 2."),
-    MISSING_DENSITY(CARD, "The card gives no 'density model' row for component \"%s\"."),
+    COMPONENT_ORDER(CARD, "Card row %d (%s): the card states the components in the order %s, but its 'component' rows "
+            + "declare %s; "
+            + "put the 'component' rows back in the stated order. A sort (Data ▸ Sort) moves rows, and the first "
+            + "'component' row is the one whose mole fraction is x1."),
+    MISSING_DENSITY(CARD, "The card gives no 'density model' row for component \"%s\".", Advice.INSIDE_RANGE),
     MODEL_VALUES(CARD, "Card row %d (%s): the %s model takes %s; %s."),
     MODEL_RANGE(CARD, "Card row %d (%s): the %s model is valid from %s to %s K, but the card's 'valid temperature' range runs from %s to %s K."),
     PAIR_ORDER(CARD, "Card row %d (%s): the pair is written \"%s\" here but \"%s\" in row %d; write every row of a pair in the same order."),
     DENSITY_NOT_POSITIVE(CARD, "Card row %d (%s): the density model of %s gives %s kg/m³ at %s K, inside the card's validity range."),
-    MISSING_PAIR(CARD, "The card gives no %s for the pair %s + %s: add its '%s A0' row (write 0 for an ideal pair), or write 'missing pairs | ideal' on the card to treat every pair without rows as ideal."),
+    MISSING_PAIR(CARD, "The card gives no %s for the pair %s + %s: add its '%s A0' row (write 0 for an ideal pair), or write 'missing pairs | ideal' on the card to treat every pair without rows as ideal.", Advice.INSIDE_RANGE),
     MISSING_PAIR_ROW(CARD, "The card gives '%s' rows for %s but no '%s' row."),
     COEFFICIENT_GAP(CARD, "The card gives '%s' for %s but not '%s'; coefficients must run from the first without gaps (write 0 where needed)."),
     COVARIANCE_SIZE(CARD, "Card row %d (%s): the pair %s has %d coefficients, so its covariance takes %d rows of %d values; found %s."),
     COVARIANCE_NOT_SYMMETRIC(CARD, "Card row %d (%s): the covariance is not symmetric: entry (%d, %d) is %s but (%d, %d) is %s."),
     COVARIANCE_NEGATIVE(CARD, "Card row %d (%s): the variance of coefficient %d is %s; a variance cannot be negative."),
-    NO_COMPOSITION_LIMIT(CARD, "The card gives no 'valid mole fraction' row; state the composition range the coefficients were fitted over."),
+    NO_COMPOSITION_LIMIT(CARD, "The card gives no 'valid mole fraction' row; state the composition range the coefficients were fitted over.", Advice.INSIDE_RANGE),
+
+    // --- what MIX.CHECK says about a card that reads but looks odd, and its details (never a refusal)
+    CHECK_WARNINGS(CHECK, "OK with %s: %s"),
+    WARN_RANGE_SIZE(CHECK, "The card's range is %s rows × %s columns (%s cells), but the card fills only %d rows × %d "
+            + "columns (%s cells): Calc converts every cell of the range for every call, about %s s per call at "
+            + "0.34 µs a cell, and a sheet of 50 single-cell formulas over a card named as whole columns took about "
+            + "5 GB of office memory and 90 s per recalculation. Name only the card's cells, with a few blank rows to "
+            + "spare."),
+    WARN_SORTED(CHECK, "Card rows %d to %d are sorted by column %d (%s), as Data ▸ Sort leaves them: if the card was "
+            + "sorted, its 'component' rows may now be in another order than written, and x1 (the mole fraction of "
+            + "the first) then means another component. Check that %s (row %d) is meant to be component 1; a "
+            + "'component order' row (format version 2) makes every function refuse a card whose component rows "
+            + "have moved."),
+    WARN_MOLAR_MASS(CHECK, "Card row %d (%s): the molar mass of %s comes to %s g/mol, outside %s to %s g/mol, the "
+            + "range of common liquids: check the value and the 'molar mass unit' row (g/mol values under the unit "
+            + "kg/mol read 1000 times too large)."),
+    WARN_DENSITY(CHECK, "Card row %d (%s): the density of %s comes to %s %s at %s %s, outside %s to %s %s, the range "
+            + "of common liquids: check the coefficients and the 'density unit' row (a value typed with the other "
+            + "locale's decimal separator can turn into thousands, one written 10 times too large shows here). Heavy "
+            + "liquids such as mercury (13,534 kg/m³) are real: then nothing is wrong."),
+    WARN_EXPANSION(CHECK, "Card row %d (%s): the density of %s changes by %s per K at %s %s (a thermal expansion "
+            + "coefficient of %s per K), outside %s to %s per K, the range of common liquids: check the temperature "
+            + "coefficients (one written 10 times too large, or with the wrong sign)."),
+    WARN_MOLAR_VOLUME(CHECK, "The molar volume of %s, M/ρ, comes to %s cm³/mol at %s %s, outside %s to %s cm³/mol, the "
+            + "range of common liquids: check its molar mass (row %d), its density (row %d) and their units."),
+    WARN_DIGITS(CHECK, "Card row %d (%s): %s written with %s, but the card needs %s for its %s to stay within %s: "
+            + "its terms cancel (one is %s times %s), so rounding in the last digits written moves the %s by up to %s "
+            + "here and %s in all. Copy the coefficients with all their digits."),
+    CHECK_EXTENT_TIGHT(CHECK, "The range is %d rows × %d columns; the card fills it to row %d and column %d (%d "
+            + "non-blank rows read). Its last row is filled: a row typed below the range is not part of the card, so "
+            + "insert rows inside the range, or widen it (Sheet ▸ Named Ranges and Expressions ▸ Manage)."),
+    CHECK_EXTENT_SPARE(CHECK, "The range is %d rows × %d columns; the card fills it to row %d and column %d (%d "
+            + "non-blank rows read). Rows %d to %d are blank: a row typed there is read, a row below row %d is not."),
 
     // --- arguments of a call
     NOT_BINARY(CALL, "A single mole fraction describes a mixture only when the card has 2 components; this card has %d: give the mole fractions of all of them, in card order, as a row or column of cells."),
@@ -65,9 +111,9 @@ public enum Problem {
     AMOUNT_ZERO(CALL, "The amounts add up to nothing; give a positive amount of at least one component."),
     AMOUNT_TOO_LARGE(CALL, "The amounts come to more moles than a number can hold (over 1.8e308 in all); check the amounts and their basis."),
     UNKNOWN_BASIS(CALL, "The amount basis \"%s\" is not recognised; use one of: %s."),
-    NO_ENTHALPY(CALL, "The card holds no excess enthalpy data: add an 'enthalpy unit' row and 'excess enthalpy A0' rows (see docs/card-format.md)."),
-    NO_VOLUME(CALL, "The card holds no excess volume data (it describes enthalpy only), so it gives no volumes or densities: add 'excess volume A0' rows (see docs/card-format.md)."),
-    NO_HEAT_CAPACITY(CALL, "The card gives no 'heat capacity' row for %s; the temperature rise needs the heat capacity of every component."),
+    NO_ENTHALPY(CALL, "The card holds no excess enthalpy data: add an 'enthalpy unit' row and 'excess enthalpy A0' rows (see docs/card-format.md).", Advice.INSIDE_RANGE),
+    NO_VOLUME(CALL, "The card holds no excess volume data (it describes enthalpy only), so it gives no volumes or densities: add 'excess volume A0' rows (see docs/card-format.md).", Advice.INSIDE_RANGE),
+    NO_HEAT_CAPACITY(CALL, "The card gives no 'heat capacity' row for %s; the temperature rise needs the heat capacity of every component.", Advice.INSIDE_RANGE),
     NO_TEMPERATURE_ROOT(CALL, "No temperature between %s and %s K balances the heat of mixing; the card's heat capacities or excess enthalpy are not physical there."),
     OUTSIDE_PAIR_TEMPERATURE(CALL, "The temperature %s %s is outside the range %s to %s %s stated for the pair %s.", Advice.EXTRAPOLATION),
     OUTSIDE_PAIR_COMPOSITION(CALL, "The pair %s is present at the ratio %s = %s, outside the range %s to %s stated for it.", Advice.EXTRAPOLATION),
@@ -208,6 +254,11 @@ public enum Problem {
     public enum Section {
         /** A card that cannot be read: reported by every function given the card, and by MIX.CHECK in words. */
         CARD,
+        /**
+         * What MIX.CHECK says about a card that reads but looks odd (its warnings, never a refusal: no other function's
+         * result changes), and the words of its details.
+         */
+        CHECK,
         /** The arguments of a call: what a cell can get wrong, or a point the card cannot answer. */
         CALL,
         /** The fitting engine's problems with the data (MIX.FITEXCESS, MIX.FITDENSITY, MIX.LEASTSQUARES). */
@@ -224,6 +275,9 @@ public enum Problem {
     private interface Advice {
         String EXTRAPOLATION = "Extrapolation is refused; to accept it, pass TRUE as 'extrapolate' or write "
                 + "'extrapolation | allow' on the card.";
+        /** For a row the card lacks: the row may be on the sheet, below a named range that does not reach it. */
+        String INSIDE_RANGE = "A row typed below the card's named range is not part of the card: insert rows inside "
+                + "the range, or widen the range (Sheet ▸ Named Ranges and Expressions ▸ Manage).";
     }
 
     private final Section section;

@@ -125,6 +125,8 @@ public class CardFormatDocTest {
                     "example card at line " + e.line + " must say its values are invented");
             assertEquals(CardFunctions.OK, CardFunctions.check(card, Double.NaN, Double.NaN,
                     Extrapolation.AS_CARD), "example card at line " + e.line);
+            assertEquals(java.util.Collections.emptyList(), CardSanity.warnings(e.cells, card),
+                    "example card at line " + e.line + " has nothing for MIX.CHECK to warn about");
         }
     }
 
@@ -136,6 +138,7 @@ public class CardFormatDocTest {
         assertEquals(1, examples.size(), "the README shows one card");
         Card card = CardReader.read(examples.get(0).cells);
         assertEquals(examples.get(0).components.size(), card.componentCount());
+        assertEquals(java.util.Collections.emptyList(), CardSanity.warnings(examples.get(0).cells, card));
         double water = CardFunctions.density(card, 0, 20, Extrapolation.AS_CARD);
         assertEquals(998.2067, water, 1e-4, "pure water at 20 °C through the README card (Tanaka 2001)");
     }
@@ -202,12 +205,71 @@ public class CardFormatDocTest {
         assertEquals(null, seven.excessVolume(0, 1));
     }
 
+    private static final Pattern CHECK_MARKER = Pattern.compile("^\\s*<!--\\s*check-example:(.*?)-->\\s*$");
+
+    /**
+     * The section on MIX.CHECK's warnings: each line {@code <!-- check-example: example N; result W; edits -->} takes
+     * example card N of this document, applies the edits ({@link CardEdits}: {@code set R = a | b} replaces row R,
+     * {@code add a | b} appends a row, {@code pad R} pads with blank rows to R rows, {@code sort C} sorts the rows below
+     * the header by column C as Calc does) and asks MIX.CHECK for result W; the next line quoted with "> " must be the answer,
+     * exactly. Every entry of the catalogue's CHECK section must be shown this way.
+     */
+    @Test
+    void everyCheckExampleShowsMixChecksAnswer() throws IOException {
+        List<String> lines = lines();
+        List<Example> examples = examples(lines);
+        java.util.Set<Problem> shown = EnumSet.noneOf(Problem.class);
+        int count = 0;
+        for (int i = 0; i < lines.size(); i++) {
+            Matcher m = CHECK_MARKER.matcher(lines.get(i));
+            if (!m.find()) {
+                continue;
+            }
+            count++;
+            String[] fields = m.group(1).split(";");
+            int example = Integer.parseInt(fields[0].trim().substring("example ".length()));
+            String result = fields[1].trim().substring("result ".length());
+            StringBuilder edits = new StringBuilder();
+            for (int f = 2; f < fields.length; f++) {
+                edits.append(fields[f]).append(';');
+            }
+            Object[][] cells = CardEdits.apply(examples.get(example - 1).cells, edits.toString());
+            int a = i + 1;
+            while (a < lines.size() && lines.get(a).trim().isEmpty()) {
+                a++;
+            }
+            assertTrue(a < lines.size() && lines.get(a).startsWith("> "),
+                    "line " + (i + 1) + ": a check-example must be followed by the answer quoted with \"> \"");
+            String expected = lines.get(a).substring(2);
+            org.miscela.core.functions.CheckOutput output = org.miscela.core.functions.CheckOutput.lookup(result);
+            Object actual = output == org.miscela.core.functions.CheckOutput.EXTENT ? CardSanity.extent(cells).words()
+                    : CardFunctions.checkCard(cells, CardReader.read(cells), output);
+            assertEquals(expected, actual, "the check-example at line " + (i + 1));
+            String entry = org.miscela.core.problem.Catalogue.entryOf(expected);
+            shown.add(Problem.valueOf(entry.substring("Problem.".length())));
+            if (output == org.miscela.core.functions.CheckOutput.SUMMARY) {
+                for (String w : CardSanity.warnings(cells, CardReader.read(cells))) {
+                    String e = org.miscela.core.problem.Catalogue.entryOf(w);
+                    shown.add(Problem.valueOf(e.substring("Problem.".length())));
+                }
+            }
+        }
+        assertTrue(count > 0, "no check-example in docs/card-format.md");
+        java.util.Set<Problem> missing = EnumSet.copyOf(Problem.of(Problem.Section.CHECK));
+        missing.removeAll(shown);
+        assertTrue(missing.isEmpty(), "docs/card-format.md shows no example of " + missing);
+    }
+
     /** The document's table of problems names every card problem of the catalogue. */
     @Test
     void documentListsEveryCardProblem() throws IOException {
         String text = String.join("\n", lines());
         for (Problem p : EnumSet.range(Problem.CARD_EMPTY, Problem.NO_COMPOSITION_LIMIT)) {
             assertTrue(text.contains("| `" + p.name() + "` |"), "docs/card-format.md does not describe " + p);
+        }
+        for (Problem p : Problem.of(Problem.Section.CHECK)) {
+            assertTrue(p.name().startsWith("CHECK_") || text.contains("| `" + p.name() + "` |"),
+                    "docs/card-format.md's table of warnings does not describe " + p);
         }
     }
 

@@ -93,7 +93,9 @@ class CardGrammarTest {
         // Neither units nor the source are required at this stage, and values of any kind are kept as they are.
         ParsedCard card = CardGrammar.parse(new Object[][] {{"miscela card", 1.0}, {"valid temperature", "warm"}});
         assertEquals("warm", card.global("valid temperature").values[0]);
-        assertEquals("The card lacks the row \"source\".",
+        assertEquals("The card lacks the row \"source\". A row typed below the card's named range is not part of "
+                + "the card: insert rows inside the range, or widen the range (Sheet ▸ Named Ranges and Expressions ▸ "
+                + "Manage).",
                 assertThrows(MiscelaException.class, () -> card.required("source")).getMessage());
     }
 

@@ -64,7 +64,39 @@ class CardReaderFuzzProperties {
         if (whole instanceof Card) {
             // Reading only the pure-component part is more lenient, never stricter.
             assertTrue(pure instanceof Card, () -> "the card reads but its pure part does not: " + pure + "\n" + card);
+            sanity(card, (Card) whole);
         }
+    }
+
+    /**
+     * MIX.CHECK's warnings and digits table on a card that reads: never an exception, every warning an instance of a
+     * CHECK entry of the catalogue, the table a header and one row of ten cells per coefficient, no NaN.
+     */
+    private static void sanity(FuzzCards.Blueprint card, Card c) {
+        long start = System.nanoTime();
+        java.util.List<String> warnings;
+        Object[][] digits;
+        try {
+            warnings = CardSanity.warnings(card.cells, c);
+            digits = CardSanity.digits(card.cells, c);
+        } catch (RuntimeException | Error e) {
+            throw new AssertionError("CardSanity threw " + e + " for " + card, e);
+        }
+        for (String w : warnings) {
+            String entry = Catalogue.entryOf(w);
+            assertTrue(entry != null && org.miscela.core.problem.Problem.valueOf(entry.substring(8)).section()
+                    == org.miscela.core.problem.Problem.Section.CHECK, () -> "not a warning: " + w + "\n" + card);
+            assertTrue(!w.contains("NaN"), () -> "a NaN in " + w + "\n" + card);
+        }
+        for (Object[] row : digits) {
+            assertEquals(10, row.length, () -> card.toString());
+            for (Object v : row) {
+                assertTrue(v instanceof String || (v instanceof Double && Double.isFinite((Double) v)),
+                        () -> "digits cell " + v + "\n" + card);
+            }
+        }
+        TALLY.count("CardSanity.warnings", warnings.isEmpty() ? "no warning" : "warnings", System.nanoTime() - start,
+                card::toString);
     }
 
     /** One timed read: the card, or the message of the designed failure. */

@@ -92,8 +92,24 @@ class CardReaderTest {
                         base(c -> c.set(10, "component", "", 46.07))),
                 bad("text for a molar mass", Problem.NOT_A_NUMBER, 10, "column 3 holds the text \"heavy\"",
                         base(c -> c.set(10, "component", "alpha", "heavy"))),
-                bad("a number typed as text", Problem.NOT_A_NUMBER, 13, "\"789.3\"",
+                bad("a number typed as text", Problem.NUMBER_AS_TEXT, 13, "\"789.3\" where a number belongs; it "
+                        + "reads as 789.3 with '.' as the decimal separator",
                         base(c -> c.set(13, "density coefficients", "alpha", "789.3"))),
+                bad("a number typed with a decimal comma", Problem.NUMBER_AS_TEXT, 15, "it reads as 0.997 with ',' "
+                        + "as the decimal separator", base(c -> c.set(15, "density coefficients", "beta", "0,997"))),
+                bad("a '+' in a component name (AutoInput)", Problem.NAME_WITH_PLUS, 10,
+                        "the component name \"alpha + beta\" contains '+'",
+                        base(c -> c.set(10, "component", "alpha + beta", 46.07))),
+                bad("a '+' at the end of a name", Problem.NAME_WITH_PLUS, 11, "\"beta+\" contains '+'",
+                        base(c -> c.set(11, "component", "beta+", 18.015))),
+                bad("component rows out of the stated order", Problem.COMPONENT_ORDER, 20,
+                        "in the order \"beta\", \"alpha\", but its 'component' rows declare \"alpha\", \"beta\"",
+                        base(c -> c.set(1, "Miscela card", 2).row("component order", "beta", "alpha"))),
+                bad("a stated order naming a component the card lacks", Problem.COMPONENT_ORDER, 20,
+                        "in the order \"alpha\", \"beta\", \"gamma\"",
+                        base(c -> c.set(1, "Miscela card", 2).row("component order", "alpha", "beta", "gamma"))),
+                bad("a component order row on a version 1 card", Problem.NEEDS_VERSION_2, 20, "component order",
+                        base(c -> c.row("component order", "alpha", "beta"))),
                 bad("number for a component name", Problem.NOT_TEXT, 10, "column 2 must hold text; found 5",
                         base(c -> c.set(10, "component", 5, 46.07))),
                 bad("number for a unit", Problem.NOT_TEXT, 4, "column 2",
@@ -299,7 +315,7 @@ class CardReaderTest {
         Set<Problem> missing = EnumSet.copyOf(card);
         missing.removeAll(produced);
         assertTrue(missing.isEmpty(), "no malformed card for " + missing);
-        assertEquals(34, card.size(), "the card problems changed; update the malformed cards");
+        assertEquals(37, card.size(), "the card problems changed; update the malformed cards");
     }
 
     // ------------------------------------------------------------------ well-formed cards

@@ -53,8 +53,24 @@ class CardRowTest {
     void aValueOfTheOtherKindIsRefused() {
         refused(Problem.NOT_TEXT, "Card row 7 (Density Coefficients): column 2 must hold text; found 5.",
                 () -> row(5.0).text(0));
-        refused(Problem.NOT_A_NUMBER, "Card row 7 (Density Coefficients): column 3 holds the text \"789.3\" where a "
-                + "number belongs.", () -> row("alpha", " 789.3 ").number(1));
+        refused(Problem.NOT_A_NUMBER, "Card row 7 (Density Coefficients): column 3 holds the text \"heavy\" where a "
+                + "number belongs.", () -> row("alpha", " heavy ").number(1));
+        refused(Problem.NOT_A_NUMBER, "Card row 7 (Density Coefficients): column 3 holds the text \"1.234,5\" where "
+                + "a number belongs.", () -> row("alpha", "1.234,5").number(1));
+    }
+
+    /** A number kept as text names the decimal separator: the other locale's, an apostrophe or a text cell. */
+    @Test
+    void aNumberKeptAsTextNamesTheDecimalSeparator() {
+        String advice = " Calc keeps a number as text when it is typed with the decimal separator its locale does "
+                + "not use, after an apostrophe, or in a cell formatted as text: enter it as a number, with the decimal "
+                + "separator of Calc's locale (Tools ▸ Options ▸ Language Settings ▸ Languages).";
+        refused(Problem.NUMBER_AS_TEXT, "Card row 7 (Density Coefficients): column 3 holds the text \"0,998\" where a "
+                + "number belongs; it reads as 0.998 with ',' as the decimal separator." + advice,
+                () -> row("alpha", "0,998").number(1));
+        refused(Problem.NUMBER_AS_TEXT, "Card row 7 (Density Coefficients): column 4 holds the text \"-0.84\" where a "
+                + "number belongs; it reads as -0.84 with '.' as the decimal separator." + advice,
+                () -> row("alpha", 789.3, " -0.84 ").numbersFrom(1));
     }
 
     @Test

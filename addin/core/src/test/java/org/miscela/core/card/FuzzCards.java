@@ -206,7 +206,7 @@ public final class FuzzCards {
                 "excess volume ternary C2", "excess volume ternary C3", "excess enthalpy ternary C0",
                 "excess enthalpy ternary C2", "excess volume A", "excess volume A-1", "excess volume A007",
                 "excess volume A100", "excess  volume   A1", "EXCESS VOLUME A1:", "excess heat capacity A0",
-                "Density Model:", "components", "", " ", "  #", "%s", "\u0000"));
+                "Density Model:", "components", "component order", "", " ", "  #", "%s", "\u0000"));
         for (int k = 0; k <= 99; k += k < 12 ? 1 : 29) {
             l.add("excess volume A" + k);
             l.add("excess enthalpy A" + k);
@@ -407,6 +407,15 @@ public final class FuzzCards {
                 if (heat) {
                     heatCapacity(i);
                 }
+            }
+            if (v2 && r.nextInt(5) == 0) {
+                Object[] order = new Object[n + 1];
+                order[0] = label("component order");
+                for (int i = 0; i < n; i++) {
+                    order[i + 1] = spellName(names.get(i), r);
+                }
+                rows.add(order);
+                history.append(" component-order");
             }
             double[] xLo = new double[n];
             double[] xHi = new double[n];

@@ -99,7 +99,9 @@ class SectionAndValidityBuilderTest {
     void aSectionRefusesWhatItCannotBuild() {
         assertEquals("The card gives no excess volume for the pair alpha + beta: add its 'excess volume A0' row "
                 + "(write 0 for an ideal pair), or write 'missing pairs | ideal' on the card to treat every pair "
-                + "without rows as ideal.", refused(Problem.MISSING_PAIR, () -> volume(rows(), 1.0, false))
+                + "without rows as ideal. A row typed below the card's named range is not part of the card: insert "
+                + "rows inside the range, or widen the range (Sheet ▸ Named Ranges and Expressions ▸ Manage).",
+                refused(Problem.MISSING_PAIR, () -> volume(rows(), 1.0, false))
                         .getMessage());
         refused(Problem.MISSING_PAIR_ROW, () -> volume(rows(
                 new Object[] {"excess volume A0", "alpha + beta", -4.0, 0.01}), 1.0, true));

@@ -61,6 +61,24 @@ public final class TestCard {
                 .row("excess volume A0", "beta + gamma", -0.8);
     }
 
+    /**
+     * Water first (the built-in Tanaka et al. 2001 formula), then "ethanol" (a constant 789.3 kg/m³), with invented
+     * coefficients, over 10 to 30 °C: a sort by column 2 puts ethanol's rows first and changes what x1 is. With
+     * {@code statedOrder} the card is version 2 with the row 'component order | water | ethanol' (row 11).
+     */
+    public static TestCard waterThenEthanol(boolean statedOrder) {
+        TestCard c = empty().row("Miscela card", statedOrder ? 2 : 1).row("title", "Water + ethanol (invented)")
+                .row("source", "invented values, for tests").row("temperature unit", "°C")
+                .row("density unit", "kg/m³").row("molar volume unit", "cm³/mol").row("molar mass unit", "g/mol")
+                .row("valid temperature", 10, 30).row("component", "water", 18.015).row("component", "ethanol", 46.07);
+        if (statedOrder) {
+            c.row("component order", "water", "ethanol");
+        }
+        return c.row("density model", "water", "Tanaka 2001").row("density model", "ethanol", "constant")
+                .row("density coefficients", "ethanol", 789.3).row("valid mole fraction", "water", 0, 1)
+                .row("excess volume A0", "water + ethanol", -4.2).row("excess volume A1", "water + ethanol", 0.9);
+    }
+
     /** Appends a row. */
     public TestCard row(Object... cells) {
         rows.add(cells(cells));
@@ -102,7 +120,7 @@ public final class TestCard {
         return out;
     }
 
-    Object[][] cells() {
+    public Object[][] cells() {
         return cells(0);
     }
 
