@@ -291,4 +291,19 @@ class FuzzFindingsTest {
             assertEquals("Problem.ARG_NOT_FLAG", Catalogue.entryOf(inside.getMessage()), "refused inside too");
         }
     }
+
+    /**
+     * Found by the adapter fuzzer once tonnes became a unit: MIX.ADJUST "within" a limit on an extreme card (seed
+     * 1437, call seed -158) doubled the make-up search's upper end to infinity, and the solver's own exception
+     * ("endpoints do not specify an interval: [∞, ∞]") escaped as an unexpected failure. Now the limit is refused as
+     * unreachable, in words.
+     */
+    @Test
+    void aMakeUpSearchThatRunsToInfinityIsRefusedInWords() {
+        FuzzCall call = FuzzCall.of(org.miscela.core.catalog.FunctionCatalog.byMethod("adjustBatch"),
+                org.miscela.core.card.FuzzCards.of(org.miscela.core.card.FuzzCards.Kind.EXTREME, 1437), -158);
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> call.invoke(new MixtureAddIn()));
+        assertEquals("Problem.LIMIT_UNREACHABLE", Catalogue.entryOf(e.getMessage()), e.getMessage());
+    }
 }

@@ -190,6 +190,10 @@ public final class Adjustments {
             hi *= 2.0;
             value = excess.value(hi);
         }
+        if (!(Double.isFinite(lo) && Double.isFinite(hi) && lo < hi)) {
+            // the doubling ran past the double range (amounts in large units on a card of extreme numbers)
+            throw unreachable(limit, fill);
+        }
         try {
             return new BrentSolver(ACCURACY, ACCURACY * hi).solve(1000, excess, lo, hi);
         } catch (NoBracketingException | TooManyEvaluationsException e) {

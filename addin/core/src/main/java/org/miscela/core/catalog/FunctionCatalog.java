@@ -196,17 +196,16 @@ public final class FunctionCatalog {
                     .shows("998.201").refuses(union(COMPONENT_PROBLEMS, list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER, Problem.ARG_NOT_FLAG, Problem.BELOW_ABSOLUTE_ZERO, Problem.OUTSIDE_TEMPERATURE, Problem.NON_PHYSICAL))),
             new FunctionInfo("checkCard", "MIX.CHECK",
                     "\"OK\", the card's first problem naming its row, or \"OK with n warnings: …\"",
-                    "\"OK\" when the card can be read and nothing on it looks like a mistake; its first problem, "
-                            + "naming the row, when it cannot be read; \"OK with n warnings: …\" when it reads but "
-                            + "values look odd (warnings change no other function's result). Asked for, the "
-                            + "warnings one per row, the rows of the range that hold the card, or each "
-                            + "coefficient's significant digits.",
+                    "\"OK\" when the card reads and nothing looks like a mistake; \"OK with n warnings: …\" when values "
+                            + "look odd; otherwise its first problem, naming the row. Warnings change no other "
+                            + "function's result. Asked for, the warnings one per row, the rows of the range that hold "
+                            + "the card, or each coefficient's significant digits.",
                     "—",
                     "=MIX.CHECK(card)",
-                    CARD, optional("result", "result", "Optional. \"summary\" (left out): one text as described; "
-                            + "\"warnings\": one warning per row (\"OK\" when none); \"extent\": which rows and "
-                            + "columns of the range hold the card; \"digits\": every coefficient's significant "
-                            + "digits, written and needed."))
+                    CARD, optional("result", "result", "What to return: \"summary\" (left out), \"warnings\", \"extent\" or "
+                            + "\"digits\". The summary is one text as described; \"warnings\" lists one per row (\"OK\" "
+                            + "when none); \"extent\" says which rows and columns of the range hold the card; "
+                            + "\"digits\" gives every coefficient's significant digits, written and needed."))
                     .answersInWordsOrTables()
                     .shows("OK").refuses(list(Problem.UNKNOWN_FIT_OUTPUT)),
             new FunctionInfo("checkPoint", "MIX.CHECKPOINT", "\"OK\" or why the functions refuse at that point",
