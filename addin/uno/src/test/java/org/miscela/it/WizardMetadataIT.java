@@ -1,5 +1,6 @@
 package org.miscela.it;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
@@ -45,7 +46,7 @@ class WizardMetadataIT {
                 assertEquals(expected.description(), args[a].Description, f.displayName() + "." + args[a].Name);
             }
         }
-        System.out.printf("wizard: %d Miscela functions with all argument help present%n",
+        Figures.note(WizardMetadataIT.class, "wizard: %d Miscela functions with all argument help present",
                 FunctionCatalog.functions().size());
     }
 }

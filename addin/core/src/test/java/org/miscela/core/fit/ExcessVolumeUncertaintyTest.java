@@ -1,5 +1,6 @@
 package org.miscela.core.fit;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -134,7 +135,7 @@ class ExcessVolumeUncertaintyTest {
         }
         report.append(String.format(Locale.ROOT, "worst |ratio - 1| = %.4f, allowed %.4f%n", worst,
                 MONTE_CARLO_TOLERANCE));
-        System.out.print(report);
+        Figures.write("figures/ExcessVolumeUncertaintyTest.txt", report.toString());
         assertTrue(worst <= MONTE_CARLO_TOLERANCE, report.toString());
     }
 

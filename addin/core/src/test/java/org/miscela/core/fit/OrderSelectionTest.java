@@ -1,5 +1,6 @@
 package org.miscela.core.fit;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -37,7 +38,7 @@ class OrderSelectionTest {
         double[][] d = noisyExcessVolumes(new double[][] {{-3.1}, {0.8}, {-0.7}}, 40, 0.005, 99, 1);
         OrderSelection selection = OrderSelection.compare(6,
                 m -> RedlichKisterFitter.excessVolumes(d[0], d[2], m, T_REF, null).leastSquares(), 0.05);
-        System.out.print(table(selection));
+        Figures.write("figures/OrderSelectionTest.txt", table(selection));
         assertEquals(2, selection.selectedOrder(), table(selection));
         assertEquals(2, selection.lowestBicOrder(), table(selection));
         assertFalse(selection.reachedHighestOrder());
