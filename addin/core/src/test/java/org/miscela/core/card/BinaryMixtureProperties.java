@@ -178,6 +178,22 @@ class BinaryMixtureProperties {
         assertEquals(m.density(x1, t), s.density(x2, t), 1e-12 * m.density(x1, t));
     }
 
+    /**
+     * V^E through the mixture is the card's binary expansion x1·x2·Σ A_k (x1 − x2)^k evaluated on its own, and the
+     * density is its definition ρ = 1000·(x1·M1 + x2·M2)/V_m (g/mol over cm³/mol, in kg/m³).
+     */
+    @Property(tries = 500)
+    void excessVolumeAndDensityFollowTheirDefinitions(@ForAll("cards") Card card,
+            @ForAll @DoubleRange(min = 0, max = 1) double x1, @ForAll @DoubleRange(min = 260, max = 340) double t) {
+        BinaryMixture m = card.binary();
+        double a = scale(card, t);
+        assertEquals(card.excessVolume(0, 1).value(x1, t), m.excessMolarVolume(x1, t), 64 * PartialsFromValues.U * a);
+        double mass = x1 * card.components().get(0).molarMass() + (1 - x1) * card.components().get(1).molarMass();
+        assertEquals(mass, m.meanMolarMass(x1), 4 * PartialsFromValues.U * mass);
+        double rho = 1000 * mass / m.molarVolume(x1, t);
+        assertEquals(rho, m.density(x1, t), 8 * PartialsFromValues.U * rho);
+    }
+
     /** At a pure corner the excess volume vanishes and the pure component's partial volume is its molar volume. */
     @Property(tries = 500)
     void pureCorners(@ForAll("cards") Card card, @ForAll @DoubleRange(min = 260, max = 340) double t) {

@@ -210,7 +210,11 @@ class CardFunctionsContractTest {
         }
         assertEquals(0, CardFunctions.componentByName(card, "alpha"));
         assertEquals(1, CardFunctions.componentByName(card, " BETA "));
-        assertEquals(Problem.UNKNOWN_COMPONENT_ARG, refusal(() -> CardFunctions.componentByName(card, "gamma")));
+        MiscelaException unknown = assertThrows(MiscelaException.class,
+                () -> CardFunctions.componentByName(card, "gamma"));
+        assertEquals(Problem.UNKNOWN_COMPONENT_ARG, unknown.problem());
+        assertTrue(unknown.getMessage().contains("from 1 to 2 or one of the names: alpha, beta."),
+                unknown.getMessage());
         assertEquals(CardFunctions.OK, CardFunctions.check(card, Double.NaN, Double.NaN, E));
         assertEquals(Problem.MOLE_FRACTION_OUTSIDE_UNIT.format("1.5"), CardFunctions.check(card, 1.5, 20, E));
     }
