@@ -86,6 +86,13 @@ class BatchesTest {
         assertEquals(4, ratio, 0.05);
         assertTrue(Math.abs(a.relativeLinearError()) < 0.01, "10 % more ethanol: linear estimate off by "
                 + a.relativeLinearError());
+        // the first-order estimate is V̄_ethanol of the batch before the addition times the moles added
+        double n1 = 50 / Oiml22.M_ETHANOL;
+        double x1 = n1 / (n1 + 50 / Oiml22.M_WATER);
+        double partial = org.miscela.core.functions.CardFunctions.partialMolarVolume(CARD, 0, x1, 20, E);
+        assertEquals(partial * 10 / Oiml22.M_ETHANOL, a.firstOrder(AmountUnit.ML), 1e-9);
+        assertEquals((a.firstOrder(AmountUnit.ML) - a.exact(AmountUnit.ML)) / a.exact(AmountUnit.ML),
+                a.relativeLinearError(), 1e-12);
         Figures.note(BatchesTest.class,
                 "+10 g ethanol to 100 g at p = 0.5, 20 °C: exact %.4f mL, first order %.4f mL (%.2e)",
                 a.exact(AmountUnit.ML), a.firstOrder(AmountUnit.ML), a.relativeLinearError());
