@@ -128,19 +128,26 @@ class FitOutputsTest {
         return (x1 * 46.07 + (1 - x1) * 18.015) / v;
     }
 
+    /** {x, ρ, t}: n compositions evenly spread at 25 °C, A0 = −4.0 and A1 = 1.2 cm³/mol, noise 2e-5 g/cm³. */
+    private static double[][] noisyDensities(int n, long seed) {
+        Random r = new Random(seed);
+        double[][] d = new double[3][n];
+        for (int i = 0; i < n; i++) {
+            d[0][i] = (i + 0.5) / n;
+            d[2][i] = 25;
+            d[1][i] = density(d[0][i], d[2][i], -4.0, 1.2) + 2e-5 * r.nextGaussian();
+        }
+        return d;
+    }
+
     @Test
     void densityFitOutputsInTheCardsUnits() {
         Card pure = pureCard();
-        Random r = new Random(3);
         int n = 25;
-        double[] x = new double[n];
-        double[] rho = new double[n];
-        double[] t = new double[n];
-        for (int i = 0; i < n; i++) {
-            x[i] = (i + 0.5) / n;
-            t[i] = 25;
-            rho[i] = density(x[i], t[i], -4.0, 1.2) + 2e-5 * r.nextGaussian();
-        }
+        double[][] data = noisyDensities(n, 3);
+        double[] x = data[0];
+        double[] rho = data[1];
+        double[] t = data[2];
         Object[][] a = FitFunctions.density(pure, 0, 1, x, rho, t, 1, 0, Double.NaN, null, FitOutput.COEFFICIENTS);
         double a0 = (Double) a[0][0] * 1000;
         double a1 = (Double) a[1][0] * 1000;
@@ -174,17 +181,12 @@ class FitOutputsTest {
     void theLargestResidualIsAmongWeightedPoints() {
         Card pure = pureCard();
         int n = 12;
-        double[] x = new double[n];
-        double[] rho = new double[n];
-        double[] t = new double[n];
+        double[][] data = noisyDensities(n, 8);
+        double[] x = data[0];
+        double[] rho = data[1];
+        double[] t = data[2];
         double[] w = new double[n];
-        Random r = new Random(8);
-        for (int i = 0; i < n; i++) {
-            x[i] = (i + 0.5) / n;
-            t[i] = 25;
-            rho[i] = density(x[i], t[i], -4.0, 1.2) + 2e-5 * r.nextGaussian();
-            w[i] = 1;
-        }
+        java.util.Arrays.fill(w, 1.0);
         rho[4] += 0.01;
         w[4] = 0;
         Object[][] res = FitFunctions.density(pure, 0, 1, x, rho, t, 1, 0, Double.NaN, w, FitOutput.RESIDUALS);
