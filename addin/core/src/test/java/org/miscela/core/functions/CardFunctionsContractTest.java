@@ -135,6 +135,7 @@ class CardFunctionsContractTest {
         // a pure liquid at 28 °C stays inside: the pair's range applies only where both are present
         assertEquals(0.0, CardFunctions.adiabaticRise(card, new double[] {0, 1}, AmountBasis.MOL, 28, E), 0.0);
         assertEquals(0.0, CardFunctions.adiabaticRise(card, new double[] {0, 1}, AmountBasis.MOL, 35, E), 0.0);
+        assertEquals(0.0, CardFunctions.adiabaticRise(card, new double[] {1, 0}, AmountBasis.MOL, 35, E), 0.0);
     }
 
     @Test
@@ -238,23 +239,25 @@ class CardFunctionsContractTest {
                 E)));
         assertTrue(CardFunctions.uncertainty(inKgM3, "partial volume", 0, x, 20, E) > 0);
 
-        // the same relation in g/cm³ and L/mol, on an invented binary card with a covariance for A0 and A1
+        // the same relation in g/cm³ and cm³/mol (units whose factors differ), on an invented binary card with a
+        // covariance for A0 and A1
         Card other = TestCard.empty().row("Miscela card", 2).row("source", "invented values, for tests")
-                .row("temperature unit", "°C").row("density unit", "g/cm³").row("molar volume unit", "L/mol")
+                .row("temperature unit", "°C").row("density unit", "g/cm³").row("molar volume unit", "cm³/mol")
                 .row("molar mass unit", "g/mol").row("valid temperature", 10, 40)
                 .row("component", "a", 46.07).row("component", "b", 18.015)
                 .row("density model", "a", "constant").row("density coefficients", "a", 0.79)
                 .row("density model", "b", "constant").row("density coefficients", "b", 0.997)
                 .row("valid mole fraction", "a", 0, 1)
-                .row("excess volume A0", "a + b", -0.004).row("excess volume A1", "a + b", 0.001)
-                .row("excess volume covariance", "a + b", 4e-10, 1e-10)
-                .row("excess volume covariance", "a + b", 1e-10, 9e-10).read();
+                .row("excess volume A0", "a + b", -4.0).row("excess volume A1", "a + b", 1.0)
+                .row("excess volume covariance", "a + b", 4e-4, 1e-4)
+                .row("excess volume covariance", "a + b", 1e-4, 9e-4).read();
         double u2 = CardFunctions.uncertainty(other, "excess volume", -1, x, 20, E);
-        double d = 0.4 * 0.6;
-        double g1 = d * (0.4 - 0.6);
-        assertEquals(Math.sqrt(d * d * 4e-10 + 2 * d * g1 * 1e-10 + g1 * g1 * 9e-10), u2, 1e-12 * u2,
-                "u(V^E)² = gᵀCg with g = (x1·x2, x1·x2·(x1 − x2)), in L/mol");
-        assertEquals(CardFunctions.density(other, x, 20, E) / CardFunctions.molarVolume(other, x, 20, E) * u2,
-                CardFunctions.uncertainty(other, "density", -1, x, 20, E), 1e-9 * u2);
+        double g0 = 0.4 * 0.6;
+        double g1 = g0 * (0.4 - 0.6);
+        assertEquals(Math.sqrt(g0 * g0 * 4e-4 + 2 * g0 * g1 * 1e-4 + g1 * g1 * 9e-4), u2, 1e-12 * u2,
+                "u(V^E)² = gᵀCg with g = (x1·x2, x1·x2·(x1 − x2)), in cm³/mol");
+        double expected = CardFunctions.density(other, x, 20, E) / CardFunctions.molarVolume(other, x, 20, E) * u2;
+        assertEquals(expected, CardFunctions.uncertainty(other, "density", -1, x, 20, E), 1e-12 * expected,
+                "u(ρ) in g/cm³");
     }
 }
