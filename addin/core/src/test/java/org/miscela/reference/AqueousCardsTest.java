@@ -1,5 +1,6 @@
 package org.miscela.reference;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -45,7 +46,8 @@ public class AqueousCardsTest {
                         + RogersPitzerNaCl.MOLALITY[j] + ": " + d);
             }
         }
-        System.out.printf("NaCl + water card vs CRC/Rogers-Pitzer table: worst density deviation %.4f kg/m³%n", worst);
+        Figures.note(AqueousCardsTest.class,
+                "NaCl + water card vs CRC/Rogers-Pitzer table: worst density deviation %.4f kg/m³", worst);
     }
 
     /** The committed card is the fitter's output: its densities agree to rounding on a grid. */
@@ -83,7 +85,8 @@ public class AqueousCardsTest {
     @Test
     void sodiumChlorideInfiniteDilutionPartialVolume() {
         double v = CardFunctions.partialMolarVolume(NACL, 0, 0.0, 25, E);
-        System.out.printf("NaCl card: partial molar volume of NaCl at infinite dilution, 25 °C: %.3f cm³/mol%n", v);
+        Figures.note(AqueousCardsTest.class,
+                "NaCl card: partial molar volume of NaCl at infinite dilution, 25 °C: %.3f cm³/mol", v);
         assertEquals(16.6, v, 0.5);
     }
 
@@ -96,7 +99,8 @@ public class AqueousCardsTest {
             worst = Math.max(worst, Math.abs(d));
             assertTrue(Math.abs(d) <= ACID_DENSITY_TOLERANCE, CrcSulfuricAcid.MASS_PERCENT[i] + " %: " + d);
         }
-        System.out.printf("H2SO4 + water card vs CRC table at 20 °C: worst density deviation %.3f kg/m³%n", worst);
+        Figures.note(AqueousCardsTest.class,
+                "H2SO4 + water card vs CRC table at 20 °C: worst density deviation %.3f kg/m³", worst);
         // the pure acid is the table's 100 % value exactly
         assertEquals(1830.5, CardFunctions.pureDensity(ACID, 0, 20, E), 1e-9);
     }

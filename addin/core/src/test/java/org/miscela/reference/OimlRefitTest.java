@@ -1,5 +1,6 @@
 package org.miscela.reference;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.Locale;
@@ -82,7 +83,7 @@ class OimlRefitTest {
                 + "  largest difference from the committed card: %.2e kg/m³%n",
                 ls.pointCount(), ls.parameterCount(), ls.conditionNumber(), worstFit, sdFit,
                 ls.residualStandardDeviation(), Math.abs(worstCheck), where, DENSITY_TOLERANCE, worstVsCard);
-        System.out.print(report);
+        Figures.write("figures/OimlRefitTest.txt", report);
         assertTrue(Math.abs(worstCheck) <= DENSITY_TOLERANCE, report);
         assertTrue(worstFit <= DENSITY_TOLERANCE, report);
         assertTrue(worstVsCard <= SAME_FIT_TOLERANCE, report);

@@ -1,5 +1,6 @@
 package org.miscela.bench;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -16,7 +17,7 @@ class BenchmarkSmokeIT {
     @Test
     void aSmallRunMeasuresEveryKindAndTheyAgree() throws Exception {
         CalcBenchmark.Report r = CalcBenchmark.run(300, 3, CalcBenchmark.probeExtension());
-        System.out.println(r.table);
+        Figures.note(BenchmarkSmokeIT.class, "%s", r.table);
         for (CalcBenchmark.Measured m : r.measured.values()) {
             assertEquals(0, m.errors, m.kind.key + " (" + m.kind.label + ") shows errors, first code " + m.firstError);
             assertEquals(3, m.seconds.size(), m.kind.key + " was timed three times");

@@ -204,7 +204,6 @@ class DeterminismTest {
             hex.append(String.format("%02x", b));
         }
         String line = "determinism digest of " + CALLS + " calls: " + hex + "\n";
-        System.out.print(line);
         Path out = Paths.get("target", "fuzz", "determinism-digest.txt");
         try {
             Files.createDirectories(out.getParent());

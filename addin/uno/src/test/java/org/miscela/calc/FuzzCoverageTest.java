@@ -1,5 +1,6 @@
 package org.miscela.calc;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -90,7 +91,7 @@ class FuzzCoverageTest {
                 never.add(f.displayName());
             }
         }
-        System.out.println("generated calls up to the first result: " + needed);
+        Figures.note(FuzzCoverageTest.class, "%s", "generated calls up to the first result: " + needed);
         assertTrue(never.isEmpty(), "functions whose " + PATIENCE + " generated calls give no result: " + never);
     }
 

@@ -1,5 +1,6 @@
 package org.miscela.calc;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
@@ -133,7 +134,7 @@ class UnreachableProblemsTest {
             assertEquals(problem, raised, message);
             printed.append(problem).append(": ").append(message).append('\n');
         });
-        System.out.print(printed);
+        Figures.write("figures/UnreachableProblemsTest.txt", printed.toString());
     }
 
     @Test

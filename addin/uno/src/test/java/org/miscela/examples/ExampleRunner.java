@@ -24,6 +24,7 @@ import java.nio.file.Paths;
 import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.Consumer;
 import org.miscela.it.Office;
 
 /**
@@ -77,7 +78,7 @@ public final class ExampleRunner {
         Office office = Office.start();
         try {
             for (Path wb : workbooks) {
-                failures += run(office, wb, out);
+                failures += run(office, wb, out, System.out::println, System.err::println);
             }
         } finally {
             office.dispose();
@@ -89,11 +90,15 @@ public final class ExampleRunner {
         System.out.println("all examples recalculated without errors");
     }
 
-    /** Exports one workbook and returns how many problems it has. */
-    static int run(Office office, Path workbook, Path out) throws Exception {
+    /**
+     * Exports one workbook and returns how many problems it has; what it wrote and each sheet's counts go to
+     * {@code progress}, each problem cell or missing sheet to {@code problems}.
+     */
+    static int run(Office office, Path workbook, Path out, Consumer<String> progress, Consumer<String> problems)
+            throws Exception {
         String base = workbook.getFileName().toString().replaceFirst("\\.ods$", "");
         XComponent doc = office.load(office.stage(workbook));
-        int problems = 0;
+        int count = 0;
         try {
             UnoRuntime.queryInterface(XCalculatable.class, doc).calculateAll();
             XStorable store = UnoRuntime.queryInterface(XStorable.class, doc);
@@ -101,7 +106,7 @@ public final class ExampleRunner {
             Path pdf = office.scratch(base + ".pdf");
             store.storeToURL(pdf.toUri().toString(), new PropertyValue[] {
                 Office.property("FilterName", "calc_pdf_Export")});
-            System.out.println("wrote " + copy(pdf, out));
+            progress.accept("wrote " + copy(pdf, out));
 
             XIndexAccess sheets = UnoRuntime.queryInterface(XIndexAccess.class,
                     UnoRuntime.queryInterface(XSpreadsheetDocument.class, doc).getSheets());
@@ -115,23 +120,24 @@ public final class ExampleRunner {
                     Office.property("FilterName", "Text - txt - csv (StarCalc)"),
                     Office.property("FilterOptions", CSV_OPTIONS + (i + 1))});
                 Path written = copy(csv, out);
-                System.out.println("wrote " + written);
+                progress.accept("wrote " + written);
                 String a1 = UnoRuntime.queryInterface(XText.class, sheet.getCellByPosition(0, 0)).getString();
                 String text = new String(Files.readAllBytes(written), StandardCharsets.UTF_8);
                 if (a1.isEmpty() || !text.contains(a1)) {
-                    System.err.println(base + " / " + name + ": the CSV does not hold this sheet (A1 not found)");
-                    problems++;
+                    problems.accept(base + " / " + name + ": the CSV does not hold this sheet (A1 not found)");
+                    count++;
                 }
-                problems += check(base, name, sheet);
+                count += check(base, name, sheet, progress, problems);
             }
         } finally {
             doc.dispose();
         }
-        return problems;
+        return count;
     }
 
-    /** Counts formula cells, error results and check cells that do not say OK on one sheet; prints the counts. */
-    private static int check(String book, String name, XSpreadsheet sheet) throws Exception {
+    /** Counts formula cells, error results and check cells that do not say OK on one sheet; reports the counts. */
+    private static int check(String book, String name, XSpreadsheet sheet, Consumer<String> progress,
+            Consumer<String> problems) throws Exception {
         XCellRangesQuery q = UnoRuntime.queryInterface(XCellRangesQuery.class, sheet);
         List<XCell> formulas = cells(q.queryContentCells((short) CellFlags.FORMULA));
         List<XCell> errors = cells(q.queryFormulaCells(FormulaResult.ERROR));
@@ -145,19 +151,19 @@ public final class ExampleRunner {
                 String shown = UnoRuntime.queryInterface(XText.class, c).getString();
                 if (!"OK".equals(shown)) {
                     notOk++;
-                    System.err.println(book + " / " + name + ": " + address(c) + " says: " + shown);
+                    problems.accept(book + " / " + name + ": " + address(c) + " says: " + shown);
                 }
             }
         }
         for (int i = 0; i < errors.size() && i < SHOWN; i++) {
             XCell c = errors.get(i);
-            System.err.println(book + " / " + name + ": " + address(c) + " shows error " + c.getError() + " ("
+            problems.accept(book + " / " + name + ": " + address(c) + " shows error " + c.getError() + " ("
                     + c.getFormula() + ")");
         }
         if (errors.size() > SHOWN) {
-            System.err.println(book + " / " + name + ": ... and " + (errors.size() - SHOWN) + " more error cells");
+            problems.accept(book + " / " + name + ": ... and " + (errors.size() - SHOWN) + " more error cells");
         }
-        System.out.println(book + " / " + name + ": " + formulas.size() + " formula cells, " + errors.size()
+        progress.accept(book + " / " + name + ": " + formulas.size() + " formula cells, " + errors.size()
                 + " with an error, " + checks + " check cells, " + notOk + " not OK");
         return errors.size() + notOk;
     }

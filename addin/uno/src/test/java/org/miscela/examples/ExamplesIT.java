@@ -61,6 +61,7 @@ import org.miscela.core.blend.CompositionBasis;
 import org.miscela.it.Office;
 import org.miscela.it.OfficeParameterResolver;
 import org.miscela.reference.Oiml22;
+import org.miscela.testing.Figures;
 
 /**
  * The bundled example workbooks recalculate in the real office with no error cell and every check cell "OK"; the
@@ -87,7 +88,10 @@ class ExamplesIT {
         }
         Path out = Files.createDirectories(Paths.get("target/examples-out"));
         for (Path wb : workbooks) {
-            assertEquals(0, ExampleRunner.run(office, wb, out), wb.getFileName() + " has problem cells");
+            List<String> problems = new ArrayList<>();
+            int count = ExampleRunner.run(office, wb, out, line -> Figures.note(ExamplesIT.class, "%s", line),
+                    problems::add);
+            assertEquals(0, count, wb.getFileName() + " has problem cells:\n" + String.join("\n", problems));
         }
     }
 

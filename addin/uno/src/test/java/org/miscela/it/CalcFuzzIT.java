@@ -1,5 +1,6 @@
 package org.miscela.it;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -124,7 +125,7 @@ class CalcFuzzIT {
             XCell probe = Sheets.cell(sheet, 2, 0);
             probe.setFormula("=MIX.DENSITY(card;0.3;20)");
             assertEquals(908.667, probe.getValue(), 0.001, "the office still answers after the run");
-            System.out.printf(Locale.ROOT, "Calc fuzz: %d cells (seed %d) recalculated in %.1f s: %s%n", CELLS, SEED,
+            Figures.note(CalcFuzzIT.class, "Calc fuzz: %d cells (seed %d) recalculated in %.1f s: %s", CELLS, SEED,
                     seconds, outcomes);
             assertTrue(defects.isEmpty(), "cells with undocumented outcomes:\n" + String.join("\n", defects));
             assertTrue(outcomes.getOrDefault("number", 0) > CELLS / 50, "the generator must also produce good calls: "

@@ -1,5 +1,6 @@
 package org.miscela.it;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -73,7 +74,8 @@ class CardProblemsIT {
             assertTrue(wrong.isEmpty(), String.join("\n", wrong));
             assertEquals(EnumSet.range(Problem.CARD_EMPTY, Problem.NO_COMPOSITION_LIMIT), shown,
                     "every card problem shown in a sheet");
-            System.out.printf("card problems in the sheet: %d malformed cards, %d problems shown by MIX.CHECK%n",
+            Figures.note(CardProblemsIT.class,
+                    "card problems in the sheet: %d malformed cards, %d problems shown by MIX.CHECK",
                     cases.size(), shown.size());
         } finally {
             Sheets.close(doc);

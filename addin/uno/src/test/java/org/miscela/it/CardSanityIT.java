@@ -1,5 +1,6 @@
 package org.miscela.it;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -175,7 +176,7 @@ class CardSanityIT {
             assertTrue(warning.startsWith(String.format(java.util.Locale.ROOT, "The card's range is %,d rows × 5 "
                     + "columns", rows)), warning);
             assertEquals(998.2067, s.getCellByPosition(0, 1).getValue(), 1e-4);
-            System.out.printf("a card named as whole columns: %,d rows; MIX.CHECK says: %s%n", rows, warning);
+            Figures.note(CardSanityIT.class, "a card named as whole columns: %,d rows; MIX.CHECK says: %s", rows, warning);
         } finally {
             Sheets.close(doc);
         }

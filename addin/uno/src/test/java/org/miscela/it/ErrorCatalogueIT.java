@@ -1,5 +1,6 @@
 package org.miscela.it;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -72,7 +73,8 @@ class ErrorCatalogueIT {
                 }
                 if (problem == null) {
                     shown.add(entry);
-                    System.out.printf("%s: %s → Err:%d; MIX.EXPLAIN: %s%n", entry, formula, code, explanation);
+                    Figures.note(ErrorCatalogueIT.class,
+                            "%s: %s → Err:%d; MIX.EXPLAIN: %s", entry, formula, code, explanation);
                 } else {
                     wrong.add("row " + (r + 1) + " " + formula + " [" + entry + "]: " + problem);
                 }
@@ -90,8 +92,9 @@ class ErrorCatalogueIT {
             extra.removeIf(ErrorSheet::isCardProblem);
             Set<String> tables = new TreeSet<>(shown);
             tables.retainAll(expected);
-            System.out.printf("error catalogue in Calc: %d rows; %d of the %d entries to show shown, and %d card "
-                    + "problem(s); declared not reachable from a cell: %d%n", entries.size(), tables.size(),
+            Figures.note(ErrorCatalogueIT.class,
+                    "error catalogue in Calc: %d rows; %d of the %d entries to show shown, and %d card "
+                    + "problem(s); declared not reachable from a cell: %d", entries.size(), tables.size(),
                     expected.size(), shown.size() - tables.size(), ErrorSheet.notFromACell().size());
             assertTrue(missing.isEmpty(), "catalogue entries no row of errors.spec produces in Calc: " + missing);
             assertTrue(extra.isEmpty(), "rows produce entries declared not reachable from a cell: " + extra);

@@ -1,5 +1,6 @@
 package org.miscela.it;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -39,7 +40,8 @@ class ErrorSheetTest {
         unknown.removeAll(ErrorSheet.producibleEntries());
         unknown.removeIf(ErrorSheet::isCardProblem);
         assertTrue(unknown.isEmpty(), "rows for entries outside the tables: " + unknown);
-        System.out.printf("errors.spec: %d entries named, %d to produce, %d declared not reachable from a cell%n",
+        Figures.note(ErrorSheetTest.class,
+                "errors.spec: %d entries named, %d to produce, %d declared not reachable from a cell",
                 named.size(), ErrorSheet.producibleEntries().size(), ErrorSheet.notFromACell().size());
     }
 

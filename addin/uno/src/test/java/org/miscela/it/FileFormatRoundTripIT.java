@@ -1,5 +1,6 @@
 package org.miscela.it;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -211,7 +212,7 @@ class FileFormatRoundTripIT {
                     java.nio.file.StandardCopyOption.REPLACE_EXISTING);
         }
         Files.write(Paths.get("target", "file-formats.txt"), report.toString().getBytes(StandardCharsets.UTF_8));
-        System.out.print(report);
+        Figures.write("figures/FileFormatRoundTripIT-report.txt", String.valueOf(report));
         assertTrue(failures.isEmpty(), "after reopening:\n" + String.join("\n", failures));
     }
 

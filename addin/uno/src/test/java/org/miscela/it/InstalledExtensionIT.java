@@ -1,5 +1,6 @@
 package org.miscela.it;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
@@ -84,7 +85,8 @@ class InstalledExtensionIT {
             assertEquals(42, size.Height, "icon height");
         }
         assertFalse(displayName.isEmpty());
-        System.out.printf("extension manager: %s %s by %s, icons 42 x 42%n", p.getDisplayName(), p.getVersion(),
+        Figures.note(InstalledExtensionIT.class,
+                "extension manager: %s %s by %s, icons 42 x 42", p.getDisplayName(), p.getVersion(),
                 pub.First);
     }
 }

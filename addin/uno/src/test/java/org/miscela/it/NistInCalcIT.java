@@ -43,7 +43,6 @@ class NistInCalcIT {
                 assertTrue(w >= need, name + ": " + w + " correct digits, need " + need + "\n" + table);
             }
         }
-        System.out.print("NIST StRD through Calc (MIX.LEASTSQUARES), worst LRE:\n" + table);
         Files.write(Paths.get("target", "nist-lre-calc.txt"), table.toString().getBytes(StandardCharsets.UTF_8));
     }
 

@@ -1,5 +1,6 @@
 package org.miscela.it;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -36,7 +37,7 @@ class OfficeVersionIT {
         assertTrue(printed.contains(name + " " + full), "soffice --version printed \"" + printed
                 + "\", the running office says " + name + " " + full);
 
-        System.out.printf("office under test: %s (%s)%n", printed, Office.program());
+        Figures.note(OfficeVersionIT.class, "office under test: %s (%s)", printed, Office.program());
         String expected = System.getProperty("office.expected.version", "").trim();
         if (!expected.isEmpty()) {
             assertEquals(expected, line, "LibreOffice line under test");

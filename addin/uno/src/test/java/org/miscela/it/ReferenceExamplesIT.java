@@ -1,5 +1,6 @@
 package org.miscela.it;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -50,7 +51,7 @@ class ReferenceExamplesIT {
                 FunctionInfo f = all.get(i);
                 XCell cell = Sheets.cell(sheet, 0, i);
                 String shown = cell.getError() != 0 ? "Err:" + cell.getError() : Sheets.text(cell);
-                System.out.printf("%s: %s → %s (value %s)%n", f.displayName(), f.example(), shown,
+                Figures.note(ReferenceExamplesIT.class, "%s: %s → %s (value %s)", f.displayName(), f.example(), shown,
                         Double.toString(cell.getValue()));
                 if (!matches(f.exampleResult(), cell)) {
                     wrong.add(f.displayName() + ": the reference prints " + f.exampleResult() + ", Calc shows "

@@ -1,5 +1,6 @@
 package org.miscela.it;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -62,7 +63,8 @@ class SpreadsheetChecksIT {
                             Sheets.text(Sheets.cell(checks, 6, r))));
                 }
             }
-            System.out.printf("%s: %d checks, %d failing%n", file.getFileName(), count, failing.size());
+            Figures.note(SpreadsheetChecksIT.class,
+                    "%s: %d checks, %d failing", file.getFileName(), count, failing.size());
             assertEquals(0, failing.size(), String.join("\n", failing));
             assertEquals(1.0, Sheets.cell(summary, 1, 0).getValue(), "summary cell of " + file);
         } finally {

@@ -1,5 +1,6 @@
 package org.miscela.it;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -77,7 +78,7 @@ class TypedArgumentsReloadIT {
                 Sheets.close(again);
             }
         }
-        System.out.print(report);
+        Figures.write("figures/TypedArgumentsReloadIT-report.txt", String.valueOf(report));
         assertTrue(problems.isEmpty(), String.join("\n", problems));
     }
 

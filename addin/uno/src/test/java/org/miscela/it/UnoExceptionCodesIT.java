@@ -1,5 +1,6 @@
 package org.miscela.it;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import com.sun.star.lang.XComponent;
@@ -48,7 +49,7 @@ class UnoExceptionCodesIT {
         } finally {
             office.dispose();
         }
-        System.out.println("Calc's error code per exception: " + shown);
+        Figures.note(UnoExceptionCodesIT.class, "%s", "Calc's error code per exception: " + shown);
         assertEquals(expected, shown);
     }
 }

@@ -1,5 +1,6 @@
 package org.miscela.it;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
@@ -71,8 +72,9 @@ class WizardMetadataIT {
                 System.out.printf("wizard: %s shows %s with the wrong optional flag%n", f.displayName(), wrongHere);
             }
         }
-        System.out.printf("wizard: %d Miscela functions with all argument help present; %d arguments, %d shown as "
-                + "optional; %d required arguments shown as optional, %d optional ones shown as required%n",
+        Figures.note(WizardMetadataIT.class, "wizard: %d Miscela functions with all argument help present; %d "
+                + "arguments, %d shown as optional; %d required arguments shown as optional, %d optional ones shown as "
+                + "required",
                 FunctionCatalog.functions().size(), arguments, optional, requiredShownOptional.size(),
                 optionalShownRequired.size());
         assertEquals(List.of(), requiredShownOptional, "required arguments the wizard shows as optional");
@@ -104,7 +106,7 @@ class WizardMetadataIT {
         } finally {
             UnoRuntime.queryInterface(XComponent.class, access).dispose();
         }
-        System.out.printf("configuration: %d Miscela functions with their CompatibilityName%n",
+        Figures.note(WizardMetadataIT.class, "configuration: %d Miscela functions with their CompatibilityName",
                 FunctionCatalog.functions().size());
     }
 }

@@ -2,6 +2,7 @@ package org.miscela.core.blend;
 
 import org.miscela.core.problem.MiscelaException;
 import org.miscela.core.problem.Problem;
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
@@ -69,7 +70,8 @@ class AlcoholometryTest {
                 assertEquals(p, back, 1.01 * tolerance / slope, "p = " + p + ", t = " + t);
             }
         }
-        System.out.printf("strength vs OIML R 22 formula, p = 0.05..0.95 at 20 and 15 °C: worst %.5f %%vol%n", worst);
+        Figures.note(AlcoholometryTest.class,
+                "strength vs OIML R 22 formula, p = 0.05..0.95 at 20 and 15 °C: worst %.5f %%vol", worst);
     }
 
     /** The water entry of a strength is water's own %vol; given, it must agree with the ethanol's. */
@@ -93,7 +95,7 @@ class AlcoholometryTest {
         double[] w = Compositions.convert(CARD, new double[] {40, Double.NaN}, STRENGTH_20, MASS, E);
         double slope = (oimlStrength(p + 1e-4, 20) - oimlStrength(p - 1e-4, 20)) / 2e-4;
         assertEquals(p, w[0], 1.01 * 100 * p * DELTA / 789.239 / slope);
-        System.out.printf("40 %%vol at 20 °C: OIML p = %.6f, card p = %.6f%n", p, w[0]);
+        Figures.note(AlcoholometryTest.class, "40 %%vol at 20 °C: OIML p = %.6f, card p = %.6f", p, w[0]);
     }
 
     /**

@@ -1,5 +1,6 @@
 package org.miscela.core.blend;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -43,7 +44,8 @@ class AqueousSolutionsTest {
                         "t = " + t + ", m = " + m);
             }
         }
-        System.out.printf("NaCl molality -> molarity vs table, 0-40 °C, 0.1-5 mol/kg: worst relative %.2e%n", worst);
+        Figures.note(AqueousSolutionsTest.class,
+                "NaCl molality -> molarity vs table, 0-40 °C, 0.1-5 mol/kg: worst relative %.2e", worst);
     }
 
     /** 1.000 mol/kg at 25 °C: ρ = 1/0.965038 g/cm³ (aqueous-solutions.md) → c = 1036.229/1058.44 = 0.979015 mol/L. */
@@ -118,7 +120,8 @@ class AqueousSolutionsTest {
             worst = Math.max(worst, Math.abs(card - w));
             assertEquals(w, card, AqueousCardsTest.ACID_DENSITY_TOLERANCE / 672, w + "");
         }
-        System.out.printf("H2SO4 density -> mass fraction vs CRC table at 20 °C: worst %.5f%n", worst);
+        Figures.note(AqueousSolutionsTest.class,
+                "H2SO4 density -> mass fraction vs CRC table at 20 °C: worst %.5f", worst);
     }
 
     /** 40 % at 20 °C: ρ = 1.3028 g/cm³ (CRC) → c = 0.40·1302.8/98.072 = 5.3137 mol/L. */

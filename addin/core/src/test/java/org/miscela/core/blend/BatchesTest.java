@@ -1,6 +1,7 @@
 package org.miscela.core.blend;
 
 import org.miscela.core.problem.Problem;
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -37,7 +38,8 @@ class BatchesTest {
         assertEquals(100, b.mass(AmountUnit.G), 1e-12);
         assertEquals(0.1, b.mass(AmountUnit.KG), 1e-15);
         assertEquals(50 / Oiml22.M_ETHANOL + 50 / Oiml22.M_WATER, b.totalMoles(AmountUnit.MOL), 1e-12);
-        System.out.printf("50 g ethanol + 50 g water at 20 °C: V = %.4f mL, contraction %.4f mL = %.4f %%%n",
+        Figures.note(BatchesTest.class,
+                "50 g ethanol + 50 g water at 20 °C: V = %.4f mL, contraction %.4f mL = %.4f %%",
                 b.volume(AmountUnit.ML), b.contraction(AmountUnit.ML), b.contractionPercent());
     }
 
@@ -85,7 +87,15 @@ class BatchesTest {
         assertEquals(4, ratio, 0.05);
         assertTrue(Math.abs(a.relativeLinearError()) < 0.01, "10 % more ethanol: linear estimate off by "
                 + a.relativeLinearError());
-        System.out.printf("+10 g ethanol to 100 g at p = 0.5, 20 °C: exact %.4f mL, first order %.4f mL (%.2e)%n",
+        // the first-order estimate is V̄_ethanol of the batch before the addition times the moles added
+        double n1 = 50 / Oiml22.M_ETHANOL;
+        double x1 = n1 / (n1 + 50 / Oiml22.M_WATER);
+        double partial = org.miscela.core.functions.CardFunctions.partialMolarVolume(CARD, 0, x1, 20, E);
+        assertEquals(partial * 10 / Oiml22.M_ETHANOL, a.firstOrder(AmountUnit.ML), 1e-9);
+        assertEquals((a.firstOrder(AmountUnit.ML) - a.exact(AmountUnit.ML)) / a.exact(AmountUnit.ML),
+                a.relativeLinearError(), 1e-12);
+        Figures.note(BatchesTest.class,
+                "+10 g ethanol to 100 g at p = 0.5, 20 °C: exact %.4f mL, first order %.4f mL (%.2e)",
                 a.exact(AmountUnit.ML), a.firstOrder(AmountUnit.ML), a.relativeLinearError());
     }
 

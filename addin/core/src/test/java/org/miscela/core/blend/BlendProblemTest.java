@@ -2,6 +2,7 @@ package org.miscela.core.blend;
 
 import org.miscela.core.problem.MiscelaException;
 import org.miscela.core.problem.Problem;
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -19,7 +20,7 @@ import org.miscela.core.card.Extrapolation;
 
 /**
  * Every message of the blending section of {@link Problem} can occur: one call per problem that raises it, its text fully filled in.
- * The messages are printed for the record. Two cards here are invented for the purpose.
+ * The messages are written to target/figures/ for the record. Two cards here are invented for the purpose.
  */
 class BlendProblemTest {
     private static final Extrapolation E = Extrapolation.AS_CARD;
@@ -130,7 +131,7 @@ class BlendProblemTest {
             assertFalse(ex.getMessage().contains("null") || ex.getMessage().contains("NaN"), ex.getMessage());
             b.append(problem).append(": ").append(ex.getMessage()).append('\n');
         });
-        System.out.print(b);
+        Figures.write("figures/BlendProblemTest.txt", b.toString());
     }
 
     /**

@@ -19,7 +19,7 @@ import org.miscela.core.card.Extrapolation;
 class BlendProperties {
     private static final Extrapolation E = Extrapolation.AS_CARD;
     private static final CompositionBasis.Kind[] KINDS = CompositionBasis.Kind.values();
-    /** Worst residual seen per property, printed after the run for the record. */
+    /** Worst residual seen per property, written after the run for the record. */
     private static final java.util.Map<String, double[]> WORST = new java.util.concurrent.ConcurrentSkipListMap<>();
 
     private static void record(String what, double residual) {
@@ -31,7 +31,6 @@ class BlendProperties {
     static void report() throws java.io.IOException {
         StringBuilder b = new StringBuilder("property\tcases\tworst residual\n");
         WORST.forEach((k, v) -> b.append(String.format(java.util.Locale.ROOT, "%s\t%.0f\t%.3g%n", k, v[1], v[0])));
-        System.out.print(b);
         java.nio.file.Path out = java.nio.file.Paths.get("target", "blend-property-residuals.txt");
         java.nio.file.Files.createDirectories(out.getParent());
         java.nio.file.Files.write(out, b.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8));

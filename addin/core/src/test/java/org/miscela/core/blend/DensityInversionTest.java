@@ -2,6 +2,7 @@ package org.miscela.core.blend;
 
 import org.miscela.core.problem.MiscelaException;
 import org.miscela.core.problem.Problem;
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -37,7 +38,7 @@ class DensityInversionTest {
             assertEquals(p, card, 1.01 * (Cards.OIML_DENSITY_TOLERANCE + Cards.OIML_ROUNDING) / slope, "p = " + p);
             worst = Math.max(worst, Math.abs(card - p));
         }
-        System.out.printf("OIML R 22 densities at 20 °C -> mass fraction: worst %.2e%n", worst);
+        Figures.note(DensityInversionTest.class, "OIML R 22 densities at 20 °C -> mass fraction: worst %.2e", worst);
     }
 
     /** Varying water instead of ethanol finds the same composition. */

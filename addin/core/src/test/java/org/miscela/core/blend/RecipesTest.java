@@ -1,6 +1,7 @@
 package org.miscela.core.blend;
 
 import org.miscela.core.problem.Problem;
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import org.junit.jupiter.api.Test;
@@ -32,7 +33,8 @@ class RecipesTest {
         assertEquals(litre, masses[0] + masses[1], 1.2 * Cards.OIML_DENSITY_TOLERANCE + 1e-6);
         assertEquals(litre - 400 * Oiml22.density(1, 20) / 1000, masses[1],
                 1.2 * Cards.OIML_DENSITY_TOLERANCE + 1e-6);
-        System.out.printf("1 L of 40 %%vol at 20 °C: %.4f g ethanol (400 mL), %.4f g water (%.4f mL at 20 °C)%n",
+        Figures.note(RecipesTest.class,
+                "1 L of 40 %%vol at 20 °C: %.4f g ethanol (400 mL), %.4f g water (%.4f mL at 20 °C)",
                 masses[0], masses[1], volumes[1]);
     }
 

@@ -1,5 +1,6 @@
 package org.miscela.core.blend;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import org.junit.jupiter.api.Test;
@@ -27,7 +28,8 @@ class TemperatureCorrectionTest {
         assertEquals(1000 * 909.770 / 913.771, c.referenceVolume(1000), 1000 * tolerance);
         // a measured 909.800 at 25 °C keeps its own level: 909.800 × ρ(20)/ρ(25)
         assertEquals(909.800 * 913.771 / 909.770, c.referenceDensityFromMeasured(909.800), 909.8 * tolerance);
-        System.out.printf("p = 0.5, 25 -> 20 °C: VCF card %.7f, OIML %.7f%n", c.volumeFactor(), 909.770 / 913.771);
+        Figures.note(TemperatureCorrectionTest.class,
+                "p = 0.5, 25 -> 20 °C: VCF card %.7f, OIML %.7f", c.volumeFactor(), 909.770 / 913.771);
     }
 
     /** Pure ethanol 40 °C → 20 °C: 771.932/789.239 (OIML check values); the card's pure density is the formula's. */

@@ -1,5 +1,6 @@
 package org.miscela.core.blend;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -95,7 +96,7 @@ class TradeUnitsTest {
         double[] imp = BlendFunctions.recipe(CARD, 100, "imp gal", 20, fortyPercent, strength, new double[] {20},
                 "L", E);
         assertEquals(40 * 4.54609, imp[0], 1e-9);
-        System.out.printf("1 US gal of 40 %%vol at 20 °C: %.6f lb ethanol, %.6f lb water%n", lb[0], lb[1]);
+        Figures.note(TradeUnitsTest.class, "1 US gal of 40 %%vol at 20 °C: %.6f lb ethanol, %.6f lb water", lb[0], lb[1]);
     }
 
     /** Tonnes and pounds of a batch give the totals their kilograms give. */

@@ -17,8 +17,11 @@ import net.jqwik.api.Provide;
 import net.jqwik.api.constraints.DoubleRange;
 
 /**
- * Textbook identities of partial molar quantities, over random binary cards: summability, Gibbs–Duhem, analytic
- * derivatives against finite differences, symmetry under swapping the components, and the pure-component limits.
+ * Textbook identities of partial molar quantities, over random binary cards, each against values computed another
+ * way: the partial volumes against differences of the extensive volume in the mole numbers, Gibbs–Duhem from
+ * partial volumes at neighbouring compositions, summability of partials from differences, analytic derivatives
+ * against finite differences, symmetry under swapping the components, and the pure-component and infinite-dilution
+ * limits.
  */
 class BinaryMixtureProperties {
 
@@ -58,28 +61,80 @@ class BinaryMixtureProperties {
         return new Card("swapped", "generated", c.units(), comps, ex, c.validity(), false);
     }
 
-    @Property(tries = 2000)
-    void summability(@ForAll("cards") Card card, @ForAll @DoubleRange(min = 0, max = 1) double x1,
-            @ForAll @DoubleRange(min = 260, max = 340) double t) {
-        BinaryMixture m = card.binary();
-        double vm = m.molarVolume(x1, t);
-        double sum = x1 * m.partialMolarVolume(0, x1, t) + (1 - x1) * m.partialMolarVolume(1, x1, t);
-        assertEquals(vm, sum, 1e-12 * Math.abs(vm));
+    /**
+     * The rounding scale of V_m and of the partial molar volumes at T: V_1* + V_2* + Σ_k (k+1)·|A_k(T)|, which
+     * bounds every term either adds up for x1 in [0, 1] (|x1 − x2| ≤ 1).
+     */
+    static double scale(Card card, double t) {
+        RedlichKister rk = card.excessVolume(0, 1);
+        double a = card.binary().pureMolarVolume(0, t) + card.binary().pureMolarVolume(1, t);
+        for (int k = 0; k <= rk.order(); k++) {
+            a += (k + 1) * Math.abs(rk.coefficientAt(k, t));
+        }
+        return a;
     }
 
     /**
-     * Σ x_k dV̄_k = 0 with the library's analytic slopes; those slopes are checked against finite differences of the
-     * partial molar volumes in {@link #partialSlopesMatchFiniteDifferences}, so together the two pin Gibbs–Duhem.
+     * Each partial molar volume against the derivative of the extensive volume N·V_m(n1/N) in n_k at fixed other
+     * n_j, from values of V_m alone ({@link PartialsFromValues}: five-point central difference, step 2⁻¹⁰). The
+     * rounding bound of one V_m is 64·u·{@link #scale} (a Horner chain of at most 6 steps, the pure volumes'
+     * quotients M/ρ, the product with x1·x2 and the sum: fewer than 30 roundings of terms bounded by the scale, with
+     * room), and the library's partial adds at most 640·u·scale (its three parts bounded by 1, 3 and 3 scales).
+     */
+    @Property(tries = 1000)
+    void partialsAreDerivativesOfTheExtensiveVolume(@ForAll("cards") Card card,
+            @ForAll @DoubleRange(min = 0, max = 1) double x1, @ForAll @DoubleRange(min = 260, max = 340) double t) {
+        BinaryMixture m = card.binary();
+        double a = scale(card, t);
+        double[] x = {x1, 1 - x1};
+        for (int k = 0; k < 2; k++) {
+            PartialsFromValues.Estimate d = PartialsFromValues.partial(y -> m.molarVolume(y[0], t), x, k, 0x1p-10,
+                    64 * PartialsFromValues.U * a);
+            double bound = d.bound + 640 * PartialsFromValues.U * a;
+            assertEquals(d.value, m.partialMolarVolume(k, x1, t), bound, "component " + (k + 1) + ", bound " + bound);
+        }
+    }
+
+    /**
+     * Gibbs–Duhem from values: x1·[V̄_1(x1 + δ) − V̄_1(x1 − δ)] + x2·[V̄_2(x1 + δ) − V̄_2(x1 − δ)] = 0 to third order
+     * in δ = 2⁻²⁶, with the library's partial volumes at the two neighbouring compositions (the series is a
+     * polynomial, so it extends past 0 and 1). Bound: 2 × the partial's rounding bound 640·u·scale, plus
+     * 2·u·Σ|terms| for the sum; the truncation term (δ³/3)·|x_k V̄_k‴| is below 10⁻¹⁸·scale for third derivatives
+     * up to 10⁶·scale (a seventh-degree polynomial in x1 with d = 2x1 − 1 reaches about 10⁵).
      */
     @Property(tries = 2000)
-    void gibbsDuhem(@ForAll("cards") Card card, @ForAll @DoubleRange(min = 0, max = 1) double x1,
-            @ForAll @DoubleRange(min = 260, max = 340) double t) {
+    void gibbsDuhemFromNeighbouringCompositions(@ForAll("cards") Card card,
+            @ForAll @DoubleRange(min = 0, max = 1) double x1, @ForAll @DoubleRange(min = 260, max = 340) double t) {
         BinaryMixture m = card.binary();
-        double s1 = m.partialMolarVolumeSlope(0, x1, t);
-        double s2 = m.partialMolarVolumeSlope(1, x1, t);
-        double scale = Math.abs(x1 * s1) + Math.abs((1 - x1) * s2) + 1e-300;
-        assertTrue(Math.abs(x1 * s1 + (1 - x1) * s2) <= 1e-12 * scale + 1e-13, "x1 dV1 + x2 dV2 = "
-                + (x1 * s1 + (1 - x1) * s2));
+        double delta = 0x1p-26;
+        double first = x1 * (m.partialMolarVolume(0, x1 + delta, t) - m.partialMolarVolume(0, x1 - delta, t));
+        double second = (1 - x1) * (m.partialMolarVolume(1, x1 + delta, t) - m.partialMolarVolume(1, x1 - delta, t));
+        double a = scale(card, t);
+        double bound = 2 * 640 * PartialsFromValues.U * a + 2 * PartialsFromValues.U * (Math.abs(first)
+                + Math.abs(second)) + Math.pow(delta, 3) / 3 * 1e6 * a;
+        assertEquals(0.0, first + second, bound, "x1 dV1 + x2 dV2 from values, bound " + bound);
+    }
+
+    /**
+     * Summability with partial volumes from differences of the extensive volume (not from the library's formula):
+     * x1·∂V/∂n1 + x2·∂V/∂n2 = V_m. Euler's theorem makes this hold for any V_m, so it checks the reference partials;
+     * with {@link #partialsAreDerivativesOfTheExtensiveVolume} it gives summability of the library's partials.
+     */
+    @Property(tries = 1000)
+    void summabilityOfPartialsFromDifferences(@ForAll("cards") Card card,
+            @ForAll @DoubleRange(min = 0, max = 1) double x1, @ForAll @DoubleRange(min = 260, max = 340) double t) {
+        BinaryMixture m = card.binary();
+        double delta = 64 * PartialsFromValues.U * scale(card, t);
+        double[] x = {x1, 1 - x1};
+        double sum = 0;
+        double bound = delta;
+        for (int k = 0; k < 2; k++) {
+            PartialsFromValues.Estimate d = PartialsFromValues.partial(y -> m.molarVolume(y[0], t), x, k, 0x1p-10,
+                    delta);
+            sum += x[k] * d.value;
+            bound += x[k] * d.bound + 2 * PartialsFromValues.U * Math.abs(x[k] * d.value);
+        }
+        assertEquals(m.molarVolume(x1, t), sum, bound, "bound " + bound);
     }
 
     /** Each partial molar volume's analytic slope against a central difference of the partial molar volume itself. */
@@ -121,6 +176,22 @@ class BinaryMixtureProperties {
         assertEquals(m.partialMolarVolume(1, x1, t), s.partialMolarVolume(0, x2, t), 1e-10 * (1
                 + Math.abs(m.partialMolarVolume(1, x1, t))));
         assertEquals(m.density(x1, t), s.density(x2, t), 1e-12 * m.density(x1, t));
+    }
+
+    /**
+     * V^E through the mixture is the card's binary expansion x1·x2·Σ A_k (x1 − x2)^k evaluated on its own, and the
+     * density is its definition ρ = 1000·(x1·M1 + x2·M2)/V_m (g/mol over cm³/mol, in kg/m³).
+     */
+    @Property(tries = 500)
+    void excessVolumeAndDensityFollowTheirDefinitions(@ForAll("cards") Card card,
+            @ForAll @DoubleRange(min = 0, max = 1) double x1, @ForAll @DoubleRange(min = 260, max = 340) double t) {
+        BinaryMixture m = card.binary();
+        double a = scale(card, t);
+        assertEquals(card.excessVolume(0, 1).value(x1, t), m.excessMolarVolume(x1, t), 64 * PartialsFromValues.U * a);
+        double mass = x1 * card.components().get(0).molarMass() + (1 - x1) * card.components().get(1).molarMass();
+        assertEquals(mass, m.meanMolarMass(x1), 4 * PartialsFromValues.U * mass);
+        double rho = 1000 * mass / m.molarVolume(x1, t);
+        assertEquals(rho, m.density(x1, t), 8 * PartialsFromValues.U * rho);
     }
 
     /** At a pure corner the excess volume vanishes and the pure component's partial volume is its molar volume. */

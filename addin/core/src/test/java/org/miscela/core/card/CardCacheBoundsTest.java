@@ -1,5 +1,6 @@
 package org.miscela.core.card;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotSame;
 import static org.junit.jupiter.api.Assertions.assertSame;
@@ -73,8 +74,8 @@ class CardCacheBoundsTest {
     /**
      * A card named as whole columns is cheap for the add-in: the key looks at each cell once, the reader reads only
      * the key's extent (not the million blank rows again), and a hit compares the filled cells only. The bound is
-     * the fuzzers' per-call bound, far above what this takes (the time is printed), so it only catches a cost that
-     * grows out of proportion. (In Calc the same range costs seconds per call: Calc converts every cell of a range
+     * the fuzzers' per-call bound, far above what this takes (the time is written to target/figures/), so it only
+     * catches a cost that grows out of proportion. (In Calc the same range costs seconds per call: Calc converts every cell of a range
      * argument before calling the add-in; DEVELOPERS.md has the measurement.)
      */
     @Test
@@ -89,7 +90,8 @@ class CardCacheBoundsTest {
         long millis = TimeUnit.NANOSECONDS.toMillis(System.nanoTime() - start);
         assertEquals(1, cache.parseCount());
         assertEquals(-4.0, a0(first), 0.0);
-        System.out.printf("11 reads of a 1,048,576 × 6 whole-column card (arrays built each time): %d ms%n", millis);
+        Figures.note(CardCacheBoundsTest.class,
+                "11 reads of a 1,048,576 × 6 whole-column card (arrays built each time): %d ms", millis);
         assertTrue(millis < 2000 * 11, "11 reads of a whole-column card took " + millis + " ms");
     }
 

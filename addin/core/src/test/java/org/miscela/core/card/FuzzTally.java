@@ -12,8 +12,8 @@ import java.util.concurrent.atomic.LongAdder;
 import java.util.function.Supplier;
 
 /**
- * Outcome counts and call times of one fuzz run, reported after it (printed and written to target/fuzz/). Every
- * call is timed; one slower than {@link #CALL_BOUND_NANOS} fails the run on the spot.
+ * Outcome counts and call times of one fuzz run, reported after it (written to target/fuzz/). Every call is timed;
+ * one slower than {@link #CALL_BOUND_NANOS} fails the run on the spot.
  */
 public final class FuzzTally {
     /** A generous bound for one call: a typical call takes microseconds, the slowest seen milliseconds. */
@@ -94,7 +94,6 @@ public final class FuzzTally {
     /** Prints the report and writes it to target/fuzz/&lt;name&gt;-&lt;profile&gt;.txt. */
     public void write() {
         String text = report();
-        System.out.print(text);
         Path out = Paths.get("target", "fuzz", name + "-" + FuzzProfile.name() + ".txt");
         try {
             Files.createDirectories(out.getParent());

@@ -128,6 +128,11 @@ public final class TestCard {
         return CardReader.read(cells());
     }
 
+    /** The card's pure components alone, as the density fit reads them. */
+    public Card readPure() {
+        return CardReader.readPureComponents(cells());
+    }
+
     private static Object[] cells(Object[] in) {
         Object[] out = new Object[in.length];
         for (int i = 0; i < in.length; i++) {

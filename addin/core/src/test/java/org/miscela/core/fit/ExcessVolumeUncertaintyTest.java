@@ -2,6 +2,7 @@ package org.miscela.core.fit;
 
 import org.miscela.core.problem.MiscelaException;
 import org.miscela.core.problem.Problem;
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -136,7 +137,7 @@ class ExcessVolumeUncertaintyTest {
         }
         report.append(String.format(Locale.ROOT, "worst |ratio - 1| = %.4f, allowed %.4f%n", worst,
                 MONTE_CARLO_TOLERANCE));
-        System.out.print(report);
+        Figures.write("figures/ExcessVolumeUncertaintyTest.txt", report.toString());
         assertTrue(worst <= MONTE_CARLO_TOLERANCE, report.toString());
     }
 

@@ -81,7 +81,6 @@ public class NistLinearRegressionTest {
                             + d.declaredObservations + " observations and " + d.declaredParameters + " parameters"));
         }
         String text = String.join(System.lineSeparator(), table) + System.lineSeparator();
-        System.out.print(text);
         Path out = Paths.get("target", "nist-lre.txt");
         Files.createDirectories(out.getParent());
         Files.write(out, text.getBytes(StandardCharsets.UTF_8));

@@ -2,6 +2,7 @@ package org.miscela.core.fit;
 
 import org.miscela.core.problem.MiscelaException;
 import org.miscela.core.problem.Problem;
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -39,7 +40,7 @@ class OrderSelectionTest {
         double[][] d = noisyExcessVolumes(new double[][] {{-3.1}, {0.8}, {-0.7}}, 40, 0.005, 99, 1);
         OrderSelection selection = OrderSelection.compare(6,
                 m -> RedlichKisterFitter.excessVolumes(d[0], d[2], m, T_REF, null).leastSquares(), 0.05);
-        System.out.print(table(selection));
+        Figures.write("figures/OrderSelectionTest.txt", table(selection));
         assertEquals(2, selection.selectedOrder(), table(selection));
         assertEquals(2, selection.lowestBicOrder(), table(selection));
         assertFalse(selection.reachedHighestOrder());
@@ -79,6 +80,95 @@ class OrderSelectionTest {
             assertEquals(wald, selection.steps().get(m).fStatistic(), 1e-8 * wald, "order " + m);
         }
         assertEquals(2, selection.selectedOrder(), table(selection));
+    }
+
+    /**
+     * AIC = n·ln(RSS/n) + 2p and BIC = n·ln(RSS/n) + p·ln n, the least-squares forms for normal errors (Akaike 1974,
+     * Schwarz 1978; as in Burnham &amp; Anderson 2002, from memory), with RSS recomputed here from the data and each
+     * step's coefficients; the orders with the lowest of each; s = √(RSS/(n − p)).
+     */
+    @Test
+    void informationCriteriaFollowTheirDefinitions() {
+        double[][] d = noisyExcessVolumes(new double[][] {{-3.1}, {0.8}, {-0.7}}, 30, 0.01, 11, 1);
+        OrderSelection selection = OrderSelection.compare(5,
+                m -> RedlichKisterFitter.excessVolumes(d[0], d[2], m, T_REF, null).leastSquares(), 0.05);
+        assertEquals(0.05, selection.significance(), 0.0);
+        int n = d[0].length;
+        int bestAic = 0;
+        int bestBic = 0;
+        double[] aic = new double[6];
+        double[] bic = new double[6];
+        for (int m = 0; m <= 5; m++) {
+            OrderSelection.Step step = selection.steps().get(m);
+            double[] c = step.fit().coefficients();
+            double[][] a = new double[c.length][];
+            for (int k = 0; k < c.length; k++) {
+                a[k] = new double[] {c[k]};
+            }
+            RedlichKister rk = new RedlichKister(T_REF, a);
+            double rss = 0;
+            for (int i = 0; i < n; i++) {
+                double r = d[2][i] - rk.value(d[0][i], T_REF);
+                rss += r * r;
+            }
+            assertEquals(m + 1, step.parameterCount());
+            assertEquals(n - m - 1, step.degreesOfFreedom());
+            assertEquals(Math.sqrt(rss / (n - m - 1)), step.residualStandardDeviation(), 1e-9 * Math.sqrt(rss / n));
+            aic[m] = n * Math.log(rss / n) + 2 * (m + 1);
+            bic[m] = n * Math.log(rss / n) + (m + 1) * Math.log(n);
+            assertEquals(aic[m], step.aic(), 1e-9 * Math.abs(aic[m]), "AIC at order " + m);
+            assertEquals(bic[m], step.bic(), 1e-9 * Math.abs(bic[m]), "BIC at order " + m);
+            bestAic = aic[m] < aic[bestAic] ? m : bestAic;
+            bestBic = bic[m] < bic[bestBic] ? m : bestBic;
+        }
+        assertEquals(bestAic, selection.lowestAicOrder(), table(selection));
+        assertEquals(bestBic, selection.lowestBicOrder(), table(selection));
+    }
+
+    /** When every added term is significant, the verdict is the highest order tried, and says so. */
+    @Test
+    void everyStepSignificantEndsAtTheHighestOrder() {
+        double[][] d = noisyExcessVolumes(new double[][] {{-3.1}, {0.8}, {-0.7}, {0.5}, {-0.4}}, 40, 0.001, 3, 1);
+        OrderSelection selection = OrderSelection.compare(3,
+                m -> RedlichKisterFitter.excessVolumes(d[0], d[2], m, T_REF, null).leastSquares(), 0.05);
+        for (int m = 1; m <= 3; m++) {
+            assertTrue(selection.steps().get(m).pValue() < 0.05, table(selection));
+        }
+        assertTrue(selection.reachedHighestOrder(), table(selection));
+        assertEquals(3, selection.selectedOrder());
+    }
+
+    /**
+     * A step to a fit with no residual degrees of freedom has F and p undefined and is not significant; a first
+     * step that is not significant selects order 0, however later steps turn out. Invented data.
+     */
+    @Test
+    void undefinedAndEarlyVerdicts() {
+        double[] x = {0.2, 0.5, 0.8};
+        double[] v = {-0.5, -0.8, -0.45};
+        OrderSelection exact = OrderSelection.compare(2,
+                m -> RedlichKisterFitter.excessVolumes(x, v, m, T_REF, null).leastSquares(), 0.05);
+        OrderSelection.Step last = exact.steps().get(2);
+        assertEquals(0, last.degreesOfFreedom());
+        assertTrue(Double.isNaN(last.fStatistic()), table(exact));
+        assertTrue(Double.isNaN(last.pValue()), table(exact));
+        assertFalse(exact.reachedHighestOrder());
+        assertTrue(exact.selectedOrder() <= 1, table(exact));
+
+        double[][] d = noisyExcessVolumes(new double[][] {{-3.1}}, 30, 0.01, 21, 1);
+        OrderSelection flat = OrderSelection.compare(4,
+                m -> RedlichKisterFitter.excessVolumes(d[0], d[2], m, T_REF, null).leastSquares(), 0.05);
+        assertTrue(flat.steps().get(1).pValue() >= 0.05 && flat.steps().get(2).pValue() >= 0.05,
+                "the invented data were chosen so that neither of the first two steps is significant:\n"
+                        + table(flat));
+        assertEquals(0, flat.selectedOrder(), table(flat));
+
+        LeastSquaresFit all = flat.steps().get(0).fit();
+        LeastSquaresFit fewer = RedlichKisterFitter.excessVolumes(java.util.Arrays.copyOf(d[0], 29),
+                java.util.Arrays.copyOf(d[2], 29), 1, T_REF, null).leastSquares();
+        assertEquals("Fit 2 of the order comparison uses 29 point(s) but fit 1 uses 30; compare fits to the same "
+                + "data.", assertThrows(MiscelaException.class,
+                        () -> OrderSelection.compare(java.util.Arrays.asList(all, fewer), 0.05)).getMessage());
     }
 
     @Test

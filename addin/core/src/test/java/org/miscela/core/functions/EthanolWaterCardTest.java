@@ -1,5 +1,6 @@
 package org.miscela.core.functions;
 
+import org.miscela.testing.Figures;
 import org.miscela.core.card.Card;
 import org.miscela.core.card.Extrapolation;
 import org.miscela.core.card.TestCards;
@@ -34,7 +35,8 @@ class EthanolWaterCardTest {
                 }
             }
         }
-        System.out.printf("ethanol + water card vs OIML R 22: worst density deviation %.4f kg/m³ at %s%n", worst, where);
+        Figures.note(EthanolWaterCardTest.class,
+                "ethanol + water card vs OIML R 22: worst density deviation %.4f kg/m³ at %s", worst, where);
         assertTrue(Math.abs(worst) <= DENSITY_TOLERANCE, "worst deviation " + worst + " at " + where);
     }
 

@@ -1,5 +1,6 @@
 package org.miscela.core.functions;
 
+import org.miscela.testing.Figures;
 import org.miscela.core.card.BinaryMixture;
 import org.miscela.core.card.Card;
 import org.miscela.core.card.CardReader;
@@ -44,8 +45,9 @@ class FitFunctionsTest {
             t[i] = 20;
         }
         double worst = worstBetween(pure, xs, rho, t, 14);
-        System.out.printf("OIML R 22 at 20 °C refitted by MIX.FITDENSITY's core (A0..A14, 101 points): worst "
-                + "deviation between points %.4f kg/m³%n", worst);
+        Figures.note(FitFunctionsTest.class,
+                "OIML R 22 at 20 °C refitted by MIX.FITDENSITY's core (A0..A14, 101 points): worst "
+                + "deviation between points %.4f kg/m³", worst);
         assertTrue(worst < 0.011, "worst deviation between fitted points " + worst + " kg/m³");
         Object[][] stats = FitFunctions.density(pure, 0, 1, xs, rho, t, 14, 0, Double.NaN, null,
                 FitOutput.STATISTICS);

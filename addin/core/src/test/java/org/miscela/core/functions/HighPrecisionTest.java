@@ -645,7 +645,6 @@ class HighPrecisionTest {
                 "quantity\tpoints\tworst relative error\tworst error / bound\tworst relative error at\n");
         WORST.forEach((q, w) -> b.append(String.format(Locale.ROOT, "%s\t%d\t%.3g\t%.3g\t%s%n", q, w[2], w[0], w[1],
                 w[3])));
-        System.out.print(b);
         Path out = Paths.get("target", "fuzz", "high-precision.txt");
         Files.createDirectories(out.getParent());
         Files.write(out, b.toString().getBytes(StandardCharsets.UTF_8));

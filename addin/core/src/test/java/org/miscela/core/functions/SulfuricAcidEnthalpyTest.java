@@ -1,5 +1,6 @@
 package org.miscela.core.functions;
 
+import org.miscela.testing.Figures;
 import org.miscela.core.card.Card;
 import org.miscela.core.card.Extrapolation;
 import org.miscela.core.card.TestCards;
@@ -32,7 +33,8 @@ class SulfuricAcidEnthalpyTest {
             worst = Math.max(worst, Math.abs(heat - NbsSulfuricAcid.heatOfSolution(i)));
             assertEquals(NbsSulfuricAcid.heatOfSolution(i), heat, NbsSulfuricAcid.RESOLUTION, "n = " + n);
         }
-        System.out.printf("H2SO4 + water: worst deviation from the NBS integral heats (n = 1..100): %.3f kJ/mol%n",
+        Figures.note(SulfuricAcidEnthalpyTest.class,
+                "H2SO4 + water: worst deviation from the NBS integral heats (n = 1..100): %.3f kJ/mol",
                 worst);
     }
 

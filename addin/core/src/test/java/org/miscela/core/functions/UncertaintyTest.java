@@ -1,5 +1,6 @@
 package org.miscela.core.functions;
 
+import org.miscela.testing.Figures;
 import org.miscela.core.card.Card;
 import org.miscela.core.card.CardReader;
 import org.miscela.core.card.Extrapolation;
@@ -162,7 +163,8 @@ class UncertaintyTest {
             // 20,000 draws estimate an SD to about 1/√(2N) = 0.5 %; allow four times that.
             assertEquals(1.0, sd / uRho, 0.02, "Monte Carlo vs linear u(ρ) at x = " + x);
         }
-        System.out.printf("card uncertainty: Monte Carlo vs linear u(ρ), worst relative difference %.4f%n",
+        Figures.note(UncertaintyTest.class,
+                "card uncertainty: Monte Carlo vs linear u(ρ), worst relative difference %.4f",
                 worstMonteCarlo);
     }
 
