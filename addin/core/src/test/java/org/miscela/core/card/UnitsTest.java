@@ -46,8 +46,9 @@ class UnitsTest {
         assertEquals(Units.Temperature.CELSIUS, Units.lookup(Units.Temperature.class, " degC "));
         assertEquals(Units.MolarVolume.L_PER_MOL, Units.lookup(Units.MolarVolume.class, "dm3/mol"));
         assertNull(Units.lookup(Units.Density.class, "KG/M3"), "spellings are matched exactly, case included");
-        assertEquals("°C, degC, C, K", Units.accepted(Units.Temperature.class));
-        assertEquals("J/mol, kJ/mol", Units.accepted(Units.MolarEnthalpy.class));
+        assertEquals("°C (or ºC, ˚C, ℃, degC, C); K; °F (or ºF, ˚F, ℉, degF, F)",
+                Units.accepted(Units.Temperature.class));
+        assertEquals("J/mol; kJ/mol", Units.accepted(Units.MolarEnthalpy.class));
     }
 
     @Test

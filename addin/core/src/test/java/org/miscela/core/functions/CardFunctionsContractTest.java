@@ -153,9 +153,13 @@ class CardFunctionsContractTest {
         assertEquals(0.0, CardFunctions.additionHeat(card, new double[] {1, 1}, 0, 0.0, AmountBasis.MOL, 20, E),
                 0.0);
         assertEquals(AmountBasis.KG, AmountBasis.lookup(" KG "));
-        assertEquals(null, AmountBasis.lookup("lb"));
+        // a pound is a mass like a kilogram; an ounce is no basis (1 lb = 0.45359237 kg exactly, NIST SP 811 B.8)
+        assertEquals(AmountBasis.LB, AmountBasis.lookup("lb"));
+        assertEquals(null, AmountBasis.lookup("oz"));
         assertEquals("kmol", AmountBasis.KMOL.symbol());
-        assertEquals("mol, kmol, g, kg", AmountBasis.accepted());
+        assertEquals("moles: mol, kmol; masses: g, kg, t, tonne, tonnes, lb, lbs; masses weighed in air (conventional "
+                + "mass, OIML D 28): g (conventional), g air, kg (conventional), kg air, t (conventional), t air, "
+                + "lb (conventional), lb air", AmountBasis.accepted());
     }
 
     @Test
