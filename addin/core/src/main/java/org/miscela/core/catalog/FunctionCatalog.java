@@ -26,10 +26,10 @@ public final class FunctionCatalog {
             "The named range holding the mixture's card: labels in the first column, values to their right.");
     private static final ArgumentInfo MOLE_FRACTION = range("moleFraction", "x",
             "Mole fractions in card order (a row or column), a block with one composition per row, or x1 alone on a "
-                    + "two-component card. There: a row of two cells, or a block "
-                    + "two columns wide, holds compositions (x1, x2); any other single column or row holds values of "
-                    + "x1, one result each, except a column of two cells that add up to 1, which could be either and "
-                    + "is refused. A block gives a column of results.");
+                    + "two-component card. On a two-component card a row of two cells, or a block two columns wide, "
+                    + "holds compositions (x1, x2); any other single row or column holds values of x1, one result "
+                    + "each, except a column of two cells adding up to 1, which could be either and is refused. A "
+                    + "block gives a column of results.");
     private static final ArgumentInfo TEMPERATURE = range("temperature", "temperature",
             "Temperature in the card's unit: one value, or one per composition (a column for a block, the same "
                     + "shape for a range of x1).");
@@ -143,6 +143,10 @@ public final class FunctionCatalog {
     private static final List<Problem> COMPOSITION_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
             Problem.ARG_SHAPE, Problem.NOT_BINARY, Problem.MOLE_FRACTION_OUTSIDE_UNIT, Problem.COMPOSITION_NEGATIVE,
             Problem.COMPOSITION_SUM, Problem.COMPOSITION_SHAPE, Problem.COMPOSITION_AMBIGUOUS);
+    /** One composition (MIX.TRACE): a column of n cells is one composition on any card, so nothing is ambiguous. */
+    private static final List<Problem> ONE_COMPOSITION_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
+            Problem.ARG_SHAPE, Problem.NOT_BINARY, Problem.MOLE_FRACTION_OUTSIDE_UNIT, Problem.COMPOSITION_NEGATIVE,
+            Problem.COMPOSITION_SUM, Problem.COMPOSITION_SHAPE);
     private static final List<Problem> POINT_PROBLEMS = list(Problem.ARG_NOT_FLAG, Problem.BELOW_ABSOLUTE_ZERO,
             Problem.OUTSIDE_TEMPERATURE, Problem.OUTSIDE_COMPOSITION, Problem.OUTSIDE_PAIR_TEMPERATURE,
             Problem.OUTSIDE_PAIR_COMPOSITION, Problem.NON_PHYSICAL);
@@ -280,7 +284,7 @@ public final class FunctionCatalog {
                     CARD, MOLE_FRACTION_ONE, TEMPERATURE_ONE, optional("quantity", "property",
                             "\"volume\" (left out) or \"enthalpy\": which of the card's properties to "
                                     + "trace."), EXTRAPOLATE)
-                    .shows("card").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, list(Problem.NO_ENTHALPY, Problem.UNKNOWN_PROPERTY, Problem.ARG_NOT_SINGLE))),
+                    .shows("card").refuses(union(ONE_COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, list(Problem.NO_ENTHALPY, Problem.UNKNOWN_PROPERTY, Problem.ARG_NOT_SINGLE))),
             new FunctionInfo("fitExcessVolume", "MIX.FITEXCESS",
                     "Redlich–Kister coefficients fitted to excess volumes (or their statistics)",
                     "Redlich–Kister coefficients fitted by least squares to excess volumes, or the fit's standard "
@@ -521,7 +525,7 @@ public final class FunctionCatalog {
                     CARD, MOLE_FRACTION)
                     .shows("26.431").refuses(list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER, Problem.NOT_BINARY,
                             Problem.MOLE_FRACTION_OUTSIDE_UNIT, Problem.COMPOSITION_NEGATIVE,
-                            Problem.COMPOSITION_SUM, Problem.COMPOSITION_SHAPE))));
+                            Problem.COMPOSITION_SUM, Problem.COMPOSITION_SHAPE, Problem.COMPOSITION_AMBIGUOUS))));
 
     private FunctionCatalog() {
     }
