@@ -3,6 +3,7 @@ package org.miscela.calc;
 import com.sun.star.uno.Any;
 import org.miscela.core.card.Card;
 import org.miscela.core.functions.CardFunctions;
+import org.miscela.core.problem.Numbers;
 import org.miscela.core.problem.Problem;
 
 /**
@@ -26,12 +27,34 @@ final class CompositionArguments {
      */
     static Object overCompositions(Card card, Object[][] composition, Object[][] temperature, RowFunction f) {
         if (card.componentCount() == 2 && !(Arguments.nonEmpty(composition) && composition[0].length == 2)) {
+            refuseAmbiguousColumn(composition);
             return Arguments.broadcast(card, new String[] {"mole fraction", "temperature"},
                     new Object[][][] {composition, temperature},
                     (k, p) -> f.at(k, CardFunctions.binary(k, p[0]), p[1]));
         }
         return overRows(card, "composition", composition, temperature, f);
     }
+
+    /**
+     * The one shape a two-component card cannot read from the card alone: a column of exactly two numbers adding up
+     * to 1 is two values of x1 by the rule for columns, but reads as one composition (x1, x2) as well, which is how a
+     * column of n cells is read on a card of n &gt; 2 components. Two numbers not adding up to 1 cannot be a
+     * composition, and a blank cell is a blank x1, so only this case is refused.
+     */
+    static void refuseAmbiguousColumn(Object[][] composition) {
+        if (composition != null && composition.length == 2 && composition[0].length == 1
+                && composition[1].length == 1 && composition[0][0] instanceof Double
+                && composition[1][0] instanceof Double) {
+            double a = (Double) composition[0][0];
+            double b = (Double) composition[1][0];
+            if (Math.abs(a + b - 1.0) <= SUM_TOLERANCE) {
+                throw Problem.COMPOSITION_AMBIGUOUS.raise(Numbers.show(a), Numbers.show(b));
+            }
+        }
+    }
+
+    /** The tolerance within which mole fractions must sum to 1 (as COMPOSITION_SUM states). */
+    private static final double SUM_TOLERANCE = 1e-6;
 
     /**
      * Evaluates f over rows of n values, one per component in card order: a row or a column of n cells is one row
@@ -104,9 +127,22 @@ final class CompositionArguments {
      */
     static Object overValueLines(Card card, String what, Object[][] grid, Object[][] temperature,
             java.util.function.DoubleFunction<double[]> expand, boolean scalarGivesFirst, LineFunction f) {
+        return overValueLines(card, what, grid, temperature, expand, scalarGivesFirst, -1, f);
+    }
+
+    /**
+     * As {@link #overValueLines(Card, String, Object[][], Object[][], java.util.function.DoubleFunction, boolean,
+     * LineFunction)}, but when {@code pick} is a component's index (not -1) each line answers with that component's
+     * value alone: one number for one line, a column for a block.
+     */
+    static Object overValueLines(Card card, String what, Object[][] grid, Object[][] temperature,
+            java.util.function.DoubleFunction<double[]> expand, boolean scalarGivesFirst, int pick, LineFunction f) {
         if (card.componentCount() == 2 && Arguments.nonEmpty(grid) && grid.length == 1 && grid[0].length == 1) {
             double v = Arguments.required(what, grid[0][0]);
             double[] result = f.at(expand.apply(v), Arguments.single("temperature", temperature));
+            if (pick >= 0) {
+                return Arguments.finite(result[pick]);
+            }
             return scalarGivesFirst ? Arguments.finite(result[0]) : row(result);
         }
         boolean column = Arguments.nonEmpty(grid) && grid[0].length == 1 && grid.length == card.componentCount()
@@ -129,6 +165,9 @@ final class CompositionArguments {
                         cell);
             }
             double[] result = f.at(values, Arguments.required("temperature", temperatures[r]));
+            if (pick >= 0) {
+                result = new double[] {result[pick]};
+            }
             out[r] = new Object[result.length];
             for (int k = 0; k < result.length; k++) {
                 out[r][k] = Arguments.finite(result[k]);
@@ -143,6 +182,9 @@ final class CompositionArguments {
                 out[r] = new Object[width];
                 java.util.Arrays.fill(out[r], "");
             }
+        }
+        if (lines.length == 1 && pick >= 0) {
+            return out[0][0];
         }
         if (lines.length == 1 && column) {
             Object[][] transposed = new Object[width][1];
@@ -175,6 +217,25 @@ final class CompositionArguments {
             v[k] = Arguments.isBlank(lines[0][k]) ? Double.NaN : Arguments.required(what, lines[0][k]);
         }
         return v;
+    }
+
+    /**
+     * One line of per-component results shaped as the argument it answers was: a column when {@code given} was a
+     * column of n cells (n &gt; 1), a row otherwise; or, when {@code pick} is a component's index, that value alone.
+     */
+    static Object perComponent(Card card, Object[][] given, double[] values, int pick) {
+        if (pick >= 0) {
+            return Arguments.finite(values[pick]);
+        }
+        int n = card.componentCount();
+        if (n > 1 && Arguments.nonEmpty(given) && given.length == n && given[0].length == 1) {
+            Object[][] out = new Object[values.length][1];
+            for (int k = 0; k < values.length; k++) {
+                out[k][0] = Arguments.finite(values[k]);
+            }
+            return new Any(Arguments.GRID, out);
+        }
+        return row(values);
     }
 
     /** A row of results as Calc's array result. */

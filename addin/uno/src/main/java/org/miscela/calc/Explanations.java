@@ -98,13 +98,14 @@ final class Explanations {
         add("leastSquares", (a, p) -> a.leastSquares(r(p[0]), r(p[1]), p[2], p[3]));
         add("uncertainty", (a, p) -> a.uncertainty(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
         add("convertComposition",
-            (a, p) -> a.convertComposition(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5], p[6], p[7]));
+            (a, p) -> a.convertComposition(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5], p[6], p[7],
+                p[8]));
         add("batchTotals", (a, p) -> a.batchTotals(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5], p[6],
                 p[7]));
         add("recipe", (a, p) -> a.recipe(r(p[0]), r(p[1]), r(p[2]), r(p[3]), r(p[4]), r(p[5]), p[6], p[7],
-                p[8], p[9]));
+                p[8], p[9], p[10]));
         add("adjustBatch", (a, p) -> a.adjustBatch(r(p[0]), r(p[1]), r(p[2]), r(p[3]), r(p[4]), r(p[5]), p[6],
-                p[7], p[8], p[9], p[10], p[11], p[12]));
+                p[7], p[8], p[9], p[10], p[11], p[12], p[13]));
         add("additionVolume",
             (a, p) -> a.additionVolume(r(p[0]), r(p[1]), r(p[2]), r(p[3]), r(p[4]), r(p[5]), p[6], p[7],
                 p[8], p[9]));

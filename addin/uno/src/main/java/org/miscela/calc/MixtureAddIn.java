@@ -303,10 +303,11 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
 
     @Override
     public Object convertComposition(Object[][] card, Object[][] values, Object[][] from, Object[][] to,
-            Object temperature, Object targetTemperature, Object balance, Object extrapolate)
+            Object temperature, Object targetTemperature, Object balance, Object extrapolate, Object component)
             throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
+            int pick = Arguments.optionalComponent(c, component, -1);
             int b = Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE);
             double t = Arguments.optionalNumber("temperature", temperature);
             double tTo = Arguments.optionalNumber("to temperature", targetTemperature);
@@ -316,7 +317,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Extrapolation e = Arguments.extrapolation(extrapolate);
             // Each basis carries its own temperature, so the lines need none of their own (0 is never read).
             return CompositionArguments.overValueLines(c, "values", values, new Object[][] {{0.0}},
-                    v -> BlendFunctions.binary(c, v, in), true,
+                    v -> BlendFunctions.binary(c, v, in), true, pick,
                     (v, unused) -> BlendFunctions.convert(c, v, in, out, e));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "convertComposition");
@@ -344,9 +345,10 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     @Override
     public Object recipe(Object[][] card, Object[][] quantity, Object[][] unit, Object[][] composition,
             Object[][] basis, Object[][] temperature, Object storageTemperatures, Object resultUnit, Object balance,
-            Object extrapolate) throws IllegalArgumentException {
+            Object extrapolate, Object component) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
+            int pick = Arguments.optionalComponent(c, component, -1);
             double q = Arguments.number("quantity", Arguments.value(quantity));
             String u = Arguments.text("unit", Arguments.value(unit), null);
             double t = Arguments.number("temperature", Arguments.value(temperature));
@@ -356,7 +358,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             String ru = Arguments.text("result unit", resultUnit, null);
             Extrapolation e = Arguments.extrapolation(extrapolate);
             return CompositionArguments.overValueLines(c, "composition", composition, new Object[][] {{t}},
-                    v -> BlendFunctions.binary(c, v, in), false,
+                    v -> BlendFunctions.binary(c, v, in), false, pick,
                     (v, at) -> BlendFunctions.recipe(c, q, u, at, v, in, storage, ru, e));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "recipe");
@@ -366,9 +368,15 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     @Override
     public Object adjustBatch(Object[][] card, Object[][] amounts, Object[][] unit, Object[][] target,
             Object[][] basis, Object[][] temperature, Object mode, Object limit, Object limitUnit, Object result,
-            Object resultUnit, Object balance, Object extrapolate) throws IllegalArgumentException {
+            Object resultUnit, Object balance, Object extrapolate, Object component) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
+            int pick = Arguments.optionalComponent(c, component, -1);
+            String what = Arguments.text("result", result, null);
+            if (pick >= 0 && what != null && !what.trim().equalsIgnoreCase("additions")) {
+                // one value for the whole batch: refused before the batch is worked out
+                throw Problem.COMPONENT_NOT_HERE.raise(what);
+            }
             double t = Arguments.number("temperature", Arguments.value(temperature));
             CompositionBasis in = BlendFunctions.basis(c, Arguments.text("basis", Arguments.value(basis), ""), t,
                     Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE));
@@ -382,7 +390,10 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
                     Arguments.text("mode", mode, null), Arguments.optionalNumber("limit", limit),
                     Arguments.text("limit unit", limitUnit, null), Arguments.text("result", result, null),
                     Arguments.text("result unit", resultUnit, null), Arguments.extrapolation(extrapolate));
-            return r instanceof double[] ? CompositionArguments.row((double[]) r)
+            if (pick >= 0 && !(r instanceof double[])) {
+                throw Problem.COMPONENT_NOT_HERE.raise(Arguments.text("result", result, "additions"));
+            }
+            return r instanceof double[] ? CompositionArguments.perComponent(c, amounts, (double[]) r, pick)
                     : r instanceof Double ? Arguments.finite((Double) r) : r;
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "adjustBatch");

@@ -294,7 +294,7 @@ final class FuzzCall {
                 case "convertComposition": {
                     Object from = basisWord();
                     a = new Object[] {basisValues(from), from, basisWord(), temperatureOrVoid(),
-                        r.nextBoolean() ? Any.VOID : temperatureValue(), balance(), extrapolate()};
+                        r.nextBoolean() ? Any.VOID : temperatureValue(), balance(), extrapolate(), pickedComponent()};
                     break;
                 }
                 case "batchTotals": {
@@ -307,18 +307,21 @@ final class FuzzCall {
                 case "recipe": {
                     Object basis = basisWord();
                     a = new Object[] {quantity(), amountUnit(), basisValues(basis), basis, temperatureValue(),
-                        storageTemperatures(), r.nextBoolean() ? Any.VOID : amountUnit(), balance(), extrapolate()};
+                        storageTemperatures(), r.nextBoolean() ? Any.VOID : amountUnit(), balance(), extrapolate(),
+                        pickedComponent()};
                     break;
                 }
                 case "adjustBatch": {
                     Object basis = basisWord();
                     Object[][] batch = amounts();
+                    Object what = pick(Any.VOID, "additions", "volume", "summary", clean ? "summary" : "all");
                     a = new Object[] {batch.length > 1 && r.nextBoolean() ? new Object[][] {batch[0]} : batch,
                         amountUnit(), basisValues(basis), basis, temperatureValue(),
                         pick(Any.VOID, "least", "within", "make up", clean ? "least" : "most"),
-                        r.nextBoolean() ? Any.VOID : quantity(), r.nextBoolean() ? Any.VOID : amountUnit(),
-                        pick(Any.VOID, "additions", "volume", "summary", clean ? "summary" : "all"),
-                        r.nextBoolean() ? Any.VOID : amountUnit(), balance(), extrapolate()};
+                        r.nextBoolean() ? Any.VOID : quantity(), r.nextBoolean() ? Any.VOID : amountUnit(), what,
+                        r.nextBoolean() ? Any.VOID : amountUnit(), balance(), extrapolate(),
+                        // a clean call names a component only where the result has one value per component
+                        clean && !(what == Any.VOID || "additions".equals(what)) ? Any.VOID : pickedComponent()};
                     break;
                 }
                 case "additionVolume": {
@@ -393,6 +396,11 @@ final class FuzzCall {
             }
             return pick(1.0, 0.0, Double.NaN, "TRUE", "", new Any(Type.BOOLEAN, Boolean.TRUE),
                     new Object[][] {{1.0}}, -2.5);
+        }
+
+        /** The per-component results' trailing component: mostly left out, otherwise as any component argument. */
+        Object pickedComponent() {
+            return r.nextInt(3) == 0 ? component() : Any.VOID;
         }
 
         Object component() {

@@ -199,7 +199,7 @@ class FuzzFindingsTest {
         IllegalArgumentException adjust = assertThrows(IllegalArgumentException.class, () -> addIn.adjustBatch(card,
                 range(row(10.0, 10.0)), one("kmol"), range(row(0.4, 0.6)), one("mole fraction"), one(300.0), Any.VOID,
                 Any.VOID,
-                Any.VOID, "volume", Any.VOID, Any.VOID, Any.VOID));
+                Any.VOID, "volume", Any.VOID, Any.VOID, Any.VOID, Any.VOID));
         assertEquals("Problem.NON_PHYSICAL", Catalogue.entryOf(adjust.getMessage()), adjust.getMessage());
         Object[][] ordinary = range(heatCard().toArray(new Object[0][]));
         assertTrue(Double.isFinite((Double) addIn.additionVolume(ordinary, range(row(10.0, 10.0)), one("kmol"),
@@ -224,7 +224,7 @@ class FuzzFindingsTest {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> addIn.adjustBatch(card,
                 range(row(1.0, 1.0)), one("mol"), range(row(0.05, 0.95)), one("mole fraction"), one(300.0), "make up",
                 10.0, "mL",
-                Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+                Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID));
         assertEquals("Problem.LIMIT_UNREACHABLE", Catalogue.entryOf(e.getMessage()), e.getMessage());
     }
 

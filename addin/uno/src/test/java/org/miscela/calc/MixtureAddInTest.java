@@ -350,18 +350,19 @@ class MixtureAddInTest {
         assertEquals((Double) addIn.batchTotals(CARD, new Object[][] {{50 * kEthanol, 50 * kWater}}, one("g"), one(20.0),
                 Any.VOID, "mL", Any.VOID, Any.VOID), volume, 1e-9);
         Object[][] recipe = (Object[][]) ((Any) addIn.recipe(CARD, one(1.0), one("kg"), one(0.5), one("mass fraction"), one(20.0),
-                Any.VOID, "kg air", Any.VOID, Any.VOID)).getObject();
+                Any.VOID, "kg air", Any.VOID, Any.VOID, Any.VOID)).getObject();
         assertEquals(0.5 / kEthanol, (Double) recipe[0][0], 1e-12);
         assertEquals(0.5 / kWater, (Double) recipe[0][1], 1e-12);
         Object[][] added = (Object[][]) ((Any) addIn.adjustBatch(CARD, new Object[][] {{500.0, 500.0}}, one("g air"),
-                one(0.4), one("mass fraction"), one(20.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID, "g air", Any.VOID, Any.VOID))
+                one(0.4), one("mass fraction"), one(20.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID, "g air", Any.VOID, Any.VOID,
+                Any.VOID))
                 .getObject();
         double water = 500 * kEthanol / 0.4 - 500 * kEthanol - 500 * kWater;
         assertEquals(water / kWater, (Double) added[0][1], 1e-9);
         // a gallon and a pound: 1 US gal of 40 %vol holds 0.4 gal of ethanol at 20 °C (definition of %vol)
         Object[][] gallons = (Object[][]) ((Any) addIn.recipe(CARD, one(1.0), one("gal"), one(40.0), one("%vol"), one(20.0), 20.0,
                 "US gal",
-                Any.VOID, Any.VOID)).getObject();
+                Any.VOID, Any.VOID, Any.VOID)).getObject();
         assertEquals(0.4, (Double) gallons[0][0], 1e-12);
         IllegalArgumentException light = assertThrows(IllegalArgumentException.class, () -> addIn.batchTotals(
                 TestCards.cells("invented-lighter-than-air.tsv"), batch, one("kg air"), one(20.0), Any.VOID, Any.VOID,

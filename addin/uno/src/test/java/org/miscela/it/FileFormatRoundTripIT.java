@@ -69,6 +69,8 @@ class FileFormatRoundTripIT {
         "=MIX.FROMDENSITY(card;913.771;20;1;\"mass fraction\")",
         "=MIX.ADDVOLUME(card;{50;50};\"g\";\"ethanol\";10;20;;\"mL\")",
         "=MIX.INFO()",
+        // the trailing component argument of a per-component result
+        "=MIX.RECIPE(card;1;\"L\";40;\"%vol\";20;20;\"mL\";;;\"water\")",
         "=A1*1000-A2",
     };
 
@@ -77,6 +79,8 @@ class FileFormatRoundTripIT {
         {new int[] {2, 0, 2, 4}, "=MIX.DENSITY(card;B1:B5;20)"},
         {new int[] {4, 0, 5, 0}, "=MIX.RECIPE(card;1;\"L\";40;\"%vol\";20;20;\"mL\")"},
         {new int[] {4, 2, 5, 7}, "=MIX.TRACE(card;0.3;20)"},
+        // a per-component result down a column, for a composition given as a column
+        {new int[] {9, 0, 9, 1}, "=MIX.RECIPE(card;1;\"kg\";{0.4|0.6};\"mass fraction\";20)"},
         {new int[] {7, 0, 7, 1}, "=MIX.FITEXCESS({0.2|0.4|0.6|0.8};{-0.736|-1.008|-0.912|-0.544};1)"},
     };
 

@@ -25,9 +25,11 @@ public final class FunctionCatalog {
     private static final ArgumentInfo CARD = range("card", "card",
             "The named range holding the mixture's card: labels in the first column, values to their right.");
     private static final ArgumentInfo MOLE_FRACTION = range("moleFraction", "x",
-            "The mole fractions of all components in card order, as a row or column, or a block with one "
-                    + "composition per row. For a two-component card, x1 alone, or a range of x1 values. A block gives "
-                    + "a column of results.");
+            "Mole fractions in card order (a row or column), a block with one composition per row, or x1 alone on a "
+                    + "two-component card. On a two-component card a row of two cells, or a block two columns wide, "
+                    + "holds compositions (x1, x2); any other single row or column holds values of x1, one result "
+                    + "each, except a column of two cells adding up to 1, which could be either and is refused. A "
+                    + "block gives a column of results.");
     private static final ArgumentInfo TEMPERATURE = range("temperature", "temperature",
             "Temperature in the card's unit: one value, or one per composition (a column for a block, the same "
                     + "shape for a range of x1).");
@@ -41,6 +43,14 @@ public final class FunctionCatalog {
             "Temperature in the card's temperature unit (one value).");
     private static final ArgumentInfo COMPONENT = value("component", "component",
             "The component: its number on the card (1 for the first) or its name as written on the card.");
+    /** Per-component results: one component's value alone, which a column of cells can show (Calc repeats a row). */
+    private static final ArgumentInfo PICK = optional("component", "component",
+            "One component's value alone, by its number on the card or its name (left out: one value per component). "
+                    + "Down a column give one formula per component: Calc repeats the first value of a row result "
+                    + "entered down a column.");
+    private static final String LAYOUT = " Several values come out as a row when the composition was given as a row "
+            + "or as a lone number, as a column when it was a column, and as one row per line for a block; the "
+            + "component argument gives one value alone.";
     private static final ArgumentInfo AMOUNTS = range("amounts", "amounts",
             "Amount of each component in card order, as a row or column (one batch), or a block with one batch "
                     + "per row. A block gives a column of results.");
@@ -131,6 +141,10 @@ public final class FunctionCatalog {
 
     // --- the problems functions report, by kind (card problems come on top for every function but the fits)
     private static final List<Problem> COMPOSITION_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
+            Problem.ARG_SHAPE, Problem.NOT_BINARY, Problem.MOLE_FRACTION_OUTSIDE_UNIT, Problem.COMPOSITION_NEGATIVE,
+            Problem.COMPOSITION_SUM, Problem.COMPOSITION_SHAPE, Problem.COMPOSITION_AMBIGUOUS);
+    /** One composition (MIX.TRACE): a column of n cells is one composition on any card, so nothing is ambiguous. */
+    private static final List<Problem> ONE_COMPOSITION_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
             Problem.ARG_SHAPE, Problem.NOT_BINARY, Problem.MOLE_FRACTION_OUTSIDE_UNIT, Problem.COMPOSITION_NEGATIVE,
             Problem.COMPOSITION_SUM, Problem.COMPOSITION_SHAPE);
     private static final List<Problem> POINT_PROBLEMS = list(Problem.ARG_NOT_FLAG, Problem.BELOW_ABSOLUTE_ZERO,
@@ -278,7 +292,7 @@ public final class FunctionCatalog {
                     CARD, MOLE_FRACTION_ONE, TEMPERATURE_ONE, optional("quantity", "property",
                             "\"volume\" (left out) or \"enthalpy\": which of the card's properties to "
                                     + "trace."), EXTRAPOLATE)
-                    .shows("card").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, list(Problem.NO_ENTHALPY, Problem.UNKNOWN_PROPERTY, Problem.ARG_NOT_SINGLE))),
+                    .shows("card").refuses(union(ONE_COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, list(Problem.NO_ENTHALPY, Problem.UNKNOWN_PROPERTY, Problem.ARG_NOT_SINGLE))),
             new FunctionInfo("fitExcessVolume", "MIX.FITEXCESS",
                     "Redlich–Kister coefficients fitted to excess volumes (or their statistics)",
                     "Redlich–Kister coefficients fitted by least squares to excess volumes, or the fit's standard "
@@ -348,7 +362,8 @@ public final class FunctionCatalog {
                     "A composition on one basis written on another: mole, mass or volume fraction, %vol, mol/L, g/L "
                             + "or mol/kg. Volume fractions are of the unmixed liquids; %vol is the strength, mol/L the "
                             + "molarity, g/L the mass concentration and mol/kg the molality (per kg of the balance "
-                            + "component).",
+                            + "component). A lone number on a two-component card gives the first component's value "
+                            + "(or the one the component argument names)." + LAYOUT,
                     "x_k ↔ w_k = x_k M_k/Σ x M; φ_k = x_k V_k*(T)/Σ x V*; %vol_k = 100 x_k V_k*(T)/V_m(T); "
                             + "c_k = x_k/V_m(T); ρ_k = x_k M_k/V_m(T); b_k = x_k/(x_s M_s); concentrations read back by "
                             + "Brent's method on the balance's mole fraction",
@@ -362,7 +377,7 @@ public final class FunctionCatalog {
                             + "unless the next argument gives one, in the card's unit. Needed for volume fraction, "
                             + "%vol, mol/L and g/L."),
                     optional("targetTemperature", "to temperature", "The temperature of the to basis."),
-                    BALANCE, EXTRAPOLATE)
+                    BALANCE, EXTRAPOLATE, PICK)
                     .shows("57.889").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
             new FunctionInfo("batchTotals", "MIX.BATCH",
                     "volume, mass, moles, density or contraction of a batch made from amounts",
@@ -381,9 +396,9 @@ public final class FunctionCatalog {
             new FunctionInfo("recipe", "MIX.RECIPE",
                     "what to charge of each component for a target quantity and composition",
                     "What to charge of each component to make a quantity (a volume at a temperature, a mass or moles) "
-                            + "of a target composition. The result is a row of amounts in card order: masses in kg "
+                            + "of a target composition. The result is one amount per component in card order: masses in kg "
                             + "unless another unit is asked for (a volume unit gives each pure liquid's volume at its "
-                            + "storage temperature).",
+                            + "storage temperature)." + LAYOUT,
                     "N = Q (moles), Q/Σ x M (mass) or V/V_m(x, T) (volume); n_k = N·x_k; m_k = n_k M_k; "
                             + "V_k = n_k V_k*(T_k)",
                     "=INDEX(MIX.RECIPE(card; 1; \"L\"; 40; \"%vol\"; 20; 20; \"mL\"); 1; 1)",
@@ -397,14 +412,15 @@ public final class FunctionCatalog {
                     value("basis", "basis", BASES),
                     value("temperature", "temperature", "The temperature of the quantity (when a volume) and of "
                             + "the basis, in the card's unit."),
-                    STORAGE_T, RESULT_UNIT, BALANCE, EXTRAPOLATE)
+                    STORAGE_T, RESULT_UNIT, BALANCE, EXTRAPOLATE, PICK)
                     .shows("400.00").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
             new FunctionInfo("adjustBatch", "MIX.ADJUST",
                     "what to add to an existing batch to reach a target composition",
                     "How much of each component to add to an existing batch to reach a target composition, or the "
                             + "resulting volume, or a sentence saying whether the target is reached. The additions "
                             + "are the least ones, those giving the closest composition within a limit, or those "
-                            + "making up to a final quantity.",
+                            + "making up to a final quantity. The additions come out as a row, or as a column when "
+                            + "the batch was given as a column; the component argument gives one addition alone.",
                     "n'_k = n_k + a_k, a_k ≥ 0; least: N' = max_k n_k/x_k; otherwise the composition closest to the "
                             + "target in mole fraction (least squares) at the limit's total",
                     "=INDEX(MIX.ADJUST(card; {500; 500}; \"g\"; 0.4; \"mass fraction\"; 20); 1; 2)",
@@ -421,8 +437,9 @@ public final class FunctionCatalog {
                             + "mass weighed in air, is at the temperature)."),
                     optional("result", "result", "\"additions\" (left out), \"volume\" (of the batch "
                             + "after the additions) or \"summary\"."),
-                    RESULT_UNIT, BALANCE, EXTRAPOLATE)
-                    .shows("0.2500").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
+                    RESULT_UNIT, BALANCE, EXTRAPOLATE, PICK)
+                    .shows("0.2500").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS,
+                            list(Problem.COMPONENT_NOT_HERE))),
             new FunctionInfo("additionVolume", "MIX.ADDVOLUME",
                     "volume change on adding a component, exact and to first order",
                     "The volume change of a batch when an amount of one component is added: exact, to first order, or "
@@ -516,7 +533,7 @@ public final class FunctionCatalog {
                     CARD, MOLE_FRACTION)
                     .shows("26.431").refuses(list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER, Problem.NOT_BINARY,
                             Problem.MOLE_FRACTION_OUTSIDE_UNIT, Problem.COMPOSITION_NEGATIVE,
-                            Problem.COMPOSITION_SUM, Problem.COMPOSITION_SHAPE))));
+                            Problem.COMPOSITION_SUM, Problem.COMPOSITION_SHAPE, Problem.COMPOSITION_AMBIGUOUS))));
 
     private FunctionCatalog() {
     }

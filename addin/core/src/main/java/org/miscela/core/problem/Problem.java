@@ -107,6 +107,8 @@ public enum Problem {
     COMPOSITION_NEGATIVE(CALL, "The mole fraction of %s is %s; mole fractions cannot be negative."),
     COMPOSITION_SUM(CALL, "The mole fractions sum to %s; they must sum to 1 (within 1e-6)."),
     COMPOSITION_SHAPE(CALL, "The composition range is %d×%d, but the card has %d components: give a row or a column of %d cells, or a block of %d columns with one composition per row."),
+    COMPOSITION_AMBIGUOUS(CALL, "On a two-component card a column of two cells is read as two values of x1, but %s and %s add up to 1, so they could also be one composition (x1, x2): for one composition give x1 alone or a row of two cells; for two values of x1 give each its own formula."),
+    COMPONENT_NOT_HERE(CALL, "A component is given, but the result \"%s\" is one value for the whole batch, not one per component; leave the component out, or ask for \"additions\"."),
     AMOUNT_NEGATIVE(CALL, "The amount of %s is %s; amounts cannot be negative."),
     AMOUNT_ZERO(CALL, "The amounts add up to nothing; give a positive amount of at least one component."),
     AMOUNT_TOO_LARGE(CALL, "The amounts come to more moles than a number can hold (over 1.8e308 in all); check the amounts and their basis."),
