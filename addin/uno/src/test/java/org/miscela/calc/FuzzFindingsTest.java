@@ -293,17 +293,19 @@ class FuzzFindingsTest {
     }
 
     /**
-     * Found by the adapter fuzzer once tonnes became a unit: MIX.ADJUST "within" a limit on an extreme card (seed
-     * 1437, call seed -158) doubled the make-up search's upper end to infinity, and the solver's own exception
+     * Found by the adapter fuzzer once tonnes became a unit: MIX.ADJUST "within" a limit on an extreme card (fuzz card
+     * EXTREME 1437, the call's arguments as the fuzzer made them) doubled the make-up search's upper end to infinity, and the solver's own exception
      * ("endpoints do not specify an interval: [∞, ∞]") escaped as an unexpected failure. Now the limit is refused as
      * unreachable, in words.
      */
     @Test
     void aMakeUpSearchThatRunsToInfinityIsRefusedInWords() {
-        FuzzCall call = FuzzCall.of(org.miscela.core.catalog.FunctionCatalog.byMethod("adjustBatch"),
-                org.miscela.core.card.FuzzCards.of(org.miscela.core.card.FuzzCards.Kind.EXTREME, 1437), -158);
+        Object[][] card = org.miscela.core.card.FuzzCards.of(org.miscela.core.card.FuzzCards.Kind.EXTREME, 1437).cells;
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> call.invoke(new MixtureAddIn()));
+                () -> new MixtureAddIn().adjustBatch(card, new Object[][] {{86.20062305796648, 32.375755581843976}},
+                        new Object[][] {{"tonne"}}, new Object[][] {{1.0E-15}}, new Object[][] {{"volume fraction"}},
+                        new Object[][] {{0.43021338832899825}}, "within", 487.013214977023, "t", "summary", Any.VOID,
+                        1.0, Boolean.TRUE, Any.VOID));
         assertEquals("Problem.LIMIT_UNREACHABLE", Catalogue.entryOf(e.getMessage()), e.getMessage());
     }
 }
