@@ -27,7 +27,6 @@ public final class Card {
     private final boolean extrapolationAllowed;
     private final boolean missingPairsIdeal;
     private final Mixture mixture;
-    private final BinaryMixture binary;
 
     /** A volumetric card combined by Muggianu's model; {@code excessVolume[i][j]} for i &lt; j, written i then j. */
     Card(String title, String source, Units units, List<Component> components, RedlichKister[][] excessVolume,
@@ -53,7 +52,6 @@ public final class Card {
         this.extrapolationAllowed = extrapolationAllowed;
         this.missingPairsIdeal = missingPairsIdeal;
         this.mixture = new Mixture(this);
-        this.binary = components.size() == 2 ? new BinaryMixture(mixture) : null;
     }
 
     public String title() {
@@ -126,14 +124,6 @@ public final class Card {
     /** Whether this evaluation may leave the validity range. */
     public boolean mayExtrapolate(Extrapolation e) {
         return e == Extrapolation.ALLOW || (e == Extrapolation.AS_CARD && extrapolationAllowed);
-    }
-
-    /** The binary calculator; fails with a readable message when the card does not have exactly two components. */
-    public BinaryMixture binary() {
-        if (binary == null) {
-            throw Problem.NOT_BINARY.raise(components.size());
-        }
-        return binary;
     }
 
     /** Component names joined for messages. */

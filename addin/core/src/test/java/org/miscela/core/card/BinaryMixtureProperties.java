@@ -67,7 +67,7 @@ class BinaryMixtureProperties {
      */
     static double scale(Card card, double t) {
         RedlichKister rk = card.excessVolume(0, 1);
-        double a = card.binary().pureMolarVolume(0, t) + card.binary().pureMolarVolume(1, t);
+        double a = BinaryMixture.of(card).pureMolarVolume(0, t) + BinaryMixture.of(card).pureMolarVolume(1, t);
         for (int k = 0; k <= rk.order(); k++) {
             a += (k + 1) * Math.abs(rk.coefficientAt(k, t));
         }
@@ -84,7 +84,7 @@ class BinaryMixtureProperties {
     @Property(tries = 1000)
     void partialsAreDerivativesOfTheExtensiveVolume(@ForAll("cards") Card card,
             @ForAll @DoubleRange(min = 0, max = 1) double x1, @ForAll @DoubleRange(min = 260, max = 340) double t) {
-        BinaryMixture m = card.binary();
+        BinaryMixture m = BinaryMixture.of(card);
         double a = scale(card, t);
         double[] x = {x1, 1 - x1};
         for (int k = 0; k < 2; k++) {
@@ -105,7 +105,7 @@ class BinaryMixtureProperties {
     @Property(tries = 2000)
     void gibbsDuhemFromNeighbouringCompositions(@ForAll("cards") Card card,
             @ForAll @DoubleRange(min = 0, max = 1) double x1, @ForAll @DoubleRange(min = 260, max = 340) double t) {
-        BinaryMixture m = card.binary();
+        BinaryMixture m = BinaryMixture.of(card);
         double delta = 0x1p-26;
         double first = x1 * (m.partialMolarVolume(0, x1 + delta, t) - m.partialMolarVolume(0, x1 - delta, t));
         double second = (1 - x1) * (m.partialMolarVolume(1, x1 + delta, t) - m.partialMolarVolume(1, x1 - delta, t));
@@ -123,7 +123,7 @@ class BinaryMixtureProperties {
     @Property(tries = 1000)
     void summabilityOfPartialsFromDifferences(@ForAll("cards") Card card,
             @ForAll @DoubleRange(min = 0, max = 1) double x1, @ForAll @DoubleRange(min = 260, max = 340) double t) {
-        BinaryMixture m = card.binary();
+        BinaryMixture m = BinaryMixture.of(card);
         double delta = 64 * PartialsFromValues.U * scale(card, t);
         double[] x = {x1, 1 - x1};
         double sum = 0;
@@ -142,7 +142,7 @@ class BinaryMixtureProperties {
     void partialSlopesMatchFiniteDifferences(@ForAll("cards") Card card,
             @ForAll @DoubleRange(min = 0.01, max = 0.99) double x1,
             @ForAll @DoubleRange(min = 260, max = 340) double t) {
-        BinaryMixture m = card.binary();
+        BinaryMixture m = BinaryMixture.of(card);
         double h = 1e-5;
         for (int k = 0; k < 2; k++) {
             double fd = (m.partialMolarVolume(k, x1 + h, t) - m.partialMolarVolume(k, x1 - h, t)) / (2 * h);
@@ -156,7 +156,7 @@ class BinaryMixtureProperties {
     void partialsAreTangentIntercepts(@ForAll("cards") Card card,
             @ForAll @DoubleRange(min = 0.01, max = 0.99) double x1,
             @ForAll @DoubleRange(min = 260, max = 340) double t) {
-        BinaryMixture m = card.binary();
+        BinaryMixture m = BinaryMixture.of(card);
         double h = 1e-5;
         double fd = (m.molarVolume(x1 + h, t) - m.molarVolume(x1 - h, t)) / (2 * h);
         double diff = m.partialMolarVolume(0, x1, t) - m.partialMolarVolume(1, x1, t);
@@ -166,8 +166,8 @@ class BinaryMixtureProperties {
     @Property(tries = 1000)
     void swappingComponentsChangesNothing(@ForAll("cards") Card card,
             @ForAll @DoubleRange(min = 0, max = 1) double x1, @ForAll @DoubleRange(min = 260, max = 340) double t) {
-        BinaryMixture m = card.binary();
-        BinaryMixture s = swapped(card).binary();
+        BinaryMixture m = BinaryMixture.of(card);
+        BinaryMixture s = BinaryMixture.of(swapped(card));
         double x2 = 1 - x1;
         double tol = 1e-12 * (1 + Math.abs(m.molarVolume(x1, t)));
         assertEquals(m.excessMolarVolume(x1, t), s.excessMolarVolume(x2, t), tol);
@@ -185,7 +185,7 @@ class BinaryMixtureProperties {
     @Property(tries = 500)
     void excessVolumeAndDensityFollowTheirDefinitions(@ForAll("cards") Card card,
             @ForAll @DoubleRange(min = 0, max = 1) double x1, @ForAll @DoubleRange(min = 260, max = 340) double t) {
-        BinaryMixture m = card.binary();
+        BinaryMixture m = BinaryMixture.of(card);
         double a = scale(card, t);
         assertEquals(card.excessVolume(0, 1).value(x1, t), m.excessMolarVolume(x1, t), 64 * PartialsFromValues.U * a);
         double mass = x1 * card.components().get(0).molarMass() + (1 - x1) * card.components().get(1).molarMass();
@@ -197,7 +197,7 @@ class BinaryMixtureProperties {
     /** At a pure corner the excess volume vanishes and the pure component's partial volume is its molar volume. */
     @Property(tries = 500)
     void pureCorners(@ForAll("cards") Card card, @ForAll @DoubleRange(min = 260, max = 340) double t) {
-        BinaryMixture m = card.binary();
+        BinaryMixture m = BinaryMixture.of(card);
         assertEquals(0.0, m.excessMolarVolume(0, t), 0.0);
         assertEquals(0.0, m.excessMolarVolume(1, t), 0.0);
         assertEquals(m.pureMolarVolume(0, t), m.partialMolarVolume(0, 1, t), 1e-12 * m.pureMolarVolume(0, t));
@@ -207,7 +207,7 @@ class BinaryMixtureProperties {
     /** Infinite dilution: V̄_1^E(x1 → 0) = Σ A_k (−1)^k and V̄_2^E(x1 → 1) = Σ A_k (the RK limits). */
     @Property(tries = 500)
     void infiniteDilution(@ForAll("cards") Card card, @ForAll @DoubleRange(min = 260, max = 340) double t) {
-        BinaryMixture m = card.binary();
+        BinaryMixture m = BinaryMixture.of(card);
         RedlichKister rk = card.excessVolume(0, 1);
         double alternating = 0;
         double plain = 0;

@@ -143,7 +143,7 @@ class FitFunctionsTest {
             c[k][0] = (Double) a[k][0];
         }
         RedlichKister rk = new RedlichKister(293.15, c);
-        BinaryMixture m = pure.binary();
+        BinaryMixture m = BinaryMixture.of(pure);
         double worst = 0;
         for (int i = 0; i < 200; i++) {
             double p = (i + 0.5) / 200.0;

@@ -7,6 +7,17 @@ package org.miscela.core.card;
 public final class BinaryMixture {
     private final Mixture mixture;
 
+    /**
+     * The two-component view of a card; fails with the catalogue's message when the card does not have exactly two
+     * components. A test tool: the cell functions work on any number of components through {@link Mixture}.
+     */
+    public static BinaryMixture of(Card card) {
+        if (card.componentCount() != 2) {
+            throw org.miscela.core.problem.Problem.NOT_BINARY.raise(card.componentCount());
+        }
+        return new BinaryMixture(card.mixture());
+    }
+
     BinaryMixture(Mixture mixture) {
         this.mixture = mixture;
     }
