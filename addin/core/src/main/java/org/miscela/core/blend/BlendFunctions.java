@@ -23,14 +23,31 @@ public final class BlendFunctions {
     private BlendFunctions() {
     }
 
-    /** The basis spelled {@code text}, at temperature t (card unit; NaN when it needs none), with a balance. */
+    /**
+     * The basis spelled {@code text}, at its reference temperature t (card unit), with a balance. A NaN t means the
+     * call left it out: a basis measured per volume then takes the card's basis reference temperature (20 °C unless
+     * the card states another, OIML R 22), never a working or measurement temperature.
+     */
     public static CompositionBasis basis(Card card, String text, double t, int balance) {
         CompositionBasis.Kind kind = CompositionBasis.Kind.lookup(text);
         int b = balance == DEFAULT_BALANCE ? card.componentCount() - 1 : balance;
-        if (kind.needsTemperature() && Double.isNaN(t)) {
-            throw Problem.BLANK_ARGUMENT.raise("temperature of the basis '" + kind.label() + "'");
+        double at = kind.needsTemperature() ? (Double.isNaN(t) ? card.basisReferenceTemperature() : t) : Double.NaN;
+        return CompositionBasis.of(kind, at, kind.isConcentration() ? b : -1);
+    }
+
+    /**
+     * A trace table ({@code CardFunctions.trace}) with the composition basis it was read on appended: its kind, and
+     * for a basis measured per volume the reference temperature used; {@code basis} null for mole fractions.
+     */
+    public static Object[][] traced(Card card, Object[][] trace, CompositionBasis basis) {
+        Object[][] out = java.util.Arrays.copyOf(trace, trace.length + (basis != null && basis.kind().needsTemperature()
+                ? 2 : 1));
+        out[trace.length] = new Object[] {"composition basis", basis == null ? "mole fraction" : basis.kind().label()};
+        if (basis != null && basis.kind().needsTemperature()) {
+            out[trace.length + 1] = new Object[] {"composition basis temperature ["
+                    + card.units().temperature().symbol() + "]", basis.temperature()};
         }
-        return CompositionBasis.of(kind, kind.needsTemperature() ? t : Double.NaN, kind.isConcentration() ? b : -1);
+        return out;
     }
 
     /** The full composition a single number stands for on a two-component card (see the class comment). */
@@ -43,7 +60,8 @@ public final class BlendFunctions {
             v[basis.balance() == 0 ? 1 : 0] = first;
             return v;
         }
-        return new double[] {first, 1.0 - first};
+        double whole = basis.kind().maximum();
+        return new double[] {first, whole - first};
     }
 
     /** A composition from one basis to another (each with its own temperature). */
