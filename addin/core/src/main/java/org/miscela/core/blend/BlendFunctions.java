@@ -36,18 +36,22 @@ public final class BlendFunctions {
     }
 
     /**
-     * A trace table ({@code CardFunctions.trace}) with the composition basis it was read on appended: its kind, and
-     * for a basis measured per volume the reference temperature used; {@code basis} null for mole fractions.
+     * A trace table ({@code CardFunctions.trace}) with the composition bases' rows appended: the card's basis
+     * reference temperature and where it comes from (its row, or the 20 °C default of OIML R 22), the basis the
+     * composition was read on ({@code basis} null for mole fractions) and, for a basis measured per volume, the
+     * temperature it was read at. Appended last, so a trace laid out for the rows before keeps them in place.
      */
     public static Object[][] traced(Card card, Object[][] trace, CompositionBasis basis) {
-        Object[][] out = java.util.Arrays.copyOf(trace, trace.length + (basis != null && basis.kind().needsTemperature()
-                ? 2 : 1));
-        out[trace.length] = new Object[] {"composition basis", basis == null ? "mole fraction" : basis.kind().label()};
+        java.util.List<Object[]> out = new java.util.ArrayList<>(java.util.Arrays.asList(trace));
+        String unit = card.units().temperature().symbol();
+        out.add(new Object[] {"basis reference temperature [" + unit + "]", card.basisReferenceTemperature()});
+        out.add(new Object[] {"basis reference from", card.statesBasisReference()
+                ? "the card's 'basis reference temperature' row" : "default: 20 °C (OIML R 22)"});
+        out.add(new Object[] {"composition basis", basis == null ? "mole fraction" : basis.kind().label()});
         if (basis != null && basis.kind().needsTemperature()) {
-            out[trace.length + 1] = new Object[] {"composition basis temperature ["
-                    + card.units().temperature().symbol() + "]", basis.temperature()};
+            out.add(new Object[] {"composition basis temperature [" + unit + "]", basis.temperature()});
         }
-        return out;
+        return out.toArray(new Object[0][]);
     }
 
     /** The full composition a single number stands for on a two-component card (see the class comment). */

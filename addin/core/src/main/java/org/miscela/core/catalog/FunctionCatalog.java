@@ -517,7 +517,7 @@ public final class FunctionCatalog {
                     "M = Σ_k x_k·M_k",
                     "=MIX.MOLARMASS(card; 0.3)",
                     CARD, MOLE_FRACTION, COMPOSITION_BASIS, BASIS_T)
-                    .shows("26.431").refuses(union(BLEND_PROBLEMS, list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER, Problem.NOT_BINARY,
+                    .shows("26.431").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS, list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER, Problem.NOT_BINARY,
                             Problem.MOLE_FRACTION_OUTSIDE_UNIT, Problem.COMPOSITION_NEGATIVE,
                             Problem.COMPOSITION_SUM, Problem.COMPOSITION_SHAPE)))));
 

@@ -111,9 +111,6 @@ final class Trace {
                         c == null ? "not on the card" : (Object) scaleT.fromPerKelvin(scale * c.at(kelvin), 1));
             }
         }
-        tr.add("basis reference temperature [" + tu + "]", card.basisReferenceTemperature());
-        tr.add("basis reference from", card.statesBasisReference() ? "the card's 'basis reference temperature' row"
-                : "default: 20 °C (OIML R 22)");
         return tr.rows.toArray(new Object[0][]);
     }
 
