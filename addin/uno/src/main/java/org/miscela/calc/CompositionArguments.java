@@ -26,11 +26,17 @@ final class CompositionArguments {
      * {@link #overRows}.
      */
     static Object overCompositions(Card card, Object[][] composition, Object[][] temperature, RowFunction f) {
+        return overCompositions(card, composition, temperature, v -> CardFunctions.binary(card, v), f);
+    }
+
+    /** As above, with {@code expand} turning a two-component card's lone value into its full composition. */
+    static Object overCompositions(Card card, Object[][] composition, Object[][] temperature,
+            java.util.function.DoubleFunction<double[]> expand, RowFunction f) {
         if (card.componentCount() == 2 && !(Arguments.nonEmpty(composition) && composition[0].length == 2)) {
             refuseAmbiguousColumn(composition);
             return Arguments.broadcast(card, new String[] {"mole fraction", "temperature"},
                     new Object[][][] {composition, temperature},
-                    (k, p) -> f.at(k, CardFunctions.binary(k, p[0]), p[1]));
+                    (k, p) -> f.at(k, expand.apply(p[0]), p[1]));
         }
         return overRows(card, "composition", composition, temperature, f);
     }

@@ -74,38 +74,42 @@ final class Explanations {
     }
 
     static {
-        add("excessMolarVolume", (a, p) -> a.excessMolarVolume(r(p[0]), r(p[1]), r(p[2]), p[3]));
-        add("partialMolarVolume", (a, p) -> a.partialMolarVolume(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4]));
+        add("excessMolarVolume", (a, p) -> a.excessMolarVolume(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
+        add("partialMolarVolume", (a, p) -> a.partialMolarVolume(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5],
+                p[6]));
         add("partialExcessMolarVolume", (a, p) -> a.partialExcessMolarVolume(r(p[0]), r(p[1]), r(p[2]), r(p[3]),
-                p[4]));
-        add("mixtureMolarVolume", (a, p) -> a.mixtureMolarVolume(r(p[0]), r(p[1]), r(p[2]), p[3]));
-        add("mixtureDensity", (a, p) -> a.mixtureDensity(r(p[0]), r(p[1]), r(p[2]), p[3]));
+                p[4], p[5], p[6]));
+        add("mixtureMolarVolume", (a, p) -> a.mixtureMolarVolume(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
+        add("mixtureDensity", (a, p) -> a.mixtureDensity(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
         add("pureDensity", (a, p) -> a.pureDensity(r(p[0]), r(p[1]), r(p[2]), p[3]));
         add("checkCard", (a, p) -> a.checkCard(r(p[0]), p[1]));
-        add("checkPoint", (a, p) -> a.checkPoint(r(p[0]), r(p[1]), r(p[2]), p[3]));
-        add("excessEnthalpy", (a, p) -> a.excessEnthalpy(r(p[0]), r(p[1]), r(p[2]), p[3]));
-        add("partialExcessEnthalpy", (a, p) -> a.partialExcessEnthalpy(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4]));
+        add("checkPoint", (a, p) -> a.checkPoint(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
+        add("excessEnthalpy", (a, p) -> a.excessEnthalpy(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
+        add("partialExcessEnthalpy", (a, p) -> a.partialExcessEnthalpy(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4],
+                p[5], p[6]));
         add("mixingHeat", (a, p) -> a.mixingHeat(r(p[0]), r(p[1]), r(p[2]), p[3], p[4]));
         add("additionHeat", (a, p) -> a.additionHeat(r(p[0]), r(p[1]), r(p[2]), r(p[3]), r(p[4]), p[5],
                 p[6]));
         add("adiabaticRise", (a, p) -> a.adiabaticRise(r(p[0]), r(p[1]), r(p[2]), p[3], p[4]));
-        add("insideValidity", (a, p) -> a.insideValidity(r(p[0]), r(p[1]), r(p[2])));
-        add("traceEvaluation", (a, p) -> a.traceEvaluation(r(p[0]), r(p[1]), r(p[2]), p[3], p[4]));
+        add("insideValidity", (a, p) -> a.insideValidity(r(p[0]), r(p[1]), r(p[2]), p[3], p[4]));
+        add("traceEvaluation", (a, p) -> a.traceEvaluation(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5],
+                p[6]));
         add("fitExcessVolume", (a, p) -> a.fitExcessVolume(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5], p[6],
                 p[7]));
         add("fitDensity",
             (a, p) -> a.fitDensity(r(p[0]), p[1], r(p[2]), r(p[3]), r(p[4]), r(p[5]), p[6], p[7], p[8], p[9]));
         add("leastSquares", (a, p) -> a.leastSquares(r(p[0]), r(p[1]), p[2], p[3]));
-        add("uncertainty", (a, p) -> a.uncertainty(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
+        add("uncertainty", (a, p) -> a.uncertainty(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5], p[6],
+                p[7]));
         add("convertComposition",
             (a, p) -> a.convertComposition(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5], p[6], p[7],
                 p[8]));
         add("batchTotals", (a, p) -> a.batchTotals(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5], p[6],
                 p[7]));
         add("recipe", (a, p) -> a.recipe(r(p[0]), r(p[1]), r(p[2]), r(p[3]), r(p[4]), r(p[5]), p[6], p[7],
-                p[8], p[9], p[10]));
+                p[8], p[9], p[10], p[11]));
         add("adjustBatch", (a, p) -> a.adjustBatch(r(p[0]), r(p[1]), r(p[2]), r(p[3]), r(p[4]), r(p[5]), p[6],
-                p[7], p[8], p[9], p[10], p[11], p[12], p[13]));
+                p[7], p[8], p[9], p[10], p[11], p[12], p[13], p[14]));
         add("additionVolume",
             (a, p) -> a.additionVolume(r(p[0]), r(p[1]), r(p[2]), r(p[3]), r(p[4]), r(p[5]), p[6], p[7],
                 p[8], p[9]));
@@ -115,7 +119,7 @@ final class Explanations {
             (a, p) -> a.volumeCorrection(r(p[0]), r(p[1]), r(p[2]), r(p[3]), r(p[4]), p[5], p[6], p[7],
                 p[8]));
         add("addInInfo", (a, p) -> a.addInInfo(p[0]));
-        add("mixtureMolarMass", (a, p) -> a.mixtureMolarMass(r(p[0]), r(p[1])));
+        add("mixtureMolarMass", (a, p) -> a.mixtureMolarMass(r(p[0]), r(p[1]), p[2], p[3]));
     }
 
     private Explanations() {

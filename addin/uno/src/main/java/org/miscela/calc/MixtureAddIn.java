@@ -35,13 +35,13 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     }
 
     @Override
-    public Object excessMolarVolume(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object extrapolate)
-            throws IllegalArgumentException {
+    public Object excessMolarVolume(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object extrapolate,
+            Object basis, Object basisTemperature) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return CompositionArguments.overCompositions(c, moleFraction, temperature,
-                    (k, x, t) -> CardFunctions.excessMolarVolume(k, x, t, e));
+            return BasisArguments.overCompositions(c, moleFraction, temperature, BasisArguments.basis(c, basis,
+                    basisTemperature), e, (k, x, t) -> CardFunctions.excessMolarVolume(k, x, t, e));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "excessMolarVolume");
         }
@@ -49,13 +49,14 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
 
     @Override
     public Object partialMolarVolume(Object[][] card, Object[][] component, Object[][] moleFraction,
-            Object[][] temperature, Object extrapolate) throws IllegalArgumentException {
+            Object[][] temperature, Object extrapolate,
+            Object basis, Object basisTemperature) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
             int i = Arguments.component(c, Arguments.value(component));
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return CompositionArguments.overCompositions(c, moleFraction, temperature,
-                    (k, x, t) -> CardFunctions.partialMolarVolume(k, i, x, t, e));
+            return BasisArguments.overCompositions(c, moleFraction, temperature, BasisArguments.basis(c, basis,
+                    basisTemperature), e, (k, x, t) -> CardFunctions.partialMolarVolume(k, i, x, t, e));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "partialMolarVolume");
         }
@@ -63,39 +64,40 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
 
     @Override
     public Object partialExcessMolarVolume(Object[][] card, Object[][] component, Object[][] moleFraction,
-            Object[][] temperature, Object extrapolate) throws IllegalArgumentException {
+            Object[][] temperature, Object extrapolate,
+            Object basis, Object basisTemperature) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
             int i = Arguments.component(c, Arguments.value(component));
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return CompositionArguments.overCompositions(c, moleFraction, temperature,
-                    (k, x, t) -> CardFunctions.partialExcessMolarVolume(k, i, x, t, e));
+            return BasisArguments.overCompositions(c, moleFraction, temperature, BasisArguments.basis(c, basis,
+                    basisTemperature), e, (k, x, t) -> CardFunctions.partialExcessMolarVolume(k, i, x, t, e));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "partialExcessMolarVolume");
         }
     }
 
     @Override
-    public Object mixtureMolarVolume(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object extrapolate)
-            throws IllegalArgumentException {
+    public Object mixtureMolarVolume(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object extrapolate,
+            Object basis, Object basisTemperature) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return CompositionArguments.overCompositions(c, moleFraction, temperature,
-                    (k, x, t) -> CardFunctions.molarVolume(k, x, t, e));
+            return BasisArguments.overCompositions(c, moleFraction, temperature, BasisArguments.basis(c, basis,
+                    basisTemperature), e, (k, x, t) -> CardFunctions.molarVolume(k, x, t, e));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "mixtureMolarVolume");
         }
     }
 
     @Override
-    public Object mixtureDensity(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object extrapolate)
-            throws IllegalArgumentException {
+    public Object mixtureDensity(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object extrapolate,
+            Object basis, Object basisTemperature) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return CompositionArguments.overCompositions(c, moleFraction, temperature,
-                    (k, x, t) -> CardFunctions.density(k, x, t, e));
+            return BasisArguments.overCompositions(c, moleFraction, temperature, BasisArguments.basis(c, basis,
+                    basisTemperature), e, (k, x, t) -> CardFunctions.density(k, x, t, e));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "mixtureDensity");
         }
@@ -130,24 +132,27 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     }
 
     @Override
-    public String checkPoint(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object extrapolate) {
+    public String checkPoint(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object extrapolate,
+            Object basis, Object basisTemperature) {
         try {
             Card c = Arguments.card(card);
-            return CardFunctions.check(c, CompositionArguments.singleComposition(c, "composition", moleFraction),
-                    Arguments.single("temperature", temperature), Arguments.extrapolation(extrapolate));
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return CardFunctions.check(c, BasisArguments.singleComposition(c, "composition", moleFraction,
+                    BasisArguments.basis(c, basis, basisTemperature), e),
+                    Arguments.single("temperature", temperature), e);
         } catch (RuntimeException ex) {
             return Failures.words(ex, "checkPoint");
         }
     }
 
     @Override
-    public Object excessEnthalpy(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object extrapolate)
-            throws IllegalArgumentException {
+    public Object excessEnthalpy(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object extrapolate,
+            Object basis, Object basisTemperature) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return CompositionArguments.overCompositions(c, moleFraction, temperature,
-                    (k, x, t) -> CardFunctions.excessEnthalpy(k, x, t, e));
+            return BasisArguments.overCompositions(c, moleFraction, temperature, BasisArguments.basis(c, basis,
+                    basisTemperature), e, (k, x, t) -> CardFunctions.excessEnthalpy(k, x, t, e));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "excessEnthalpy");
         }
@@ -155,13 +160,14 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
 
     @Override
     public Object partialExcessEnthalpy(Object[][] card, Object[][] component, Object[][] moleFraction,
-            Object[][] temperature, Object extrapolate) throws IllegalArgumentException {
+            Object[][] temperature, Object extrapolate,
+            Object basis, Object basisTemperature) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
             int i = Arguments.component(c, Arguments.value(component));
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return CompositionArguments.overCompositions(c, moleFraction, temperature,
-                    (k, x, t) -> CardFunctions.partialExcessEnthalpy(k, i, x, t, e));
+            return BasisArguments.overCompositions(c, moleFraction, temperature, BasisArguments.basis(c, basis,
+                    basisTemperature), e, (k, x, t) -> CardFunctions.partialExcessEnthalpy(k, i, x, t, e));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "partialExcessEnthalpy");
         }
@@ -212,11 +218,12 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     }
 
     @Override
-    public Object insideValidity(Object[][] card, Object[][] moleFraction, Object[][] temperature)
-            throws IllegalArgumentException {
+    public Object insideValidity(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object basis,
+            Object basisTemperature) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
-            return CompositionArguments.overCompositions(c, moleFraction, temperature, CardFunctions::inside);
+            return BasisArguments.overCompositions(c, moleFraction, temperature, BasisArguments.basis(c, basis,
+                    basisTemperature), Extrapolation.ALLOW, CardFunctions::inside);
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "insideValidity");
         }
@@ -224,12 +231,14 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
 
     @Override
     public Object traceEvaluation(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object quantity,
-            Object extrapolate) throws IllegalArgumentException {
+            Object extrapolate, Object basis, Object basisTemperature) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
-            return Arguments.table(CardFunctions.trace(c, CompositionArguments.singleComposition(c, "composition", moleFraction),
-                    Arguments.single("temperature", temperature), Arguments.property(quantity),
-                    Arguments.extrapolation(extrapolate)));
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            CompositionBasis b = BasisArguments.basis(c, basis, basisTemperature);
+            return Arguments.table(BlendFunctions.traced(c, CardFunctions.trace(c,
+                    BasisArguments.singleComposition(c, "composition", moleFraction, b, e),
+                    Arguments.single("temperature", temperature), Arguments.property(quantity), e), b));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "traceEvaluation");
         }
@@ -288,14 +297,15 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
 
     @Override
     public Object uncertainty(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object quantity,
-            Object component, Object extrapolate) throws IllegalArgumentException {
+            Object component, Object extrapolate,
+            Object basis, Object basisTemperature) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
             String q = Arguments.text("quantity", quantity, "density");
             int i = Arguments.unwrap(component) == null ? -1 : Arguments.component(c, component);
             Extrapolation e = Arguments.extrapolation(extrapolate);
-            return CompositionArguments.overCompositions(c, moleFraction, temperature,
-                    (k, x, t) -> CardFunctions.uncertainty(k, q, i, x, t, e));
+            return BasisArguments.overCompositions(c, moleFraction, temperature, BasisArguments.basis(c, basis,
+                    basisTemperature), e, (k, x, t) -> CardFunctions.uncertainty(k, q, i, x, t, e));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "uncertainty");
         }
@@ -345,14 +355,16 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     @Override
     public Object recipe(Object[][] card, Object[][] quantity, Object[][] unit, Object[][] composition,
             Object[][] basis, Object[][] temperature, Object storageTemperatures, Object resultUnit, Object balance,
-            Object extrapolate, Object component) throws IllegalArgumentException {
+            Object extrapolate, Object component, Object basisTemperature)
+            throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
             int pick = Arguments.optionalComponent(c, component, -1);
             double q = Arguments.number("quantity", Arguments.value(quantity));
             String u = Arguments.text("unit", Arguments.value(unit), null);
             double t = Arguments.number("temperature", Arguments.value(temperature));
-            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("basis", Arguments.value(basis), ""), t,
+            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("basis", Arguments.value(basis), ""),
+                    Arguments.optionalNumber("basis temperature", basisTemperature),
                     Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE));
             double[] storage = CompositionArguments.optionalLine(c, "storage temperatures", storageTemperatures);
             String ru = Arguments.text("result unit", resultUnit, null);
@@ -368,7 +380,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     @Override
     public Object adjustBatch(Object[][] card, Object[][] amounts, Object[][] unit, Object[][] target,
             Object[][] basis, Object[][] temperature, Object mode, Object limit, Object limitUnit, Object result,
-            Object resultUnit, Object balance, Object extrapolate, Object component) throws IllegalArgumentException {
+            Object resultUnit, Object balance, Object extrapolate, Object component, Object basisTemperature)
+            throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
             int pick = Arguments.optionalComponent(c, component, -1);
@@ -378,7 +391,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
                 throw Problem.COMPONENT_NOT_HERE.raise(what);
             }
             double t = Arguments.number("temperature", Arguments.value(temperature));
-            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("basis", Arguments.value(basis), ""), t,
+            CompositionBasis in = BlendFunctions.basis(c, Arguments.text("basis", Arguments.value(basis), ""),
+                    Arguments.optionalNumber("basis temperature", basisTemperature),
                     Arguments.optionalComponent(c, balance, BlendFunctions.DEFAULT_BALANCE));
             double[] batch = CompositionArguments.singleComposition(c, "amounts", amounts);
             double[] goal = CompositionArguments.optionalLine(c, "target", target);
@@ -435,8 +449,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             Extrapolation e = Arguments.extrapolation(extrapolate);
             return Arguments.broadcast(c, new String[] {"density", "temperature"},
                     new Object[][][] {density, temperature}, (card1, p) -> BlendFunctions.fromDensity(card1, p[0],
-                            p[1], k, ref, lo, hi, BlendFunctions.basis(card1, basisText, Double.isNaN(tb) ? p[1] : tb,
-                                    b), e));
+                            p[1], k, ref, lo, hi, BlendFunctions.basis(card1, basisText, tb, b), e));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "compositionFromDensity");
         }
@@ -451,7 +464,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             double tRef = Arguments.number("reference temperature", Arguments.value(referenceTemperature));
             double tb = Arguments.optionalNumber("basis temperature", basisTemperature);
             CompositionBasis in = BlendFunctions.basis(c, Arguments.text("basis", Arguments.value(basis), ""),
-                    Double.isNaN(tb) ? tRef : tb, Arguments.optionalComponent(c, balance,
+                    tb, Arguments.optionalComponent(c, balance,
                     BlendFunctions.DEFAULT_BALANCE));
             String r = Arguments.text("result", result, null);
             Extrapolation e = Arguments.extrapolation(extrapolate);
@@ -509,10 +522,13 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     }
 
     @Override
-    public Object mixtureMolarMass(Object[][] card, Object[][] moleFraction) throws IllegalArgumentException {
+    public Object mixtureMolarMass(Object[][] card, Object[][] moleFraction, Object basis, Object basisTemperature)
+            throws IllegalArgumentException {
         try {
+            Card c = Arguments.card(card);
             // no temperature: each composition is paired with 0, which the molar mass never reads
-            return CompositionArguments.overCompositions(Arguments.card(card), moleFraction, new Object[][] {{0.0}},
+            return BasisArguments.overCompositions(c, moleFraction, new Object[][] {{0.0}},
+                    BasisArguments.basis(c, basis, basisTemperature), Extrapolation.AS_CARD,
                     (k, x, unused) -> CardFunctions.meanMolarMass(k, x));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "mixtureMolarMass");

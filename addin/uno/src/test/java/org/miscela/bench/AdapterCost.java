@@ -33,12 +33,12 @@ public final class AdapterCost {
 
     static Cost density(int calls) throws Exception {
         MixtureAddIn addIn = new MixtureAddIn();
-        return measure(calls, (card, x, t) -> addIn.mixtureDensity(card, x, t, null));
+        return measure(calls, (card, x, t) -> addIn.mixtureDensity(card, x, t, null, com.sun.star.uno.Any.VOID, com.sun.star.uno.Any.VOID));
     }
 
     static Cost partialVolume(int calls) throws Exception {
         MixtureAddIn addIn = new MixtureAddIn();
-        return measure(calls, (card, x, t) -> addIn.partialMolarVolume(card, ONE, x, t, null));
+        return measure(calls, (card, x, t) -> addIn.partialMolarVolume(card, ONE, x, t, null, com.sun.star.uno.Any.VOID, com.sun.star.uno.Any.VOID));
     }
 
     /** One array call over a block of {@code rows} compositions: time and bytes per row. */
@@ -58,7 +58,7 @@ public final class AdapterCost {
             Object[][] c = fresh(card);
             long b0 = allocated();
             long t0 = System.nanoTime();
-            Object result = addIn.mixtureDensity(c, x, t, null);
+            Object result = addIn.mixtureDensity(c, x, t, null, com.sun.star.uno.Any.VOID, com.sun.star.uno.Any.VOID);
             long t1 = System.nanoTime();
             long b1 = allocated();
             if (result == null) {

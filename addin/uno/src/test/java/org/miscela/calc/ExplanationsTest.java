@@ -85,10 +85,10 @@ class ExplanationsTest {
      */
     @Test
     void theKindsAreTheCataloguesTypes() {
-        assertEquals("RRRV", Explanations.kinds(FunctionCatalog.byMethod("mixtureDensity")));
+        assertEquals("RRRVVV", Explanations.kinds(FunctionCatalog.byMethod("mixtureDensity")));
         // a required single value is typed as a range (the component, the recipe's quantity, unit, basis and
         // temperature), so that the wizard shows it as required
-        assertEquals("RRRRV", Explanations.kinds(FunctionCatalog.byMethod("partialMolarVolume")));
+        assertEquals("RRRRVVV", Explanations.kinds(FunctionCatalog.byMethod("partialMolarVolume")));
         assertEquals("RRRRRRVVVVV", Explanations.kinds(FunctionCatalog.byMethod("recipe")));
         assertEquals("V", Explanations.kinds(FunctionCatalog.byMethod("addInInfo")));
     }
@@ -96,7 +96,7 @@ class ExplanationsTest {
     @Test
     void aRefusedCallIsExplainedInItsOwnWords() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> addIn.mixtureDensity(CARD, one(0.3), one(45.0), Any.VOID));
+                () -> addIn.mixtureDensity(CARD, one(0.3), one(45.0), Any.VOID, Any.VOID, Any.VOID));
         assertEquals(e.getMessage(), explain("MIX.DENSITY", CARD, 0.3, 45.0));
         assertEquals("Problem.OUTSIDE_TEMPERATURE", Catalogue.entryOf(e.getMessage()));
         IllegalArgumentException unit = assertThrows(IllegalArgumentException.class, () -> addIn.batchTotals(CARD,
@@ -160,7 +160,8 @@ class ExplanationsTest {
     void argumentsAreCountedAsCalcCountsThem() {
         String few = explain("MIX.DENSITY", CARD, 0.3);
         assertEquals("Problem.EXPLAIN_ARGUMENT_COUNT", Catalogue.entryOf(few), few);
-        assertEquals("MIX.DENSITY takes 3 or 4 arguments (MIX.DENSITY(card; x; temperature; [extrapolate])), not 2: "
+        assertEquals("MIX.DENSITY takes 3 to 6 arguments (MIX.DENSITY(card; x; temperature; [extrapolate]; [basis]; "
+                + "[basis temperature])), not 2: "
                 + "Calc shows Err:504 for such a call without calling the function.", few);
         String many = explain("MIX.CHECK", CARD, "warnings", 1.0);
         assertTrue(many.startsWith("MIX.CHECK takes 1 or 2 arguments (MIX.CHECK(card; [result])), not 3"), many);

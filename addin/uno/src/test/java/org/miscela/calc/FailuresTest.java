@@ -49,7 +49,7 @@ class FailuresTest {
     void anUnexpectedFailureShowsAsValueWithReadableWordsThatAreKept() {
         Instant before = Instant.now().truncatedTo(ChronoUnit.SECONDS);
         UnexpectedFailure f = assertThrows(UnexpectedFailure.class,
-                () -> addIn.mixtureDensity(CARD, NULL_ROW, TWENTY, null));
+                () -> addIn.mixtureDensity(CARD, NULL_ROW, TWENTY, null, com.sun.star.uno.Any.VOID, com.sun.star.uno.Any.VOID));
         Instant after = Instant.now();
         // a UNO RuntimeException but not an IllegalArgumentException: Calc shows #VALUE!, not Err:502
         assertTrue(f instanceof com.sun.star.uno.RuntimeException);

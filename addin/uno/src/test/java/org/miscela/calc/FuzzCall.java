@@ -367,7 +367,43 @@ final class FuzzCall {
                     throw new IllegalStateException("FuzzCall has no arguments for " + f.displayName() + " ("
                             + m + "): add a case to FuzzCall.Generator.call");
             }
-            return new FuzzCall(f, card, seed, a);
+            return new FuzzCall(f, card, seed, trailingBasis(m, a));
+        }
+
+        /**
+         * The trailing basis arguments: a composition basis and its temperature for the property functions, the basis
+         * temperature for MIX.RECIPE and MIX.ADJUST. A clean call reads its fractions as mole or mass fractions.
+         */
+        Object[] trailingBasis(String m, Object[] a) {
+            switch (m) {
+                case "excessMolarVolume":
+                case "partialMolarVolume":
+                case "partialExcessMolarVolume":
+                case "mixtureMolarVolume":
+                case "mixtureDensity":
+                case "checkPoint":
+                case "excessEnthalpy":
+                case "partialExcessEnthalpy":
+                case "insideValidity":
+                case "traceEvaluation":
+                case "uncertainty":
+                case "mixtureMolarMass": {
+                    Object[] out = java.util.Arrays.copyOf(a, a.length + 2);
+                    out[a.length] = clean ? pick(Any.VOID, Any.VOID, "mole fraction", "mass fraction", "w")
+                            : pick(Any.VOID, "mass fraction", "%w/w", "wt%", "volume fraction", "%vol", "mol %",
+                                "ppm", "", 1.0);
+                    out[a.length + 1] = temperatureOrVoid();
+                    return out;
+                }
+                case "recipe":
+                case "adjustBatch": {
+                    Object[] out = java.util.Arrays.copyOf(a, a.length + 1);
+                    out[a.length] = temperatureOrVoid();
+                    return out;
+                }
+                default:
+                    return a;
+            }
         }
 
         @SafeVarargs

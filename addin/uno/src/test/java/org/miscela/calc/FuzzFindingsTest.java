@@ -130,10 +130,10 @@ class FuzzFindingsTest {
         rows.set(10, row("component", "beta", Double.MIN_VALUE));
         rows.add(row("excess volume covariance", "alpha + beta", 1e-4));
         Object[][] card = range(rows.toArray(new Object[0][]));
-        assertTrue((Double) addIn.uncertainty(card, one(0.5), one(300.0), Any.VOID, Any.VOID, Any.VOID) > 0,
+        assertTrue((Double) addIn.uncertainty(card, one(0.5), one(300.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID) > 0,
                 "the card itself works at an ordinary point");
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> addIn.uncertainty(card, one(0.0), one(300.0), "density", Any.VOID, Any.VOID));
+                () -> addIn.uncertainty(card, one(0.0), one(300.0), "density", Any.VOID, Any.VOID, Any.VOID, Any.VOID));
         assertEquals("Problem.NON_PHYSICAL", Catalogue.entryOf(e.getMessage()), e.getMessage());
     }
 
@@ -150,13 +150,13 @@ class FuzzFindingsTest {
         Object[][] card = range(rows.toArray(new Object[0][]));
         assertTrue(((String) addIn.checkCard(card, Any.VOID)).startsWith("OK"), "the card reads (its values look odd)");
         IllegalArgumentException enthalpy = assertThrows(IllegalArgumentException.class,
-                () -> addIn.excessEnthalpy(card, one(0.5), one(300.0), Any.VOID));
+                () -> addIn.excessEnthalpy(card, one(0.5), one(300.0), Any.VOID, Any.VOID, Any.VOID));
         assertEquals("Problem.NON_PHYSICAL", Catalogue.entryOf(enthalpy.getMessage()), enthalpy.getMessage());
         IllegalArgumentException trace = assertThrows(IllegalArgumentException.class,
-                () -> addIn.traceEvaluation(card, one(0.5), one(300.0), "enthalpy", Any.VOID));
+                () -> addIn.traceEvaluation(card, one(0.5), one(300.0), "enthalpy", Any.VOID, Any.VOID, Any.VOID));
         assertEquals("Problem.NON_PHYSICAL", Catalogue.entryOf(trace.getMessage()), trace.getMessage());
         table(addIn.traceEvaluation(range(heatCard().toArray(new Object[0][])), one(0.5), one(300.0), "enthalpy",
-                Any.VOID));
+                Any.VOID, Any.VOID, Any.VOID));
     }
 
     /** The binary card of {@link #heatCard} with the first molar mass 1e300 g/mol (still a valid card). */
@@ -199,7 +199,7 @@ class FuzzFindingsTest {
         IllegalArgumentException adjust = assertThrows(IllegalArgumentException.class, () -> addIn.adjustBatch(card,
                 range(row(10.0, 10.0)), one("kmol"), range(row(0.4, 0.6)), one("mole fraction"), one(300.0), Any.VOID,
                 Any.VOID,
-                Any.VOID, "volume", Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+                Any.VOID, "volume", Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID));
         assertEquals("Problem.NON_PHYSICAL", Catalogue.entryOf(adjust.getMessage()), adjust.getMessage());
         Object[][] ordinary = range(heatCard().toArray(new Object[0][]));
         assertTrue(Double.isFinite((Double) addIn.additionVolume(ordinary, range(row(10.0, 10.0)), one("kmol"),
@@ -224,7 +224,7 @@ class FuzzFindingsTest {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> addIn.adjustBatch(card,
                 range(row(1.0, 1.0)), one("mol"), range(row(0.05, 0.95)), one("mole fraction"), one(300.0), "make up",
                 10.0, "mL",
-                Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+                Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID));
         assertEquals("Problem.LIMIT_UNREACHABLE", Catalogue.entryOf(e.getMessage()), e.getMessage());
     }
 
@@ -262,11 +262,11 @@ class FuzzFindingsTest {
     void componentGivenAsARangeMustBeASingleValue() throws Exception {
         Object[][] card = range(heatCard().toArray(new Object[0][]));
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> addIn.partialMolarVolume(card, range(row(1.0, 2.0)), one(0.5), one(300.0), Any.VOID));
+                () -> addIn.partialMolarVolume(card, range(row(1.0, 2.0)), one(0.5), one(300.0), Any.VOID, Any.VOID, Any.VOID));
         assertEquals("Problem.ARG_NOT_SINGLE", Catalogue.entryOf(e.getMessage()), e.getMessage());
         assertTrue(e.getMessage().contains("component"), e.getMessage());
-        assertEquals(addIn.partialMolarVolume(card, one(2.0), one(0.5), one(300.0), Any.VOID),
-                addIn.partialMolarVolume(card, one("beta"), one(0.5), one(300.0), Any.VOID),
+        assertEquals(addIn.partialMolarVolume(card, one(2.0), one(0.5), one(300.0), Any.VOID, Any.VOID, Any.VOID),
+                addIn.partialMolarVolume(card, one("beta"), one(0.5), one(300.0), Any.VOID, Any.VOID, Any.VOID),
                 "a one-cell range: the number and the name of the same component");
     }
 
@@ -280,14 +280,14 @@ class FuzzFindingsTest {
         rows.removeIf(r -> "extrapolation".equals(r[0]));
         Object[][] card = range(rows.toArray(new Object[0][]));
         assertThrows(IllegalArgumentException.class,
-                () -> addIn.mixtureDensity(card, one(0.5), one(330.0), Any.VOID), "330 K is outside 280–320 K");
-        assertTrue((Double) addIn.mixtureDensity(card, one(0.5), one(330.0), 1.0) > 0, "1 allows extrapolation");
+                () -> addIn.mixtureDensity(card, one(0.5), one(330.0), Any.VOID, Any.VOID, Any.VOID), "330 K is outside 280–320 K");
+        assertTrue((Double) addIn.mixtureDensity(card, one(0.5), one(330.0), 1.0, Any.VOID, Any.VOID) > 0, "1 allows extrapolation");
         for (double flag : new double[] {Double.NaN, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY}) {
             IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                    () -> addIn.mixtureDensity(card, one(0.5), one(330.0), flag), "flag " + flag);
+                    () -> addIn.mixtureDensity(card, one(0.5), one(330.0), flag, Any.VOID, Any.VOID), "flag " + flag);
             assertEquals("Problem.ARG_NOT_FLAG", Catalogue.entryOf(e.getMessage()), e.getMessage());
             IllegalArgumentException inside = assertThrows(IllegalArgumentException.class,
-                    () -> addIn.mixtureDensity(card, one(0.5), one(300.0), flag), "flag " + flag);
+                    () -> addIn.mixtureDensity(card, one(0.5), one(300.0), flag, Any.VOID, Any.VOID), "flag " + flag);
             assertEquals("Problem.ARG_NOT_FLAG", Catalogue.entryOf(inside.getMessage()), "refused inside too");
         }
     }
@@ -305,7 +305,7 @@ class FuzzFindingsTest {
                 () -> new MixtureAddIn().adjustBatch(card, new Object[][] {{86.20062305796648, 32.375755581843976}},
                         new Object[][] {{"tonne"}}, new Object[][] {{1.0E-15}}, new Object[][] {{"volume fraction"}},
                         new Object[][] {{0.43021338832899825}}, "within", 487.013214977023, "t", "summary", Any.VOID,
-                        1.0, Boolean.TRUE, Any.VOID));
+                        1.0, Boolean.TRUE, Any.VOID, Any.VOID));
         assertEquals("Problem.LIMIT_UNREACHABLE", Catalogue.entryOf(e.getMessage()), e.getMessage());
     }
 }

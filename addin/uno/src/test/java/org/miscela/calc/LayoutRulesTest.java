@@ -36,7 +36,7 @@ class LayoutRulesTest {
 
     private Object recipe(Object[][] card, Object[][] composition, String basis, Object component) throws Exception {
         return addIn.recipe(card, one(2.5), one("L"), composition, one(basis), one(20.0), Any.VOID, "kg", Any.VOID,
-                Any.VOID, component);
+                Any.VOID, component, Any.VOID);
     }
 
     private Object convert(Object[][] card, Object[][] values, Object component) throws Exception {
@@ -46,7 +46,7 @@ class LayoutRulesTest {
 
     private Object adjust(Object[][] amounts, Object result, Object component) throws Exception {
         return addIn.adjustBatch(CARD, amounts, one("g"), one(0.4), one("mass fraction"), one(20.0), Any.VOID,
-                Any.VOID, Any.VOID, result, "g", Any.VOID, Any.VOID, component);
+                Any.VOID, Any.VOID, result, "g", Any.VOID, Any.VOID, component, Any.VOID);
     }
 
     private static String entry(IllegalArgumentException e) {
@@ -168,40 +168,40 @@ class LayoutRulesTest {
     void aTwoCellColumnAddingUpToOneIsRefusedWithTheRule() {
         for (Object[][] column : new Object[][][] {{{0.3}, {0.7}}, {{0.5}, {0.5}}, {{1.0}, {0.0}}}) {
             IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                    () -> addIn.mixtureDensity(CARD, column, one(20.0), Any.VOID));
+                    () -> addIn.mixtureDensity(CARD, column, one(20.0), Any.VOID, Any.VOID, Any.VOID));
             assertEquals("Problem.COMPOSITION_AMBIGUOUS", entry(e), e.getMessage());
             assertTrue(e.getMessage().contains("row of two cells"), e.getMessage());
         }
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> addIn.partialMolarVolume(CARD, one(1.0), new Object[][] {{0.25}, {0.75}}, one(20.0), Any.VOID));
+                () -> addIn.partialMolarVolume(CARD, one(1.0), new Object[][] {{0.25}, {0.75}}, one(20.0), Any.VOID, Any.VOID, Any.VOID));
         assertEquals("Problem.COMPOSITION_AMBIGUOUS", entry(e), e.getMessage());
     }
 
     @Test
     void theUnambiguousFormsGiveWhatTheRuleSays() throws Exception {
-        double at03 = (Double) addIn.mixtureDensity(CARD, one(0.3), one(20.0), Any.VOID);
-        double at07 = (Double) addIn.mixtureDensity(CARD, one(0.7), one(20.0), Any.VOID);
-        double at02 = (Double) addIn.mixtureDensity(CARD, one(0.2), one(20.0), Any.VOID);
+        double at03 = (Double) addIn.mixtureDensity(CARD, one(0.3), one(20.0), Any.VOID, Any.VOID, Any.VOID);
+        double at07 = (Double) addIn.mixtureDensity(CARD, one(0.7), one(20.0), Any.VOID, Any.VOID, Any.VOID);
+        double at02 = (Double) addIn.mixtureDensity(CARD, one(0.2), one(20.0), Any.VOID, Any.VOID, Any.VOID);
         // a row of two cells is one composition (x1, x2)
-        assertEquals(at03, (Double) addIn.mixtureDensity(CARD, new Object[][] {{0.3, 0.7}}, one(20.0), Any.VOID),
+        assertEquals(at03, (Double) addIn.mixtureDensity(CARD, new Object[][] {{0.3, 0.7}}, one(20.0), Any.VOID, Any.VOID, Any.VOID),
                 0.0);
         // a column of two cells not adding up to 1 is two values of x1
-        Object[][] two = grid(addIn.mixtureDensity(CARD, new Object[][] {{0.3}, {0.2}}, one(20.0), Any.VOID));
+        Object[][] two = grid(addIn.mixtureDensity(CARD, new Object[][] {{0.3}, {0.2}}, one(20.0), Any.VOID, Any.VOID, Any.VOID));
         assertArrayEquals(new Object[] {at03, at02}, new Object[] {two[0][0], two[1][0]});
         // a column of three cells on a two-component card is three values of x1, even when they add up to 1
         Object[][] three = grid(addIn.mixtureDensity(CARD, new Object[][] {{0.3}, {0.0}, {0.7}}, one(20.0),
-                Any.VOID));
+                Any.VOID, Any.VOID, Any.VOID));
         assertEquals(3, three.length);
         assertEquals(at07, (Double) three[2][0], 0.0);
         // a blank beside x1 is a blank x1, not half a composition
-        Object[][] blank = grid(addIn.mixtureDensity(CARD, new Object[][] {{0.3}, {""}}, one(20.0), Any.VOID));
+        Object[][] blank = grid(addIn.mixtureDensity(CARD, new Object[][] {{0.3}, {""}}, one(20.0), Any.VOID, Any.VOID, Any.VOID));
         assertEquals(at03, (Double) blank[0][0], 0.0);
         assertEquals("", blank[1][0]);
         // on a three-component card a column of three cells is one composition
         double rowResult = (Double) addIn.mixtureDensity(SOLVENTS, new Object[][] {{0.2, 0.5, 0.3}}, one(20.0),
-                Any.VOID);
+                Any.VOID, Any.VOID, Any.VOID);
         assertEquals(rowResult, (Double) addIn.mixtureDensity(SOLVENTS, new Object[][] {{0.2}, {0.5}, {0.3}},
-                one(20.0), Any.VOID), 0.0);
+                one(20.0), Any.VOID, Any.VOID, Any.VOID), 0.0);
     }
 
     @Test

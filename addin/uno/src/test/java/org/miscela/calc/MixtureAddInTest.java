@@ -24,7 +24,7 @@ class MixtureAddInTest {
 
     @Test
     void scalarArgumentsGiveOneNumber() throws Exception {
-        Object r = addIn.mixtureDensity(CARD, one(0.3), one(20.0), Any.VOID);
+        Object r = addIn.mixtureDensity(CARD, one(0.3), one(20.0), Any.VOID, Any.VOID, Any.VOID);
         double expected = CardFunctions.density(TestCards.card("ethanol-water-oiml.tsv"), 0.3, 20,
                 Extrapolation.AS_CARD);
         assertEquals(expected, (Double) r, 0.0);
@@ -33,19 +33,19 @@ class MixtureAddInTest {
     @Test
     void aColumnGivesAColumnAndBlanksStayBlank() throws Exception {
         Object[][] xs = {{0.1}, {""}, {0.5}};
-        Object r = addIn.excessMolarVolume(CARD, xs, one(20.0), Any.VOID);
+        Object r = addIn.excessMolarVolume(CARD, xs, one(20.0), Any.VOID, Any.VOID, Any.VOID);
         Object[][] grid = (Object[][]) ((Any) r).getObject();
         assertEquals(3, grid.length);
         assertTrue(grid[0][0] instanceof Double);
         assertEquals("", grid[1][0]);
-        assertEquals((Double) addIn.excessMolarVolume(CARD, one(0.5), one(20.0), Any.VOID), (Double) grid[2][0], 0.0);
+        assertEquals((Double) addIn.excessMolarVolume(CARD, one(0.5), one(20.0), Any.VOID, Any.VOID, Any.VOID), (Double) grid[2][0], 0.0);
     }
 
     @Test
     void temperatureColumnPairsWithCompositionColumn() throws Exception {
         Object[][] xs = {{0.2}, {0.2}};
         Object[][] ts = {{10.0}, {30.0}};
-        Object[][] grid = (Object[][]) ((Any) addIn.mixtureDensity(CARD, xs, ts, Any.VOID)).getObject();
+        Object[][] grid = (Object[][]) ((Any) addIn.mixtureDensity(CARD, xs, ts, Any.VOID, Any.VOID, Any.VOID)).getObject();
         assertTrue((Double) grid[0][0] > (Double) grid[1][0], "density falls with temperature");
     }
 
@@ -54,34 +54,34 @@ class MixtureAddInTest {
         Object[][] xs = {{0.2}, {0.3}};
         Object[][] ts = {{10.0}, {20.0}, {30.0}};
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> addIn.mixtureDensity(CARD, xs, ts, Any.VOID));
+                () -> addIn.mixtureDensity(CARD, xs, ts, Any.VOID, Any.VOID, Any.VOID));
         assertTrue(e.getMessage().contains("same shape"), e.getMessage());
     }
 
     @Test
     void componentByNumberOrName() throws Exception {
-        Object byNumber = addIn.partialMolarVolume(CARD, one(2.0), one(0.4), one(25.0), Any.VOID);
-        Object byName = addIn.partialMolarVolume(CARD, one("Water"), one(0.4), one(25.0), Any.VOID);
+        Object byNumber = addIn.partialMolarVolume(CARD, one(2.0), one(0.4), one(25.0), Any.VOID, Any.VOID, Any.VOID);
+        Object byName = addIn.partialMolarVolume(CARD, one("Water"), one(0.4), one(25.0), Any.VOID, Any.VOID, Any.VOID);
         assertEquals((Double) byNumber, (Double) byName, 0.0);
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> addIn.partialMolarVolume(CARD, one(3.0), one(0.4), one(25.0), Any.VOID));
+                () -> addIn.partialMolarVolume(CARD, one(3.0), one(0.4), one(25.0), Any.VOID, Any.VOID, Any.VOID));
         assertTrue(e.getMessage().contains("ethanol, water"), e.getMessage());
     }
 
     @Test
     void outsideTheValidityRangeIsRefusedUnlessAllowed() throws Exception {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> addIn.mixtureDensity(CARD, one(0.4), one(45.0), Any.VOID));
+                () -> addIn.mixtureDensity(CARD, one(0.4), one(45.0), Any.VOID, Any.VOID, Any.VOID));
         assertTrue(e.getMessage().contains("0 to 40 °C"), e.getMessage());
-        assertTrue((Double) addIn.mixtureDensity(CARD, one(0.4), one(45.0), Boolean.TRUE) > 0);
-        assertTrue(addIn.checkPoint(CARD, one(0.4), one(45.0), Any.VOID).contains("outside"));
-        assertEquals("OK", addIn.checkPoint(CARD, one(0.4), one(45.0), 1.0));
+        assertTrue((Double) addIn.mixtureDensity(CARD, one(0.4), one(45.0), Boolean.TRUE, Any.VOID, Any.VOID) > 0);
+        assertTrue(addIn.checkPoint(CARD, one(0.4), one(45.0), Any.VOID, Any.VOID, Any.VOID).contains("outside"));
+        assertEquals("OK", addIn.checkPoint(CARD, one(0.4), one(45.0), 1.0, Any.VOID, Any.VOID));
     }
 
     @Test
     void textWhereANumberBelongs() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> addIn.mixtureDensity(CARD, one("abc"), one(20.0), Any.VOID));
+                () -> addIn.mixtureDensity(CARD, one("abc"), one(20.0), Any.VOID, Any.VOID, Any.VOID));
         assertTrue(e.getMessage().contains("mole fraction"), e.getMessage());
     }
 
@@ -94,7 +94,7 @@ class MixtureAddInTest {
         fresh[1] = new Object[] {"title", "a title no other test uses " + System.nanoTime()};
         double before = (Double) addIn.addInInfo("card reads");
         for (int i = 0; i < 50; i++) {
-            addIn.mixtureDensity(fresh, one(0.3), one(20.0), null);
+            addIn.mixtureDensity(fresh, one(0.3), one(20.0), null, Any.VOID, Any.VOID);
         }
         assertEquals(before + 1, (Double) addIn.addInInfo("card reads"), "fifty calls on one new card parse it once");
         assertTrue((Double) addIn.addInInfo("cards kept") >= 1);
@@ -114,7 +114,7 @@ class MixtureAddInTest {
         assertTrue(message.startsWith("Card row 4 (temperature unit)"), message);
         assertEquals(message, addIn.checkCard(broken, "warnings"), "an unreadable card has its problem, not warnings");
         assertThrows(IllegalArgumentException.class, () -> addIn.mixtureDensity(broken, one(0.4), one(20.0),
-                Any.VOID));
+                Any.VOID, Any.VOID, Any.VOID));
     }
 
     /** A card that reads with a warning: MIX.CHECK says so in words or as a column; the other functions compute. */
@@ -132,9 +132,9 @@ class MixtureAddInTest {
         assertEquals("Problem.WARN_MOLAR_MASS", Catalogue.entryOf((String) list[0][0]));
         // the warning changes no result: the density is the mean molar mass over the molar volume as before
         double x = 0.3;
-        double v = (Double) addIn.mixtureMolarVolume(heavy, one(x), one(20.0), Any.VOID);
+        double v = (Double) addIn.mixtureMolarVolume(heavy, one(x), one(20.0), Any.VOID, Any.VOID, Any.VOID);
         assertEquals((x * 46068.44 + (1 - x) * 18.01528) / v * 1000,
-                (Double) addIn.mixtureDensity(heavy, one(x), one(20.0), Any.VOID), 1e-9);
+                (Double) addIn.mixtureDensity(heavy, one(x), one(20.0), Any.VOID, Any.VOID, Any.VOID), 1e-9);
     }
 
     @Test
@@ -187,8 +187,8 @@ class MixtureAddInTest {
 
     @Test
     void aRowOrAColumnIsOneComposition() throws Exception {
-        Object row = addIn.mixtureDensity(TERNARY, new Object[][] {{0.2, 0.5, 0.3}}, one(20.0), Any.VOID);
-        Object column = addIn.mixtureDensity(TERNARY, new Object[][] {{0.2}, {0.5}, {0.3}}, one(20.0), Any.VOID);
+        Object row = addIn.mixtureDensity(TERNARY, new Object[][] {{0.2, 0.5, 0.3}}, one(20.0), Any.VOID, Any.VOID, Any.VOID);
+        Object column = addIn.mixtureDensity(TERNARY, new Object[][] {{0.2}, {0.5}, {0.3}}, one(20.0), Any.VOID, Any.VOID, Any.VOID);
         assertEquals(core(X, 20), (Double) row, 0.0);
         assertEquals(core(X, 20), (Double) column, 0.0);
     }
@@ -197,7 +197,7 @@ class MixtureAddInTest {
     void aBlockGivesAColumnWithBlankLinesBlank() throws Exception {
         Object[][] block = {{0.2, 0.5, 0.3}, {"", "", ""}, {0.1, 0.1, 0.8}, {0.3, 0.3, 0.4}};
         Object[][] ts = {{20.0}, {20.0}, {25.0}, {""}};
-        Object[][] grid = (Object[][]) ((Any) addIn.mixtureDensity(TERNARY, block, ts, Boolean.TRUE)).getObject();
+        Object[][] grid = (Object[][]) ((Any) addIn.mixtureDensity(TERNARY, block, ts, Boolean.TRUE, Any.VOID, Any.VOID)).getObject();
         assertEquals(4, grid.length);
         assertEquals(1, grid[0].length);
         assertEquals(core(X, 20), (Double) grid[0][0], 0.0);
@@ -211,24 +211,24 @@ class MixtureAddInTest {
     void aPartlyBlankLineIsRefusedWithItsName() {
         Object[][] block = {{0.2, 0.5, 0.3}, {0.2, "", 0.8}};
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> addIn.mixtureDensity(TERNARY, block, one(20.0), Any.VOID));
+                () -> addIn.mixtureDensity(TERNARY, block, one(20.0), Any.VOID, Any.VOID, Any.VOID));
         assertTrue(e.getMessage().contains("composition of Q in line 2"), e.getMessage());
     }
 
     @Test
     void shapesThatFitNoCompositionAreRefused() {
         IllegalArgumentException single = assertThrows(IllegalArgumentException.class,
-                () -> addIn.mixtureDensity(TERNARY, one(0.3), one(20.0), Any.VOID));
+                () -> addIn.mixtureDensity(TERNARY, one(0.3), one(20.0), Any.VOID, Any.VOID, Any.VOID));
         assertTrue(single.getMessage().contains("this card has 3"), single.getMessage());
         IllegalArgumentException wide = assertThrows(IllegalArgumentException.class,
-                () -> addIn.mixtureDensity(TERNARY, new Object[][] {{0.2, 0.5}, {0.3, 0.1}}, one(20.0), Any.VOID));
+                () -> addIn.mixtureDensity(TERNARY, new Object[][] {{0.2, 0.5}, {0.3, 0.1}}, one(20.0), Any.VOID, Any.VOID, Any.VOID));
         assertTrue(wide.getMessage().contains("2×2"), wide.getMessage());
         IllegalArgumentException sum = assertThrows(IllegalArgumentException.class,
-                () -> addIn.mixtureDensity(TERNARY, new Object[][] {{0.2, 0.5, 0.2}}, one(20.0), Any.VOID));
+                () -> addIn.mixtureDensity(TERNARY, new Object[][] {{0.2, 0.5, 0.2}}, one(20.0), Any.VOID, Any.VOID, Any.VOID));
         assertTrue(sum.getMessage().contains("sum to 0.9"), sum.getMessage());
         IllegalArgumentException temperatures = assertThrows(IllegalArgumentException.class,
                 () -> addIn.mixtureDensity(TERNARY, new Object[][] {{0.2, 0.5, 0.3}, {0.2, 0.5, 0.3}},
-                        new Object[][] {{20.0, 25.0}}, Any.VOID));
+                        new Object[][] {{20.0, 25.0}}, Any.VOID, Any.VOID, Any.VOID));
         assertTrue(temperatures.getMessage().contains("temperature"), temperatures.getMessage());
     }
 
@@ -236,11 +236,11 @@ class MixtureAddInTest {
     @Test
     void binaryCardsTakeX1OrTwoColumnBlocks() throws Exception {
         Object[][] block = {{0.3, 0.7}, {0.6, 0.4}};
-        Object[][] grid = (Object[][]) ((Any) addIn.mixtureDensity(CARD, block, one(20.0), Any.VOID)).getObject();
+        Object[][] grid = (Object[][]) ((Any) addIn.mixtureDensity(CARD, block, one(20.0), Any.VOID, Any.VOID, Any.VOID)).getObject();
         assertEquals(2, grid.length);
-        assertEquals((Double) addIn.mixtureDensity(CARD, one(0.6), one(20.0), Any.VOID), (Double) grid[1][0], 0.0);
+        assertEquals((Double) addIn.mixtureDensity(CARD, one(0.6), one(20.0), Any.VOID, Any.VOID, Any.VOID), (Double) grid[1][0], 0.0);
         Object[][] x1 = {{0.3, 0.6, 0.9}};
-        Object[][] row = (Object[][]) ((Any) addIn.mixtureDensity(CARD, x1, one(20.0), Any.VOID)).getObject();
+        Object[][] row = (Object[][]) ((Any) addIn.mixtureDensity(CARD, x1, one(20.0), Any.VOID, Any.VOID, Any.VOID)).getObject();
         assertEquals(3, row[0].length, "a row of three x1 values gives a row of three results");
     }
 
@@ -276,12 +276,12 @@ class MixtureAddInTest {
 
     @Test
     void insideAndTrace() throws Exception {
-        assertEquals(1.0, (Double) addIn.insideValidity(TERNARY, new Object[][] {{0.2, 0.5, 0.3}}, one(20.0)));
+        assertEquals(1.0, (Double) addIn.insideValidity(TERNARY, new Object[][] {{0.2, 0.5, 0.3}}, one(20.0), Any.VOID, Any.VOID));
         Object[][] block = {{0.2, 0.5, 0.3}, {0.1, 0.3, 0.6}};
-        Object[][] inside = (Object[][]) ((Any) addIn.insideValidity(TERNARY, block, one(20.0))).getObject();
+        Object[][] inside = (Object[][]) ((Any) addIn.insideValidity(TERNARY, block, one(20.0), Any.VOID, Any.VOID)).getObject();
         assertEquals(0.0, (Double) inside[1][0], "R above its 0.5 limit");
         Object[][] trace = (Object[][]) ((Any) addIn.traceEvaluation(TERNARY, new Object[][] {{0.2, 0.5, 0.3}},
-                one(20.0), Any.VOID, Any.VOID)).getObject();
+                one(20.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID)).getObject();
         assertEquals("card", trace[0][0]);
         boolean found = false;
         for (Object[] r : trace) {
@@ -293,7 +293,7 @@ class MixtureAddInTest {
         assertTrue(found);
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> addIn.traceEvaluation(TERNARY, new Object[][] {{0.2, 0.5, 0.3}}, one(20.0), "viscosity",
-                        Any.VOID));
+                        Any.VOID, Any.VOID, Any.VOID));
         assertTrue(e.getMessage().contains("volume, enthalpy"), e.getMessage());
     }
 
@@ -350,19 +350,19 @@ class MixtureAddInTest {
         assertEquals((Double) addIn.batchTotals(CARD, new Object[][] {{50 * kEthanol, 50 * kWater}}, one("g"), one(20.0),
                 Any.VOID, "mL", Any.VOID, Any.VOID), volume, 1e-9);
         Object[][] recipe = (Object[][]) ((Any) addIn.recipe(CARD, one(1.0), one("kg"), one(0.5), one("mass fraction"), one(20.0),
-                Any.VOID, "kg air", Any.VOID, Any.VOID, Any.VOID)).getObject();
+                Any.VOID, "kg air", Any.VOID, Any.VOID, Any.VOID, Any.VOID)).getObject();
         assertEquals(0.5 / kEthanol, (Double) recipe[0][0], 1e-12);
         assertEquals(0.5 / kWater, (Double) recipe[0][1], 1e-12);
         Object[][] added = (Object[][]) ((Any) addIn.adjustBatch(CARD, new Object[][] {{500.0, 500.0}}, one("g air"),
-                one(0.4), one("mass fraction"), one(20.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID, "g air", Any.VOID, Any.VOID,
-                Any.VOID))
+                one(0.4), one("mass fraction"), one(20.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID, "g air", Any.VOID,
+                Any.VOID, Any.VOID, Any.VOID))
                 .getObject();
         double water = 500 * kEthanol / 0.4 - 500 * kEthanol - 500 * kWater;
         assertEquals(water / kWater, (Double) added[0][1], 1e-9);
         // a gallon and a pound: 1 US gal of 40 %vol holds 0.4 gal of ethanol at 20 °C (definition of %vol)
         Object[][] gallons = (Object[][]) ((Any) addIn.recipe(CARD, one(1.0), one("gal"), one(40.0), one("%vol"), one(20.0), 20.0,
                 "US gal",
-                Any.VOID, Any.VOID, Any.VOID)).getObject();
+                Any.VOID, Any.VOID, Any.VOID, Any.VOID)).getObject();
         assertEquals(0.4, (Double) gallons[0][0], 1e-12);
         IllegalArgumentException light = assertThrows(IllegalArgumentException.class, () -> addIn.batchTotals(
                 TestCards.cells("invented-lighter-than-air.tsv"), batch, one("kg air"), one(20.0), Any.VOID, Any.VOID,
@@ -387,22 +387,22 @@ class MixtureAddInTest {
      */
     @Test
     void meanMolarMassOfOneCompositionARangeAndABlock() throws Exception {
-        assertEquals(0.3 * 46.06844 + 0.7 * 18.01528, (Double) addIn.mixtureMolarMass(CARD, one(0.3)), 1e-12);
-        Object[][] row = (Object[][]) ((Any) addIn.mixtureMolarMass(CARD, new Object[][] {{0.0, 1.0, ""}}))
+        assertEquals(0.3 * 46.06844 + 0.7 * 18.01528, (Double) addIn.mixtureMolarMass(CARD, one(0.3), Any.VOID, Any.VOID), 1e-12);
+        Object[][] row = (Object[][]) ((Any) addIn.mixtureMolarMass(CARD, new Object[][] {{0.0, 1.0, ""}}, Any.VOID, Any.VOID))
                 .getObject();
         assertEquals(18.01528, (Double) row[0][0], 1e-12);
         assertEquals(46.06844, (Double) row[0][1], 1e-12);
         assertEquals("", row[0][2]);
         Object[][] tern = TestCards.cells("ternary-invented.tsv");
         Object[][] column = (Object[][]) ((Any) addIn.mixtureMolarMass(tern,
-                new Object[][] {{0.2, 0.5, 0.3}, {"", "", ""}, {1.0, 0.0, 0.0}})).getObject();
+                new Object[][] {{0.2, 0.5, 0.3}, {"", "", ""}, {1.0, 0.0, 0.0}}, Any.VOID, Any.VOID)).getObject();
         assertEquals(0.2 * 62.07 + 0.5 * 18.015 + 0.3 * 92.09, (Double) column[0][0], 1e-12, "invented card");
         assertEquals("", column[1][0]);
         assertEquals(62.07, (Double) column[2][0], 1e-12);
         Object[][] batch = {{0.3, 0.7}};
         double grams = (Double) addIn.batchTotals(CARD, batch, one("mol"), one(20.0), "mass", "g", Any.VOID, Any.VOID);
         double moles = (Double) addIn.batchTotals(CARD, batch, one("mol"), one(20.0), "moles", "mol", Any.VOID, Any.VOID);
-        assertEquals(grams / moles, (Double) addIn.mixtureMolarMass(CARD, batch), 1e-12);
+        assertEquals(grams / moles, (Double) addIn.mixtureMolarMass(CARD, batch, Any.VOID, Any.VOID), 1e-12);
     }
 
     @Test
@@ -413,14 +413,14 @@ class MixtureAddInTest {
         for (int i = 0; i < bad.length; i++) {
             Object[][] x = bad[i];
             IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                    () -> addIn.mixtureMolarMass(CARD, x));
+                    () -> addIn.mixtureMolarMass(CARD, x, Any.VOID, Any.VOID));
             assertEquals(entries[i], Catalogue.entryOf(e.getMessage()), e.getMessage());
         }
         IllegalArgumentException single = assertThrows(IllegalArgumentException.class,
-                () -> addIn.mixtureMolarMass(tern, one(0.3)));
+                () -> addIn.mixtureMolarMass(tern, one(0.3), Any.VOID, Any.VOID));
         assertEquals("Problem.NOT_BINARY", Catalogue.entryOf(single.getMessage()), single.getMessage());
         IllegalArgumentException two = assertThrows(IllegalArgumentException.class,
-                () -> addIn.mixtureMolarMass(tern, new Object[][] {{0.5, 0.5}}));
+                () -> addIn.mixtureMolarMass(tern, new Object[][] {{0.5, 0.5}}, Any.VOID, Any.VOID));
         assertEquals("Problem.COMPOSITION_SHAPE", Catalogue.entryOf(two.getMessage()), two.getMessage());
     }
 }

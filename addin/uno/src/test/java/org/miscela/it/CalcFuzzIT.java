@@ -184,6 +184,10 @@ class CalcFuzzIT {
         if (pick == 0) {
             return ""; // left out
         }
+        if ((name.equals("compositionBasis") || name.equals("basisTemperature")) && pick < 7) {
+            // the trailing basis arguments: mostly left out or plausible, so that the calls before them still succeed
+            return plausible(name, r);
+        }
         if (pick == 1) {
             return RANGES[r.nextInt(RANGES.length)];
         }
@@ -206,6 +210,10 @@ class CalcFuzzIT {
                 return String.format(Locale.ROOT, "%.1f", 10 + 20 * r.nextDouble());
             case "component":
                 return Integer.toString(1 + r.nextInt(3));
+            case "compositionBasis":
+                return new String[] {"", "\"mole fraction\"", "\"x\"", "\"mass fraction\""}[r.nextInt(4)];
+            case "basisTemperature":
+                return r.nextBoolean() ? "" : "20";
             case "amounts":
                 return r.nextBoolean() ? "{1;10}" : "{2;5;1}";
             case "order":

@@ -23,14 +23,35 @@ public final class BlendFunctions {
     private BlendFunctions() {
     }
 
-    /** The basis spelled {@code text}, at temperature t (card unit; NaN when it needs none), with a balance. */
+    /**
+     * The basis spelled {@code text}, at its reference temperature t (card unit), with a balance. A NaN t means the
+     * call left it out: a basis measured per volume then takes the card's basis reference temperature (20 °C unless
+     * the card states another, OIML R 22), never a working or measurement temperature.
+     */
     public static CompositionBasis basis(Card card, String text, double t, int balance) {
         CompositionBasis.Kind kind = CompositionBasis.Kind.lookup(text);
         int b = balance == DEFAULT_BALANCE ? card.componentCount() - 1 : balance;
-        if (kind.needsTemperature() && Double.isNaN(t)) {
-            throw Problem.BLANK_ARGUMENT.raise("temperature of the basis '" + kind.label() + "'");
+        double at = kind.needsTemperature() ? (Double.isNaN(t) ? card.basisReferenceTemperature() : t) : Double.NaN;
+        return CompositionBasis.of(kind, at, kind.isConcentration() ? b : -1);
+    }
+
+    /**
+     * A trace table ({@code CardFunctions.trace}) with the composition bases' rows appended: the card's basis
+     * reference temperature and where it comes from (its row, or the 20 °C default of OIML R 22), the basis the
+     * composition was read on ({@code basis} null for mole fractions) and, for a basis measured per volume, the
+     * temperature it was read at. Appended last, so a trace laid out for the rows before keeps them in place.
+     */
+    public static Object[][] traced(Card card, Object[][] trace, CompositionBasis basis) {
+        java.util.List<Object[]> out = new java.util.ArrayList<>(java.util.Arrays.asList(trace));
+        String unit = card.units().temperature().symbol();
+        out.add(new Object[] {"basis reference temperature [" + unit + "]", card.basisReferenceTemperature()});
+        out.add(new Object[] {"basis reference from", card.statesBasisReference()
+                ? "the card's 'basis reference temperature' row" : "default: 20 °C (OIML R 22)"});
+        out.add(new Object[] {"composition basis", basis == null ? "mole fraction" : basis.kind().label()});
+        if (basis != null && basis.kind().needsTemperature()) {
+            out.add(new Object[] {"composition basis temperature [" + unit + "]", basis.temperature()});
         }
-        return CompositionBasis.of(kind, kind.needsTemperature() ? t : Double.NaN, kind.isConcentration() ? b : -1);
+        return out.toArray(new Object[0][]);
     }
 
     /** The full composition a single number stands for on a two-component card (see the class comment). */
@@ -43,7 +64,8 @@ public final class BlendFunctions {
             v[basis.balance() == 0 ? 1 : 0] = first;
             return v;
         }
-        return new double[] {first, 1.0 - first};
+        double whole = basis.kind().maximum();
+        return new double[] {first, whole - first};
     }
 
     /** A composition from one basis to another (each with its own temperature). */

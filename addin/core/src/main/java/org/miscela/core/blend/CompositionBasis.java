@@ -18,7 +18,14 @@ import java.util.Locale;
  * <tr><td>molarity</td><td>n_k / V(T)</td><td>mol/L</td><td>T, balance</td></tr>
  * <tr><td>mass concentration</td><td>m_k / V(T)</td><td>g/L</td><td>T, balance</td></tr>
  * <tr><td>molality</td><td>n_k / m_s, s the solvent</td><td>mol/kg</td><td>solvent</td></tr>
+ * <tr><td>mass percent</td><td>100 · m_k / Σ m ("%w/w", "wt%", "mass %", "% m/m", …)</td><td>%</td><td>—</td></tr>
+ * <tr><td>mole percent</td><td>100 · n_k / Σ n ("mol %", "mole %")</td><td>%</td><td>—</td></tr>
  * </table>
+ *
+ * <p><b>Reference temperature.</b> The bases measured per volume (volume fraction, %vol, mol/L, g/L) hold a
+ * temperature. Callers take it from the call when stated, else from the card's 'basis reference temperature' row,
+ * else 20 °C, the temperature at which OIML R 22 (1975) defines alcoholic strength by volume; never from the working
+ * or measurement temperature.
  *
  * <p><b>Fractions</b> (mole, mass, volume) need every value; they must sum to 1 within 1e-6.
  *
@@ -40,10 +47,15 @@ public final class CompositionBasis {
         MOLE_FRACTION("mole fraction", "", false, false, "x", "mole fraction", "mol/mol"),
         MASS_FRACTION("mass fraction", "", false, false, "w", "mass fraction", "g/g", "kg/kg"),
         VOLUME_FRACTION("volume fraction", "", true, false, "phi", "volume fraction"),
-        STRENGTH("strength", "%vol", true, true, "%vol", "% vol", "strength"),
+        STRENGTH("strength", "%vol", true, true, "%vol", "% vol", "strength", "%v/v", "% v/v", "v/v %"),
         MOLARITY("molarity", "mol/L", true, true, "mol/L", "mol/l", "molarity"),
         MASS_CONCENTRATION("mass concentration", "g/L", true, true, "g/L", "g/l", "mass concentration"),
-        MOLALITY("molality", "mol/kg", false, true, "mol/kg", "molality");
+        MOLALITY("molality", "mol/kg", false, true, "mol/kg", "molality"),
+        /** Mass fractions written as percent (0 to 100), in the trade's spellings. */
+        MASS_PERCENT("mass percent", "%", false, false, "mass percent", "%w/w", "% w/w", "wt%", "wt %", "mass %",
+                "% m/m", "%m/m", "w/w %", "m/m %"),
+        /** Mole fractions written as percent (0 to 100). */
+        MOLE_PERCENT("mole percent", "%", false, false, "mole percent", "mol %", "mol%", "mole %", "mole%");
 
         private final String label;
         private final String unit;
@@ -70,6 +82,27 @@ public final class CompositionBasis {
 
         public boolean needsTemperature() {
             return needsTemperature;
+        }
+
+        /** The largest value one component can have: 100 for percents and strength, 1 for fractions, else ∞. */
+        public double maximum() {
+            switch (this) {
+                case MOLE_FRACTION:
+                case MASS_FRACTION:
+                case VOLUME_FRACTION:
+                    return 1.0;
+                case MASS_PERCENT:
+                case MOLE_PERCENT:
+                case STRENGTH:
+                    return 100.0;
+                default:
+                    return Double.POSITIVE_INFINITY;
+            }
+        }
+
+        /** 100 for the percent kinds (their values are fractions × 100), 1 otherwise. */
+        double scale() {
+            return this == MASS_PERCENT || this == MOLE_PERCENT ? 100.0 : 1.0;
         }
 
         /** Whether one component is the balance (or solvent) rather than every value being given. */
@@ -176,6 +209,9 @@ public final class CompositionBasis {
 
     /** Plural label for messages: "mole fractions", "molarities". */
     String plural() {
+        if (kind == Kind.MASS_PERCENT || kind == Kind.MOLE_PERCENT) {
+            return kind.label() + "s";
+        }
         return kind == Kind.STRENGTH ? "strengths (%vol)" : kind.label().replace("ity", "itie") + "s";
     }
 

@@ -58,7 +58,10 @@ public final class Compositions {
             case MOLE_FRACTION:
                 return fractions(card, values, basis, null);
             case MASS_FRACTION:
+            case MASS_PERCENT:
                 return fractions(card, values, basis, molarMasses(card));
+            case MOLE_PERCENT:
+                return fractions(card, values, basis, null);
             case VOLUME_FRACTION:
                 return fractions(card, values, basis, pureMolarVolumes(card, basis.temperature(), e));
             case MOLALITY:
@@ -76,10 +79,17 @@ public final class Compositions {
         switch (basis.kind()) {
             case MOLE_FRACTION:
                 return z;
-            case MASS_FRACTION: {
-                double mean = Checks.meanMolarMass(card, z);
+            case MOLE_PERCENT:
                 for (int k = 0; k < n; k++) {
-                    out[k] = z[k] * Checks.molarMass(card, k) / mean;
+                    out[k] = 100.0 * z[k];
+                }
+                return out;
+            case MASS_FRACTION:
+            case MASS_PERCENT: {
+                double mean = Checks.meanMolarMass(card, z);
+                double scale = basis.kind().scale();
+                for (int k = 0; k < n; k++) {
+                    out[k] = scale * z[k] * Checks.molarMass(card, k) / mean;
                 }
                 return out;
             }
@@ -124,10 +134,13 @@ public final class Compositions {
         double sum = 0.0;
         for (int k = 0; k < n; k++) {
             entry(card, v[k], k, basis, "write 0 for a component that is absent");
-            sum += v[k];
+        }
+        double scale = basis.kind().scale();
+        for (int k = 0; k < n; k++) {
+            sum += v[k] / scale;
         }
         if (!(Math.abs(sum - 1.0) <= SUM_TOLERANCE)) {
-            throw Problem.FRACTION_SUM.raise(basis.plural(), Show.number(sum));
+            throw Problem.FRACTION_SUM.raise(basis.plural(), Show.number(sum * scale), Show.number(scale));
         }
         double[] moles = new double[n];
         for (int k = 0; k < n; k++) {
@@ -247,6 +260,10 @@ public final class Compositions {
         }
         if (v < 0.0) {
             throw Problem.VALUE_NEGATIVE.raise(what, Checks.name(card, k), Show.number(v));
+        }
+        if (v > basis.kind().maximum()) {
+            throw Problem.VALUE_OUT_OF_RANGE.raise(basis.kind().label(), Show.number(v),
+                    Show.number(basis.kind().maximum()), Checks.name(card, k));
         }
         return v;
     }

@@ -27,6 +27,14 @@ public final class Card {
     private final boolean extrapolationAllowed;
     private final boolean missingPairsIdeal;
     private final Mixture mixture;
+    /** Reference temperature of the volume-based bases (K): 20 °C unless the card states another. */
+    private double basisReferenceKelvin = DEFAULT_BASIS_REFERENCE_KELVIN;
+
+    /**
+     * 20 °C, the temperature at which alcoholic strength by volume is defined (OIML R 22 (1975)), used for every
+     * basis measured per volume of mixture (%vol, mol/L, g/L) unless the card or the call states another.
+     */
+    public static final double DEFAULT_BASIS_REFERENCE_KELVIN = 293.15;
 
     /** A volumetric card combined by Muggianu's model; {@code excessVolume[i][j]} for i &lt; j, written i then j. */
     Card(String title, String source, Units units, List<Component> components, RedlichKister[][] excessVolume,
@@ -106,6 +114,30 @@ public final class Card {
     /** Whether pairs without coefficient rows are ideal (the card's 'missing pairs | ideal'). */
     public boolean missingPairsIdeal() {
         return missingPairsIdeal;
+    }
+
+    /** Sets the card's stated basis reference temperature (K); only the card builder calls this. */
+    void basisReferenceKelvin(double kelvin) {
+        this.basisReferenceKelvin = kelvin;
+    }
+
+    /**
+     * The reference temperature of the volume-based bases (%vol, mol/L, g/L), in the card's temperature unit: the
+     * card's 'basis reference temperature' row, or 20 °C (OIML R 22) when it has none.
+     */
+    public double basisReferenceTemperature() {
+        return units.temperature().fromKelvin(basisReferenceKelvin);
+    }
+
+    /** Whether the card states its basis reference temperature (rather than taking the 20 °C default). */
+    public boolean statesBasisReference() {
+        return basisReferenceStated;
+    }
+
+    private boolean basisReferenceStated;
+
+    void basisReferenceStated(boolean stated) {
+        this.basisReferenceStated = stated;
     }
 
     /** The calculator for any number of components. */

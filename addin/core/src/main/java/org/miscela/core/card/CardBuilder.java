@@ -116,7 +116,19 @@ final class CardBuilder {
                     missingIdeal);
         }
         boolean allow = choice(EXTRAPOLATION, "allow", "refuse");
-        return new Card(title, source, units, components, volume, enthalpy, validity, allow, missingIdeal);
+        Card card = new Card(title, source, units, components, volume, enthalpy, validity, allow, missingIdeal);
+        CardRow basisReference = rows.global(CardLabels.BASIS_REFERENCE);
+        if (basisReference != null) {
+            basisReference.atMost(1);
+            double kelvin = units.temperature().toKelvin(basisReference.number(0));
+            if (!(kelvin > 0.0) || Double.isInfinite(kelvin)) {
+                throw Problem.NOT_POSITIVE.raise(basisReference.number, basisReference.label,
+                        "the basis reference temperature (in kelvin)", Numbers.show(kelvin));
+            }
+            card.basisReferenceKelvin(kelvin);
+            card.basisReferenceStated(true);
+        }
+        return card;
     }
 
     private ExcessFunction section(String prefix, double factor, Subjects subjects, GeometricModel model,

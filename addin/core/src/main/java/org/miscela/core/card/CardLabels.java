@@ -35,6 +35,7 @@ final class CardLabels {
     static final String HEAT_CAPACITY_REFERENCE = "heat capacity reference temperature";
     static final String VALID_PAIR_TEMPERATURE = "valid pair temperature";
     static final String VALID_PAIR_FRACTION = "valid pair mole fraction";
+    static final String BASIS_REFERENCE = "basis reference temperature";
 
     /**
      * Rows of an excess-property section: binary coefficients A0..A99 (group 2), ternary C0..C9 (group 3; only C0..C2
@@ -45,14 +46,14 @@ final class CardLabels {
 
     /** Rows whose values start in column 2. */
     private static final String[] GLOBAL = {TITLE, SOURCE, TEMPERATURE_UNIT, DENSITY_UNIT, MOLAR_VOLUME_UNIT,
-        MOLAR_MASS_UNIT, VALID_TEMPERATURE, EXTRAPOLATION, MODEL, MISSING_PAIRS, ENTHALPY_UNIT, COMPONENT_ORDER};
+        MOLAR_MASS_UNIT, VALID_TEMPERATURE, EXTRAPOLATION, MODEL, MISSING_PAIRS, ENTHALPY_UNIT, COMPONENT_ORDER, BASIS_REFERENCE};
     /** Rows whose column 2 names a component (or a pair) and whose values follow. */
     private static final String[] KEYED = {COMPONENT, DENSITY_MODEL, DENSITY_REFERENCE, DENSITY_COEFFICIENTS,
         VALID_MOLE_FRACTION, HEAT_CAPACITY, HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION};
     /** Labels of version 2 beyond the excess-enthalpy and ternary rows. */
     private static final String[] VERSION_2 = {MODEL, MISSING_PAIRS, ENTHALPY_UNIT, HEAT_CAPACITY,
         EXCESS_VOLUME + " covariance", HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION,
-        COMPONENT_ORDER};
+        COMPONENT_ORDER, BASIS_REFERENCE};
     /** Keyed rows whose subject is a pair "a + b" rather than one component. */
     private static final String[] PAIR_KEYED = {VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION};
 

@@ -57,8 +57,19 @@ public final class FunctionCatalog {
     private static final ArgumentInfo BATCH_TEMPERATURE = range("temperature", "temperature",
             "Temperature of the components and of the mixture, in the card's unit: one value, or a column with "
                     + "one per batch.");
-    private static final String BASES = "One of: \"mole fraction\" (\"x\"), \"mass fraction\" (\"w\"), "
-            + "\"volume fraction\" (\"phi\"), \"%vol\", \"mol/L\", \"g/L\", \"mol/kg\".";
+    private static final String BASES = "Mole, mass or volume fraction, mass or mole percent, %vol, mol/L, g/L or "
+            + "mol/kg. Spelled \"mole fraction\" (\"x\"), \"mass fraction\" (\"w\"), \"volume fraction\" "
+            + "(\"phi\"), \"mass percent\" (\"%w/w\", \"wt%\", \"mass %\", \"% m/m\"), \"mole percent\" "
+            + "(\"mol %\"), \"%vol\" (\"%v/v\"), \"mol/L\", \"g/L\", \"mol/kg\".";
+    /** The trailing basis temperature of the blending functions: the reference of the volume-based bases. */
+    private static final ArgumentInfo BASIS_T = optional("basisTemperature", "basis temperature",
+            "The reference temperature of a volume-based basis (%vol, mol/L, g/L, volume fraction), card unit. "
+                    + "Left out: the card's 'basis reference temperature' row, else 20 °C (OIML R 22); "
+                    + "never the working temperature.");
+    /** The trailing basis of the property functions: how the composition argument is written. */
+    private static final ArgumentInfo COMPOSITION_BASIS = optional("compositionBasis", "basis",
+            "The basis the composition is written on (left out: mole fraction); for %vol, mol/L, g/L the last "
+                    + "component is the balance. " + BASES);
     private static final ArgumentInfo BALANCE = optional("balance", "balance",
             "The solvent that makes up the rest for %vol, mol/L, g/L and mol/kg, by number or name; left out, the "
                     + "card's last component.");
@@ -172,34 +183,34 @@ public final class FunctionCatalog {
                             + "1948); d_ij by the card's model: Muggianu x_i − x_j, Kohler (x_i − x_j)/(x_i + x_j), "
                             + "Toop 2x_a − 1 for pairs with the asymmetric component a",
                     "=MIX.EXCESSVOLUME(card; 0.3; 20)",
-                    CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE)
-                    .shows("-1.0567").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS)),
+                    CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("-1.0567").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS)),
             new FunctionInfo("partialMolarVolume", "MIX.PARTIALVOLUME", "partial molar volume of a component",
                     "Partial molar volume of one component in the mixture, in the card's molar volume unit.",
                     "V̄_k = V_k* + V^E + ∂V^E/∂x_k − Σ_j x_j·∂V^E/∂x_j (binary: V̄_1 = V_1* + V^E + x2·dV^E/dx1)",
                     "=MIX.PARTIALVOLUME(card; 1; 0.3; 20)",
-                    CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE)
-                    .shows("56.670").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, COMPONENT_PROBLEMS)),
+                    CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("56.670").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, COMPONENT_PROBLEMS)),
             new FunctionInfo("partialExcessMolarVolume", "MIX.PARTIALEXCESS",
                     "partial molar excess volume of a component",
                     "Partial molar excess volume of one component "
                             + "(its partial molar volume less its pure molar volume), in the card's molar volume unit.",
                     "V̄_k^E = V^E + ∂V^E/∂x_k − Σ_j x_j·∂V^E/∂x_j (binary: V̄_1^E = V^E + x2·dV^E/dx1)",
                     "=MIX.PARTIALEXCESS(card; \"water\"; 0.3; 20)",
-                    CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE)
-                    .shows("-0.7808").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, COMPONENT_PROBLEMS)),
+                    CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("-0.7808").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, COMPONENT_PROBLEMS)),
             new FunctionInfo("mixtureMolarVolume", "MIX.MOLARVOLUME", "molar volume of the mixture",
                     "Molar volume of the mixture (volume per mole of mixture), in the card's molar volume unit.",
                     "V_m = Σ_k x_k·V_k* + V^E, V_k* = M_k / ρ_k(T)",
                     "=MIX.MOLARVOLUME(card; 0.3; 20)",
-                    CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE)
-                    .shows("29.088").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS)),
+                    CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("29.088").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS)),
             new FunctionInfo("mixtureDensity", "MIX.DENSITY", "density of the mixture",
                     "Density of the mixture, in the card's density unit.",
                     "ρ = Σ_k x_k·M_k / V_m",
                     "=MIX.DENSITY(card; 0.3; 20)",
-                    CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE)
-                    .shows("908.667").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS)),
+                    CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("908.667").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS)),
             new FunctionInfo("pureDensity", "MIX.PUREDENSITY", "density of a pure component",
                     "Density of one pure component from its model on the card, in the card's density unit.",
                     "constant: ρ = c0; polynomial: ρ = Σ_j c_j·(T − T_ref)^j; Tanaka 2001: the CIPM water formula",
@@ -227,7 +238,7 @@ public final class FunctionCatalog {
                             + "refuse (for example the validity limit that is exceeded).",
                     "—",
                     "=MIX.CHECKPOINT(card; 0.3; 45)",
-                    CARD, MOLE_FRACTION_ONE, TEMPERATURE_ONE, EXTRAPOLATE).answersInWords()
+                    CARD, MOLE_FRACTION_ONE, TEMPERATURE_ONE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T).answersInWords()
                     .shows("The temperature 45 °C is outside the card's validity range 0 to 40 °C.").refuses(list(Problem.ARG_NOT_SINGLE)),
             new FunctionInfo("excessEnthalpy", "MIX.EXCESSENTHALPY",
                     "excess molar enthalpy H^E (heat of mixing per mole)",
@@ -235,16 +246,16 @@ public final class FunctionCatalog {
                             + "coefficients, in the card's enthalpy unit; negative when mixing releases heat.",
                     "H^E = Σ_i<j x_i·x_j·Σ_k A_k^ij(T)·d_ij^k + ternary terms, combined as for V^E",
                     "=MIX.EXCESSENTHALPY(tern; {0.3; 0.5; 0.2}; 25)",
-                    CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE)
-                    .shows("-719.5").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, list(Problem.NO_ENTHALPY))),
+                    CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("-719.5").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS, list(Problem.NO_ENTHALPY))),
             new FunctionInfo("partialExcessEnthalpy", "MIX.PARTIALENTHALPY",
                     "partial molar excess enthalpy of a component",
                     "Partial molar excess enthalpy of one component (its partial molar enthalpy less its pure molar "
                             + "enthalpy), in the card's enthalpy unit.",
                     "H̄_k^E = H^E + ∂H^E/∂x_k − Σ_j x_j·∂H^E/∂x_j",
                     "=MIX.PARTIALENTHALPY(tern; \"Q\"; {0.3; 0.5; 0.2}; 25)",
-                    CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE)
-                    .shows("-773.5").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS, list(Problem.NO_ENTHALPY))),
+                    CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("-773.5").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS, list(Problem.NO_ENTHALPY))),
             new FunctionInfo("mixingHeat", "MIX.MIXINGHEAT",
                     "enthalpy change on mixing given amounts (negative: heat released)",
                     "Enthalpy change when the given amounts of the pure components, all at one temperature, are mixed "
@@ -281,8 +292,8 @@ public final class FunctionCatalog {
                             + "(temperature, each component's mole fraction, each pair's limits); 0 (FALSE) otherwise.",
                     "—",
                     "=MIX.INSIDE(tern; {0.1; 0.3; 0.6}; 20)",
-                    CARD, MOLE_FRACTION, TEMPERATURE)
-                    .shows("0").refuses(union(COMPOSITION_PROBLEMS, list(Problem.BELOW_ABSOLUTE_ZERO))),
+                    CARD, MOLE_FRACTION, TEMPERATURE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("0").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, list(Problem.BELOW_ABSOLUTE_ZERO))),
             new FunctionInfo("traceEvaluation", "MIX.TRACE",
                     "every intermediate number of one evaluation, as a label/value table ([`docs/trace.md`](docs/trace.md))",
                     "Every intermediate number of one evaluation, as a two-column array of labels and values, so the "
@@ -291,8 +302,8 @@ public final class FunctionCatalog {
                     "=MIX.TRACE(card; 0.3; 20)",
                     CARD, MOLE_FRACTION_ONE, TEMPERATURE_ONE, optional("quantity", "property",
                             "\"volume\" (left out) or \"enthalpy\": which of the card's properties to "
-                                    + "trace."), EXTRAPOLATE)
-                    .shows("card").refuses(union(ONE_COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, list(Problem.NO_ENTHALPY, Problem.UNKNOWN_PROPERTY, Problem.ARG_NOT_SINGLE))),
+                                    + "trace."), EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("card").refuses(union(BLEND_PROBLEMS, ONE_COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, list(Problem.NO_ENTHALPY, Problem.UNKNOWN_PROPERTY, Problem.ARG_NOT_SINGLE))),
             new FunctionInfo("fitExcessVolume", "MIX.FITEXCESS",
                     "Redlich–Kister coefficients fitted to excess volumes (or their statistics)",
                     "Redlich–Kister coefficients fitted by least squares to excess volumes, or the fit's standard "
@@ -355,8 +366,8 @@ public final class FunctionCatalog {
                             "\"density\" (left out), \"excess volume\", \"molar volume\" or "
                                     + "\"partial volume\" (then give the component)."),
                     optional("component", "component", "For a partial volume: the component's number on the card "
-                            + "or its name."), EXTRAPOLATE)
-                    .shows("0.178").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, COMPONENT_PROBLEMS, list(Problem.NO_COVARIANCE, Problem.UNKNOWN_QUANTITY, Problem.ARG_NOT_TEXT))),
+                            + "or its name."), EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("0.178").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, COMPONENT_PROBLEMS, list(Problem.NO_COVARIANCE, Problem.UNKNOWN_QUANTITY, Problem.ARG_NOT_TEXT))),
             new FunctionInfo("convertComposition", "MIX.CONVERT",
                     "a composition on another basis: mole, mass or volume fraction, %vol, mol/L, g/L, mol/kg",
                     "A composition on one basis written on another: mole, mass or volume fraction, %vol, mol/L, g/L "
@@ -373,9 +384,9 @@ public final class FunctionCatalog {
                             + "the balance's own entry may be blank. A lone number on a two-component card is the "
                             + "first component's value."),
                     value("from", "from", BASES), value("to", "to", BASES),
-                    optional("temperature", "temperature", "The temperature of the from basis, and of the to basis "
-                            + "unless the next argument gives one, in the card's unit. Needed for volume fraction, "
-                            + "%vol, mol/L and g/L."),
+                    optional("temperature", "temperature", "The reference temperature of the from basis, and of the "
+                            + "to basis unless the next argument gives one, in the card's unit. Left out: the card's "
+                            + "'basis reference temperature' row, else 20 °C (OIML R 22)."),
                     optional("targetTemperature", "to temperature", "The temperature of the to basis."),
                     BALANCE, EXTRAPOLATE, PICK)
                     .shows("57.889").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
@@ -410,9 +421,9 @@ public final class FunctionCatalog {
                             + "component; on a two-component card a lone number is the first component's. A block "
                             + "gives one recipe per row."),
                     value("basis", "basis", BASES),
-                    value("temperature", "temperature", "The temperature of the quantity (when a volume) and of "
-                            + "the basis, in the card's unit."),
-                    STORAGE_T, RESULT_UNIT, BALANCE, EXTRAPOLATE, PICK)
+                    value("temperature", "temperature", "The temperature of the quantity when a volume, in the "
+                            + "card's unit (not of the basis: see basis temperature)."),
+                    STORAGE_T, RESULT_UNIT, BALANCE, EXTRAPOLATE, PICK, BASIS_T)
                     .shows("400.00").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
             new FunctionInfo("adjustBatch", "MIX.ADJUST",
                     "what to add to an existing batch to reach a target composition",
@@ -428,8 +439,8 @@ public final class FunctionCatalog {
                     UNIT, range("target", "target", "The target composition on the basis (a lone number on a "
                             + "two-component card is the first component's)."),
                     value("basis", "basis", BASES),
-                    value("temperature", "temperature", "The temperature of the batch and of the basis, in the "
-                            + "card's unit."),
+                    value("temperature", "temperature", "The temperature of the batch, in the card's unit (not of "
+                            + "the basis: see basis temperature)."),
                     optional("mode", "mode", "\"least\" additions (left out), \"within\" the limit (the closest "
                             + "composition if the target does not fit) or \"make up\" to it."),
                     optional("limit", "limit", "For within and make up: the largest, or the final, quantity."),
@@ -437,7 +448,7 @@ public final class FunctionCatalog {
                             + "mass weighed in air, is at the temperature)."),
                     optional("result", "result", "\"additions\" (left out), \"volume\" (of the batch "
                             + "after the additions) or \"summary\"."),
-                    RESULT_UNIT, BALANCE, EXTRAPOLATE, PICK)
+                    RESULT_UNIT, BALANCE, EXTRAPOLATE, PICK, BASIS_T)
                     .shows("0.2500").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS,
                             list(Problem.COMPONENT_NOT_HERE))),
             new FunctionInfo("additionVolume", "MIX.ADDVOLUME",
@@ -470,8 +481,8 @@ public final class FunctionCatalog {
                     optional("component", "component", "The component whose content is sought (left out: "
                             + "the first)."),
                     optional("basis", "basis", "The basis of the result (left out: mole fraction). " + BASES),
-                    optional("basisTemperature", "basis temperature", "The temperature of that basis "
-                            + "(left out: the measurement's)."),
+                    optional("basisTemperature", "basis temperature", "The reference temperature of that basis "
+                            + "(left out: the card's 'basis reference temperature' row, else 20 °C)."),
                     optional("reference", "reference", "For three or more components: mole fractions whose other "
                             + "components keep their ratios while the component varies."),
                     optional("from", "from", "The lowest mole fraction of the component to consider."),
@@ -496,8 +507,8 @@ public final class FunctionCatalog {
                             + "card's unit."),
                     optional("result", "result", "\"factor\" (left out), \"density\" (at the measured "
                             + "temperature) or \"reference density\"."),
-                    optional("basisTemperature", "basis temperature", "The temperature of the basis (left "
-                            + "out: the reference temperature)."),
+                    optional("basisTemperature", "basis temperature", "The reference temperature of the basis "
+                            + "(left out: the card's 'basis reference temperature' row, else 20 °C (OIML R 22))."),
                     BALANCE, EXTRAPOLATE)
                     .shows("0.99562").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS)),
             new FunctionInfo("addInInfo", "MIX.INFO",
@@ -530,10 +541,10 @@ public final class FunctionCatalog {
                             + "the card's molar mass unit. It needs no temperature and no density.",
                     "M = Σ_k x_k·M_k",
                     "=MIX.MOLARMASS(card; 0.3)",
-                    CARD, MOLE_FRACTION)
-                    .shows("26.431").refuses(list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER, Problem.NOT_BINARY,
+                    CARD, MOLE_FRACTION, COMPOSITION_BASIS, BASIS_T)
+                    .shows("26.431").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS, list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER, Problem.NOT_BINARY,
                             Problem.MOLE_FRACTION_OUTSIDE_UNIT, Problem.COMPOSITION_NEGATIVE,
-                            Problem.COMPOSITION_SUM, Problem.COMPOSITION_SHAPE, Problem.COMPOSITION_AMBIGUOUS))));
+                            Problem.COMPOSITION_SUM, Problem.COMPOSITION_SHAPE, Problem.COMPOSITION_AMBIGUOUS)))));
 
     private FunctionCatalog() {
     }

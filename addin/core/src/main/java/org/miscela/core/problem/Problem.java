@@ -189,13 +189,14 @@ public enum Problem {
     BLANK_VALUE(BLEND, "The %s of %s is blank; %s."),
     VALUE_NOT_FINITE(BLEND, "The %s of %s must be a finite number; found %s."),
     VALUE_NEGATIVE(BLEND, "The %s of %s is %s; it cannot be negative."),
+    VALUE_OUT_OF_RANGE(BLEND, "The %s %s is outside 0 to %s (the entry for %s)."),
     BLEND_UNKNOWN_UNIT(BLEND, "The unit \"%s\" is not recognised; use one of: %s."),
     WRONG_DIMENSION(BLEND, "%s is a unit of %s, but the %s needs a unit of %s (%s)."),
     BLEND_UNKNOWN_BASIS(BLEND, "The composition basis \"%s\" is not recognised; use one of: %s."),
     UNKNOWN_RESULT(BLEND, "The choice \"%s\" is not recognised; use one of: %s."),
 
     // ... compositions
-    FRACTION_SUM(BLEND, "The %s sum to %s; they must sum to 1 (within 1e-6)."),
+    FRACTION_SUM(BLEND, "The %s sum to %s; they must sum to %s (within 1e-6)."),
     NEEDS_BALANCE(BLEND, "Reading %s needs a balance component: name the component that makes up the rest of the mixture "
             + "(usually the solvent); its own entry may then be left blank."),
     NEEDS_SOLVENT(BLEND, "Molalities need a solvent: name the component per kilogram of which the moles are counted."),

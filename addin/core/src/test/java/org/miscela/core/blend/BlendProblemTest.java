@@ -66,6 +66,8 @@ class BlendProblemTest {
                 new double[] {Double.POSITIVE_INFINITY, NAN}, CompositionBasis.molarity(20, 1), E));
         m.put(Problem.VALUE_NEGATIVE, () -> Compositions.toMoleFractions(EW, new double[] {-1, NAN},
                 CompositionBasis.molarity(20, 1), E));
+        m.put(Problem.VALUE_OUT_OF_RANGE, () -> Compositions.toMoleFractions(EW, new double[] {140, -40},
+                CompositionBasis.of(CompositionBasis.Kind.MASS_PERCENT, NAN, -1), E));
         m.put(Problem.BLEND_UNKNOWN_UNIT, () -> AmountUnit.lookup("gallon"));
         m.put(Problem.WRONG_DIMENSION, () -> Batches.totals(EW, half, 20, E).mass(AmountUnit.L));
         m.put(Problem.BLEND_UNKNOWN_BASIS, () -> CompositionBasis.Kind.lookup("ppm"));

@@ -147,7 +147,7 @@ public class CardFormatDocTest {
     @Test
     void examplesBehaveAsDescribed() throws IOException {
         List<Example> examples = examples(lines());
-        assertEquals(7, examples.size());
+        assertEquals(8, examples.size());
         Card one = CardReader.read(examples.get(0).cells);
         // "the functions refuse x1 above 0.9 unless extrapolation is allowed"
         assertEquals(CardFunctions.OK, CardFunctions.check(one, 0.0, T, Extrapolation.AS_CARD));
@@ -203,6 +203,11 @@ public class CardFormatDocTest {
         assertEquals(0.3 * 0.5 * -1.8 + 0.2 * 0.5 * -0.9,
                 CardFunctions.excessMolarVolume(seven, z, 298.15, Extrapolation.AS_CARD), 1e-14);
         assertEquals(null, seven.excessVolume(0, 1));
+        // Example 8: "every %vol, mol/L, g/L or volume fraction … is at 15 °C unless the call gives its own"
+        Card eight = CardReader.read(examples.get(7).cells);
+        assertEquals(15.0, eight.basisReferenceTemperature(), 1e-12);
+        assertTrue(eight.statesBasisReference());
+        assertEquals(20.0, one.basisReferenceTemperature() - 273.15, 1e-9, "example 1 (in K) keeps the 20 °C default");
     }
 
     private static final Pattern CHECK_MARKER = Pattern.compile("^\\s*<!--\\s*check-example:(.*?)-->\\s*$");
