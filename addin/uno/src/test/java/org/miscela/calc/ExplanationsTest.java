@@ -89,7 +89,7 @@ class ExplanationsTest {
         // a required single value is typed as a range (the component, the recipe's quantity, unit, basis and
         // temperature), so that the wizard shows it as required
         assertEquals("RRRRVVV", Explanations.kinds(FunctionCatalog.byMethod("partialMolarVolume")));
-        assertEquals("RRRRRRVVVVV", Explanations.kinds(FunctionCatalog.byMethod("recipe")));
+        assertEquals("RRRRRRVVVVVV", Explanations.kinds(FunctionCatalog.byMethod("recipe")));
         assertEquals("V", Explanations.kinds(FunctionCatalog.byMethod("addInInfo")));
     }
 

@@ -43,7 +43,8 @@ class PerComponentProperties {
     @Property(tries = 3000, shrinking = ShrinkingMode.OFF)
     void aComponentAloneIsThatElementOfTheWholeResult(@ForAll("calls") FuzzCall call) throws Exception {
         Object[] args = call.allArguments();
-        int last = args.length - 1;
+        // the component argument: last but for trailing arguments appended after it (a basis temperature)
+        int last = componentIndex(call.function);
         args[last] = Any.VOID;
         Object whole = invoke(call.method(), args);
         if (!(whole instanceof Any)) {
@@ -98,5 +99,15 @@ class PerComponentProperties {
             }
             throw e;
         }
+    }
+
+    private static int componentIndex(org.miscela.core.catalog.FunctionInfo f) {
+        java.util.List<org.miscela.core.catalog.ArgumentInfo> all = f.arguments();
+        for (int i = all.size() - 1; i >= 0; i--) {
+            if (all.get(i).name().equals("component")) {
+                return i;
+            }
+        }
+        throw new AssertionError(f.method() + " has no component argument");
     }
 }
