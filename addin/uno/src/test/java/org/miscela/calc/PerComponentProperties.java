@@ -1,5 +1,6 @@
 package org.miscela.calc;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -78,7 +79,7 @@ class PerComponentProperties {
 
     @AfterContainer
     static void somethingWasCompared() {
-        System.out.println("per-component property: " + COMPARED.get() + " component values compared");
+        Figures.note(PerComponentProperties.class, "%s", "per-component property: " + COMPARED.get() + " component values compared");
         assertTrue(COMPARED.get() > 100, "the generated calls gave too few array results to compare: "
                 + COMPARED.get());
     }

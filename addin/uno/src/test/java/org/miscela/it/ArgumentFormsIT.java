@@ -1,5 +1,6 @@
 package org.miscela.it;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import com.sun.star.beans.PropertyValue;
@@ -70,7 +71,7 @@ class ArgumentFormsIT {
             } finally {
                 Sheets.close(doc);
             }
-            System.out.println("what each parameter type receives: " + seen);
+            Figures.note(ArgumentFormsIT.class, "%s", "what each parameter type receives: " + seen);
             assertEquals(expected, seen);
 
             Map<String, String> optional = new LinkedHashMap<>();
@@ -97,7 +98,7 @@ class ArgumentFormsIT {
             expectedOptional.put("PROBE.DOUBLE", "required");
             expectedOptional.put("PROBE.CELLS", "required");
             expectedOptional.put("PROBE.ANY", "optional");
-            System.out.println("the wizard's optional flag per parameter type: " + optional);
+            Figures.note(ArgumentFormsIT.class, "%s", "the wizard's optional flag per parameter type: " + optional);
             assertEquals(new java.util.TreeMap<>(expectedOptional), new java.util.TreeMap<>(optional));
         } finally {
             office.dispose();

@@ -1,5 +1,6 @@
 package org.miscela.it;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import com.sun.star.container.XNamed;
@@ -58,7 +59,7 @@ class LayoutIT {
             double[] picked = {value(sheet, 3, 0, seen), value(sheet, 3, 1, seen)};
             double[] additions = {value(sheet, 1, 5, seen), value(sheet, 1, 6, seen)};
             double water = value(sheet, 2, 6, seen);
-            System.out.println("layout cells: " + seen);
+            Figures.note(LayoutIT.class, "%s", "layout cells: " + seen);
             assertEquals(0.4, down[0], TOL, "a column in, a column out: ethanol");
             assertEquals(0.6, down[1], TOL, "a column in, a column out: water");
             assertEquals(0.4, across[0], TOL, "a row in, a row out: ethanol");

@@ -69,7 +69,7 @@ class WizardMetadataIT {
                 }
             }
             if (!wrongHere.isEmpty()) {
-                System.out.printf("wizard: %s shows %s with the wrong optional flag%n", f.displayName(), wrongHere);
+                Figures.note(WizardMetadataIT.class, "wizard: %s shows %s with the wrong optional flag", f.displayName(), wrongHere);
             }
         }
         Figures.note(WizardMetadataIT.class, "wizard: %d Miscela functions with all argument help present; %d "

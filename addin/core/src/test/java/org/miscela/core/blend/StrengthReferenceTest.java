@@ -1,5 +1,6 @@
 package org.miscela.core.blend;
 
+import org.miscela.testing.Figures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -54,7 +55,7 @@ class StrengthReferenceTest {
         double p = oimlMassFraction(40.0, 20);
         CompositionBasis byDefault = BlendFunctions.basis(CARD, "%vol", Double.NaN, BlendFunctions.DEFAULT_BALANCE);
         assertEquals(20.0, byDefault.temperature(), 0.0);
-        System.out.println("t [°C] | density (OIML) | strength read, basis at t (old default) | OIML strength at t"
+        Figures.note(StrengthReferenceTest.class, "%s", "t [°C] | density (OIML) | strength read, basis at t (old default) | OIML strength at t"
                 + " | strength read, basis at 20 °C (new default) | OIML");
         for (double t : DELIVERY) {
             double rho = Oiml22.density(p, t);
@@ -63,7 +64,7 @@ class StrengthReferenceTest {
             double before = BlendFunctions.fromDensity(CARD, rho, t, 0, null, Double.NaN, Double.NaN, atT, E);
             assertEquals(40.0, now, STRENGTH_TOLERANCE, "t = " + t);
             assertEquals(oimlStrength(p, t), before, STRENGTH_TOLERANCE, "t = " + t);
-            System.out.printf("%5.1f | %.3f | %.3f | %.3f | %.3f | 40.000%n", t, rho, before, oimlStrength(p, t), now);
+            Figures.note(StrengthReferenceTest.class, "%5.1f | %.3f | %.3f | %.3f | %.3f | 40.000", t, rho, before, oimlStrength(p, t), now);
         }
         // the figure of the issue: read at 5 °C with the basis at the measurement temperature, 39.76 %vol
         assertEquals(39.76, oimlStrength(p, 5), 0.005);
@@ -90,7 +91,7 @@ class StrengthReferenceTest {
         double tolerance = right * (1.5e-5 + STRENGTH_TOLERANCE / 40.0);
         assertEquals(right, kg[0], tolerance);
         assertEquals(old, kgOld[0], tolerance);
-        System.out.printf("2,500 L of 40 %%vol at 12 °C: ethanol %.3f kg (OIML %.3f) with the 20 °C reference; %.3f kg "
+        Figures.note(StrengthReferenceTest.class, "2,500 L of 40 %%vol at 12 °C: ethanol %.3f kg (OIML %.3f) with the 20 °C reference; %.3f kg "
                 + "(OIML %.3f) with the strength taken at 12 °C: %+.3f %%%n", kg[0], right, kgOld[0], old,
                 100 * (kgOld[0] / kg[0] - 1));
         assertTrue(kgOld[0] > kg[0], "the strength at 12 °C is lower, so it would have bought more ethanol");
