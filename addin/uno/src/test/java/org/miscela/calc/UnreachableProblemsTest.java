@@ -21,7 +21,6 @@ import org.miscela.core.model.RedlichKister;
 import org.miscela.core.card.TestCards;
 import org.miscela.core.blend.BlendFunctions;
 import org.miscela.core.blend.CompositionBasis;
-import org.miscela.core.fit.ExcessVolumeUncertainty;
 import org.miscela.core.fit.LeastSquaresFit;
 import org.miscela.core.fit.LinearLeastSquares;
 import org.miscela.core.fit.OrderSelection;
@@ -66,19 +65,6 @@ class UnreachableProblemsTest {
                 LinearLeastSquares.fit(new double[][] {{1, 0, 0}, {1, 1, 1}, {1, 2, 4}}, new double[] {1, 2, 3.1},
                         null)),
                 0.05));
-        RedlichKister rk = new RedlichKister(298.15, new double[][] {{-4.2}, {-0.9}});
-        double[][] c = {{1e-4, 0}, {0, 1e-4}};
-        m.put(Problem.COVARIANCE_SHAPE, () -> new ExcessVolumeUncertainty(rk, 0, new double[3][3]));
-        m.put(Problem.COVARIANCE_NOT_FINITE, () -> new ExcessVolumeUncertainty(rk, 0,
-                new double[][] {{NAN, 0}, {0, 1e-4}}));
-        m.put(Problem.FIT_COVARIANCE_NOT_SYMMETRIC, () -> new ExcessVolumeUncertainty(rk, 0,
-                new double[][] {{1e-4, 1e-5}, {0, 1e-4}}));
-        m.put(Problem.COVARIANCE_NEGATIVE_VARIANCE, () -> new ExcessVolumeUncertainty(rk, 0,
-                new double[][] {{-1e-4, 0}, {0, 1e-4}}));
-        m.put(Problem.MOLE_FRACTION, () -> new ExcessVolumeUncertainty(rk, 0, c).excessVolume(1.2, 298.15));
-        m.put(Problem.TEMPERATURE, () -> new ExcessVolumeUncertainty(rk, 0, c).excessVolume(0.5, -1));
-        m.put(Problem.BAD_COMPONENT, () -> new ExcessVolumeUncertainty(rk, 0, c).partialExcessVolume(3, 0.5,
-                298.15));
         m.put(Problem.ARGUMENT_NOT_FINITE, () -> CompositionBasis.molarity(Double.POSITIVE_INFINITY, 1));
         m.put(Problem.NO_SUCH_COMPONENT, () -> BlendFunctions.fromDensity(EW, 900, 20, 5, null, NAN, NAN,
                 CompositionBasis.moleFraction(), E));

@@ -99,9 +99,6 @@ public final class FunctionCatalog {
                     + "air (\"kg (conventional)\"). Masses are converted with the card's molar masses.");
 
     // --- call problems that no cell can produce (see notFromACell), with the reason; no function lists them
-    private static final String UNCERTAINTY_OF_A_FIT = "raised only by the library's uncertainty of a fitted "
-            + "expansion (ExcessVolumeUncertainty), which no cell function calls: MIX.UNCERTAINTY propagates the "
-            + "card's own covariance, whose problems are the card's";
     private static final java.util.Map<Problem, String> NOT_FROM_A_CELL = notFromACell(
             Problem.ARG_NOT_FINITE, "Calc never passes NaN or an infinity (a cell that computes one shows an error, "
                     + "and Calc does not call a function with an error argument); the check guards the library's "
@@ -126,13 +123,6 @@ public final class FunctionCatalog {
             Problem.NOT_NESTED, "the order table compares the fits of order 0, 1, 2, …, each with more "
                     + "coefficients than the one before",
             Problem.NOT_SAME_POINTS, "the order table fits every order to the same points",
-            Problem.COVARIANCE_SHAPE, UNCERTAINTY_OF_A_FIT,
-            Problem.COVARIANCE_NOT_FINITE, UNCERTAINTY_OF_A_FIT,
-            Problem.FIT_COVARIANCE_NOT_SYMMETRIC, UNCERTAINTY_OF_A_FIT,
-            Problem.COVARIANCE_NEGATIVE_VARIANCE, UNCERTAINTY_OF_A_FIT,
-            Problem.MOLE_FRACTION, UNCERTAINTY_OF_A_FIT,
-            Problem.TEMPERATURE, UNCERTAINTY_OF_A_FIT,
-            Problem.BAD_COMPONENT, UNCERTAINTY_OF_A_FIT,
             Problem.ARGUMENT_NOT_FINITE, "Calc never passes an infinity, and the blending functions compute no "
                     + "temperature of their own",
             Problem.NO_SUCH_COMPONENT, "every component argument is checked against the card first "

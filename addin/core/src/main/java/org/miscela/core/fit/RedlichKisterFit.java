@@ -61,10 +61,6 @@ public final class RedlichKisterFit {
         return new RedlichKister(referenceKelvin, coefficients());
     }
 
-    /** Linear propagation of the fit's coefficient covariance to V^E, the partial excess volumes and ρ. */
-    public ExcessVolumeUncertainty uncertainty() {
-        return new ExcessVolumeUncertainty(toRedlichKister(), orderInT, leastSquares.covariance());
-    }
 
     private double[][] reshape(double[] flat) {
         double[][] a = new double[orderInX + 1][orderInT + 1];

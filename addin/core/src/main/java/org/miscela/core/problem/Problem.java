@@ -170,13 +170,6 @@ public enum Problem {
     NOT_NESTED(FIT, "Fit %d of the order comparison has %d parameter(s), no more than fit %d with %d; each order must "
             + "add parameters to the one before."),
     NOT_SAME_POINTS(FIT, "Fit %d of the order comparison uses %d point(s) but fit 1 uses %d; compare fits to the same data."),
-    COVARIANCE_SHAPE(FIT, "The covariance must be %d×%d for this expansion; found %d×%d."),
-    COVARIANCE_NOT_FINITE(FIT, "The covariance entry (%d, %d) is not a finite number (%s)."),
-    FIT_COVARIANCE_NOT_SYMMETRIC(FIT, "The covariance is not symmetric: entry (%d, %d) is %s but (%d, %d) is %s."),
-    COVARIANCE_NEGATIVE_VARIANCE(FIT, "The covariance has a negative variance %s at (%d, %d)."),
-    MOLE_FRACTION(FIT, "The mole fraction %s lies outside 0..1."),
-    TEMPERATURE(FIT, "The temperature %s K is not a finite value above absolute zero."),
-    BAD_COMPONENT(FIT, "The component must be 1 or 2; found %d."),
 
     // --- the blending functions (the card's own checks, such as the validity range, are the call entries above)
     // ... their arguments

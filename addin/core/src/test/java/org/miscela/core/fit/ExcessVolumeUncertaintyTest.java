@@ -57,7 +57,7 @@ class ExcessVolumeUncertaintyTest {
     @Test
     void gradientsMatchFiniteDifferencesOfTheExpansion() {
         RedlichKisterFit fit = invented();
-        ExcessVolumeUncertainty u = fit.uncertainty();
+        ExcessVolumeUncertainty u = ExcessVolumeUncertainty.of(fit);
         double[][] a = fit.coefficients();
         double x1 = 0.27;
         double t = 305.0;
@@ -85,7 +85,7 @@ class ExcessVolumeUncertaintyTest {
     @Test
     void linearPropagationAgreesWithMonteCarlo() {
         RedlichKisterFit fit = invented();
-        ExcessVolumeUncertainty linear = fit.uncertainty();
+        ExcessVolumeUncertainty linear = ExcessVolumeUncertainty.of(fit);
         double[] mean = fit.leastSquares().coefficients();
         CorrelatedRandomVectorGenerator draws = new CorrelatedRandomVectorGenerator(mean,
                 MatrixUtils.createRealMatrix(fit.leastSquares().covariance()), 1e-14,
@@ -143,7 +143,7 @@ class ExcessVolumeUncertaintyTest {
 
     @Test
     void pureComponentsHaveNoExcessUncertainty() {
-        ExcessVolumeUncertainty u = invented().uncertainty();
+        ExcessVolumeUncertainty u = ExcessVolumeUncertainty.of(invented());
         assertEquals(0.0, u.excessVolume(0, 300));
         assertEquals(0.0, u.excessVolume(1, 300));
         assertEquals(0.0, u.partialExcessVolume(2, 0, 300));
@@ -153,30 +153,29 @@ class ExcessVolumeUncertaintyTest {
     @Test
     void rejectsUnusableCovariance() {
         RedlichKister rk = new RedlichKister(T_REF, A);
-        assertEquals("The covariance must be 6×6 for this expansion; found 3×3.", assertThrows(MiscelaException.class,
+        assertEquals("The covariance must be 6×6 for this expansion; found 3×3.", assertThrows(IllegalArgumentException.class,
                 () -> new ExcessVolumeUncertainty(rk, 1, new double[3][3])).getMessage());
         double[][] c = new double[6][6];
         for (int i = 0; i < 6; i++) {
             c[i][i] = 1;
         }
         c[0][1] = 0.5;
-        assertEquals(Problem.FIT_COVARIANCE_NOT_SYMMETRIC,
-                assertThrows(MiscelaException.class, () -> new ExcessVolumeUncertainty(rk, 1, c)).problem());
+        assertTrue(assertThrows(IllegalArgumentException.class, () -> new ExcessVolumeUncertainty(rk, 1, c)).getMessage()
+                .startsWith("The covariance is not symmetric"));
         c[1][0] = 0.5;
         c[2][2] = -1;
-        assertEquals(Problem.COVARIANCE_NEGATIVE_VARIANCE,
-                assertThrows(MiscelaException.class, () -> new ExcessVolumeUncertainty(rk, 1, c)).problem());
+        assertTrue(assertThrows(IllegalArgumentException.class, () -> new ExcessVolumeUncertainty(rk, 1, c)).getMessage()
+                .startsWith("The covariance has a negative variance"));
         c[2][2] = Double.NaN;
-        assertEquals(Problem.COVARIANCE_NOT_FINITE,
-                assertThrows(MiscelaException.class, () -> new ExcessVolumeUncertainty(rk, 1, c)).problem());
+        assertTrue(assertThrows(IllegalArgumentException.class, () -> new ExcessVolumeUncertainty(rk, 1, c)).getMessage()
+                .startsWith("The covariance entry (3, 3) is not a finite number"));
         c[2][2] = 1;
         ExcessVolumeUncertainty u = new ExcessVolumeUncertainty(rk, 1, c);
-        assertEquals(Problem.BAD_COMPONENT,
-                assertThrows(MiscelaException.class, () -> u.partialExcessVolume(3, 0.5, 300)).problem());
+        assertEquals("The component must be 1 or 2; found 3.", assertThrows(IllegalArgumentException.class, () -> u.partialExcessVolume(3, 0.5, 300)).getMessage());
         assertEquals("The mole fraction 1.2 lies outside 0..1.",
-                assertThrows(MiscelaException.class, () -> u.excessVolume(1.2, 300)).getMessage());
+                assertThrows(IllegalArgumentException.class, () -> u.excessVolume(1.2, 300)).getMessage());
         assertEquals("The temperature -1.0 K is not a finite value above absolute zero.",
-                assertThrows(MiscelaException.class, () -> u.density(0.5, -1, FIRST, SECOND)).getMessage());
+                assertThrows(IllegalArgumentException.class, () -> u.density(0.5, -1, FIRST, SECOND)).getMessage());
     }
 
     /** {V^E, V̄1^E, V̄2^E} from the library's own expansion and its analytic slope. */

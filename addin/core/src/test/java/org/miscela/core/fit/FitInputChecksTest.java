@@ -31,6 +31,11 @@ class FitInputChecksTest {
         return assertThrows(MiscelaException.class, call).getMessage();
     }
 
+    /** The words of the test tool ExcessVolumeUncertainty, which refuses with plain IllegalArgumentExceptions. */
+    private static String toolRefusal(Executable call) {
+        return assertThrows(IllegalArgumentException.class, call).getMessage();
+    }
+
     private static double[] with(double[] v, int i, double value) {
         double[] c = v.clone();
         c[i] = value;
@@ -192,22 +197,22 @@ class FitInputChecksTest {
         assertEquals(expected, u.excessVolume(0.3, T), 1e-15 * expected);
         double[][] d = {{4.0, 1.0}, {1.0 + 1.1e-9 * 6, 9.0}};
         assertEquals("The covariance is not symmetric: entry (2, 1) is " + d[1][0] + " but (1, 2) is 1.0.",
-                refusal(() -> new ExcessVolumeUncertainty(rk, 0, d)));
+                toolRefusal(() -> new ExcessVolumeUncertainty(rk, 0, d)));
         double[][] e = {{4.0, Double.POSITIVE_INFINITY}, {1.0, 9.0}};
         assertEquals("The covariance entry (1, 2) is not a finite number (Infinity).",
-                refusal(() -> new ExcessVolumeUncertainty(rk, 0, e)));
+                toolRefusal(() -> new ExcessVolumeUncertainty(rk, 0, e)));
         double[][] f = {{4.0, 1.0}, {1.0, -9.0}};
         assertEquals("The covariance has a negative variance -9.0 at (2, 2).",
-                refusal(() -> new ExcessVolumeUncertainty(rk, 0, f)));
+                toolRefusal(() -> new ExcessVolumeUncertainty(rk, 0, f)));
         // a variance of exactly zero is allowed (a coefficient fixed by the card)
         assertEquals(0.0, new ExcessVolumeUncertainty(rk, 0, new double[][] {{0, 0}, {0, 0}}).excessVolume(0.3, T));
         assertEquals("The covariance must be 2×2 for this expansion; found 2×0.",
-                refusal(() -> new ExcessVolumeUncertainty(rk, 0, new double[][] {{}, {}})));
+                toolRefusal(() -> new ExcessVolumeUncertainty(rk, 0, new double[][] {{}, {}})));
         assertEquals("The order in x must be a whole number from 0 to 30; found 31.", refusal(
                 () -> new ExcessVolumeUncertainty(new org.miscela.core.model.RedlichKister(T, new double[32][1]), 0,
                         new double[32][32])));
         assertEquals("The temperature 0.0 K is not a finite value above absolute zero.",
-                refusal(() -> u.excessVolume(0.5, 0.0)));
+                toolRefusal(() -> u.excessVolume(0.5, 0.0)));
         assertEquals(0.0, u.excessVolume(0.0, T), 0.0);
         assertEquals(0.0, u.excessVolume(1.0, T), 0.0);
     }

@@ -1,6 +1,5 @@
 package org.miscela.core.fit;
 
-import org.miscela.core.problem.Problem;
 import org.apache.commons.math3.util.MathArrays;
 import org.miscela.core.model.Component;
 import org.miscela.core.model.RedlichKister;
@@ -12,9 +11,21 @@ import org.miscela.core.model.RedlichKister;
  * them this is exact; ρ depends on V^E nonlinearly, and its gradient is taken at the expansion's own V^E. The pure
  * liquids' densities are taken as exact.
  *
+ * <p>A test tool: an independent propagation the tests compare MIX.UNCERTAINTY's with; no cell function uses it.
+ *
  * <p>Coefficients are numbered as in {@link RedlichKisterFit}: a_kj is k·(orderInT + 1) + j. Immutable.
  */
 public final class ExcessVolumeUncertainty {
+    /** The linear propagation of a fit's own coefficient covariance (what RedlichKisterFit offered before). */
+    public static ExcessVolumeUncertainty of(RedlichKisterFit fit) {
+        return new ExcessVolumeUncertainty(fit.toRedlichKister(), fit.orderInT(), fit.leastSquares().covariance());
+    }
+
+    /** A test tool's refusal: plain words, not a catalogue entry (no cell function reaches this class). */
+    private static IllegalArgumentException refused(String pattern, Object... args) {
+        return new IllegalArgumentException(String.format(java.util.Locale.ROOT, pattern, args));
+    }
+
     /** Entries (i, j) and (j, i) may differ by this much relative to √(C_ii·C_jj), e.g. after printing to cells. */
     static final double SYMMETRY_TOLERANCE = 1e-9;
 
@@ -65,7 +76,7 @@ public final class ExcessVolumeUncertainty {
     /** V̄1^E = V^E + x2·∂V^E/∂x1 and V̄2^E = V^E − x1·∂V^E/∂x1, differentiated with respect to each a_kj. */
     double[] partialExcessVolumeGradient(int component, double x1, double kelvin) {
         if (component != 1 && component != 2) {
-            throw Problem.BAD_COMPONENT.raise(component);
+            throw refused("The component must be 1 or 2; found %d.", component);
         }
         double[] value = excessVolumeGradient(x1, kelvin);
         double[] slope = slopeGradient(x1, kelvin - expansion.referenceKelvin());
@@ -108,10 +119,10 @@ public final class ExcessVolumeUncertainty {
 
     private static void checkPoint(double x1, double kelvin) {
         if (!(x1 >= 0 && x1 <= 1)) {
-            throw Problem.MOLE_FRACTION.raise(x1);
+            throw refused("The mole fraction %s lies outside 0..1.", x1);
         }
         if (!(kelvin > 0) || !Double.isFinite(kelvin)) {
-            throw Problem.TEMPERATURE.raise(kelvin);
+            throw refused("The temperature %s K is not a finite value above absolute zero.", kelvin);
         }
     }
 
@@ -123,24 +134,24 @@ public final class ExcessVolumeUncertainty {
             }
         }
         if (c.length != size || columns != size) {
-            throw Problem.COVARIANCE_SHAPE.raise(size, size, c.length, Math.max(columns, 0));
+            throw refused("The covariance must be %d×%d for this expansion; found %d×%d.", size, size, c.length, Math.max(columns, 0));
         }
         double[][] s = new double[size][size];
         for (int i = 0; i < size; i++) {
             for (int j = 0; j < size; j++) {
                 if (!Double.isFinite(c[i][j])) {
-                    throw Problem.COVARIANCE_NOT_FINITE.raise(i + 1, j + 1, c[i][j]);
+                    throw refused("The covariance entry (%d, %d) is not a finite number (%s).", i + 1, j + 1, c[i][j]);
                 }
             }
             if (c[i][i] < 0) {
-                throw Problem.COVARIANCE_NEGATIVE_VARIANCE.raise(c[i][i], i + 1, i + 1);
+                throw refused("The covariance has a negative variance %s at (%d, %d).", c[i][i], i + 1, i + 1);
             }
         }
         for (int i = 0; i < size; i++) {
             for (int j = 0; j < i; j++) {
                 double allowed = SYMMETRY_TOLERANCE * Math.sqrt(c[i][i] * c[j][j]);
                 if (Math.abs(c[i][j] - c[j][i]) > allowed) {
-                    throw Problem.FIT_COVARIANCE_NOT_SYMMETRIC.raise(i + 1, j + 1, c[i][j], j + 1, i + 1, c[j][i]);
+                    throw refused("The covariance is not symmetric: entry (%d, %d) is %s but (%d, %d) is %s.", i + 1, j + 1, c[i][j], j + 1, i + 1, c[j][i]);
                 }
                 s[i][j] = 0.5 * (c[i][j] + c[j][i]);
                 s[j][i] = s[i][j];
