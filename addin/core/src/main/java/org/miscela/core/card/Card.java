@@ -27,8 +27,8 @@ public final class Card {
     private final boolean extrapolationAllowed;
     private final boolean missingPairsIdeal;
     private final Mixture mixture;
-    /** Reference temperature of the volume-based bases (K): 20 °C unless the card states another. */
-    private double basisReferenceKelvin = DEFAULT_BASIS_REFERENCE_KELVIN;
+    /** The reference temperature of the volume-based bases the card states (K), or NaN when it states none. */
+    private final double statedBasisReferenceKelvin;
 
     /**
      * 20 °C, the temperature at which alcoholic strength by volume is defined (OIML R 22 (1975)), used for every
@@ -50,6 +50,14 @@ public final class Card {
     Card(String title, String source, Units units, List<Component> components, ExcessFunction excessVolume,
             ExcessFunction excessEnthalpy, Validity validity, boolean extrapolationAllowed,
             boolean missingPairsIdeal) {
+        this(title, source, units, components, excessVolume, excessEnthalpy, validity, extrapolationAllowed,
+                missingPairsIdeal, Double.NaN);
+    }
+
+    /** @param statedBasisReferenceKelvin the card's 'basis reference temperature' in K, or NaN when it has none */
+    Card(String title, String source, Units units, List<Component> components, ExcessFunction excessVolume,
+            ExcessFunction excessEnthalpy, Validity validity, boolean extrapolationAllowed,
+            boolean missingPairsIdeal, double statedBasisReferenceKelvin) {
         this.title = title;
         this.source = source;
         this.units = units;
@@ -59,6 +67,7 @@ public final class Card {
         this.validity = validity;
         this.extrapolationAllowed = extrapolationAllowed;
         this.missingPairsIdeal = missingPairsIdeal;
+        this.statedBasisReferenceKelvin = statedBasisReferenceKelvin;
         this.mixture = new Mixture(this);
     }
 
@@ -116,28 +125,18 @@ public final class Card {
         return missingPairsIdeal;
     }
 
-    /** Sets the card's stated basis reference temperature (K); only the card builder calls this. */
-    void basisReferenceKelvin(double kelvin) {
-        this.basisReferenceKelvin = kelvin;
-    }
-
     /**
      * The reference temperature of the volume-based bases (%vol, mol/L, g/L), in the card's temperature unit: the
      * card's 'basis reference temperature' row, or 20 °C (OIML R 22) when it has none.
      */
     public double basisReferenceTemperature() {
-        return units.temperature().fromKelvin(basisReferenceKelvin);
+        return units.temperature().fromKelvin(statesBasisReference() ? statedBasisReferenceKelvin
+                : DEFAULT_BASIS_REFERENCE_KELVIN);
     }
 
     /** Whether the card states its basis reference temperature (rather than taking the 20 °C default). */
     public boolean statesBasisReference() {
-        return basisReferenceStated;
-    }
-
-    private boolean basisReferenceStated;
-
-    void basisReferenceStated(boolean stated) {
-        this.basisReferenceStated = stated;
+        return !Double.isNaN(statedBasisReferenceKelvin);
     }
 
     /** The calculator for any number of components. */

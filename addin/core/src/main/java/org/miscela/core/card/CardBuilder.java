@@ -116,7 +116,7 @@ final class CardBuilder {
                     missingIdeal);
         }
         boolean allow = choice(EXTRAPOLATION, "allow", "refuse");
-        Card card = new Card(title, source, units, components, volume, enthalpy, validity, allow, missingIdeal);
+        double basisReferenceKelvin = Double.NaN;
         CardRow basisReference = rows.global(CardLabels.BASIS_REFERENCE);
         if (basisReference != null) {
             basisReference.atMost(1);
@@ -125,10 +125,10 @@ final class CardBuilder {
                 throw Problem.NOT_POSITIVE.raise(basisReference.number, basisReference.label,
                         "the basis reference temperature (in kelvin)", Numbers.show(kelvin));
             }
-            card.basisReferenceKelvin(kelvin);
-            card.basisReferenceStated(true);
+            basisReferenceKelvin = kelvin;
         }
-        return card;
+        return new Card(title, source, units, components, volume, enthalpy, validity, allow, missingIdeal,
+                basisReferenceKelvin);
     }
 
     private ExcessFunction section(String prefix, double factor, Subjects subjects, GeometricModel model,
