@@ -7,7 +7,6 @@ import java.time.temporal.ChronoUnit;
 import org.apache.commons.math3.exception.ConvergenceException;
 import org.apache.commons.math3.exception.MaxCountExceededException;
 import org.miscela.core.catalog.FunctionCatalog;
-import org.miscela.core.catalog.FunctionInfo;
 import org.miscela.core.problem.MiscelaException;
 import org.miscela.core.problem.Problem;
 
@@ -112,12 +111,12 @@ final class Failures {
 
     /** The name a person knows a method by (MIX.DENSITY for mixtureDensity). */
     private static String displayName(String method) {
-        for (FunctionInfo f : FunctionCatalog.functions()) {
-            if (f.method().equals(method)) {
-                return f.displayName();
-            }
+        try {
+            return FunctionCatalog.byMethod(method).displayName();
+        } catch (IllegalArgumentException notAMethod) {
+            // a wrong name must not hide the failure being reported (FailuresTest keeps the names right)
+            return method;
         }
-        return method;
     }
 
     private static String cut(String message) {
