@@ -257,6 +257,13 @@ public final class MetadataWriter {
                 + "\"extent\")` answers with one of the two texts at the end of this table. The bounds and their "
                 + "sources are in [card-format.md](card-format.md#warnings-of-mixcheck).\n\n");
         table(m, Problem.of(Problem.Section.CHECK), false);
+        m.append("\n## Warnings of MIX.EXPLAIN about a call's arguments\n\n");
+        m.append("Input that looks like a slip but can be real (a strength under 1 %vol, a laboratory batch, a "
+                + "correction to a working temperature) is never refused: the call gives its result, and "
+                + "`MIX.EXPLAIN` of the same call says `OK with n warnings: …` with these beside the card's own "
+                + "warnings. [The mistakes sheet](../addin/uno/src/test/resources/sheets/mistakes.spec) has a row for "
+                + "each.\n\n");
+        table(m, Problem.of(Problem.Section.SLIP), false);
         m.append("\n## Problems with a call\n\n");
         table(m, Problem.of(Problem.Section.CALL), true);
         m.append("\n## Problems with a fit\n\n");

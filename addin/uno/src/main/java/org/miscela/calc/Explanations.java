@@ -9,10 +9,6 @@ import org.miscela.core.catalog.ArgumentInfo;
 import org.miscela.core.catalog.FunctionCatalog;
 import org.miscela.core.catalog.FunctionInfo;
 import org.miscela.core.catalog.IdlType;
-import org.miscela.core.card.Card;
-import org.miscela.core.card.CardSanity;
-import org.miscela.core.functions.CardFunctions;
-import org.miscela.core.problem.MiscelaException;
 import org.miscela.core.problem.Problem;
 
 /**
@@ -154,7 +150,7 @@ final class Explanations {
         }
         try {
             t.call.on(addIn, p);
-            return cardWarnings(f, p);
+            return CallWarningArguments.summary(f, p);
         } catch (IllegalArgumentException | UnexpectedFailure refused) {
             return refused.getMessage();
         } catch (Exception undeclared) {
@@ -164,25 +160,6 @@ final class Explanations {
             }
             throw undeclared;
         }
-    }
-
-    /**
-     * What MIX.EXPLAIN says about a call that gives a result: "OK", or, when the call's card reads but has warnings,
-     * MIX.CHECK's summary of them ("OK with n warnings: …"), so a result from a suspicious card is not taken on trust.
-     * A card that cannot be read leaves "OK": only MIX.CHECK gives a result on one, its problem in words.
-     */
-    private static String cardWarnings(FunctionInfo f, Object[] p) {
-        if (f.arguments().isEmpty() || !f.arguments().get(0).name().equals("card")) {
-            return CardFunctions.OK;
-        }
-        Object[][] cells = (Object[][]) p[0];
-        Card card;
-        try {
-            card = Arguments.card(cells);
-        } catch (MiscelaException unreadable) {
-            return CardFunctions.OK;
-        }
-        return CardFunctions.summary(CardSanity.warnings(cells, card));
     }
 
     /** The function a name gives, with or without "MIX.", in any case; MIX.EXPLAIN itself is not one. */

@@ -20,6 +20,8 @@ import net.jqwik.api.Tuple;
 import net.jqwik.api.lifecycle.AddLifecycleHook;
 import org.miscela.core.card.FuzzCards;
 import org.miscela.core.card.FuzzProfile;
+import org.miscela.core.problem.Catalogue;
+import org.miscela.core.problem.Problem;
 
 /**
  * MIX.EXPLAIN agrees with the call it explains, for the fuzzers' calls ({@link FuzzCall}): "OK" when the call gives a
@@ -47,7 +49,7 @@ class ExplainProperties {
         String expected;
         try {
             call.invoke(addIn);
-            expected = cardWarnings(call);
+            expected = warnings(call);
         } catch (IllegalArgumentException | com.sun.star.uno.Exception e) {
             // a refusal, or a catalogued non-convergence (a checked UNO exception): MIX.EXPLAIN gives its words
             expected = e.getMessage();
@@ -63,19 +65,33 @@ class ExplainProperties {
                 + "\n  as " + Arrays.deepToString(arguments));
     }
 
-    /** "OK", or the summary of the warnings of the call's card when it reads and has any (its first argument). */
-    private static String cardWarnings(FuzzCall call) {
+    /**
+     * "OK", or the summary of the warnings of the call's card when it reads and has any (its first argument), followed
+     * by those about its arguments in the method's own form; each of these must be a warning of the SLIP section.
+     */
+    private static String warnings(FuzzCall call) {
+        List<String> all = new ArrayList<>(cardWarnings(call));
+        for (String w : CallWarningArguments.callWarnings(call.function, call.allArguments())) {
+            String entry = Catalogue.entryOf(w);
+            assertEquals(Problem.Section.SLIP, Problem.valueOf(entry.substring("Problem.".length())).section(),
+                    () -> "not a warning about arguments: " + w);
+            all.add(w);
+        }
+        return org.miscela.core.functions.CardFunctions.summary(all);
+    }
+
+    /** The warnings of the call's card when it reads (its first argument); none when it does not. */
+    private static List<String> cardWarnings(FuzzCall call) {
         if (!call.function.arguments().get(0).name().equals("card")) {
-            return "OK";
+            return List.of();
         }
         org.miscela.core.card.Card card;
         try {
             card = org.miscela.core.card.CardReader.read(call.cardCells());
         } catch (org.miscela.core.problem.MiscelaException unreadable) {
-            return "OK";
+            return List.of();
         }
-        return org.miscela.core.functions.CardFunctions.summary(
-                org.miscela.core.card.CardSanity.warnings(call.cardCells(), card));
+        return org.miscela.core.card.CardSanity.warnings(call.cardCells(), card);
     }
 
     /** The call's arguments as Calc's variable argument list could hold them. */

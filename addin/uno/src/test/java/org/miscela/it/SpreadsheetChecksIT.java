@@ -48,27 +48,37 @@ class SpreadsheetChecksIT {
         XComponent doc = office.load(office.stage(file));
         try {
             Sheets.recalculate(doc);
-            XSpreadsheet summary = Sheets.sheet(doc, "Summary");
-            XSpreadsheet checks = Sheets.sheet(doc, "Checks");
-            int count = (int) Sheets.cell(summary, 1, 1).getValue();
-            assertTrue(count > 0, "no checks counted in " + file);
-            List<String> failing = new ArrayList<>();
-            for (int r = 1; r <= count; r++) {
-                XCell pass = Sheets.cell(checks, 3, r);
-                if (pass.getValue() != 1.0 || pass.getError() != 0) {
-                    XCell result = Sheets.cell(checks, 0, r);
-                    failing.add(String.format("row %d: %s → %s (error %d), expected %s ± %s [%s]", r + 1,
-                            Sheets.text(Sheets.cell(checks, 4, r)), Sheets.text(result), result.getError(),
-                            Sheets.text(Sheets.cell(checks, 1, r)), Sheets.text(Sheets.cell(checks, 2, r)),
-                            Sheets.text(Sheets.cell(checks, 6, r))));
-                }
-            }
+            List<String> failing = failingRows(doc, file.toString());
             Figures.note(SpreadsheetChecksIT.class,
-                    "%s: %d checks, %d failing", file.getFileName(), count, failing.size());
+                    "%s: %d checks, %d failing", file.getFileName(), checkCount(doc), failing.size());
             assertEquals(0, failing.size(), String.join("\n", failing));
-            assertEquals(1.0, Sheets.cell(summary, 1, 0).getValue(), "summary cell of " + file);
+            assertEquals(1.0, Sheets.cell(Sheets.sheet(doc, "Summary"), 1, 0).getValue(), "summary cell of " + file);
         } finally {
             Sheets.close(doc);
         }
+    }
+
+    /** The number of checks the built sheet counts on its summary sheet. */
+    static int checkCount(XComponent doc) throws Exception {
+        return (int) Sheets.cell(Sheets.sheet(doc, "Summary"), 1, 1).getValue();
+    }
+
+    /** The rows of a recalculated check sheet whose pass cell is not TRUE, each with its formula, result and reason. */
+    static List<String> failingRows(XComponent doc, String what) throws Exception {
+        XSpreadsheet checks = Sheets.sheet(doc, "Checks");
+        int count = checkCount(doc);
+        assertTrue(count > 0, "no checks counted in " + what);
+        List<String> failing = new ArrayList<>();
+        for (int r = 1; r <= count; r++) {
+            XCell pass = Sheets.cell(checks, 3, r);
+            if (pass.getValue() != 1.0 || pass.getError() != 0) {
+                XCell result = Sheets.cell(checks, 0, r);
+                failing.add(String.format("row %d: %s → %s (error %d), expected %s ± %s [%s]", r + 1,
+                        Sheets.text(Sheets.cell(checks, 4, r)), Sheets.text(result), result.getError(),
+                        Sheets.text(Sheets.cell(checks, 1, r)), Sheets.text(Sheets.cell(checks, 2, r)),
+                        Sheets.text(Sheets.cell(checks, 6, r))));
+            }
+        }
+        return failing;
     }
 }

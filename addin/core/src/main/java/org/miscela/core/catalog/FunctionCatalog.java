@@ -515,10 +515,11 @@ public final class FunctionCatalog {
                             + "started (a #VALUE! cell's words, with its time in UTC)."))
                     .shows(VERSION).refuses(list(Problem.ARG_NOT_TEXT, Problem.UNKNOWN_INFO_ITEM)),
             new FunctionInfo("explainCall", "MIX.EXPLAIN",
-                    "\"OK\" or, for a call that shows Err:502, why: the same arguments after the function's name",
-                    "The words for a refused call: \"OK\" when the named function gives a result for these "
-                            + "arguments, otherwise the message of its refusal (why its cell shows Err:502). It runs "
-                            + "that function on them, so it always agrees with the call; it never refuses itself.",
+                    "\"OK\" (with any warnings) or, for a call that shows Err:502, why: the same arguments after the name",
+                    "The words for a call: \"OK\" when the named function gives a result, \"OK with n warnings: "
+                            + "…\" when its card or an argument looks like a slip, otherwise why it is refused "
+                            + "(Err:502). It runs that function on the same arguments, so it always agrees with the "
+                            + "call; it never refuses itself. A warning changes no result.",
                     "—",
                     "=MIX.EXPLAIN(\"MIX.BATCH\"; card; {50; 50}; \"oz\"; 20)",
                     value("functionName", "function", "The function's name as text: \"MIX.DENSITY\" or "

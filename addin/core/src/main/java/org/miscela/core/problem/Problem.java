@@ -7,6 +7,7 @@ import static org.miscela.core.problem.Problem.Section.CHECK;
 import static org.miscela.core.problem.Problem.Section.EXPLAIN;
 import static org.miscela.core.problem.Problem.Section.FAILURE;
 import static org.miscela.core.problem.Problem.Section.FIT;
+import static org.miscela.core.problem.Problem.Section.SLIP;
 
 import java.util.Locale;
 
@@ -100,6 +101,21 @@ public enum Problem {
             + "insert rows inside the range, or widen it (Sheet ▸ Named Ranges and Expressions ▸ Manage)."),
     CHECK_EXTENT_SPARE(CHECK, "The range is %d rows × %d columns; the card fills it to row %d and column %d (%d "
             + "non-blank rows read). Rows %d to %d are blank: a row typed there is read, a row below row %d is not."),
+    // --- what MIX.EXPLAIN says about the arguments of a call that gives a result but looks like a slip
+    WARN_PERCENT_AS_FRACTION(SLIP, "The composition is on the basis \"%s\" (0 to 100), but its largest value is %s %s, "
+            + "under 1 %s: if it was written as a fraction, %s %s was meant; write %s. So small a content is real for "
+            + "a trace or a low-alcohol product; then nothing is wrong."),
+    WARN_BASIS_TEMPERATURE_UNUSED(SLIP, "A basis temperature (%s %s) is given, but the basis is %s, which is not "
+            + "measured per volume, so the basis temperature is not used. If the composition is a strength (%%vol), "
+            + "a molarity (mol/L), a mass concentration (g/L) or a volume fraction, give that basis; otherwise leave "
+            + "the basis temperature out."),
+    WARN_SMALL_BATCH(SLIP, "%s %s %s in all, a batch %s: every result describes a batch of millilitres. If %s "
+            + "was meant, write that unit (a unit 1000 times too small changes every result). A laboratory batch is "
+            + "real; then nothing is wrong."),
+    WARN_SWAPPED_TEMPERATURES(SLIP, "The reference temperature %s %s is none of the trade's usual ones (15 °C, "
+            + "20 °C, 60 °F), but the measured temperature %s %s is one: if the two were swapped, the factor is the "
+            + "inverse of the one wanted (and the densities belong to the other temperature). A correction to a "
+            + "working or delivery temperature is real; then nothing is wrong."),
 
     // --- arguments of a call
     NOT_BINARY(CALL, "A single mole fraction describes a mixture only when the card has 2 components; this card has %d: give the mole fractions of all of them, in card order, as a row or column of cells."),
@@ -255,6 +271,11 @@ public enum Problem {
          * result changes), and the words of its details.
          */
         CHECK,
+        /**
+         * What MIX.EXPLAIN says about the arguments of a call that gives a result but look like a slip (warnings, never
+         * a refusal: legitimate input looks the same, and the result does not change).
+         */
+        SLIP,
         /** The arguments of a call: what a cell can get wrong, or a point the card cannot answer. */
         CALL,
         /** The fitting engine's problems with the data (MIX.FITEXCESS, MIX.FITDENSITY, MIX.LEASTSQUARES). */
