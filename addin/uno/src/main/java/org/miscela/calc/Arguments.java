@@ -249,6 +249,18 @@ final class Arguments {
         return (String) v;
     }
 
+    /** The per argument of the heat-capacity functions: false for "mol" (left out), true for "kg". */
+    static boolean perMass(Object value) {
+        String t = text("per", value, "mol").trim();
+        if (t.equalsIgnoreCase("mol") || t.isEmpty()) {
+            return false;
+        }
+        if (t.equalsIgnoreCase("kg")) {
+            return true;
+        }
+        throw Problem.UNKNOWN_FIT_OUTPUT.raise(t, "mol, kg");
+    }
+
     /** MIX.CHECK's result argument: the summary when left out. */
     static CheckOutput checkOutput(Object value) {
         Object v = unwrap(value);

@@ -1,5 +1,6 @@
 package org.miscela.calc;
 
+import org.miscela.core.card.Card;
 import org.miscela.core.problem.Problem;
 
 import java.util.ArrayList;
@@ -97,6 +98,16 @@ final class DataArguments {
             return g[0].clone();
         }
         throw Problem.DATA_SHAPE.raise(what, g.length, g[0].length);
+    }
+
+    /** The components of a single column or row, each by name or number, none blank. */
+    static int[] components(Card card, String what, Object[][] g) {
+        Object[] v = vector(what, g);
+        int[] out = new int[v.length];
+        for (int i = 0; i < v.length; i++) {
+            out[i] = Arguments.component(card, v[i]);
+        }
+        return out;
     }
 
     /** The numbers of a single column or row, none blank. */

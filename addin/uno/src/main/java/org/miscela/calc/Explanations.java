@@ -116,6 +116,11 @@ final class Explanations {
                 p[8]));
         add("addInInfo", (a, p) -> a.addInInfo(p[0]));
         add("mixtureMolarMass", (a, p) -> a.mixtureMolarMass(r(p[0]), r(p[1]), p[2], p[3]));
+        add("blendHeatCapacity", (a, p) -> a.blendHeatCapacity(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5], p[6]));
+        add("partialHeatCapacity", (a, p) -> a.partialHeatCapacity(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5],
+                p[6], p[7]));
+        add("temperaturePath", (a, p) -> a.temperaturePath(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5], p[6],
+                p[7], p[8], p[9]));
     }
 
     private Explanations() {

@@ -12,6 +12,7 @@ import org.miscela.core.card.CardSanity;
 import org.miscela.core.functions.CheckOutput;
 import org.miscela.core.functions.FitFunctions;
 import org.miscela.core.functions.FitOutput;
+import org.miscela.core.functions.TemperaturePath;
 import org.miscela.core.blend.BlendFunctions;
 import org.miscela.core.blend.CompositionBasis;
 import org.miscela.core.functions.CardFunctions;
@@ -533,6 +534,87 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "mixtureMolarMass");
         }
+    }
+
+    @Override
+    public Object blendHeatCapacity(Object[][] card, Object[][] moleFraction, Object[][] temperature,
+            Object extrapolate, Object basis, Object basisTemperature, Object per) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            boolean perMass = Arguments.perMass(per);
+            return BasisArguments.overCompositions(c, moleFraction, temperature, BasisArguments.basis(c, basis,
+                    basisTemperature), e, (k, x, t) -> CardFunctions.heatCapacity(k, x, t, e, perMass));
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "blendHeatCapacity");
+        }
+    }
+
+    @Override
+    public Object partialHeatCapacity(Object[][] card, Object[][] component, Object[][] moleFraction,
+            Object[][] temperature, Object extrapolate, Object basis, Object basisTemperature, Object per)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int i = Arguments.component(c, Arguments.value(component));
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            boolean perMass = Arguments.perMass(per);
+            return BasisArguments.overCompositions(c, moleFraction, temperature, BasisArguments.basis(c, basis,
+                    basisTemperature), e, (k, x, t) -> CardFunctions.partialHeatCapacity(k, i, x, t, e, perMass));
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "partialHeatCapacity");
+        }
+    }
+
+    @Override
+    public Object temperaturePath(Object[][] card, Object[][] charges, Object[][] amounts, Object[][] temperature,
+            Object basis, Object extrapolate, Object result, Object steps, Object vesselHeatCapacity,
+            Object heatRemoved) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int[] order = DataArguments.components(c, "charges", charges);
+            double[] n = DataArguments.values("amounts", amounts);
+            if (n.length != order.length) {
+                throw Problem.DATA_LENGTH.raise("amounts", n.length, "charges", order.length);
+            }
+            double[] t = DataArguments.values("temperature", temperature);
+            if (t.length != 1 && t.length != order.length) {
+                throw Problem.DATA_LENGTH.raise("temperature", t.length, "charges", order.length);
+            }
+            double[] feeds = t.length == 1 ? filled(order.length, t[0]) : t;
+            String output = Arguments.text("result", result, TemperaturePath.Output.PATH.word());
+            return pathResult(CardFunctions.temperaturePath(c, order, n, Arguments.basis(basis), feeds,
+                    Arguments.extrapolation(extrapolate), TemperaturePath.Output.lookup(output),
+                    Arguments.count("steps", steps, TemperaturePath.MOST_STEPS, 20),
+                    zeroIfLeftOut("vessel heat capacity", vesselHeatCapacity),
+                    zeroIfLeftOut("heat removed", heatRemoved)));
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "temperaturePath");
+        }
+    }
+
+    /** The path's rows as a range, or its peak, the amount at the peak or its end as a number. */
+    private static Object pathResult(Object result) {
+        if (result instanceof double[][]) {
+            double[][] rows = (double[][]) result;
+            Object[][] out = new Object[rows.length][];
+            for (int r = 0; r < rows.length; r++) {
+                out[r] = new Object[] {rows[r][0], rows[r][1]};
+            }
+            return Arguments.table(out);
+        }
+        return Arguments.finite((Double) result);
+    }
+
+    private static double[] filled(int n, double v) {
+        double[] out = new double[n];
+        java.util.Arrays.fill(out, v);
+        return out;
+    }
+
+    private static double zeroIfLeftOut(String what, Object value) {
+        double v = Arguments.optionalNumber(what, value);
+        return Double.isNaN(v) ? 0.0 : v;
     }
 
     // --- XServiceInfo

@@ -359,6 +359,34 @@ final class FuzzCall {
                 case "mixtureMolarMass":
                     a = new Object[] {composition()};
                     break;
+                case "blendHeatCapacity": {
+                    Object[][] x = composition();
+                    a = new Object[] {x, temperature(x), extrapolate()};
+                    break;
+                }
+                case "partialHeatCapacity": {
+                    Object[][] x = composition();
+                    a = new Object[] {component(), x, temperature(x), extrapolate()};
+                    break;
+                }
+                case "temperaturePath": {
+                    int charges = clean ? n : 1 + r.nextInt(n + 2);
+                    Object[][] order = new Object[charges][1];
+                    Object[][] amounts = new Object[charges][1];
+                    for (int c = 0; c < charges; c++) {
+                        order[c][0] = clean ? (Object) (double) (c % n + 1) : component();
+                        amounts[c][0] = clean ? (Object) (0.5 + r.nextInt(10)) : pick(1.0, 10.0, 0.0, -1.0,
+                                junk(), Any.VOID);
+                    }
+                    Object[][] t = r.nextBoolean() ? new Object[][] {{temperatureValue()}}
+                            : temperatureRange(charges, 1);
+                    a = new Object[] {order, amounts, t, basis(), extrapolate(),
+                        pick(Any.VOID, "path", "peak", "peak at", "final", clean ? "peak" : "top", 2.0),
+                        clean ? pick(Any.VOID, 3.0, 10.0) : pick(Any.VOID, 0.0, 1.0, 5.0, 1e9, -2.0, junk()),
+                        clean ? pick(Any.VOID, 0.0, 1.5) : pick(Any.VOID, 0.5, -1.0, junk()),
+                        clean ? pick(Any.VOID, 0.0, 10.0) : pick(Any.VOID, 1e3, -5.0, junk())};
+                    break;
+                }
                 case "addInInfo":
                     a = new Object[] {pick(Any.VOID, "version", "card reads", "cards kept", " Cards Kept ",
                         clean ? "version" : "cards", "", 1.0, Boolean.TRUE)};
@@ -393,6 +421,12 @@ final class FuzzCall {
                             : pick(Any.VOID, "mass fraction", "%w/w", "wt%", "volume fraction", "%vol", "mol %",
                                 "ppm", "", 1.0);
                     out[a.length + 1] = temperatureOrVoid();
+                    return out;
+                }
+                case "blendHeatCapacity":
+                case "partialHeatCapacity": {
+                    Object[] out = java.util.Arrays.copyOf(trailingBasis("mixtureMolarMass", a), a.length + 3);
+                    out[a.length + 2] = clean ? pick(Any.VOID, "mol", "kg") : pick(Any.VOID, "kg", "lb", "", 1.0);
                     return out;
                 }
                 case "recipe":

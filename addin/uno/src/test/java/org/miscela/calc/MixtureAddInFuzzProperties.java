@@ -121,6 +121,8 @@ class MixtureAddInFuzzProperties {
                 return result instanceof String ? text(call, result) : table(call, result);
             case "addInInfo":
                 return info(call, result);
+            case "temperaturePath":
+                return path(call, result);
             default:
                 if (BLENDING.contains(call.method())) {
                     if (call.method().equals("adjustBatch") && result instanceof String) {
@@ -133,6 +135,34 @@ class MixtureAddInFuzzProperties {
                 }
                 return number(call, result);
         }
+    }
+
+    /**
+     * MIX.TEMPERATUREPATH: a finite number (the peak, where it is, the end), or the path: two columns of finite
+     * numbers, the amount added so far never decreasing from 0.
+     */
+    private static String path(FuzzCall call, Object result) {
+        if (result instanceof Double) {
+            finite(call, (Double) result);
+            return "number";
+        }
+        Object[][] grid = grid(call, result);
+        double before = 0.0;
+        for (Object[] row : grid) {
+            if (row.length != 2 || !(row[0] instanceof Double) || !(row[1] instanceof Double)) {
+                unexpected("returned a path row that is not two numbers", call, null);
+            }
+            finite(call, (Double) row[0]);
+            finite(call, (Double) row[1]);
+            if ((Double) row[0] < before) {
+                unexpected("returned a path whose amount added decreases", call, null);
+            }
+            before = (Double) row[0];
+        }
+        if ((Double) grid[0][0] != 0.0) {
+            unexpected("returned a path that does not start at nothing added", call, null);
+        }
+        return "path";
     }
 
     /** MIX.INFO: the version text, or a count of cards (a whole number, never negative). */

@@ -274,6 +274,45 @@ class MixtureAddInTest {
         assertTrue(rise > 0, "exothermic mixing warms the batch");
     }
 
+    /**
+     * The heat-capacity functions and the temperature path through the interface: the whole-range sulfuric acid card
+     * (Laliberté 2009 solution heat capacity), its path's end equal to the batch's rise, a path as two columns.
+     */
+    @Test
+    void heatCapacitiesAndTheTemperaturePath() throws Exception {
+        Object[][] acid = TestCards.cells("sulfuric-acid-water-whole-range.tsv");
+        double cp = (Double) addIn.blendHeatCapacity(acid, one(0.2), one(25.0), Any.VOID, Any.VOID, Any.VOID,
+                Any.VOID);
+        assertEquals(CardFunctions.heatCapacity(TestCards.card("sulfuric-acid-water-whole-range.tsv"),
+                new double[] {0.2, 0.8}, 25.0, Extrapolation.AS_CARD, false), cp, 1e-15);
+        double perKg = (Double) addIn.blendHeatCapacity(acid, one(0.2), one(25.0), Any.VOID, Any.VOID, Any.VOID,
+                "kg");
+        assertEquals(cp / (0.2 * 98.072 + 0.8 * 18.015) * 1000, perKg, 1e-12);
+        double water = (Double) addIn.partialHeatCapacity(acid, one("water"), one(0.2), one(25.0), Any.VOID,
+                Any.VOID, Any.VOID, Any.VOID);
+        double sulfuric = (Double) addIn.partialHeatCapacity(acid, one(1.0), one(0.2), one(25.0), Any.VOID,
+                Any.VOID, Any.VOID, Any.VOID);
+        assertEquals(cp, 0.2 * sulfuric + 0.8 * water, 1e-12, "summability through the interface");
+        Object[][] charges = {{"water"}, {"sulfuric acid"}};
+        Object[][] amounts = {{10.0}, {1.0}};
+        Object[][] path = (Object[][]) ((Any) addIn.temperaturePath(acid, charges, amounts, one(25.0), "mol",
+                Boolean.TRUE, Any.VOID, 4.0, Any.VOID, Any.VOID)).getObject();
+        assertEquals(5, path.length);
+        assertEquals(2, path[0].length);
+        double rise = (Double) addIn.adiabaticRise(acid, new Object[][] {{1.0, 10.0}}, one(25.0), "mol",
+                Boolean.TRUE);
+        assertEquals(25.0 + rise, (Double) path[4][1], 1e-7);
+        assertEquals(25.0 + rise, (Double) addIn.temperaturePath(acid, charges, amounts, one(25.0), "mol",
+                Boolean.TRUE, "final", Any.VOID, Any.VOID, Any.VOID), 1e-7);
+        IllegalArgumentException steps = assertThrows(IllegalArgumentException.class, () -> addIn.temperaturePath(
+                acid, charges, amounts, one(25.0), "mol", Boolean.TRUE, Any.VOID, 0.0, Any.VOID, Any.VOID));
+        assertEquals("Problem.PATH_STEPS", Catalogue.entryOf(steps.getMessage()), steps.getMessage());
+        IllegalArgumentException lengths = assertThrows(IllegalArgumentException.class, () -> addIn.temperaturePath(
+                acid, charges, new Object[][] {{1.0}}, one(25.0), "mol", Boolean.TRUE, Any.VOID, Any.VOID, Any.VOID,
+                Any.VOID));
+        assertEquals("Problem.DATA_LENGTH", Catalogue.entryOf(lengths.getMessage()), lengths.getMessage());
+    }
+
     @Test
     void insideAndTrace() throws Exception {
         assertEquals(1.0, (Double) addIn.insideValidity(TERNARY, new Object[][] {{0.2, 0.5, 0.3}}, one(20.0), Any.VOID, Any.VOID));

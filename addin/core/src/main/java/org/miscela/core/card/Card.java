@@ -4,6 +4,7 @@ import org.miscela.core.model.Component;
 import org.miscela.core.model.ExcessFunction;
 import org.miscela.core.model.GeometricModel;
 import org.miscela.core.model.RedlichKister;
+import org.miscela.core.model.SolutionHeatCapacity;
 import org.miscela.core.model.TernaryTerm;
 import org.miscela.core.problem.Problem;
 import java.util.ArrayList;
@@ -29,6 +30,8 @@ public final class Card {
     private final Mixture mixture;
     /** The reference temperature of the volume-based bases the card states (K), or NaN when it states none. */
     private final double statedBasisReferenceKelvin;
+    /** The solution heat-capacity model the card states, or null. */
+    private final SolutionHeatCapacity solutionHeatCapacity;
 
     /**
      * 20 °C, the temperature at which alcoholic strength by volume is defined (OIML R 22 (1975)), used for every
@@ -51,13 +54,16 @@ public final class Card {
             ExcessFunction excessEnthalpy, Validity validity, boolean extrapolationAllowed,
             boolean missingPairsIdeal) {
         this(title, source, units, components, excessVolume, excessEnthalpy, validity, extrapolationAllowed,
-                missingPairsIdeal, Double.NaN);
+                missingPairsIdeal, Double.NaN, null);
     }
 
-    /** @param statedBasisReferenceKelvin the card's 'basis reference temperature' in K, or NaN when it has none */
+    /**
+     * @param statedBasisReferenceKelvin the card's 'basis reference temperature' in K, or NaN when it has none
+     * @param solutionHeatCapacity the solution heat-capacity model the card states, or null
+     */
     Card(String title, String source, Units units, List<Component> components, ExcessFunction excessVolume,
             ExcessFunction excessEnthalpy, Validity validity, boolean extrapolationAllowed,
-            boolean missingPairsIdeal, double statedBasisReferenceKelvin) {
+            boolean missingPairsIdeal, double statedBasisReferenceKelvin, SolutionHeatCapacity solutionHeatCapacity) {
         this.title = title;
         this.source = source;
         this.units = units;
@@ -68,6 +74,7 @@ public final class Card {
         this.extrapolationAllowed = extrapolationAllowed;
         this.missingPairsIdeal = missingPairsIdeal;
         this.statedBasisReferenceKelvin = statedBasisReferenceKelvin;
+        this.solutionHeatCapacity = solutionHeatCapacity;
         this.mixture = new Mixture(this);
     }
 
@@ -140,6 +147,11 @@ public final class Card {
     }
 
     /** The calculator for any number of components. */
+    /** The solution heat-capacity model (Laliberté 2009) the card states, or null when it states none. */
+    public SolutionHeatCapacity solutionHeatCapacity() {
+        return solutionHeatCapacity;
+    }
+
     public Mixture mixture() {
         return mixture;
     }

@@ -25,7 +25,9 @@ import org.miscela.core.model.Component;
 import org.miscela.core.model.ConstantDensity;
 import org.miscela.core.model.ExcessFunction;
 import org.miscela.core.model.GeometricModel;
+import org.miscela.core.model.ApparentHeatCapacity;
 import org.miscela.core.model.HeatCapacity;
+import org.miscela.core.model.SolutionHeatCapacity;
 import org.miscela.core.model.PolynomialDensity;
 import org.miscela.core.model.PureDensity;
 import org.miscela.core.model.Tanaka2001WaterDensity;
@@ -128,7 +130,63 @@ final class CardBuilder {
             basisReferenceKelvin = kelvin;
         }
         return new Card(title, source, units, components, volume, enthalpy, validity, allow, missingIdeal,
-                basisReferenceKelvin);
+                basisReferenceKelvin, solutionHeatCapacity(names, masses));
+    }
+
+    /**
+     * The solution heat-capacity model (Laliberté 2009) the card states with 'solution heat capacity' rows, one per
+     * solute, and the 'solvent' row naming the water; null when it states none.
+     */
+    private SolutionHeatCapacity solutionHeatCapacity(List<String> names, List<Double> masses) {
+        Map<String, CardRow> solutes = rows.keyed(CardLabels.SOLUTION_HEAT_CAPACITY);
+        CardRow solventRow = rows.global(CardLabels.SOLVENT);
+        if (solutes.isEmpty()) {
+            if (solventRow != null) {
+                throw Problem.MISSING_PAIR_ROW.raise(CardLabels.SOLVENT, "the solution",
+                        CardLabels.SOLUTION_HEAT_CAPACITY);
+            }
+            return null;
+        }
+        if (solventRow == null) {
+            throw Problem.MISSING_ROW.raise(CardLabels.SOLVENT);
+        }
+        solventRow.atMost(1);
+        String solventName = solventRow.text(0).trim();
+        int solvent = -1;
+        for (int k = 0; k < names.size(); k++) {
+            if (normalise(names.get(k)).equals(normalise(solventName))) {
+                solvent = k;
+            }
+        }
+        if (solvent < 0) {
+            throw Problem.UNKNOWN_COMPONENT.raise(solventRow.number, solventRow.label, solventName);
+        }
+        ApparentHeatCapacity[] apparent = new ApparentHeatCapacity[names.size()];
+        double[] molarMass = new double[names.size()];
+        for (int k = 0; k < names.size(); k++) {
+            molarMass[k] = masses.get(k);
+            CardRow r = solutes.get(normalise(names.get(k)));
+            if (k == solvent) {
+                if (r != null) {
+                    throw Problem.SOLVENT_WITH_SOLUTION_MODEL.raise(r.number, r.label, names.get(k));
+                }
+                continue;
+            }
+            if (r == null) {
+                throw Problem.NO_SOLUTION_MODEL.raise(names.get(solvent), names.get(k));
+            }
+            String kind = normalise(r.text(1));
+            if (!kind.equals("laliberté 2009") && !kind.equals("laliberte 2009")) {
+                throw Problem.BAD_KEYWORD.raise(r.number, r.label, r.text(1).trim(), "Laliberté 2009");
+            }
+            double[] a = r.numbersFrom(2);
+            if (a.length != 6) {
+                throw Problem.MODEL_VALUES.raise(r.number, r.label, "Laliberté 2009", "six parameters a1 to a6",
+                        "found " + a.length);
+            }
+            apparent[k] = new ApparentHeatCapacity(a);
+        }
+        return new SolutionHeatCapacity(solvent, molarMass, apparent);
     }
 
     private ExcessFunction section(String prefix, double factor, Subjects subjects, GeometricModel model,

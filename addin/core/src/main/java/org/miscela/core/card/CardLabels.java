@@ -36,6 +36,8 @@ final class CardLabels {
     static final String VALID_PAIR_TEMPERATURE = "valid pair temperature";
     static final String VALID_PAIR_FRACTION = "valid pair mole fraction";
     static final String BASIS_REFERENCE = "basis reference temperature";
+    static final String SOLUTION_HEAT_CAPACITY = "solution heat capacity";
+    static final String SOLVENT = "solvent";
 
     /**
      * Rows of an excess-property section: binary coefficients A0..A99 (group 2), ternary C0..C9 (group 3; only C0..C2
@@ -46,14 +48,16 @@ final class CardLabels {
 
     /** Rows whose values start in column 2. */
     private static final String[] GLOBAL = {TITLE, SOURCE, TEMPERATURE_UNIT, DENSITY_UNIT, MOLAR_VOLUME_UNIT,
-        MOLAR_MASS_UNIT, VALID_TEMPERATURE, EXTRAPOLATION, MODEL, MISSING_PAIRS, ENTHALPY_UNIT, COMPONENT_ORDER, BASIS_REFERENCE};
+        MOLAR_MASS_UNIT, VALID_TEMPERATURE, EXTRAPOLATION, MODEL, MISSING_PAIRS, ENTHALPY_UNIT, COMPONENT_ORDER, BASIS_REFERENCE,
+        SOLVENT};
     /** Rows whose column 2 names a component (or a pair) and whose values follow. */
     private static final String[] KEYED = {COMPONENT, DENSITY_MODEL, DENSITY_REFERENCE, DENSITY_COEFFICIENTS,
-        VALID_MOLE_FRACTION, HEAT_CAPACITY, HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION};
+        VALID_MOLE_FRACTION, HEAT_CAPACITY, HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION,
+        SOLUTION_HEAT_CAPACITY};
     /** Labels of version 2 beyond the excess-enthalpy and ternary rows. */
     private static final String[] VERSION_2 = {MODEL, MISSING_PAIRS, ENTHALPY_UNIT, HEAT_CAPACITY,
         EXCESS_VOLUME + " covariance", HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION,
-        COMPONENT_ORDER, BASIS_REFERENCE};
+        COMPONENT_ORDER, BASIS_REFERENCE, SOLUTION_HEAT_CAPACITY, SOLVENT};
     /** Keyed rows whose subject is a pair "a + b" rather than one component. */
     private static final String[] PAIR_KEYED = {VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION};
 

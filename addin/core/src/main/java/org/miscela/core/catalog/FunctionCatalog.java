@@ -94,6 +94,8 @@ public final class FunctionCatalog {
                     + "\"residuals\", \"orders\" or \"check\". \"orders\" gives the fits of order 0 to the order "
                     + "given, with F-tests, AIC and BIC; \"check\" gives \"OK\", or why the fit is refused, in "
                     + "words.");
+    private static final ArgumentInfo PER = optional("per", "per",
+            "\"mol\" (left out): per mole of blend (or of the component); \"kg\": per kilogram of it.");
     private static final ArgumentInfo BASIS = optional("basis", "basis",
             "The unit of the amounts: \"mol\" (left out), \"kmol\", \"g\", \"kg\", \"t\", \"lb\" or a mass weighed in "
                     + "air (\"kg (conventional)\"). Masses are converted with the card's molar masses.");
@@ -535,7 +537,53 @@ public final class FunctionCatalog {
                     CARD, MOLE_FRACTION, COMPOSITION_BASIS, BASIS_T)
                     .shows("26.431").refuses(union(BLEND_PROBLEMS, POINT_PROBLEMS, list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER, Problem.NOT_BINARY,
                             Problem.MOLE_FRACTION_OUTSIDE_UNIT, Problem.COMPOSITION_NEGATIVE,
-                            Problem.COMPOSITION_SUM, Problem.COMPOSITION_SHAPE, Problem.COMPOSITION_AMBIGUOUS)))));
+                            Problem.COMPOSITION_SUM, Problem.COMPOSITION_SHAPE, Problem.COMPOSITION_AMBIGUOUS))),
+            new FunctionInfo("blendHeatCapacity", "MIX.HEATCAPACITY", "heat capacity of the blend",
+                    "Heat capacity of the blend per mole (or per kg), in the card's enthalpy unit per degree: the "
+                            + "card's solution model, or the pure liquids' plus ∂H^E/∂T (MIX.TRACE says which). A pure "
+                            + "liquid is a valid point whatever compositions the card's data cover.",
+                    "Cp = Σ_k x_k·Cp_k + ∂H^E/∂T, or w_w·Cp_w + Σ_i w_i·Cp_app,i (Laliberté 2009) per gram",
+                    "=MIX.HEATCAPACITY(acid; 0.5; 25)",
+                    CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T, PER)
+                    .shows("0.1071").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
+                            list(Problem.NO_HEAT_CAPACITY))),
+            new FunctionInfo("partialHeatCapacity", "MIX.PARTIALHEATCAPACITY",
+                    "partial molar heat capacity of a component",
+                    "Partial molar heat capacity of one component, ∂(N·Cp)/∂n_k, in the card's enthalpy unit per "
+                            + "degree (or per kg of the component). It is how much the blend's heat capacity grows per "
+                            + "mole of it added.",
+                    "C̄p_k = Cp_k + ∂H̄_k^E/∂T, or from the solution model's total heat capacity by n_k",
+                    "=MIX.PARTIALHEATCAPACITY(acid; \"water\"; 0.5; 25)",
+                    CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T, PER)
+                    .shows("0.07529").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
+                            COMPONENT_PROBLEMS, list(Problem.NO_HEAT_CAPACITY))),
+            new FunctionInfo("temperaturePath", "MIX.TEMPERATUREPATH",
+                    "temperature along the order of addition, and its peak",
+                    "The batch's temperature along its order of addition: amount added and temperature as two "
+                            + "columns for a chart, or the peak, where it is reached, or the end. No heat is exchanged "
+                            + "but the heat removed. An estimate for planning, not a safety rating.",
+                    "after each part of the addition: the adiabatic temperature of everything charged so far "
+                            + "(N·H^E(x,T0) + N·∫Cp_blend dT − Σ n_k∫Cp_k dT + C_vessel·ΔT + Q_removed = 0)",
+                    "=MIX.TEMPERATUREPATH(acid; {\"water\"; \"sulfuric acid\"}; {10; 1}; 25; \"mol\"; TRUE(); "
+                            + "\"peak\")",
+                    CARD, range("charges", "charges", "The components in charging order, by name or number, as a row or "
+                                    + "column. The first is in the vessel at the start; each next one is added in turn."),
+                            range("amounts", "amounts", "The amount of each charge, one per charge, in the unit."),
+                            range("temperature", "temperature", "The temperature each charge is fed at, in the card's "
+                                    + "unit: one for all, or one per charge; the vessel starts at the first's."),
+                            BASIS, EXTRAPOLATE,
+                            optional("result", "result", "\"path\" (left out): amount added and temperature, one row per "
+                                    + "point; \"peak\", \"peak at\" (the amount added then) or \"final\"."),
+                            optional("steps", "steps", "Points per added charge, 1 to 1000 (left out: 20); the peak is "
+                                    + "refined between them."),
+                            optional("vesselHeatCapacity", "vessel heat capacity", "The vessel's heat capacity in the "
+                                    + "card's energy unit per degree (J/K or kJ/K); it warms with the batch (left out: 0)."),
+                            optional("heatRemoved", "heat removed", "The cooling over the whole addition in the card's "
+                                    + "energy unit, removed in proportion to the amount added (left out: 0)."))
+                    .shows("99.57").refuses(union(AMOUNT_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS,
+                            list(Problem.NO_ENTHALPY, Problem.NO_HEAT_CAPACITY, Problem.NO_TEMPERATURE_ROOT,
+                                    Problem.OUTSIDE_FINAL_TEMPERATURE, Problem.PATH_EMPTY_VESSEL, Problem.PATH_STEPS,
+                                    Problem.DATA_LENGTH, Problem.UNKNOWN_FIT_OUTPUT)))));
 
     private FunctionCatalog() {
     }

@@ -12,7 +12,21 @@ import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.NoBracketingException;
 import org.apache.commons.math3.exception.TooManyEvaluationsException;
 
-/** The final temperature of an adiabatic mixing: a root of the batch's energy balance, bracketed and then solved. */
+/**
+ * The final temperature of an adiabatic mixing: a root of the batch's energy balance, bracketed and then solved.
+ *
+ * <p>The balance takes the blend's enthalpy from a reference temperature T0 (the feeds' mole-weighted mean): the
+ * pure feeds are brought from their own temperatures to T0, mixed there (N·H^E(x, T0)), and the blend is warmed to
+ * T_f with its own heat capacity ({@link Mixture#heatCapacity}: the card's solution model, or the pure liquids' plus
+ * ∂H^E/∂T); a vessel warms with the batch and the heat removed leaves it:
+ *
+ * <pre>
+ *   N·H^E(x, T0) + N·∫_T0^T_f Cp_blend dT − Σ_k n_k·∫_T0^T_k Cp_k dT + C_vessel·(T_f − T_vessel) + Q_removed = 0
+ * </pre>
+ *
+ * Without a solution model and with every feed at T this is Σ_k n_k·∫_T^T_f Cp_k dT + N·H^E(x, T_f) = 0 exactly, the
+ * balance of the pure liquids warmed to T_f and mixed there.
+ */
 final class AdiabaticRise {
     /** How far the adiabatic search may move from the start temperature, in K. */
     private static final double SEARCH_SPAN = 2000.0;
@@ -23,58 +37,97 @@ final class AdiabaticRise {
     }
 
     /**
-     * {@link CardFunctions#adiabaticRise}, in degrees of the card's temperature scale: the balance
-     * Σ n_k ∫_T^T_f Cp_k dT + N·H^E(x, T_f) = 0 is bracketed by steps doubling away from T (at most
-     * {@link #SEARCH_SPAN} K) on the side the heat of mixing drives the batch, then solved by Brent's method; T_f must
-     * lie inside the card's validity range unless it may extrapolate.
+     * {@link CardFunctions#adiabaticRise}, in degrees of the card's temperature scale: every feed at t, no vessel, no
+     * heat removed; T_f must lie inside the card's validity range unless it may extrapolate.
      */
     static double of(Card card, double[] amounts, AmountBasis basis, double t, Extrapolation e) {
         double[] n = CardFunctions.amountsToMoles(card, amounts, basis, t, e);
-        double total = 0.0;
-        for (double v : n) {
-            total += v;
+        double start = PointChecks.checkTemperature(card, t, e);
+        int[] components = new int[n.length];
+        double[] feeds = new double[n.length];
+        for (int k = 0; k < n.length; k++) {
+            components[k] = k;
+            feeds[k] = start;
         }
+        double end = finalKelvin(card, components, n, feeds, 0.0, start, 0.0, e);
+        return card.units().temperature().differenceFromKelvin(end - start);
+    }
+
+    /**
+     * The final temperature (K) of the charges {@code chargeMoles} of components {@code components}, each fed at its
+     * {@code feedKelvin}, with a vessel of heat capacity {@code vessel} (J/K) starting at {@code vesselKelvin} and
+     * {@code removed} J taken away (negative: added); refused outside the card's validity range unless it may
+     * extrapolate. The balance is bracketed by steps doubling away from T0 (at most {@link #SEARCH_SPAN} K) on the
+     * side it drives the batch, then solved by Brent's method.
+     */
+    static double finalKelvin(Card card, int[] components, double[] chargeMoles, double[] feedKelvin, double vessel,
+            double vesselKelvin, double removed, Extrapolation e) {
+        card.mixture().enthalpy(); // NO_ENTHALPY first, also for a batch of one pure liquid
+        double[] n = new double[card.componentCount()];
+        double total = 0.0;
+        for (int c = 0; c < components.length; c++) {
+            n[components[c]] += chargeMoles[c];
+            total += chargeMoles[c];
+        }
+        double mean = 0.0;
+        for (int c = 0; c < components.length; c++) {
+            // the mole-weighted mean, each share taken first (Σ n·T would overflow for amounts near the double range)
+            mean += chargeMoles[c] / total * feedKelvin[c];
+        }
+        final double reference = mean;
         double[] x = CardFunctions.moleFractions(card, CardFunctions.scaled(n, 1.0 / total));
-        double start = PointChecks.checkPoint(card, x, t, e);
+        Units.Temperature unit = card.units().temperature();
+        boolean pure = Mixture.pureComponent(x) >= 0;
+        if (pure) {
+            PointChecks.checkTemperature(card, unit.fromKelvin(reference), e);
+        } else {
+            PointChecks.checkPoint(card, x, unit.fromKelvin(reference), e);
+        }
         Mixture m = card.mixture();
         for (int k = 0; k < n.length; k++) {
             m.heatCapacity(k);
         }
         final double moles = total;
-        UnivariateFunction balance = tf -> {
-            double h = moles * m.excessEnthalpy(x, tf);
-            for (int k = 0; k < n.length; k++) {
-                h += n[k] * m.heatCapacity(k).enthalpyChange(start, tf);
+        final double mixing = pure ? 0.0 : moles * m.excessEnthalpy(x, reference);
+        double feedsToReference = 0.0;
+        for (int c = 0; c < components.length; c++) {
+            if (chargeMoles[c] > 0.0) {
+                feedsToReference += chargeMoles[c]
+                        * m.heatCapacity(components[c]).enthalpyChange(reference, feedKelvin[c]);
             }
+        }
+        final double fed = feedsToReference;
+        UnivariateFunction balance = tf -> {
+            double h = mixing + moles * m.heating(x, reference, tf) - fed + vessel * (tf - vesselKelvin) + removed;
             if (!Double.isFinite(h)) {
                 // The polynomials overflow (temperatures or amounts near the double range): no root to bracket.
-                throw Problem.NO_TEMPERATURE_ROOT.raise(Numbers.show(Math.min(start, tf)),
-                        Numbers.show(Math.max(start, tf)));
+                throw Problem.NO_TEMPERATURE_ROOT.raise(Numbers.show(Math.min(reference, tf)),
+                        Numbers.show(Math.max(reference, tf)));
             }
             return h;
         };
-        double f0 = balance.value(start);
+        double f0 = balance.value(reference);
         double end;
         if (f0 == 0.0) {
-            end = start;
+            end = reference;
         } else {
             // Heat released (f0 < 0) warms the batch, heat absorbed cools it: bracket on that side.
             double direction = f0 < 0.0 ? 1.0 : -1.0;
             double step = 1.0;
-            double far = start + direction * step;
+            double far = reference + direction * step;
             while (Math.signum(balance.value(far)) == Math.signum(f0)) {
                 step *= 2.0;
-                far = start + direction * step;
+                far = reference + direction * step;
                 if (step > SEARCH_SPAN || far <= 1.0) {
                     // (the search may have stepped below 0 K; the range worth naming starts at 0 K)
-                    throw Problem.NO_TEMPERATURE_ROOT.raise(Numbers.show(Math.max(0.0, Math.min(start, far))),
-                            Numbers.show(Math.max(start, far)));
+                    throw Problem.NO_TEMPERATURE_ROOT.raise(Numbers.show(Math.max(0.0, Math.min(reference, far))),
+                            Numbers.show(Math.max(reference, far)));
                 }
             }
-            end = finalTemperature(balance, Math.min(start, far), Math.max(start, far), BALANCE_EVALUATIONS);
+            end = finalTemperature(balance, Math.min(reference, far), Math.max(reference, far), BALANCE_EVALUATIONS);
         }
-        if (!card.mayExtrapolate(e) && !PointChecks.insideTemperature(card, x, end)) {
-            Units.Temperature unit = card.units().temperature();
+        if (!card.mayExtrapolate(e) && !(pure ? card.validity().containsTemperature(end)
+                : PointChecks.insideTemperature(card, x, end))) {
             Validity v = card.validity();
             throw Problem.OUTSIDE_FINAL_TEMPERATURE.raise(Numbers.show(unit.fromKelvin(end)), unit.symbol(),
                     Numbers.show(unit.fromKelvin(v.lowestKelvin())), Numbers.show(unit.fromKelvin(v.highestKelvin())),
@@ -82,10 +135,9 @@ final class AdiabaticRise {
         }
         double cp = m.heatCapacity(x, end);
         if (!(cp > 0.0)) {
-            throw PointChecks.nonPhysical(card, card.units().temperature().fromKelvin(end), "mixture heat capacity",
-                    cp);
+            throw PointChecks.nonPhysical(card, unit.fromKelvin(end), "mixture heat capacity", cp);
         }
-        return card.units().temperature().differenceFromKelvin(end - start);
+        return end;
     }
 
     /**

@@ -4,6 +4,7 @@ import java.util.List;
 import org.miscela.core.card.Card;
 import org.miscela.core.card.CardSanity;
 import org.miscela.core.card.Extrapolation;
+import org.miscela.core.card.Mixture;
 import org.miscela.core.model.Component;
 import org.miscela.core.model.ConventionalMass;
 import org.miscela.core.problem.MiscelaException;
@@ -223,6 +224,45 @@ public final class CardFunctions {
     }
 
     /**
+     * The blend's molar heat capacity in the card's enthalpy unit per degree (per K, or per °F on a card in °F), or per
+     * kg of blend when {@code perMass}: from the source {@link Mixture#heatCapacitySource} names. A pure liquid is a
+     * valid point whatever compositions the card's data cover (its own heat capacity).
+     */
+    public static double heatCapacity(Card card, double[] x, double t, Extrapolation e, boolean perMass) {
+        double[] z = moleFractions(card, x);
+        double kelvin = PointChecks.checkHeatPoint(card, z, t, e);
+        return heatCapacityOut(card, z, card.mixture().heatCapacity(z, kelvin), t, perMass);
+    }
+
+    /**
+     * The partial molar heat capacity of one component, ∂(N·Cp)/∂n_k, in the card's enthalpy unit per degree (per kg
+     * of that component when {@code perMass}).
+     */
+    public static double partialHeatCapacity(Card card, int component, double[] x, double t, Extrapolation e,
+            boolean perMass) {
+        double[] z = moleFractions(card, x);
+        double kelvin = PointChecks.checkHeatPoint(card, z, t, e);
+        double[] out = new double[z.length];
+        card.mixture().partialHeatCapacities(z, kelvin, out);
+        double[] alone = new double[z.length];
+        alone[component] = 1.0;
+        return heatCapacityOut(card, alone, out[component], t, perMass);
+    }
+
+    /** J/(mol·K) of a blend of composition z in the card's unit, per mole or per kg of it. */
+    private static double heatCapacityOut(Card card, double[] z, double joulePerMolKelvin, double t, boolean perMass) {
+        double v = joulePerMolKelvin;
+        if (perMass) {
+            v = v / card.mixture().meanMolarMass(z) * 1000.0;
+        }
+        v = card.units().temperature().fromPerKelvin(card.units().enthalpy().fromJoulePerMol(v), 1);
+        if (Double.isNaN(v) || Double.isInfinite(v)) {
+            throw PointChecks.nonPhysical(card, t, "heat capacity", v);
+        }
+        return v;
+    }
+
+    /**
      * The enthalpy change ΔH = N·H^E when the given amounts of the pure components, all at T, are mixed at T: in
      * the card's energy unit (J or kJ); negative when mixing releases heat.
      */
@@ -262,6 +302,28 @@ public final class CardFunctions {
      */
     public static double adiabaticRise(Card card, double[] amounts, AmountBasis basis, double t, Extrapolation e) {
         return AdiabaticRise.of(card, amounts, basis, t, e);
+    }
+
+    /**
+     * The temperature along an order of addition ({@link TemperaturePath}): the path as rows (amount added, temperature
+     * in the card's unit), or, as a number, its peak, the amount added at the peak, or its end.
+     */
+    public static Object temperaturePath(Card card, int[] charges, double[] amounts, AmountBasis basis,
+            double[] temperatures, Extrapolation e, TemperaturePath.Output output, int steps, double vessel,
+            double removed) {
+        TemperaturePath p = new TemperaturePath(card, charges, amounts, basis, temperatures, vessel, removed, e);
+        switch (output) {
+            case PEAK:
+                return p.peak(steps)[1];
+            case PEAK_AT:
+                return p.peak(steps)[0];
+            case FINAL: {
+                double[][] rows = p.path(1);
+                return rows[rows.length - 1][1];
+            }
+            default:
+                return p.path(steps);
+        }
     }
 
     // --- validity
@@ -399,6 +461,12 @@ public final class CardFunctions {
             total += v;
         }
         double[] x = moleFractions(card, scaled(moles, 1.0 / total));
+        if (Mixture.pureComponent(x) >= 0) {
+            // a pure liquid has no excess enthalpy, whatever compositions the card's data cover (on a card with some)
+            card.mixture().enthalpy();
+            PointChecks.checkTemperature(card, t, e);
+            return 0.0;
+        }
         double kelvin = PointChecks.checkPoint(card, x, t, e);
         return total * card.mixture().excessEnthalpy(x, kelvin);
     }

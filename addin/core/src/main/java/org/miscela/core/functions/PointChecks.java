@@ -32,6 +32,17 @@ final class PointChecks {
         return kelvin;
     }
 
+    /**
+     * {@link #checkPoint} for the heat functions: a pure liquid (one mole fraction exactly 1) is valid whatever
+     * compositions the card's data cover, since its excess properties are zero; only its temperature is checked.
+     */
+    static double checkHeatPoint(Card card, double[] x, double t, Extrapolation e) {
+        if (org.miscela.core.card.Mixture.pureComponent(x) >= 0) {
+            return checkTemperature(card, t, e);
+        }
+        return checkPoint(card, x, t, e);
+    }
+
     /** The temperature in K: finite, above absolute zero, and inside the card's range unless it may extrapolate. */
     static double checkTemperature(Card card, double t, Extrapolation e) {
         if (Double.isNaN(t) || Double.isInfinite(t)) {

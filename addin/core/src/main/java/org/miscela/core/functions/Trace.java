@@ -110,6 +110,21 @@ final class Trace {
                 tr.add("heat capacity: " + name(card, k) + " [" + cpUnit + "]",
                         c == null ? "not on the card" : (Object) scaleT.fromPerKelvin(scale * c.at(kelvin), 1));
             }
+            tr.add("blend heat capacity source", m.heatCapacitySource().words());
+            double[] partial = new double[x.length];
+            boolean known = true;
+            double blend = Double.NaN;
+            try {
+                blend = m.partialHeatCapacities(x, kelvin, partial);
+            } catch (org.miscela.core.problem.MiscelaException missing) {
+                known = false; // a component without a heat capacity: the rows say so
+            }
+            tr.add("blend heat capacity [" + cpUnit + "]",
+                    known ? (Object) scaleT.fromPerKelvin(scale * blend, 1) : "not on the card");
+            for (int k = 0; k < x.length; k++) {
+                tr.add("partial molar heat capacity: " + name(card, k) + " [" + cpUnit + "]",
+                        known ? (Object) scaleT.fromPerKelvin(scale * partial[k], 1) : "not on the card");
+            }
         }
         return tr.rows.toArray(new Object[0][]);
     }

@@ -67,6 +67,10 @@ public enum Problem {
     COVARIANCE_SIZE(CARD, "Card row %d (%s): the pair %s has %d coefficients, so its covariance takes %d rows of %d values; found %s."),
     COVARIANCE_NOT_SYMMETRIC(CARD, "Card row %d (%s): the covariance is not symmetric: entry (%d, %d) is %s but (%d, %d) is %s."),
     COVARIANCE_NEGATIVE(CARD, "Card row %d (%s): the variance of coefficient %d is %s; a variance cannot be negative."),
+    NO_SOLUTION_MODEL(CARD, "The card gives 'solution heat capacity' rows, so every component but the solvent %s needs "
+            + "one; %s has none.", Advice.INSIDE_RANGE),
+    SOLVENT_WITH_SOLUTION_MODEL(CARD, "Card row %d (%s): %s is the card's solvent, whose heat capacity is its own "
+            + "'heat capacity' row; a 'solution heat capacity' row belongs to a solute."),
     NO_COMPOSITION_LIMIT(CARD, "The card gives no 'valid mole fraction' row; state the composition range the coefficients were fitted over.", Advice.INSIDE_RANGE),
 
     // --- what MIX.CHECK says about a card that reads but looks odd, and its details (never a refusal)
@@ -136,6 +140,9 @@ public enum Problem {
     OUTSIDE_PAIR_TEMPERATURE(CALL, "The temperature %s %s is outside the range %s to %s %s stated for the pair %s.", Advice.EXTRAPOLATION),
     OUTSIDE_PAIR_COMPOSITION(CALL, "The pair %s is present at the ratio %s = %s, outside the range %s to %s stated for it.", Advice.EXTRAPOLATION),
     OUTSIDE_FINAL_TEMPERATURE(CALL, "The batch would reach %s %s, outside the card's validity range %s to %s %s.", Advice.EXTRAPOLATION),
+    PATH_EMPTY_VESSEL(CALL, "The first charge, %s, is what the vessel holds when the addition starts; it must be more "
+            + "than nothing: put the first component charged first."),
+    PATH_STEPS(CALL, "The number of steps per charge must be a whole number from 1 to %d; found %s."),
     FIT_NEEDS_TEMPERATURE(CALL, "A fit with temperature-dependent coefficients (order in T above 0) needs a temperature for every point."),
     FIT_NEEDS_REFERENCE(CALL, "A fit with temperature-dependent coefficients (order in T above 0) needs a reference temperature: write the one the card's 'reference temperature' row will hold."),
     FIT_OUTPUT_NOT_HERE(CALL, "The result \"%s\" is not available from this function."),

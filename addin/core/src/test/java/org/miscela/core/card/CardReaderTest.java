@@ -288,7 +288,28 @@ class CardReaderTest {
                 bad("covariance written the other way round", Problem.PAIR_ORDER, 20, "in row 17",
                         v2(c -> c.row("excess volume covariance", "beta + alpha", 0.01, 0, 0))),
                 bad("pair limit on a pair of one", Problem.BAD_PAIR, 20, "\"alpha\"",
-                        v2(c -> c.row("valid pair mole fraction", "alpha", 0, 0.5))));
+                        v2(c -> c.row("valid pair mole fraction", "alpha", 0, 0.5))),
+                // the solution heat-capacity model (invented parameters: only the card's grammar is tested here)
+                bad("solution heat capacity without a solvent row", Problem.MISSING_ROW, 0, "\"solvent\"",
+                        v2(c -> c.row("solution heat capacity", "alpha", "Laliberté 2009", 1, 0, 0, 0, 1, 1))),
+                bad("a solvent row without a solution heat capacity", Problem.MISSING_PAIR_ROW, 0,
+                        "'solvent' rows for the solution", v2(c -> c.row("solvent", "beta"))),
+                bad("a solvent that is no component", Problem.UNKNOWN_COMPONENT, 21, "\"gamma\"",
+                        v2(c -> c.row("solution heat capacity", "alpha", "Laliberté 2009", 1, 0, 0, 0, 1, 1)
+                                .row("solvent", "gamma"))),
+                bad("a solute without a solution heat capacity", Problem.NO_SOLUTION_MODEL, 0,
+                        "solvent alpha needs one; gamma has none", ternary(c -> c.row("solvent", "alpha")
+                                .row("solution heat capacity", "beta", "Laliberté 2009", 1, 0, 0, 0, 1, 1))),
+                bad("the solvent with a solution heat capacity", Problem.SOLVENT_WITH_SOLUTION_MODEL, 20,
+                        "beta is the card's solvent", v2(c -> c.row("solution heat capacity", "beta",
+                                "Laliberté 2009", 1, 0, 0, 0, 1, 1).row("solution heat capacity", "alpha",
+                                "Laliberté 2009", 1, 0, 0, 0, 1, 1).row("solvent", "beta"))),
+                bad("a solution model of another name", Problem.BAD_KEYWORD, 20, "\"Laliberte 2008\"",
+                        v2(c -> c.row("solution heat capacity", "alpha", "Laliberte 2008", 1, 0, 0, 0, 1, 1)
+                                .row("solvent", "beta"))),
+                bad("a solution model with five parameters", Problem.MODEL_VALUES, 20, "six parameters a1 to a6",
+                        v2(c -> c.row("solution heat capacity", "alpha", "Laliberté 2009", 1, 0, 0, 0, 1)
+                                .row("solvent", "beta"))));
     }
 
     @ParameterizedTest(name = "{0}")
@@ -315,7 +336,7 @@ class CardReaderTest {
         Set<Problem> missing = EnumSet.copyOf(card);
         missing.removeAll(produced);
         assertTrue(missing.isEmpty(), "no malformed card for " + missing);
-        assertEquals(37, card.size(), "the card problems changed; update the malformed cards");
+        assertEquals(39, card.size(), "the card problems changed; update the malformed cards");
     }
 
     // ------------------------------------------------------------------ well-formed cards

@@ -86,7 +86,7 @@ public final class TestCard {
     }
 
     /** Replaces row {@code number} (1-based). */
-    TestCard set(int number, Object... cells) {
+    public TestCard set(int number, Object... cells) {
         rows.set(number - 1, cells(cells));
         return this;
     }
