@@ -84,6 +84,21 @@ final class Arguments {
         throw Problem.ARG_NOT_FLAG.raise("extrapolate argument", describe(v));
     }
 
+    /** An optional TRUE/FALSE argument (a number counts as Calc counts it): {@code absent} when left out. */
+    static boolean flag(String what, Object value, boolean absent) {
+        Object v = unwrap(value);
+        if (v == null) {
+            return absent;
+        }
+        if (v instanceof Boolean) {
+            return (Boolean) v;
+        }
+        if (v instanceof Number && Double.isFinite(((Number) v).doubleValue())) {
+            return ((Number) v).doubleValue() != 0.0;
+        }
+        throw Problem.ARG_NOT_FLAG.raise(what, describe(v));
+    }
+
     /** One number from a one-cell argument. */
     static double single(String what, Object[][] cells) {
         if (cells == null || cells.length != 1 || cells[0].length != 1) {

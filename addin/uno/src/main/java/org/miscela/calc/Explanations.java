@@ -86,7 +86,7 @@ final class Explanations {
         add("mixingHeat", (a, p) -> a.mixingHeat(r(p[0]), r(p[1]), r(p[2]), p[3], p[4]));
         add("additionHeat", (a, p) -> a.additionHeat(r(p[0]), r(p[1]), r(p[2]), r(p[3]), r(p[4]), p[5],
                 p[6]));
-        add("adiabaticRise", (a, p) -> a.adiabaticRise(r(p[0]), r(p[1]), r(p[2]), p[3], p[4]));
+        add("adiabaticRise", (a, p) -> a.adiabaticRise(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
         add("insideValidity", (a, p) -> a.insideValidity(r(p[0]), r(p[1]), r(p[2]), p[3], p[4]));
         add("traceEvaluation", (a, p) -> a.traceEvaluation(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5],
                 p[6]));
@@ -120,7 +120,7 @@ final class Explanations {
         add("partialHeatCapacity", (a, p) -> a.partialHeatCapacity(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5],
                 p[6], p[7]));
         add("temperaturePath", (a, p) -> a.temperaturePath(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5], p[6],
-                p[7], p[8], p[9]));
+                p[7], p[8], p[9], p[10]));
     }
 
     private Explanations() {

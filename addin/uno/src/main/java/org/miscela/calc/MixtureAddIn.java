@@ -206,13 +206,14 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
 
     @Override
     public Object adiabaticRise(Object[][] card, Object[][] amounts, Object[][] temperature, Object basis,
-            Object extrapolate) throws IllegalArgumentException {
+            Object extrapolate, Object boiling) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
             AmountBasis b = Arguments.basis(basis);
             Extrapolation e = Arguments.extrapolation(extrapolate);
+            boolean boils = Arguments.flag("boiling argument", boiling, false);
             return CompositionArguments.overRows(c, "amount", amounts, temperature,
-                    (k, n, t) -> CardFunctions.adiabaticRise(k, n, b, t, e));
+                    (k, n, t) -> CardFunctions.adiabaticRise(k, n, b, t, e, boils));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "adiabaticRise");
         }
@@ -569,7 +570,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     @Override
     public Object temperaturePath(Object[][] card, Object[][] charges, Object[][] amounts, Object[][] temperature,
             Object basis, Object extrapolate, Object result, Object steps, Object vesselHeatCapacity,
-            Object heatRemoved) throws IllegalArgumentException {
+            Object heatRemoved, Object boiling) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
             int[] order = DataArguments.components(c, "charges", charges);
@@ -587,7 +588,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
                     Arguments.extrapolation(extrapolate), TemperaturePath.Output.lookup(output),
                     Arguments.count("steps", steps, TemperaturePath.MOST_STEPS, 20),
                     zeroIfLeftOut("vessel heat capacity", vesselHeatCapacity),
-                    zeroIfLeftOut("heat removed", heatRemoved)));
+                    zeroIfLeftOut("heat removed", heatRemoved), Arguments.flag("boiling argument", boiling, false)));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "temperaturePath");
         }

@@ -264,10 +264,14 @@ final class FuzzCall {
                         "", 1.0, Boolean.TRUE), extrapolate()};
                     break;
                 }
-                case "mixingHeat":
-                case "adiabaticRise": {
+                case "mixingHeat": {
                     Object[][] amounts = amounts();
                     a = new Object[] {amounts, temperature(amounts), basis(), extrapolate()};
+                    break;
+                }
+                case "adiabaticRise": {
+                    Object[][] amounts = amounts();
+                    a = new Object[] {amounts, temperature(amounts), basis(), extrapolate(), extrapolate()};
                     break;
                 }
                 case "additionHeat": {
@@ -384,7 +388,7 @@ final class FuzzCall {
                         pick(Any.VOID, "path", "peak", "peak at", "final", clean ? "peak" : "top", 2.0),
                         clean ? pick(Any.VOID, 3.0, 10.0) : pick(Any.VOID, 0.0, 1.0, 5.0, 1e9, -2.0, junk()),
                         clean ? pick(Any.VOID, 0.0, 1.5) : pick(Any.VOID, 0.5, -1.0, junk()),
-                        clean ? pick(Any.VOID, 0.0, 10.0) : pick(Any.VOID, 1e3, -5.0, junk())};
+                        clean ? pick(Any.VOID, 0.0, 10.0) : pick(Any.VOID, 1e3, -5.0, junk()), extrapolate()};
                     break;
                 }
                 case "addInInfo":

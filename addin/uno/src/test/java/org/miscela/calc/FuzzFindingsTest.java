@@ -112,10 +112,10 @@ class FuzzFindingsTest {
     @Test
     void temperatureRiseWhereTheBalanceOverflowsIsRefusedByDesign() throws Exception {
         Object[][] card = range(heatCard().toArray(new Object[0][]));
-        assertTrue((Double) addIn.adiabaticRise(card, range(row(1.0, 1.0)), one(300.0), Any.VOID, Any.VOID) > 0,
+        assertTrue((Double) addIn.adiabaticRise(card, range(row(1.0, 1.0)), one(300.0), Any.VOID, Any.VOID, Any.VOID) > 0,
                 "the card itself works: exothermic mixing warms the batch");
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> addIn.adiabaticRise(card, range(row(1.0, 1.0)), one(1e308), Any.VOID, Boolean.TRUE));
+                () -> addIn.adiabaticRise(card, range(row(1.0, 1.0)), one(1e308), Any.VOID, Boolean.TRUE, Any.VOID));
         assertEquals("Problem.NO_TEMPERATURE_ROOT", Catalogue.entryOf(e.getMessage()), e.getMessage());
     }
 

@@ -270,7 +270,7 @@ class MixtureAddInTest {
         double direct = CardFunctions.mixingHeat(TERNARY_CARD, new double[] {2, 6, 1},
                 org.miscela.core.functions.AmountBasis.MOL, 25, Extrapolation.AS_CARD) - mol;
         assertEquals(direct, added, 1e-9 * Math.abs(direct));
-        double rise = (Double) addIn.adiabaticRise(TERNARY, batch, one(25.0), Any.VOID, Any.VOID);
+        double rise = (Double) addIn.adiabaticRise(TERNARY, batch, one(25.0), Any.VOID, Any.VOID, Any.VOID);
         assertTrue(rise > 0, "exothermic mixing warms the batch");
     }
 
@@ -296,20 +296,20 @@ class MixtureAddInTest {
         Object[][] charges = {{"water"}, {"sulfuric acid"}};
         Object[][] amounts = {{10.0}, {1.0}};
         Object[][] path = (Object[][]) ((Any) addIn.temperaturePath(acid, charges, amounts, one(25.0), "mol",
-                Boolean.TRUE, Any.VOID, 4.0, Any.VOID, Any.VOID)).getObject();
+                Boolean.TRUE, Any.VOID, 4.0, Any.VOID, Any.VOID, Any.VOID)).getObject();
         assertEquals(5, path.length);
         assertEquals(2, path[0].length);
         double rise = (Double) addIn.adiabaticRise(acid, new Object[][] {{1.0, 10.0}}, one(25.0), "mol",
-                Boolean.TRUE);
+                Boolean.TRUE, Any.VOID);
         assertEquals(25.0 + rise, (Double) path[4][1], 1e-7);
         assertEquals(25.0 + rise, (Double) addIn.temperaturePath(acid, charges, amounts, one(25.0), "mol",
-                Boolean.TRUE, "final", Any.VOID, Any.VOID, Any.VOID), 1e-7);
+                Boolean.TRUE, "final", Any.VOID, Any.VOID, Any.VOID, Any.VOID), 1e-7);
         IllegalArgumentException steps = assertThrows(IllegalArgumentException.class, () -> addIn.temperaturePath(
-                acid, charges, amounts, one(25.0), "mol", Boolean.TRUE, Any.VOID, 0.0, Any.VOID, Any.VOID));
+                acid, charges, amounts, one(25.0), "mol", Boolean.TRUE, Any.VOID, 0.0, Any.VOID, Any.VOID, Any.VOID));
         assertEquals("Problem.PATH_STEPS", Catalogue.entryOf(steps.getMessage()), steps.getMessage());
         IllegalArgumentException lengths = assertThrows(IllegalArgumentException.class, () -> addIn.temperaturePath(
                 acid, charges, new Object[][] {{1.0}}, one(25.0), "mol", Boolean.TRUE, Any.VOID, Any.VOID, Any.VOID,
-                Any.VOID));
+                Any.VOID, Any.VOID));
         assertEquals("Problem.DATA_LENGTH", Catalogue.entryOf(lengths.getMessage()), lengths.getMessage());
     }
 
@@ -414,7 +414,7 @@ class MixtureAddInTest {
     void aTemperatureRiseWithNoRootNamesNoNegativeKelvin() {
         Object[][] endothermic = TestCards.cells("invented-endothermic.tsv");
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> addIn.adiabaticRise(
-                endothermic, new Object[][] {{1.0, 1.0}}, one(-272.0), Any.VOID, Boolean.TRUE));
+                endothermic, new Object[][] {{1.0, 1.0}}, one(-272.0), Any.VOID, Boolean.TRUE, Any.VOID));
         assertEquals("No temperature between 0 and 1.15 K balances the heat of mixing; the card's heat capacities or "
                 + "excess enthalpy are not physical there.", e.getMessage());
     }

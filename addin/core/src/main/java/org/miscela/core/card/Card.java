@@ -1,5 +1,6 @@
 package org.miscela.core.card;
 
+import org.miscela.core.model.BoilingCurve;
 import org.miscela.core.model.Component;
 import org.miscela.core.model.ExcessFunction;
 import org.miscela.core.model.GeometricModel;
@@ -32,6 +33,8 @@ public final class Card {
     private final double statedBasisReferenceKelvin;
     /** The solution heat-capacity model the card states, or null. */
     private final SolutionHeatCapacity solutionHeatCapacity;
+    /** The boiling temperatures the card states, or null. */
+    private final BoilingCurve boiling;
 
     /**
      * 20 °C, the temperature at which alcoholic strength by volume is defined (OIML R 22 (1975)), used for every
@@ -54,16 +57,18 @@ public final class Card {
             ExcessFunction excessEnthalpy, Validity validity, boolean extrapolationAllowed,
             boolean missingPairsIdeal) {
         this(title, source, units, components, excessVolume, excessEnthalpy, validity, extrapolationAllowed,
-                missingPairsIdeal, Double.NaN, null);
+                missingPairsIdeal, Double.NaN, null, null);
     }
 
     /**
      * @param statedBasisReferenceKelvin the card's 'basis reference temperature' in K, or NaN when it has none
      * @param solutionHeatCapacity the solution heat-capacity model the card states, or null
+     * @param boiling the boiling temperatures the card states, or null
      */
     Card(String title, String source, Units units, List<Component> components, ExcessFunction excessVolume,
             ExcessFunction excessEnthalpy, Validity validity, boolean extrapolationAllowed,
-            boolean missingPairsIdeal, double statedBasisReferenceKelvin, SolutionHeatCapacity solutionHeatCapacity) {
+            boolean missingPairsIdeal, double statedBasisReferenceKelvin, SolutionHeatCapacity solutionHeatCapacity,
+            BoilingCurve boiling) {
         this.title = title;
         this.source = source;
         this.units = units;
@@ -75,6 +80,7 @@ public final class Card {
         this.missingPairsIdeal = missingPairsIdeal;
         this.statedBasisReferenceKelvin = statedBasisReferenceKelvin;
         this.solutionHeatCapacity = solutionHeatCapacity;
+        this.boiling = boiling;
         this.mixture = new Mixture(this);
     }
 
@@ -150,6 +156,11 @@ public final class Card {
     /** The solution heat-capacity model (Laliberté 2009) the card states, or null when it states none. */
     public SolutionHeatCapacity solutionHeatCapacity() {
         return solutionHeatCapacity;
+    }
+
+    /** The boiling temperatures the card states, or null when it states none. */
+    public BoilingCurve boiling() {
+        return boiling;
     }
 
     public Mixture mixture() {

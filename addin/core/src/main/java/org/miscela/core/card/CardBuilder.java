@@ -26,6 +26,7 @@ import org.miscela.core.model.ConstantDensity;
 import org.miscela.core.model.ExcessFunction;
 import org.miscela.core.model.GeometricModel;
 import org.miscela.core.model.ApparentHeatCapacity;
+import org.miscela.core.model.BoilingCurve;
 import org.miscela.core.model.HeatCapacity;
 import org.miscela.core.model.SolutionHeatCapacity;
 import org.miscela.core.model.PolynomialDensity;
@@ -130,7 +131,45 @@ final class CardBuilder {
             basisReferenceKelvin = kelvin;
         }
         return new Card(title, source, units, components, volume, enthalpy, validity, allow, missingIdeal,
-                basisReferenceKelvin, solutionHeatCapacity(names, masses));
+                basisReferenceKelvin, solutionHeatCapacity(names, masses), boilingCurve(names));
+    }
+
+    /**
+     * The boiling temperatures a two-component card states: one 'boiling temperatures' row naming the component
+     * whose mole fraction the points give, then pairs of mole fraction and temperature (card unit), the mole
+     * fractions strictly increasing within 0..1; null when the card states none.
+     */
+    private BoilingCurve boilingCurve(List<String> names) {
+        Map<String, CardRow> curves = rows.keyed(CardLabels.BOILING);
+        if (curves.isEmpty()) {
+            return null;
+        }
+        CardRow r = curves.values().iterator().next();
+        if (curves.size() > 1 || names.size() != 2) {
+            throw Problem.MODEL_VALUES.raise(r.number, r.label, "boiling temperature", "one row on a card of two "
+                    + "components", "the mole fraction of one component does not fix a blend of more");
+        }
+        int component = normalise(names.get(0)).equals(normalise(r.text(0))) ? 0 : 1;
+        double[] v = r.numbersFrom(1);
+        if (v.length < 4 || v.length % 2 != 0) {
+            throw Problem.MODEL_VALUES.raise(r.number, r.label, "boiling temperature", "pairs of mole fraction and "
+                    + "temperature, at least two", "found " + v.length + " value(s)");
+        }
+        double[] x = new double[v.length / 2];
+        double[] kelvin = new double[v.length / 2];
+        for (int i = 0; i < x.length; i++) {
+            x[i] = v[2 * i];
+            kelvin[i] = units.temperature().toKelvin(v[2 * i + 1]);
+            if (x[i] < 0.0 || x[i] > 1.0 || (i > 0 && !(x[i] > x[i - 1]))) {
+                throw Problem.MODEL_VALUES.raise(r.number, r.label, "boiling temperature", "mole fractions "
+                        + "increasing within 0 to 1", "found " + Numbers.show(x[i]) + " in column " + (3 + 2 * i));
+            }
+            if (!(kelvin[i] > 0.0)) {
+                throw Problem.NOT_POSITIVE.raise(r.number, r.label, "a boiling temperature (in kelvin)",
+                        Numbers.show(kelvin[i]));
+            }
+        }
+        return new BoilingCurve(component, x, kelvin);
     }
 
     /**

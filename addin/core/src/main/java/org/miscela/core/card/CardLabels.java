@@ -38,6 +38,7 @@ final class CardLabels {
     static final String BASIS_REFERENCE = "basis reference temperature";
     static final String SOLUTION_HEAT_CAPACITY = "solution heat capacity";
     static final String SOLVENT = "solvent";
+    static final String BOILING = "boiling temperatures";
 
     /**
      * Rows of an excess-property section: binary coefficients A0..A99 (group 2), ternary C0..C9 (group 3; only C0..C2
@@ -53,11 +54,11 @@ final class CardLabels {
     /** Rows whose column 2 names a component (or a pair) and whose values follow. */
     private static final String[] KEYED = {COMPONENT, DENSITY_MODEL, DENSITY_REFERENCE, DENSITY_COEFFICIENTS,
         VALID_MOLE_FRACTION, HEAT_CAPACITY, HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION,
-        SOLUTION_HEAT_CAPACITY};
+        SOLUTION_HEAT_CAPACITY, BOILING};
     /** Labels of version 2 beyond the excess-enthalpy and ternary rows. */
     private static final String[] VERSION_2 = {MODEL, MISSING_PAIRS, ENTHALPY_UNIT, HEAT_CAPACITY,
         EXCESS_VOLUME + " covariance", HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION,
-        COMPONENT_ORDER, BASIS_REFERENCE, SOLUTION_HEAT_CAPACITY, SOLVENT};
+        COMPONENT_ORDER, BASIS_REFERENCE, SOLUTION_HEAT_CAPACITY, SOLVENT, BOILING};
     /** Keyed rows whose subject is a pair "a + b" rather than one component. */
     private static final String[] PAIR_KEYED = {VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION};
 

@@ -94,6 +94,9 @@ public final class FunctionCatalog {
                     + "\"residuals\", \"orders\" or \"check\". \"orders\" gives the fits of order 0 to the order "
                     + "given, with F-tests, AIC and BIC; \"check\" gives \"OK\", or why the fit is refused, in "
                     + "words.");
+    private static final ArgumentInfo BOILING = optional("boiling", "boiling",
+            "TRUE gives the temperature even at or above the card's boiling point. Left out or FALSE, such a batch "
+                    + "is refused: it would boil first.");
     private static final ArgumentInfo PER = optional("per", "per",
             "\"mol\" (left out): per mole of blend (or of the component); \"kg\": per kilogram of it.");
     private static final ArgumentInfo BASIS = optional("basis", "basis",
@@ -276,8 +279,8 @@ public final class FunctionCatalog {
                     "=MIX.TEMPERATURERISE(acid; {1; 10}; 25; \"mol\"; TRUE())",
                     CARD, AMOUNTS, range("temperature", "temperature",
                             "Starting temperature of every component, in the card's unit: one value, or a column "
-                                    + "with one per batch."), BASIS, EXTRAPOLATE)
-                    .shows("74.57").refuses(union(AMOUNT_PROBLEMS, POINT_PROBLEMS, list(Problem.NO_ENTHALPY, Problem.NO_HEAT_CAPACITY, Problem.NO_TEMPERATURE_ROOT, Problem.OUTSIDE_FINAL_TEMPERATURE))),
+                                    + "with one per batch."), BASIS, EXTRAPOLATE, BOILING)
+                    .shows("74.57").refuses(union(AMOUNT_PROBLEMS, POINT_PROBLEMS, list(Problem.NO_ENTHALPY, Problem.NO_HEAT_CAPACITY, Problem.NO_TEMPERATURE_ROOT, Problem.OUTSIDE_FINAL_TEMPERATURE, Problem.BOILS))),
             new FunctionInfo("insideValidity", "MIX.INSIDE",
                     "1 (TRUE) when the point is inside every validity limit of the card, else 0",
                     "1 (TRUE) when the composition and temperature lie inside every validity limit the card states "
@@ -579,11 +582,11 @@ public final class FunctionCatalog {
                             optional("vesselHeatCapacity", "vessel heat capacity", "The vessel's heat capacity in the "
                                     + "card's energy unit per degree (J/K or kJ/K); it warms with the batch (left out: 0)."),
                             optional("heatRemoved", "heat removed", "The cooling over the whole addition in the card's "
-                                    + "energy unit, removed in proportion to the amount added (left out: 0)."))
+                                    + "energy unit, removed in proportion to the amount added (left out: 0)."), BOILING)
                     .shows("99.57").refuses(union(AMOUNT_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS,
                             list(Problem.NO_ENTHALPY, Problem.NO_HEAT_CAPACITY, Problem.NO_TEMPERATURE_ROOT,
                                     Problem.OUTSIDE_FINAL_TEMPERATURE, Problem.PATH_EMPTY_VESSEL, Problem.PATH_STEPS,
-                                    Problem.DATA_LENGTH, Problem.UNKNOWN_FIT_OUTPUT)))));
+                                    Problem.DATA_LENGTH, Problem.UNKNOWN_FIT_OUTPUT, Problem.BOILS)))));
 
     private FunctionCatalog() {
     }

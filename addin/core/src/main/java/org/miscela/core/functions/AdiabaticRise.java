@@ -40,7 +40,7 @@ final class AdiabaticRise {
      * {@link CardFunctions#adiabaticRise}, in degrees of the card's temperature scale: every feed at t, no vessel, no
      * heat removed; T_f must lie inside the card's validity range unless it may extrapolate.
      */
-    static double of(Card card, double[] amounts, AmountBasis basis, double t, Extrapolation e) {
+    static double of(Card card, double[] amounts, AmountBasis basis, double t, Extrapolation e, boolean boiling) {
         double[] n = CardFunctions.amountsToMoles(card, amounts, basis, t, e);
         double start = PointChecks.checkTemperature(card, t, e);
         int[] components = new int[n.length];
@@ -49,7 +49,7 @@ final class AdiabaticRise {
             components[k] = k;
             feeds[k] = start;
         }
-        double end = finalKelvin(card, components, n, feeds, 0.0, start, 0.0, e);
+        double end = finalKelvin(card, components, n, feeds, 0.0, start, 0.0, e, boiling);
         return card.units().temperature().differenceFromKelvin(end - start);
     }
 
@@ -57,11 +57,12 @@ final class AdiabaticRise {
      * The final temperature (K) of the charges {@code chargeMoles} of components {@code components}, each fed at its
      * {@code feedKelvin}, with a vessel of heat capacity {@code vessel} (J/K) starting at {@code vesselKelvin} and
      * {@code removed} J taken away (negative: added); refused outside the card's validity range unless it may
-     * extrapolate. The balance is bracketed by steps doubling away from T0 (at most {@link #SEARCH_SPAN} K) on the
-     * side it drives the batch, then solved by Brent's method.
+     * extrapolate, and at or above the boiling temperature the card states unless {@code boiling} accepts it. The
+     * balance is bracketed by steps doubling away from T0 (at most {@link #SEARCH_SPAN} K) on the side it drives the
+     * batch, then solved by Brent's method.
      */
     static double finalKelvin(Card card, int[] components, double[] chargeMoles, double[] feedKelvin, double vessel,
-            double vesselKelvin, double removed, Extrapolation e) {
+            double vesselKelvin, double removed, Extrapolation e, boolean boiling) {
         card.mixture().enthalpy(); // NO_ENTHALPY first, also for a batch of one pure liquid
         double[] n = new double[card.componentCount()];
         double total = 0.0;
@@ -125,6 +126,11 @@ final class AdiabaticRise {
                 }
             }
             end = finalTemperature(balance, Math.min(reference, far), Math.max(reference, far), BALANCE_EVALUATIONS);
+        }
+        double boils = card.boiling() == null ? Double.NaN : card.boiling().kelvinAt(x);
+        if (!boiling && end >= boils) {
+            throw Problem.BOILS.raise(Numbers.show(unit.fromKelvin(end)), unit.symbol(),
+                    Numbers.show(unit.fromKelvin(boils)), unit.symbol());
         }
         if (!card.mayExtrapolate(e) && !(pure ? card.validity().containsTemperature(end)
                 : PointChecks.insideTemperature(card, x, end))) {

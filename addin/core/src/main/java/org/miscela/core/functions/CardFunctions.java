@@ -301,7 +301,16 @@ public final class CardFunctions {
      * exchange with the vessel or surroundings, no evaporation or reaction, and the card's models over T..T_f.
      */
     public static double adiabaticRise(Card card, double[] amounts, AmountBasis basis, double t, Extrapolation e) {
-        return AdiabaticRise.of(card, amounts, basis, t, e);
+        return adiabaticRise(card, amounts, basis, t, e, false);
+    }
+
+    /**
+     * {@link #adiabaticRise}, refusing a batch that reaches the boiling temperature the card states unless
+     * {@code boiling} accepts it.
+     */
+    public static double adiabaticRise(Card card, double[] amounts, AmountBasis basis, double t, Extrapolation e,
+            boolean boiling) {
+        return AdiabaticRise.of(card, amounts, basis, t, e, boiling);
     }
 
     /**
@@ -310,8 +319,9 @@ public final class CardFunctions {
      */
     public static Object temperaturePath(Card card, int[] charges, double[] amounts, AmountBasis basis,
             double[] temperatures, Extrapolation e, TemperaturePath.Output output, int steps, double vessel,
-            double removed) {
-        TemperaturePath p = new TemperaturePath(card, charges, amounts, basis, temperatures, vessel, removed, e);
+            double removed, boolean boiling) {
+        TemperaturePath p = new TemperaturePath(card, charges, amounts, basis, temperatures, vessel, removed, e,
+                boiling);
         switch (output) {
             case PEAK:
                 return p.peak(steps)[1];

@@ -63,6 +63,7 @@ public final class TemperaturePath {
     private final double vessel;
     private final double removed;
     private final Extrapolation e;
+    private final boolean boiling;
     private final double totalAdded;
 
     /**
@@ -71,9 +72,10 @@ public final class TemperaturePath {
      * @param temperatures each charge's feed temperature in the card's unit
      * @param vesselHeatCapacity the vessel's heat capacity in the card's energy unit per degree (0: none)
      * @param heatRemoved the heat removed over the whole addition in the card's energy unit (negative: supplied)
+     * @param boiling whether a point at or above the card's boiling temperature is accepted (else refused)
      */
     public TemperaturePath(Card card, int[] components, double[] amounts, AmountBasis basis, double[] temperatures,
-            double vesselHeatCapacity, double heatRemoved, Extrapolation e) {
+            double vesselHeatCapacity, double heatRemoved, Extrapolation e, boolean boiling) {
         if (components.length == 0 || amounts.length != components.length
                 || temperatures.length != components.length) {
             throw Problem.DATA_LENGTH.raise("amounts", amounts.length, "charges", components.length);
@@ -83,6 +85,7 @@ public final class TemperaturePath {
         this.components = components.clone();
         this.amounts = amounts.clone();
         this.e = e;
+        this.boiling = boiling;
         this.moles = new double[components.length];
         this.feedKelvin = new double[components.length];
         double added = 0.0;
@@ -135,7 +138,7 @@ public final class TemperaturePath {
         }
         double share = totalAdded > 0.0 ? added / totalAdded : 0.0;
         return AdiabaticRise.finalKelvin(card, java.util.Arrays.copyOf(components, charge + 1), charged,
-                java.util.Arrays.copyOf(feedKelvin, charge + 1), vessel, feedKelvin[0], removed * share, e);
+                java.util.Arrays.copyOf(feedKelvin, charge + 1), vessel, feedKelvin[0], removed * share, e, boiling);
     }
 
     /**

@@ -110,6 +110,9 @@ final class Trace {
                 tr.add("heat capacity: " + name(card, k) + " [" + cpUnit + "]",
                         c == null ? "not on the card" : (Object) scaleT.fromPerKelvin(scale * c.at(kelvin), 1));
             }
+            double boils = card.boiling() == null ? Double.NaN : card.boiling().kelvinAt(x);
+            tr.add("boiling temperature [" + scaleT.symbol() + "]", card.boiling() == null ? "not on the card"
+                    : Double.isNaN(boils) ? "outside the card's boiling points" : (Object) scaleT.fromKelvin(boils));
             tr.add("blend heat capacity source", m.heatCapacitySource().words());
             double[] partial = new double[x.length];
             boolean known = true;

@@ -26,7 +26,7 @@ class TemperaturePathTest {
 
     private static TemperaturePath path(Card card, int[] order, double[] amounts, double[] t, double vessel,
             double removed) {
-        return new TemperaturePath(card, order, amounts, AmountBasis.MOL, t, vessel, removed, Extrapolation.ALLOW);
+        return new TemperaturePath(card, order, amounts, AmountBasis.MOL, t, vessel, removed, Extrapolation.ALLOW, false);
     }
 
     private static double end(double[][] rows) {
@@ -115,7 +115,7 @@ class TemperaturePathTest {
                 .row("excess enthalpy A0", "alpha + gamma", 0.0)
                 .row("excess enthalpy A0", "beta + gamma", 0.0).cells());
         double[][] rows = new TemperaturePath(ideal, new int[] {0, 1}, new double[] {1, 3}, AmountBasis.MOL,
-                new double[] {283.15, 313.15}, 0, 0, Extrapolation.AS_CARD).path(4);
+                new double[] {283.15, 313.15}, 0, 0, Extrapolation.AS_CARD, false).path(4);
         double expected = (112.0 * 283.15 + 3 * 75.3 * 313.15) / (112.0 + 3 * 75.3);
         assertEquals(expected, end(rows), 1e-6);
         assertEquals(283.15, rows[0][1], 1e-9);
@@ -132,7 +132,7 @@ class TemperaturePathTest {
         // the NBS card covers x_acid from 0.0099: the first drops of acid into pure water lie below it
         MiscelaException outside = assertThrows(MiscelaException.class, () -> new TemperaturePath(NBS,
                 new int[] {WATER, ACID}, new double[] {10, 1}, AmountBasis.MOL, new double[] {25, 25}, 0, 0,
-                Extrapolation.AS_CARD).path(20));
+                Extrapolation.AS_CARD, false).path(20));
         assertEquals(Problem.OUTSIDE_COMPOSITION, outside.problem());
     }
 }
