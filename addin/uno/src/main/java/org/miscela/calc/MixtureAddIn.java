@@ -570,7 +570,7 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     @Override
     public Object temperaturePath(Object[][] card, Object[][] charges, Object[][] amounts, Object[][] temperature,
             Object basis, Object extrapolate, Object result, Object steps, Object vesselHeatCapacity,
-            Object heatRemoved, Object boiling) throws IllegalArgumentException {
+            Object heatRemoved, Object boiling, Object limit) throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
             int[] order = DataArguments.components(c, "charges", charges);
@@ -588,7 +588,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
                     Arguments.extrapolation(extrapolate), TemperaturePath.Output.lookup(output),
                     Arguments.count("steps", steps, TemperaturePath.MOST_STEPS, 20),
                     zeroIfLeftOut("vessel heat capacity", vesselHeatCapacity),
-                    zeroIfLeftOut("heat removed", heatRemoved), Arguments.flag("boiling argument", boiling, false)));
+                    zeroIfLeftOut("heat removed", heatRemoved), Arguments.flag("boiling argument", boiling, false),
+                    Arguments.optionalNumber("limit", limit)));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "temperaturePath");
         }

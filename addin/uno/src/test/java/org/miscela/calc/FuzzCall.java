@@ -385,10 +385,11 @@ final class FuzzCall {
                     Object[][] t = r.nextBoolean() ? new Object[][] {{temperatureValue()}}
                             : temperatureRange(charges, 1);
                     a = new Object[] {order, amounts, t, basis(), extrapolate(),
-                        pick(Any.VOID, "path", "peak", "peak at", "final", clean ? "peak" : "top", 2.0),
+                        pick(Any.VOID, "path", "peak", "peak at", "final", "cooling", clean ? "peak" : "top", 2.0),
                         clean ? pick(Any.VOID, 3.0, 10.0) : pick(Any.VOID, 0.0, 1.0, 5.0, 1e9, -2.0, junk()),
                         clean ? pick(Any.VOID, 0.0, 1.5) : pick(Any.VOID, 0.5, -1.0, junk()),
-                        clean ? pick(Any.VOID, 0.0, 10.0) : pick(Any.VOID, 1e3, -5.0, junk()), extrapolate()};
+                        clean ? pick(Any.VOID, 0.0, 10.0) : pick(Any.VOID, 1e3, -5.0, junk()), extrapolate(),
+                        clean ? pick(Any.VOID, 60.0, 330.0) : pick(Any.VOID, 60.0, -300.0, junk())};
                     break;
                 }
                 case "addInInfo":

@@ -296,20 +296,21 @@ class MixtureAddInTest {
         Object[][] charges = {{"water"}, {"sulfuric acid"}};
         Object[][] amounts = {{10.0}, {1.0}};
         Object[][] path = (Object[][]) ((Any) addIn.temperaturePath(acid, charges, amounts, one(25.0), "mol",
-                Boolean.TRUE, Any.VOID, 4.0, Any.VOID, Any.VOID, Any.VOID)).getObject();
+                Boolean.TRUE, Any.VOID, 4.0, Any.VOID, Any.VOID, Any.VOID, Any.VOID)).getObject();
         assertEquals(5, path.length);
         assertEquals(2, path[0].length);
         double rise = (Double) addIn.adiabaticRise(acid, new Object[][] {{1.0, 10.0}}, one(25.0), "mol",
                 Boolean.TRUE, Any.VOID);
         assertEquals(25.0 + rise, (Double) path[4][1], 1e-7);
         assertEquals(25.0 + rise, (Double) addIn.temperaturePath(acid, charges, amounts, one(25.0), "mol",
-                Boolean.TRUE, "final", Any.VOID, Any.VOID, Any.VOID, Any.VOID), 1e-7);
+                Boolean.TRUE, "final", Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID), 1e-7);
         IllegalArgumentException steps = assertThrows(IllegalArgumentException.class, () -> addIn.temperaturePath(
-                acid, charges, amounts, one(25.0), "mol", Boolean.TRUE, Any.VOID, 0.0, Any.VOID, Any.VOID, Any.VOID));
+                acid, charges, amounts, one(25.0), "mol", Boolean.TRUE, Any.VOID, 0.0, Any.VOID, Any.VOID, Any.VOID,
+                Any.VOID));
         assertEquals("Problem.PATH_STEPS", Catalogue.entryOf(steps.getMessage()), steps.getMessage());
         IllegalArgumentException lengths = assertThrows(IllegalArgumentException.class, () -> addIn.temperaturePath(
                 acid, charges, new Object[][] {{1.0}}, one(25.0), "mol", Boolean.TRUE, Any.VOID, Any.VOID, Any.VOID,
-                Any.VOID, Any.VOID));
+                Any.VOID, Any.VOID, Any.VOID));
         assertEquals("Problem.DATA_LENGTH", Catalogue.entryOf(lengths.getMessage()), lengths.getMessage());
     }
 

@@ -110,11 +110,13 @@ public final class FunctionCatalog {
                     + "own callers",
             Problem.CHECK_NEEDS_BOTH, "MIX.CHECKPOINT always passes a composition and a temperature (leaving one "
                     + "out is Calc's own Err:502) and MIX.CHECK neither; the check guards the library's own callers",
-            Problem.NO_CONVERGENCE, "the only search that can fail to converge is MIX.TEMPERATURERISE's for the final "
-                    + "temperature: Brent's method on a bracket whose ends differ in sign, at most 1024 K wide (40 "
-                    + "bisection steps), within 200 evaluations, the balance's non-finite values refused before "
-                    + "(NO_TEMPERATURE_ROOT); the hardest balance tried, a triple root in the widest bracket, needs 101 "
-                    + "to 120 (FinalTemperatureSearchTest), and no card is known that reaches it. Calc would show "
+            Problem.NO_CONVERGENCE, "the searches that could fail to converge are the final temperature's "
+                    + "(MIX.TEMPERATURERISE, each point of MIX.TEMPERATUREPATH): Brent's method on a bracket whose ends "
+                    + "differ in sign, at most 1024 K wide (40 bisection steps), within 200 evaluations, the balance's "
+                    + "non-finite values refused before (NO_TEMPERATURE_ROOT); the hardest balance tried, a triple root "
+                    + "in the widest bracket, needs 101 to 120 (FinalTemperatureSearchTest), and no card is known that "
+                    + "reaches it; and the cooling's (MIX.TEMPERATUREPATH's \"cooling\"), whose peak falls without "
+                    + "bound as the heat removed grows, so its doubling always brackets the limit. Calc would show "
                     + "Err:523",
             Problem.RAGGED_DESIGN, "a range or an inline array is rectangular, so every row of a design has as "
                     + "many columns as the first",
@@ -575,18 +577,21 @@ public final class FunctionCatalog {
                             range("temperature", "temperature", "The temperature each charge is fed at, in the card's "
                                     + "unit: one for all, or one per charge; the vessel starts at the first's."),
                             BASIS, EXTRAPOLATE,
-                            optional("result", "result", "\"path\" (left out): amount added and temperature, one row per "
-                                    + "point; \"peak\", \"peak at\" (the amount added then) or \"final\"."),
+                            optional("result", "result", "\"path\" (left out): amount added and temperature per point; "
+                                    + "\"peak\", \"peak at\", \"final\", or \"cooling\" to stay at the limit."),
                             optional("steps", "steps", "Points per added charge, 1 to 1000 (left out: 20); the peak is "
                                     + "refined between them."),
                             optional("vesselHeatCapacity", "vessel heat capacity", "The vessel's heat capacity in the "
                                     + "card's energy unit per degree (J/K or kJ/K); it warms with the batch (left out: 0)."),
                             optional("heatRemoved", "heat removed", "The cooling over the whole addition in the card's "
-                                    + "energy unit, removed in proportion to the amount added (left out: 0)."), BOILING)
+                                    + "energy unit, removed in proportion to the amount added (left out: 0)."), BOILING,
+                            optional("limit", "limit", "For the result \"cooling\": the highest temperature the batch may "
+                                    + "reach, in the card's unit. The answer is the least heat to remove over the addition."))
                     .shows("99.57").refuses(union(AMOUNT_PROBLEMS, POINT_PROBLEMS, COMPONENT_PROBLEMS,
                             list(Problem.NO_ENTHALPY, Problem.NO_HEAT_CAPACITY, Problem.NO_TEMPERATURE_ROOT,
                                     Problem.OUTSIDE_FINAL_TEMPERATURE, Problem.PATH_EMPTY_VESSEL, Problem.PATH_STEPS,
-                                    Problem.DATA_LENGTH, Problem.UNKNOWN_FIT_OUTPUT, Problem.BOILS)))));
+                                    Problem.DATA_LENGTH, Problem.UNKNOWN_FIT_OUTPUT, Problem.BOILS,
+                                    Problem.PATH_LIMIT)))));
 
     private FunctionCatalog() {
     }

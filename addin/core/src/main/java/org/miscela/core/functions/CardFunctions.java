@@ -315,11 +315,19 @@ public final class CardFunctions {
 
     /**
      * The temperature along an order of addition ({@link TemperaturePath}): the path as rows (amount added, temperature
-     * in the card's unit), or, as a number, its peak, the amount added at the peak, or its end.
+     * in the card's unit), or, as a number, its peak, the amount added at the peak, its end, or the cooling that keeps
+     * the peak at {@code limit} (NaN: none given).
      */
     public static Object temperaturePath(Card card, int[] charges, double[] amounts, AmountBasis basis,
             double[] temperatures, Extrapolation e, TemperaturePath.Output output, int steps, double vessel,
-            double removed, boolean boiling) {
+            double removed, boolean boiling, double limit) {
+        if (output == TemperaturePath.Output.COOLING) {
+            if (Double.isNaN(limit)) {
+                throw Problem.ARG_BLANK.raise("limit, which the result \"cooling\" needs,");
+            }
+            return TemperaturePath.cooling(card, charges, amounts, basis, temperatures, vessel, e, boiling, limit,
+                    steps);
+        }
         TemperaturePath p = new TemperaturePath(card, charges, amounts, basis, temperatures, vessel, removed, e,
                 boiling);
         switch (output) {

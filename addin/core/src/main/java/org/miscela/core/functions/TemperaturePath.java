@@ -1,5 +1,9 @@
 package org.miscela.core.functions;
 
+import org.apache.commons.math3.analysis.UnivariateFunction;
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.exception.NoBracketingException;
+import org.apache.commons.math3.exception.TooManyEvaluationsException;
 import org.apache.commons.math3.optim.MaxEval;
 import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
 import org.apache.commons.math3.optim.univariate.BrentOptimizer;
@@ -29,7 +33,7 @@ public final class TemperaturePath {
 
     /** What the path function returns. */
     public enum Output {
-        PATH("path"), PEAK("peak"), PEAK_AT("peak at"), FINAL("final");
+        PATH("path"), PEAK("peak"), PEAK_AT("peak at"), FINAL("final"), COOLING("cooling");
 
         private final String word;
 
@@ -192,6 +196,50 @@ public final class TemperaturePath {
             return rows[best].clone();
         }
         return new double[] {before + amounts[charge] * p.getPoint(), t};
+    }
+
+    /**
+     * The least heat to remove over the addition (in the card's energy unit, in proportion to the amount added, as the
+     * heat removed of a path is) for the peak to stay at or below {@code limit} (card unit): 0 when it already does;
+     * otherwise the root of peak(Q) = limit, which falls as Q grows, bracketed by doubling Q from the heat the
+     * batch's excess over the limit holds, then found by Brent's method.
+     */
+    public static double cooling(Card card, int[] charges, double[] amounts, AmountBasis basis,
+            double[] temperatures, double vesselHeatCapacity, Extrapolation e, boolean boiling, double limit,
+            int steps) {
+        Units.Temperature unit = card.units().temperature();
+        TemperaturePath bare = new TemperaturePath(card, charges, amounts, basis, temperatures, vesselHeatCapacity,
+                0.0, e, boiling);
+        double limitKelvin = unit.toKelvin(limit);
+        if (!Double.isFinite(limitKelvin) || !(limitKelvin > bare.feedKelvin[0])) {
+            throw Problem.PATH_LIMIT.raise(Numbers.show(limit), unit.symbol(),
+                    Numbers.show(unit.fromKelvin(bare.feedKelvin[0])), unit.symbol());
+        }
+        UnivariateFunction excess = q -> new TemperaturePath(card, charges, amounts, basis, temperatures,
+                vesselHeatCapacity, q, e, boiling).peak(steps)[1] - limit;
+        double over = bare.peak(steps)[1] - limit;
+        if (over <= 0.0) {
+            return 0.0;
+        }
+        double moles = 0.0;
+        for (double n : bare.moles) {
+            moles += n;
+        }
+        // first guess: the excess warmed out of a batch holding about 75 J/(mol·K) (water's heat capacity)
+        double hi = card.units().enthalpy().fromJoulePerMol(moles * 75.0 * unit.differenceToKelvin(over));
+        for (int i = 0; excess.value(hi) > 0.0; i++) {
+            hi *= 2.0;
+            if (i > 60) {
+                throw Problem.NO_CONVERGENCE.raise("the cooling that keeps the peak at " + Numbers.show(limit) + " "
+                        + unit.symbol(), "no amount of heat removed in proportion to the addition brings it there");
+            }
+        }
+        try {
+            return new BrentSolver(1e-12, Math.abs(hi) * 1e-10).solve(200, excess, 0.0, hi);
+        } catch (TooManyEvaluationsException | NoBracketingException ex) {
+            throw Problem.NO_CONVERGENCE.raise("the cooling that keeps the peak at " + Numbers.show(limit) + " "
+                    + unit.symbol(), "the search for it did not converge");
+        }
     }
 
     private static void checkSteps(int steps) {

@@ -146,6 +146,8 @@ public enum Problem {
             + "same, pass TRUE as 'boiling'."),
     PATH_EMPTY_VESSEL(CALL, "The first charge, %s, is what the vessel holds when the addition starts; it must be more "
             + "than nothing: put the first component charged first."),
+    PATH_LIMIT(CALL, "The limit %s %s must lie above the temperature the vessel starts at (%s %s): give the highest "
+            + "temperature the batch may reach, as 'limit', with the result \"cooling\"."),
     PATH_STEPS(CALL, "The number of steps per charge must be a whole number from 1 to %d; found %s."),
     FIT_NEEDS_TEMPERATURE(CALL, "A fit with temperature-dependent coefficients (order in T above 0) needs a temperature for every point."),
     FIT_NEEDS_REFERENCE(CALL, "A fit with temperature-dependent coefficients (order in T above 0) needs a reference temperature: write the one the card's 'reference temperature' row will hold."),

@@ -121,6 +121,38 @@ class TemperaturePathTest {
         assertEquals(283.15, rows[0][1], 1e-9);
     }
 
+    /**
+     * The cooling that keeps a path at a limit: removed over the addition, the path's peak is the limit. Acid into
+     * water peaks at its end, so the cooling is the heat of mixing less the heat the batch holds between 25 °C and the
+     * limit (first law, with the integral from the card's own heat capacity); water into acid needs more for the same
+     * limit, since its heat comes early while the cooling follows the addition.
+     */
+    @Test
+    void theCoolingThatKeepsThePeakAtALimit() {
+        int[] acidIntoWater = {WATER, ACID};
+        double[] amounts = {10, 1};
+        double[] t = {25, 25};
+        double q = TemperaturePath.cooling(WHOLE, acidIntoWater, amounts, AmountBasis.MOL, t, 0, Extrapolation.ALLOW,
+                false, 60.0, 20);
+        assertEquals(60.0, path(WHOLE, acidIntoWater, amounts, t, 0, q).peak(20)[1], 1e-6);
+        double mixing = CardFunctions.mixingHeat(WHOLE, new double[] {1, 10}, AmountBasis.MOL, 25.0,
+                Extrapolation.ALLOW);
+        double held = 11 * WHOLE.mixture().heating(new double[] {1.0 / 11, 10.0 / 11}, 298.15, 333.15) / 1000.0;
+        assertEquals(-mixing - held, q, 1e-6 * Math.abs(mixing));
+        double reverse = TemperaturePath.cooling(WHOLE, new int[] {ACID, WATER}, new double[] {1, 10}, AmountBasis.MOL,
+                t, 0, Extrapolation.ALLOW, false, 60.0, 20);
+        assertEquals(60.0, path(WHOLE, new int[] {ACID, WATER}, new double[] {1, 10}, t, 0, reverse).peak(20)[1],
+                1e-6);
+        assertTrue(reverse > q, "water into acid needs more cooling: " + reverse + " kJ against " + q);
+        assertEquals(0.0, TemperaturePath.cooling(WHOLE, acidIntoWater, amounts, AmountBasis.MOL, t, 0,
+                Extrapolation.ALLOW, false, 150.0, 20), "a limit above the peak needs no cooling");
+        MiscelaException below = assertThrows(MiscelaException.class, () -> TemperaturePath.cooling(WHOLE,
+                acidIntoWater, amounts, AmountBasis.MOL, t, 0, Extrapolation.ALLOW, false, 20.0, 20));
+        assertEquals(Problem.PATH_LIMIT, below.problem());
+        Figures.note(TemperaturePathTest.class, "to stay at or below 60 °C, 1 mol acid into 10 mol water needs %.2f kJ "
+                + "removed over the addition, water into acid %.2f kJ", q, reverse);
+    }
+
     @Test
     void whatCannotBeAPathIsRefusedInWords() {
         MiscelaException empty = assertThrows(MiscelaException.class, () -> path(WHOLE, new int[] {WATER, ACID},
