@@ -5,6 +5,7 @@ import java.util.List;
 import org.miscela.core.blend.CallWarnings;
 import org.miscela.core.card.Card;
 import org.miscela.core.card.CardSanity;
+import org.miscela.core.card.PackedCard;
 import org.miscela.core.catalog.ArgumentInfo;
 import org.miscela.core.catalog.FunctionInfo;
 import org.miscela.core.catalog.IdlType;
@@ -37,7 +38,7 @@ final class CallWarningArguments {
         if (card == null) {
             return CardFunctions.OK;
         }
-        List<String> warnings = new ArrayList<>(CardSanity.warnings((Object[][]) p[0], card));
+        List<String> warnings = new ArrayList<>(CardSanity.warnings(PackedCard.cellsOf((Object[][]) p[0]), card));
         warnings.addAll(callWarnings(f, p));
         return CardFunctions.summary(warnings);
     }

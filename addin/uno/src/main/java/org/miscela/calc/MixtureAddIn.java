@@ -9,6 +9,7 @@ import org.miscela.core.card.Card;
 import org.miscela.core.card.CardCache;
 import org.miscela.core.card.CardReader;
 import org.miscela.core.card.CardSanity;
+import org.miscela.core.card.PackedCard;
 import org.miscela.core.functions.CheckOutput;
 import org.miscela.core.functions.FitFunctions;
 import org.miscela.core.functions.FitOutput;
@@ -122,10 +123,11 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
     public Object checkCard(Object[][] card, Object result) {
         try {
             CheckOutput output = Arguments.checkOutput(result);
+            Object[][] cells = PackedCard.cellsOf(card);
             if (output == CheckOutput.EXTENT) {
-                return CardSanity.extent(card).words(); // needs no readable card
+                return CardSanity.extent(cells).words(); // needs no readable card
             }
-            Object answer = CardFunctions.checkCard(card, Arguments.card(card), output);
+            Object answer = CardFunctions.checkCard(cells, Arguments.card(card), output);
             return answer instanceof Object[][] ? Arguments.table((Object[][]) answer) : answer;
         } catch (RuntimeException ex) {
             return Failures.words(ex, "checkCard");
@@ -592,6 +594,16 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
                     Arguments.optionalNumber("limit", limit)));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "temperaturePath");
+        }
+    }
+
+    @Override
+    public Object packCard(Object[][] card) throws IllegalArgumentException {
+        try {
+            Arguments.card(card); // a card that does not read is refused with its own problem, never packed
+            return PackedCard.pack(PackedCard.cellsOf(card));
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "packCard");
         }
     }
 

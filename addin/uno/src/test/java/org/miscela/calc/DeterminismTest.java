@@ -69,7 +69,7 @@ class DeterminismTest {
         }
     }
 
-    private static String render(Object v) {
+    static String render(Object v) {
         if (v instanceof Any) {
             return render(((Any) v).getObject());
         }

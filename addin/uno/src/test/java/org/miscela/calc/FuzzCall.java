@@ -120,11 +120,22 @@ final class FuzzCall {
      * exception such as NoConvergenceException included, which the IDL methods do not declare).
      */
     Object invoke(MixtureAddIn a) throws com.sun.star.uno.Exception {
+        return invoke(a, null);
+    }
+
+    /**
+     * {@link #invoke(MixtureAddIn)} with {@code card} (when not null) in the card's place, as Calc would pass another
+     * range or cell there: for the packed card, one text cell.
+     */
+    Object invoke(MixtureAddIn a, Object[][] card) throws com.sun.star.uno.Exception {
         java.lang.reflect.Method m = METHODS.get(method());
         if (m == null) {
             throw new AssertionError("the interface has no method " + method());
         }
         Object[] all = allArguments();
+        if (card != null && takesCard()) {
+            all[0] = card;
+        }
         if (all.length != m.getParameterCount()) {
             throw new AssertionError("the generator made " + all.length + " arguments for " + method() + ", which "
                     + "takes " + m.getParameterCount());
@@ -363,6 +374,9 @@ final class FuzzCall {
                 case "mixtureMolarMass":
                     a = new Object[] {composition()};
                     break;
+                case "packCard":
+                    a = new Object[0];
+                    break;
                 case "blendHeatCapacity": {
                     Object[][] x = composition();
                     a = new Object[] {x, temperature(x), extrapolate()};
@@ -380,7 +394,7 @@ final class FuzzCall {
                     for (int c = 0; c < charges; c++) {
                         order[c][0] = clean ? (Object) (double) (c % n + 1) : component();
                         amounts[c][0] = clean ? (Object) (0.5 + r.nextInt(10)) : pick(1.0, 10.0, 0.0, -1.0,
-                                junk(), Any.VOID);
+                                junk(), "");
                     }
                     Object[][] t = r.nextBoolean() ? new Object[][] {{temperatureValue()}}
                             : temperatureRange(charges, 1);

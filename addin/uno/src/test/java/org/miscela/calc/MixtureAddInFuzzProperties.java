@@ -123,6 +123,13 @@ class MixtureAddInFuzzProperties {
                 return info(call, result);
             case "temperaturePath":
                 return path(call, result);
+            case "packCard":
+                if (!(result instanceof String) || !org.miscela.core.card.PackedCard.isPacked(
+                        new Object[][] {{result}})) {
+                    unexpected("returned " + result + ", no packed card", call, null);
+                }
+                org.miscela.core.card.PackedCard.unpack((String) result);
+                return "packed card";
             default:
                 if (BLENDING.contains(call.method())) {
                     if (call.method().equals("adjustBatch") && result instanceof String) {

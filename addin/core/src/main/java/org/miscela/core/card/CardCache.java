@@ -68,7 +68,8 @@ public final class CardCache {
             if (hit == null) {
                 try {
                     // The key's cells are the card's extent: the reader ignores what was trimmed, so it reads the
-                    // same card without scanning the blank rest of a range named as whole columns a second time.
+                    // same card without scanning the blank rest of a range named as whole columns a second time. A
+                    // packed card (MIX.PACK) is one text cell: its key is that text, its card what the text holds.
                     hit = CardReader.read(key.cells);
                 } catch (MiscelaException e) {
                     hit = e;

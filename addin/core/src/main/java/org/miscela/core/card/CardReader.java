@@ -39,8 +39,9 @@ public final class CardReader {
         return read(cells, true);
     }
 
+    /** The card the cells hold: a card's range, or one cell holding a packed card ({@link PackedCard}). */
     private static Card read(Object[][] cells, boolean pureOnly) {
-        return new CardBuilder(CardGrammar.parse(cells), pureOnly).card();
+        return new CardBuilder(CardGrammar.parse(PackedCard.cellsOf(cells)), pureOnly).card();
     }
 
     /** Whether a cell counts as blank: null, or text of white space only. */

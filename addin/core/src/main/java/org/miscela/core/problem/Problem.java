@@ -71,6 +71,10 @@ public enum Problem {
             + "one; %s has none.", Advice.INSIDE_RANGE),
     SOLVENT_WITH_SOLUTION_MODEL(CARD, "Card row %d (%s): %s is the card's solvent, whose heat capacity is its own "
             + "'heat capacity' row; a 'solution heat capacity' row belongs to a solute."),
+    PACKED_VERSION(CARD, "The packed card is of format version %s; this add-in reads version %d. Pack the card again "
+            + "with MIX.PACK, or name its range instead."),
+    PACKED_DAMAGED(CARD, "The packed card does not read: %s does not match what it holds, so the text was changed "
+            + "after MIX.PACK wrote it. Pack the card again with MIX.PACK, or name its range instead."),
     NO_COMPOSITION_LIMIT(CARD, "The card gives no 'valid mole fraction' row; state the composition range the coefficients were fitted over.", Advice.INSIDE_RANGE),
 
     // --- what MIX.CHECK says about a card that reads but looks odd, and its details (never a refusal)

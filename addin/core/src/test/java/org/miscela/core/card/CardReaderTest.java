@@ -307,6 +307,10 @@ class CardReaderTest {
                 bad("a solution model of another name", Problem.BAD_KEYWORD, 20, "\"Laliberte 2008\"",
                         v2(c -> c.row("solution heat capacity", "alpha", "Laliberte 2008", 1, 0, 0, 0, 1, 1)
                                 .row("solvent", "beta"))),
+                bad("a packed card of another version", Problem.PACKED_VERSION, 0, "format version 7",
+                        new Object[][] {{"Miscela packed card 7 · a card"}}),
+                bad("a packed card edited after packing", Problem.PACKED_DAMAGED, 0, "its checksum",
+                        new Object[][] {{PackedCard.pack(base(c -> c)).replace("n46.07", "n46.08")}}),
                 bad("a solution model with five parameters", Problem.MODEL_VALUES, 20, "six parameters a1 to a6",
                         v2(c -> c.row("solution heat capacity", "alpha", "Laliberté 2009", 1, 0, 0, 0, 1)
                                 .row("solvent", "beta"))));
@@ -336,7 +340,7 @@ class CardReaderTest {
         Set<Problem> missing = EnumSet.copyOf(card);
         missing.removeAll(produced);
         assertTrue(missing.isEmpty(), "no malformed card for " + missing);
-        assertEquals(39, card.size(), "the card problems changed; update the malformed cards");
+        assertEquals(41, card.size(), "the card problems changed; update the malformed cards");
     }
 
     // ------------------------------------------------------------------ well-formed cards
