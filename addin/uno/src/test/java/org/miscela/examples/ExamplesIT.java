@@ -29,7 +29,9 @@ import static org.miscela.examples.TernaryWorkbookBuilder.TRACE_TOP;
 import com.sun.star.beans.XPropertySet;
 import com.sun.star.container.XNameAccess;
 import com.sun.star.lang.XComponent;
+import com.sun.star.sheet.CellFlags;
 import com.sun.star.sheet.FormulaResult;
+import com.sun.star.sheet.XCellRangesQuery;
 import com.sun.star.sheet.XCalculatable;
 import com.sun.star.sheet.XCellRangeData;
 import com.sun.star.sheet.XCellRangeReferrer;
@@ -53,6 +55,8 @@ import org.miscela.core.card.Card;
 import org.miscela.core.functions.CardFunctions;
 import org.miscela.core.card.CardReader;
 import org.miscela.core.card.Extrapolation;
+import org.miscela.core.card.TestCards;
+import org.miscela.core.functions.TemperaturePath;
 import org.miscela.core.functions.FitFunctions;
 import org.miscela.core.functions.FitOutput;
 import org.miscela.core.functions.PropertyKind;
@@ -65,8 +69,10 @@ import org.miscela.testing.Figures;
 
 /**
  * The bundled example workbooks recalculate in the real office with no error cell and every check cell "OK"; the
- * ternary, quote, make-up and lab-fit workbooks' numbers are the core library's, computed here in the JVM from the
- * card and the inputs read off their sheets, and a few are checked against the OIML R 22 formula itself.
+ * ternary, quote, make-up, lab-fit and acid-dilution workbooks' numbers are the core library's, computed here in the
+ * JVM from the card and the inputs read off their sheets; a few are checked against the OIML R 22 formula itself, the
+ * acid dilution's heat of mixing against the card format's Redlich-Kister sum, and its paths against identities (each
+ * order ends at MIX.TEMPERATURERISE's temperature; with the "cooling" removed the peak is the limit).
  */
 @ExtendWith(OfficeParameterResolver.class)
 class ExamplesIT {
@@ -472,6 +478,165 @@ class ExamplesIT {
         } finally {
             close(doc);
         }
+    }
+
+    /** How close two independent evaluations of one temperature must agree, K (Brent's tolerances are far finer). */
+    private static final double KELVIN = 1e-6;
+
+    @Test
+    void acidDilutionIsTheCoreLibrarysNumbersAndKeepsItsIdentities(Office office) throws Exception {
+        XComponent doc = open(office, AcidDilutionWorkbookBuilder.FILE);
+        try {
+            // the card on the sheet is the project's sulfuric acid card, cell by cell (ODF keeps 15 digits)
+            Object[][] sheetCard = namedRange(doc, "card");
+            Object[][] resource = TestCards.cells(AcidDilutionWorkbookBuilder.CARD);
+            assertEquals(resource.length, sheetCard.length, "rows of the card");
+            for (int r = 0; r < resource.length; r++) {
+                for (int c = 0; c < sheetCard[r].length; c++) {
+                    Object want = c < resource[r].length ? resource[r][c] : "";
+                    Object got = sheetCard[r][c];
+                    if (want instanceof Double) {
+                        assertEquals((Double) want, (Double) got, 1e-14 * Math.abs((Double) want),
+                                "card cell " + (r + 1) + "/" + (c + 1));
+                    } else {
+                        assertEquals(want, got, "card cell " + (r + 1) + "/" + (c + 1));
+                    }
+                }
+            }
+            assertEquals("OK", text(sheet(doc, "Card").getCellByPosition(1, 4)), "MIX.CHECK of the card");
+            Card card = CardReader.read(sheetCard);
+            assertEquals(AcidDilutionWorkbookBuilder.ACID, card.components().get(0).name());
+            assertEquals(AcidDilutionWorkbookBuilder.WATER, card.components().get(1).name());
+
+            XSpreadsheet d = sheet(doc, "Dilution");
+            double waterKg = value(d, 1, AcidDilutionWorkbookBuilder.WATER_ROW);
+            double acidKg = value(d, 1, AcidDilutionWorkbookBuilder.ACID_ROW);
+            double t = value(d, 1, AcidDilutionWorkbookBuilder.START_ROW);
+            double limit = value(d, 1, AcidDilutionWorkbookBuilder.LIMIT_ROW);
+            double vessel = value(d, 1, AcidDilutionWorkbookBuilder.VESSEL_ROW);
+            double[] kg = {acidKg, waterKg};
+            Extrapolation allow = Extrapolation.ALLOW;
+
+            // strength: the definition of a mass percent; mole fraction from the card's molar masses
+            assertEquals(100 * acidKg / (acidKg + waterKg), value(d, 1, AcidDilutionWorkbookBuilder.STRENGTH_ROW),
+                    1e-12, "% w/w of the batch");
+            double molAcid = acidKg * 1000 / card.components().get(0).molarMass();
+            double molWater = waterKg * 1000 / card.components().get(1).molarMass();
+            double xAcid = molAcid / (molAcid + molWater);
+            assertEquals(xAcid, value(d, 1, AcidDilutionWorkbookBuilder.MOLE_FRACTION_ROW), 1e-12,
+                    "mole fraction of the acid");
+            assertEquals(1.0, value(d, 1, AcidDilutionWorkbookBuilder.INSIDE_ROW), 0.0,
+                    "the batch at its start temperature lies inside the card's data");
+
+            // the heat of mixing: the card format's Redlich-Kister sum N x_a x_b sum A_k (x_a - x_b)^k evaluated
+            // here from the published coefficients of the resource card (docs/card-format.md), and the core's
+            double[] a = new double[3];
+            for (Object[] row : resource) {
+                for (int k = 0; k < 3; k++) {
+                    if (("excess enthalpy A" + k).equals(row[0])) {
+                        a[k] = (Double) row[2];
+                    }
+                }
+            }
+            double dx = xAcid - (1 - xAcid);
+            double byHand = (molAcid + molWater) * xAcid * (1 - xAcid) * (a[0] + a[1] * dx + a[2] * dx * dx);
+            double heat = value(d, 1, AcidDilutionWorkbookBuilder.MIXING_HEAT_ROW);
+            assertEquals(byHand, heat, 1e-9 * Math.abs(byHand), "MIX.MIXINGHEAT against the Redlich-Kister sum");
+            assertClose(CardFunctions.mixingHeat(card, kg, AmountBasis.KG, t, Extrapolation.AS_CARD), heat,
+                    "MIX.MIXINGHEAT in kJ");
+            assertTrue(heat < 0, "diluting the acid releases heat: " + heat);
+            assertClose(CardFunctions.heatCapacity(card, new double[] {xAcid, 1 - xAcid}, t, Extrapolation.AS_CARD,
+                    true), value(d, 1, AcidDilutionWorkbookBuilder.HEAT_CAPACITY_ROW), "MIX.HEATCAPACITY per kg");
+            double rise = CardFunctions.adiabaticRise(card, kg, AmountBasis.KG, t, allow);
+            assertClose(rise, value(d, 1, AcidDilutionWorkbookBuilder.RISE_ROW), "MIX.TEMPERATURERISE in K");
+
+            // both orders: the core's path on the same inputs
+            int[] acidIntoWater = {1, 0};
+            int[] waterIntoAcid = {0, 1};
+            double[] safeKg = {waterKg, acidKg};
+            double[] neverKg = {acidKg, waterKg};
+            double[] feeds = {t, t};
+            int steps = AcidDilutionWorkbookBuilder.STEPS;
+            double[] peak = new double[2];
+            for (int col = 1; col <= 2; col++) {
+                int[] order = col == 1 ? acidIntoWater : waterIntoAcid;
+                double[] amounts = col == 1 ? safeKg : neverKg;
+                String which = col == 1 ? "acid into water" : "water into acid";
+                peak[col - 1] = value(d, col, AcidDilutionWorkbookBuilder.PEAK_ROW);
+                assertClose(path(card, order, amounts, feeds, TemperaturePath.Output.PEAK, steps, 0, 0, Double.NaN),
+                        peak[col - 1], which + ": peak");
+                assertClose(path(card, order, amounts, feeds, TemperaturePath.Output.PEAK_AT, steps, 0, 0,
+                        Double.NaN), value(d, col, AcidDilutionWorkbookBuilder.PEAK_AT_ROW), which + ": peak at");
+                double end = value(d, col, AcidDilutionWorkbookBuilder.FINAL_ROW);
+                assertClose(path(card, order, amounts, feeds, TemperaturePath.Output.FINAL, steps, 0, 0, Double.NaN),
+                        end, which + ": final");
+                // enthalpy is a function of state: either order ends where MIX.TEMPERATURERISE puts the batch
+                assertEquals(t + value(d, 1, AcidDilutionWorkbookBuilder.RISE_ROW), end, KELVIN,
+                        which + ": the end of the path is the start plus MIX.TEMPERATURERISE");
+                assertTrue(peak[col - 1] >= end - KELVIN, which + ": the peak is at least the end");
+            }
+            assertTrue(peak[1] > peak[0] + 50, "water into acid peaks far higher: " + peak[1] + " against " + peak[0]);
+
+            // cooling: the core's answer, and the peak with that heat removed is the limit
+            double cooling = value(d, 1, AcidDilutionWorkbookBuilder.COOLING_ROW);
+            assertClose(path(card, acidIntoWater, safeKg, feeds, TemperaturePath.Output.COOLING, steps, 0, 0, limit),
+                    cooling, "cooling at the limit");
+            assertTrue(cooling > 0, "the batch rises above the limit without cooling");
+            assertEquals(limit, value(d, 1, AcidDilutionWorkbookBuilder.COOLED_PEAK_ROW), KELVIN,
+                    "with the cooling removed the peak is the limit");
+            assertClose(path(card, acidIntoWater, safeKg, feeds, TemperaturePath.Output.PEAK, steps, 0, cooling,
+                    Double.NaN), value(d, 1, AcidDilutionWorkbookBuilder.COOLED_PEAK_ROW), "peak with the cooling");
+            assertEquals(cooling / (value(d, 1, AcidDilutionWorkbookBuilder.HOURS_ROW) * 3600),
+                    value(d, 1, AcidDilutionWorkbookBuilder.DUTY_ROW), 1e-12 * cooling, "mean duty in kW");
+
+            // the vessel lowers the peak and the cooling needed
+            double vesselPeak = value(d, 1, AcidDilutionWorkbookBuilder.VESSEL_PEAK_ROW);
+            assertClose(path(card, acidIntoWater, safeKg, feeds, TemperaturePath.Output.PEAK, steps, vessel, 0,
+                    Double.NaN), vesselPeak, "peak with the vessel");
+            assertTrue(vessel > 0 && vesselPeak < peak[0], "the vessel takes up heat: " + vesselPeak);
+            double vesselCooling = value(d, 1, AcidDilutionWorkbookBuilder.VESSEL_COOLING_ROW);
+            assertClose(path(card, acidIntoWater, safeKg, feeds, TemperaturePath.Output.COOLING, steps, vessel, 0,
+                    limit), vesselCooling, "cooling with the vessel");
+            assertTrue(vesselCooling < cooling, "less cooling with the vessel: " + vesselCooling);
+
+            // the paths on sheet Paths, point by point
+            XSpreadsheet p = sheet(doc, "Paths");
+            int[][] orders = {acidIntoWater, waterIntoAcid, acidIntoWater};
+            double[][] amounts = {safeKg, neverKg, safeKg};
+            int[] cols = {AcidDilutionWorkbookBuilder.SAFE_COL, AcidDilutionWorkbookBuilder.NEVER_COL,
+                AcidDilutionWorkbookBuilder.COOLED_COL};
+            double[] removed = {0, 0, cooling};
+            for (int i = 0; i < 3; i++) {
+                double[][] rows = (double[][]) CardFunctions.temperaturePath(card, orders[i], amounts[i],
+                        AmountBasis.KG, feeds, allow, TemperaturePath.Output.PATH, steps, 0, removed[i], false,
+                        Double.NaN);
+                assertEquals(AcidDilutionWorkbookBuilder.PATH_ROWS, rows.length, "points of path " + (i + 1));
+                for (int r = 0; r < rows.length; r++) {
+                    int at = AcidDilutionWorkbookBuilder.PATH_FIRST + r;
+                    assertClose(rows[r][0], value(p, cols[i], at), "path " + (i + 1) + " amount, row " + (at + 1));
+                    assertClose(rows[r][1], value(p, cols[i] + 1, at), "path " + (i + 1) + " °C, row " + (at + 1));
+                }
+            }
+
+            Object charts = UnoRuntime.queryInterface(XTableChartsSupplier.class, d).getCharts();
+            assertTrue(UnoRuntime.queryInterface(XNameAccess.class, charts).hasByName(
+                    AcidDilutionWorkbookBuilder.CHART_NAME), "the chart of the paths is on sheet Dilution");
+            for (String name : new String[] {"Dilution", "Paths", "Card"}) {
+                XCellRangesQuery q = UnoRuntime.queryInterface(XCellRangesQuery.class, sheet(doc, name));
+                assertFalse(q.queryFormulaCells(FormulaResult.ERROR).getCells().createEnumeration().hasMoreElements(),
+                        "no cell of sheet " + name + " shows an error");
+                assertTrue(q.queryContentCells((short) CellFlags.FORMULA).getCells().createEnumeration()
+                        .hasMoreElements(), "sheet " + name + " has formulas");
+            }
+        } finally {
+            close(doc);
+        }
+    }
+
+    private static double path(Card card, int[] order, double[] amounts, double[] feeds,
+            TemperaturePath.Output output, int steps, double vessel, double removed, double limit) {
+        return (Double) CardFunctions.temperaturePath(card, order, amounts, AmountBasis.KG, feeds,
+                Extrapolation.ALLOW, output, steps, vessel, removed, false, limit);
     }
 
     private static XComponent open(Office office, String file) throws Exception {
