@@ -121,7 +121,9 @@ public final class AcidDilutionWorkbookBuilder {
     static final int VESSEL_COOLING_ROW = 43;
     static final int VESSEL_LESS_ROW = 44;
 
-    static final int BOILING_ROW = 46;
+    static final int BOILING_ROW = 47;
+    /** The notes under the chart, from column F. */
+    static final int NOTES_ROW = 31;
 
     // --- Paths: three path arrays (amount added, °C) from row PATH_FIRST, and the chart's columns
     static final int PATH_HEAD = 3;
@@ -155,7 +157,7 @@ public final class AcidDilutionWorkbookBuilder {
     }
 
     /** Width of columns A..K of Dilution in mm, for the heights of wrapped rows. */
-    private static final int[] DILUTION_MM = {104, 30, 30, 18, 4, 25, 25, 25, 25, 25, 25};
+    private static final int[] DILUTION_MM = {118, 34, 34, 18, 4, 25, 25, 25, 25, 25, 25};
     private static final int WIDE_MM = sum(DILUTION_MM) * 17 / 20;
 
     private static int sum(int[] mm) {
@@ -214,14 +216,14 @@ public final class AcidDilutionWorkbookBuilder {
                 + "/SUM(" + batch + ");\"mass fraction\";\"%w/w\";;;;;\"" + ACID + "\")", "% w/w", "0.00");
         result(s, MOLE_FRACTION_ROW, "… as the acid's mole fraction (MIX.CONVERT)", "=MIX.CONVERT(card;"
                 + b(STRENGTH_ROW) + ";\"%w/w\";\"mole fraction\";;;;;\"" + ACID + "\")", "mol/mol", "0.0000");
-        result(s, INSIDE_ROW, "Inside the card's data at the start? (MIX.INSIDE: 1 yes, 0 no)", "=MIX.INSIDE(card;"
+        result(s, INSIDE_ROW, "Inside the card's data at the start? (MIX.INSIDE, 1 = yes)", "=MIX.INSIDE(card;"
                 + b(MOLE_FRACTION_ROW) + ";" + start + ")", "", "0");
-        result(s, MIXING_HEAT_ROW, "Heat of mixing at the start temperature (MIX.MIXINGHEAT; negative: released)",
+        result(s, MIXING_HEAT_ROW, "Heat of mixing (MIX.MIXINGHEAT; negative = released)",
                 "=MIX.MIXINGHEAT(card;" + batch + ";" + start + ";\"kg\")", "kJ", "#,##0");
-        result(s, HEAT_CAPACITY_ROW, "Heat capacity of the diluted acid at the start temperature (MIX.HEATCAPACITY)",
+        result(s, HEAT_CAPACITY_ROW, "Heat capacity of the diluted acid at the start (MIX.HEATCAPACITY)",
                 "=MIX.HEATCAPACITY(card;" + b(STRENGTH_ROW) + ";" + start + ";;\"%w/w\";;\"kg\")", "kJ/(kg·K)",
                 "0.0000");
-        result(s, RISE_ROW, "Temperature rise, all mixed with no heat exchanged (MIX.TEMPERATURERISE)",
+        result(s, RISE_ROW, "Rise if all mixed at once (MIX.TEMPERATURERISE)",
                 "=MIX.TEMPERATURERISE(card;" + batch + ";" + start + ";\"kg\";TRUE())", "K", "0.0");
         result(s, RISE_FINAL_ROW, "… so the batch ends at (extrapolated)", "=" + start + "+" + b(RISE_ROW), "°C",
                 "0.0");
@@ -305,7 +307,7 @@ public final class AcidDilutionWorkbookBuilder {
         band(s, boiling, CAUTION_COLOUR);
 
         // how to read it, under the chart
-        int notes = 31;
+        int notes = NOTES_ROW;
         text(s, 5, notes, "How the numbers are worked out");
         head(s, "F" + (notes + 1) + ":K" + (notes + 1));
         block(s, "F" + (notes + 2) + ":K" + (BOILING_ROW + 1), "The tank is taken as well stirred, at constant "
@@ -372,7 +374,7 @@ public final class AcidDilutionWorkbookBuilder {
         head(s, col(PLOT_COL) + (PATH_HEAD + 1) + ":" + col(PLOT_COL + 5) + (PATH_HEAD + 1));
         prop(s, col(PLOT_COL) + (PATH_HEAD + 1) + ":" + col(PLOT_COL + 5) + (PATH_HEAD + 1), "IsTextWrapped",
                 Boolean.TRUE);
-        ExampleWorkbooks.rowHeight(s, PATH_HEAD, 1400);
+        ExampleWorkbooks.rowHeight(s, PATH_HEAD, 1900);
         int[] from = {SAFE_COL, NEVER_COL, COOLED_COL};
         int r = PATH_FIRST;
         for (int series = 0; series < from.length; series++) {
@@ -394,7 +396,7 @@ public final class AcidDilutionWorkbookBuilder {
         plotLast = r;
         format(s, col(PLOT_COL) + (PATH_FIRST + 1) + ":" + col(PLOT_COL) + (r + 1), "#,##0.0");
         format(s, col(PLOT_COL + 1) + (PATH_FIRST + 1) + ":" + col(PLOT_COL + 5) + (r + 1), "0.0");
-        widths(s, 24, 18, 4, 24, 18, 4, 24, 18, 4, 20, 22, 22, 24, 16, 16);
+        widths(s, 36, 18, 3, 36, 18, 3, 36, 18, 3, 20, 22, 22, 30, 16, 16);
     }
 
     private static int plotLast;
@@ -402,6 +404,7 @@ public final class AcidDilutionWorkbookBuilder {
     private static void pathArray(XSpreadsheet s, int c, String title, String amount, String formula)
             throws Exception {
         text(s, c, PATH_HEAD - 1, title);
+        merge(s, col(c) + PATH_HEAD + ":" + col(c + 1) + PATH_HEAD);
         head(s, col(c) + PATH_HEAD + ":" + col(c + 1) + PATH_HEAD);
         text(s, c, PATH_HEAD, amount);
         text(s, c + 1, PATH_HEAD, "°C");
@@ -414,11 +417,13 @@ public final class AcidDilutionWorkbookBuilder {
 
     private static void addChart(XSpreadsheet s) throws Exception {
         XTableCharts charts = UnoRuntime.queryInterface(XTableChartsSupplier.class, s).getCharts();
-        XPropertySet anchor = UnoRuntime.queryInterface(XPropertySet.class, s.getCellByPosition(5, 7));
-        com.sun.star.awt.Point p = (com.sun.star.awt.Point) anchor.getPropertyValue("Position");
+        // from the top of F8 to just above the notes in F32, across F..K
+        com.sun.star.awt.Point p = position(s, 5, 7);
+        com.sun.star.awt.Point below = position(s, 5, NOTES_ROW);
+        com.sun.star.awt.Point right = position(s, 11, 7);
         CellRangeAddress data = new CellRangeAddress((short) 1, PLOT_COL, PATH_HEAD, PLOT_COL + 5, plotLast);
-        charts.addNewByName(CHART_NAME, new Rectangle(p.X, p.Y, 15000, 11500), new CellRangeAddress[] {data}, true,
-                false);
+        charts.addNewByName(CHART_NAME, new Rectangle(p.X, p.Y, right.X - p.X - 200, below.Y - p.Y - 300),
+                new CellRangeAddress[] {data}, true, false);
         Object chart = UnoRuntime.queryInterface(XNameAccess.class, charts).getByName(CHART_NAME);
         XChartDocument cd = UnoRuntime.queryInterface(XChartDocument.class,
                 UnoRuntime.queryInterface(XEmbeddedObjectSupplier.class, chart).getEmbeddedObject());
@@ -458,11 +463,16 @@ public final class AcidDilutionWorkbookBuilder {
         peaks.setPropertyValue("SymbolType", 0);
         peaks.setPropertyValue("SymbolSize", new Size(280, 280));
         peaks.setPropertyValue("Color", 0x202020);
+        peaks.setPropertyValue("DataCaption", com.sun.star.chart.ChartDataCaption.VALUE);
         XPropertySet limit = d.getDataRowProperties(5);
         limit.setPropertyValue("Color", 0x7F7F7F);
         limit.setPropertyValue("LineWidth", 25);
-        limit.setPropertyValue("LineStyle", com.sun.star.drawing.LineStyle.DASH);
         limit.setPropertyValue("SymbolType", ChartSymbolType.NONE);
+    }
+
+    private static com.sun.star.awt.Point position(XSpreadsheet s, int c, int r) throws Exception {
+        return (com.sun.star.awt.Point) UnoRuntime.queryInterface(XPropertySet.class, s.getCellByPosition(c, r))
+                .getPropertyValue("Position");
     }
 
     /** The card from the test resource, unchanged, with its named range 'card' and a banner naming its source. */
@@ -481,7 +491,7 @@ public final class AcidDilutionWorkbookBuilder {
             throw new IllegalStateException(CARD + " has no source row");
         }
         String last = col(columns - 1);
-        int width = (74 + 40 + (columns - 2) * 26) * 17 / 20;
+        int width = (74 + 40 + 32 + (columns - 3) * 26) * 17 / 20;
         text(s, 0, 0, "Miscela card: sulfuric acid + water (reference data, not invented)");
         bold(s, "A1", 13);
         String banner = "NOT INVENTED. These rows are the project's reference card " + CARD_PATH + ", copied "
@@ -522,7 +532,7 @@ public final class AcidDilutionWorkbookBuilder {
         mm[0] = 74;
         mm[1] = 40;
         for (int c = 2; c < columns; c++) {
-            mm[c] = 26;
+            mm[c] = c == 2 ? 32 : 26;
         }
         widths(s, mm);
     }
