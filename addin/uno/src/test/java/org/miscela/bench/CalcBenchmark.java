@@ -63,14 +63,33 @@ public final class CalcBenchmark {
         final String label;
         final Layout layout;
         final IntFunction<String> formula;
+        /** The most formula cells of this kind (0: as many as the run's cells). */
+        final int most;
 
         Kind(String key, String label, Layout layout, IntFunction<String> formula) {
+            this(key, label, layout, formula, 0);
+        }
+
+        Kind(String key, String label, Layout layout, IntFunction<String> formula, int most) {
             this.key = key;
             this.label = label;
             this.layout = layout;
             this.formula = formula;
+            this.most = most;
+        }
+
+        /** The formula cells of this kind in a run of {@code cells}. */
+        int cells(int cells) {
+            return layout == Layout.ONE_CELL ? 1 : most == 0 ? cells : Math.min(most, cells);
         }
     }
+
+    /** The card packed by MIX.PACK in one cell of the card sheet, and the same for a card named as whole columns. */
+    static final String PACKED = "$" + CARD_SHEET + ".$J$1";
+    static final String COLUMNS_NAME = "benchcolumns";
+    static final String PACKED_COLUMNS = "$" + CARD_SHEET + ".$J$2";
+    /** Single-cell formulas over a card named as whole columns: each converts the whole columns on every call. */
+    static final int WHOLE_COLUMN_CELLS = 5;
 
     /** What one kind measured. */
     static final class Measured {
@@ -212,6 +231,28 @@ public final class CalcBenchmark {
                 r -> "=PROBE.ECHOADDIN(D" + r + ")"));
         k.add(new Kind("d", "Basic macro function (density)", Layout.PER_CELL,
                 r -> "=" + MACRO + "(" + CARD_NAME + ";A" + r + ";B" + r + ";C" + r + ";D" + r + ")"));
+        k.add(new Kind("b1-p", "MIX.DENSITY with the packed card (MIX.PACK in one cell), one call per cell",
+                Layout.PER_CELL, r -> "=MIX.DENSITY(" + PACKED + ";A" + r + ":C" + r + ";D" + r + ")"));
+        k.add(new Kind("b2-p", "MIX.PARTIALVOLUME with the packed card, one call per cell", Layout.PER_CELL,
+                r -> "=MIX.PARTIALVOLUME(" + PACKED + ";1;A" + r + ":C" + r + ";D" + r + ")"));
+        k.add(new Kind("c-args-p", "probe: PROBE.ECHODENSITYARGS(packed card; composition; temperature), no work",
+                Layout.PER_CELL, r -> "=PROBE.ECHODENSITYARGS(" + PACKED + ";A" + r + ":C" + r + ";D" + r + ")"));
+        k.add(new Kind("c-args-1", "probe: PROBE.ECHODENSITYARGS(one number; composition; temperature), the floor for "
+                + "MIX.DENSITY's own non-card arguments", Layout.PER_CELL,
+                r -> "=PROBE.ECHODENSITYARGS(D" + r + ";A" + r + ":C" + r + ";D" + r + ")"));
+        k.add(new Kind("c-text-100", "probe: PROBE.ECHODENSITYARGS(a cell of 100 characters; composition; "
+                + "temperature), no work", Layout.PER_CELL,
+                r -> "=PROBE.ECHODENSITYARGS($" + CARD_SHEET + ".$J$3;A" + r + ":C" + r + ";D" + r + ")"));
+        k.add(new Kind("c-text-3500", "probe: PROBE.ECHODENSITYARGS(a cell of 3,500 characters, about the packed "
+                + "card's length; composition; temperature), no work", Layout.PER_CELL,
+                r -> "=PROBE.ECHODENSITYARGS($" + CARD_SHEET + ".$J$4;A" + r + ":C" + r + ";D" + r + ")"));
+        if (cells >= 10_000) {
+            k.add(new Kind("b1-col", "MIX.DENSITY over the card named as whole columns, " + WHOLE_COLUMN_CELLS
+                    + " cells only", Layout.PER_CELL,
+                    r -> "=MIX.DENSITY(" + COLUMNS_NAME + ";A" + r + ":C" + r + ";D" + r + ")", WHOLE_COLUMN_CELLS));
+            k.add(new Kind("b1-col-p", "MIX.DENSITY with the whole-column card packed once (MIX.PACK in one cell)",
+                    Layout.PER_CELL, r -> "=MIX.DENSITY(" + PACKED_COLUMNS + ";A" + r + ":C" + r + ";D" + r + ")"));
+        }
         k.add(new Kind("e1", "MIX.DENSITY, one array formula over the column", Layout.ARRAY,
                 r -> "MIX.DENSITY(" + CARD_NAME + ";A1:C" + last + ";D1:D" + last + ")"));
         k.add(new Kind("e2", "MIX.PARTIALVOLUME, one array formula over the column", Layout.ARRAY,
@@ -294,7 +335,7 @@ public final class CalcBenchmark {
             Sheets.close(heapDoc);
             for (Kind k : kinds) {
                 Measured m = report.measured.get(k.key);
-                m.values = column(docs.get(k.key), k.layout == Layout.ONE_CELL ? 1 : cells);
+                m.values = column(docs.get(k.key), k.cells(cells));
                 for (int i = 0; i < m.values.length; i++) {
                     if (Double.isNaN(m.values[i])) {
                         if (m.errors++ == 0) {
@@ -354,17 +395,27 @@ public final class CalcBenchmark {
         UnoRuntime.queryInterface(XCellRangeData.class, cardRange).setDataArray(card.cells());
         Sheets.nameRange(doc, CARD_NAME, "$" + CARD_SHEET + ".$A$1:$" + Sheets.column(BenchmarkCard.COLUMNS - 1) + "$"
                 + card.rowCount());
+        Sheets.nameRange(doc, COLUMNS_NAME, "$" + CARD_SHEET + ".$A$1:$" + Sheets.column(BenchmarkCard.COLUMNS - 1)
+                + "$1048576");
+        if (kind.key.endsWith("-p")) {
+            cardSheet.getCellByPosition(9, 0).setFormula("=MIX.PACK(" + CARD_NAME + ")");
+            cardSheet.getCellByPosition(9, 1).setFormula("=MIX.PACK(" + COLUMNS_NAME + ")");
+        }
+        // plain texts of two lengths, to tell the cost of a text argument's length from the add-in's work
+        Sheets.put(cardSheet, 9, 2, "x".repeat(100));
+        Sheets.put(cardSheet, 9, 3, "x".repeat(3500));
         XSpreadsheet sheet = Sheets.sheet(doc, 0);
         UnoRuntime.queryInterface(XNamed.class, sheet).setName("Data");
         UnoRuntime.queryInterface(XCellRangeData.class, sheet.getCellRangeByName("A1:D" + cells)).setDataArray(data);
-        XCellRange column = sheet.getCellRangeByName("E1:E" + cells);
+        int n = kind.cells(cells);
+        XCellRange column = sheet.getCellRangeByName("E1:E" + n);
         if (kind.layout == Layout.ONE_CELL) {
             sheet.getCellByPosition(4, 0).setFormula(kind.formula.apply(1));
         } else if (kind.layout == Layout.ARRAY) {
             UnoRuntime.queryInterface(XArrayFormulaRange.class, column).setArrayFormula(kind.formula.apply(1));
         } else {
             sheet.getCellByPosition(4, 0).setFormula(kind.formula.apply(1));
-            if (cells > 1) {
+            if (n > 1) {
                 UnoRuntime.queryInterface(XCellSeries.class, column).fillAuto(FillDirection.TO_BOTTOM, 1);
             }
         }
@@ -505,14 +556,17 @@ public final class CalcBenchmark {
         s.append("- card: ").append(new BenchmarkCard().rowCount()).append(" rows × ").append(BenchmarkCard.COLUMNS)
                 .append(" columns, 3 components, temperature-dependent densities and coefficients, ternary term "
                         + "(invented values)\n\n");
-        s.append("| kind | formula | median s | µs per cell | × native (a) | × bridge floor (c) | first run s "
+        s.append("| kind | formula | median s | µs per cell | × native (a), per cell | × bridge floor (c), per cell "
+                + "| first run s "
                 + "| memory growth, first run MB | memory growth, median run MB | of which JVM heap, first / median MB "
                 + "| cells with errors |\n");
         s.append("|---|---|---|---|---|---|---|---|---|---|---|\n");
         for (Measured m : r.measured.values()) {
             double med = m.median();
             s.append(String.format(Locale.ROOT, "| %s | %s | %.3f | %.2f | %.2f | %.2f | %.3f | %.1f | %.1f | %.0f / %.0f | %s |%n",
-                    m.kind.key, m.kind.label, med, med / r.cells * 1e6, med / nat.median(), med / floor.median(),
+                    m.kind.key, m.kind.label, med, med / m.kind.cells(r.cells) * 1e6,
+                    med / m.kind.cells(r.cells) / (nat.median() / r.cells), med / m.kind.cells(r.cells)
+                    / (floor.median() / r.cells),
                     m.firstSeconds, m.firstGrowthKb / 1024.0, m.medianGrowthKb() / 1024.0,
                     m.firstHeapGrowthMb, m.medianHeapGrowthMb(), m.errors == 0 ? "0" : m.errors + " (first: error code " + m.firstError + ")"));
         }
@@ -573,6 +627,35 @@ public final class CalcBenchmark {
         }
         s.append(target("card parsed once per distinct content", String.format(Locale.ROOT, "%.0f parse(s), 1 card",
                 r.cardReads), r.cardReads == 1));
+        s.append(packedTargets(r));
+        return s.toString();
+    }
+
+    /** The packed card's targets: near the floor of its own arguments, faster than the range, one whole-column pass. */
+    static String packedTargets(Report r) {
+        StringBuilder s = new StringBuilder();
+        if (!r.measured.containsKey("b1-p") || !r.measured.containsKey("c-args-1")) {
+            return "";
+        }
+        double own = r.measured.get("c-args-1").median();
+        for (String k : new String[] {"b1-p", "b2-p"}) {
+            double ratio = r.measured.get(k).median() / own;
+            s.append(target(k + " packed ≤ 1.3 × the floor for its own non-card arguments (c-args-1)",
+                    String.format(Locale.ROOT, "%.2f ×", ratio), ratio <= 1.3));
+        }
+        for (String[] pair : new String[][] {{"b1", "b1-p"}, {"b2", "b2-p"}}) {
+            double speedup = r.measured.get(pair[0]).median() / r.measured.get(pair[1]).median();
+            s.append(target(pair[1] + " ≥ 2.5 × faster than the range form (" + pair[0] + ")",
+                    String.format(Locale.ROOT, "%.2f ×", speedup), speedup >= 2.5));
+        }
+        if (r.measured.containsKey("b1-col") && r.measured.containsKey("b1-col-p")) {
+            Measured col = r.measured.get("b1-col");
+            double onePass = col.median() / col.kind.cells(r.cells);
+            double extra = r.measured.get("b1-col-p").median() - r.measured.get("b1-p").median();
+            s.append(target("a whole-column card packed costs about one pass per recalculation (b1-col-p − b1-p ≤ 2 × "
+                    + "one b1-col call)", String.format(Locale.ROOT, "%.3f s extra against %.3f s per call",
+                    extra, onePass), extra <= 2 * onePass));
+        }
         return s.toString();
     }
 

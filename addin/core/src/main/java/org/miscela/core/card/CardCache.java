@@ -67,14 +67,19 @@ public final class CardCache {
             hit = entries.get(key);
             if (hit == null) {
                 try {
-                    // The key's cells are the card's extent: the reader ignores what was trimmed, so it reads the
-                    // same card without scanning the blank rest of a range named as whole columns a second time. A
-                    // packed card (MIX.PACK) is one text cell: its key is that text, its card what the text holds.
-                    hit = CardReader.read(key.cells);
+                    if (PackedCard.isPacked(key.cells)) {
+                        // A packed card (MIX.PACK) is one text cell: kept under its text, it is the card of the
+                        // cells it holds, looked up (or parsed) as those cells, so both forms share one card.
+                        hit = get(PackedCard.unpack((String) key.cells[0][0]));
+                    } else {
+                        // The key's cells are the card's extent: the reader ignores what was trimmed, so it reads
+                        // the same card without scanning the blank rest of a range named as whole columns again.
+                        parses.incrementAndGet();
+                        hit = CardReader.read(key.cells);
+                    }
                 } catch (MiscelaException e) {
                     hit = e;
                 }
-                parses.incrementAndGet();
                 if (key.cellCount <= cellBudget) {
                     entries.put(key, hit);
                     this.cells += key.cellCount;

@@ -83,7 +83,8 @@ public enum Problem {
             + "columns (%s cells): Calc converts every cell of the range for every call, about %s s per call at "
             + "0.34 µs a cell, and a sheet of 50 single-cell formulas over a card named as whole columns took about "
             + "5 GB of office memory and 90 s per recalculation. Name only the card's cells, with a few blank rows to "
-            + "spare."),
+            + "spare; or put =MIX.PACK(card) in one cell and name that cell in the formulas, so the range is read "
+            + "once per recalculation."),
     WARN_SORTED(CHECK, "Card rows %d to %d are sorted by column %d (%s), as Data ▸ Sort leaves them: if the card was "
             + "sorted, its 'component' rows may now be in another order than written, and x1 (the mole fraction of "
             + "the first) then means another component. Check that %s (row %d) is meant to be component 1; a "

@@ -269,7 +269,8 @@ class CardSanityTest {
                 + "but the card fills only %d rows × %d columns (%,d cells): Calc converts every cell of the range for "
                 + "every call, about %s s per call at 0.34 µs a cell, and a sheet of 50 single-cell formulas over a card "
                 + "named as whole columns took about 5 GB of office memory and 90 s per recalculation. Name only the "
-                + "card's cells, with a few blank rows to spare.", width, cells, OIML.length, width,
+                + "card's cells, with a few blank rows to spare; or put =MIX.PACK(card) in one cell and name that cell "
+                + "in the formulas, so the range is read once per recalculation.", width, cells, OIML.length, width,
                 (long) OIML.length * width,
                 CardPlausibility.shown(cells * 0.34e-6, 2)), w);
         assertEquals(Collections.emptyList(), warnings(padded(300, width)), "ten times the card is still small");

@@ -82,6 +82,20 @@ class PackedCardTest {
         return true;
     }
 
+    /** The range and its packed text share one parse and one card in the cache, whichever comes first. */
+    @Test
+    void bothFormsShareOneCard() {
+        Object[][] cells = TestCards.cells("ethanol-water-oiml.tsv");
+        Object[][] packed = {{PackedCard.pack(cells)}};
+        CardCache cache = new CardCache(8);
+        Card fromText = cache.get(packed);
+        Card fromRange = cache.get(cells);
+        assertTrue(fromText == fromRange, "one card for both forms");
+        assertEquals(1, cache.parseCount());
+        assertTrue(cache.get(packed) == fromRange);
+        assertEquals(1, cache.parseCount());
+    }
+
     /** The text starts with the title and source, so a person sees which card a cell holds. */
     @Test
     void theTextNamesTheCardFirst() {
