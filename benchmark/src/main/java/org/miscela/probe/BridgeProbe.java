@@ -86,6 +86,10 @@ public final class BridgeProbe extends WeakBase implements XBridgeProbe {
     @Override
     public double javaHeap(double what) {
         Runtime r = Runtime.getRuntime();
+        if (what == 2) {
+            // a collection first, so that one kind's garbage is not collected in the next kind's time
+            System.gc();
+        }
         long bytes = what == 0 ? r.totalMemory() : r.totalMemory() - r.freeMemory();
         return bytes / (1024.0 * 1024.0);
     }

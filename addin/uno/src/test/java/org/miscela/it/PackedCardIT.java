@@ -15,7 +15,8 @@ import org.junit.jupiter.api.extension.ExtendWith;
 import org.miscela.core.card.TestCards;
 
 /**
- * The packed card in a real office: a cell holding =MIX.PACK(card), formulas naming that cell give the range's
+ * The packed card in a real office: a cell holding =MIX.PACK(card), entered as an ordinary formula and as a one-cell
+ * array formula (the recommended form), and formulas naming either cell give the range's
  * results bit for bit, an edit of the card range recalculates through the packed cell (result → packed cell → card
  * range), MIX.TRACE names the same card, and a workbook saved as .ods and reopened keeps both forms, alike to the bit,
  * and their values.
@@ -43,9 +44,13 @@ class PackedCardIT {
             Sheets.putCard(doc, Sheets.sheet(doc, "Card"), "Card", "card", cells, 0, 0);
             XSpreadsheet sheet = Sheets.sheet(doc, 0);
             Sheets.cell(sheet, 3, 0).setFormula("=MIX.PACK(card)");
+            // the recommended entry: a one-cell array formula (docs/performance.md, The packed card)
+            UnoRuntime.queryInterface(com.sun.star.sheet.XArrayFormulaRange.class,
+                    sheet.getCellRangeByName("D2:D2")).setArrayFormula("MIX.PACK(card)");
             for (int i = 0; i < FORMULAS.length; i++) {
                 Sheets.cell(sheet, 0, i).setFormula(String.format(FORMULAS[i], "card"));
                 Sheets.cell(sheet, 1, i).setFormula(String.format(FORMULAS[i], "$D$1"));
+                Sheets.cell(sheet, 2, i).setFormula(String.format(FORMULAS[i], "$D$2"));
             }
             Sheets.recalculate(doc);
             assertTrue(Sheets.text(Sheets.cell(sheet, 3, 0)).startsWith("Miscela packed card 1 · Ethanol"),
@@ -60,6 +65,7 @@ class PackedCardIT {
             Sheets.cell(cardSheet, 2, a0).setValue(a0Value - 0.5);
             same(sheet, "after editing the card");
             assertNotEquals(before[0], Sheets.cell(sheet, 1, 0).getValue(), "the packed form followed the edit");
+            assertNotEquals(before[0], Sheets.cell(sheet, 2, 0).getValue(), "the array form followed the edit");
             Sheets.cell(cardSheet, 2, a0).setValue(a0Value);
             same(sheet, "after undoing the edit");
             assertEquals(before[0], Sheets.cell(sheet, 1, 0).getValue(), 0.0);
@@ -79,6 +85,8 @@ class PackedCardIT {
                             "reloaded " + FORMULAS[i]);
                 }
                 assertTrue(Sheets.cell(s, 1, 0).getFormula().contains("$D$1"), Sheets.cell(s, 1, 0).getFormula());
+                assertTrue(Sheets.text(Sheets.cell(s, 3, 1)).startsWith("Miscela packed card 1 · "),
+                        "the array formula's packed text after reload");
                 assertTrue(Sheets.cell(s, 3, 0).getFormula().toUpperCase().contains("CARD"),
                         Sheets.cell(s, 3, 0).getFormula());
             } finally {
@@ -89,15 +97,19 @@ class PackedCardIT {
         }
     }
 
-    /** Each row's two forms show the same value (bit for bit) or the same text, and no error. */
+    /** Each row's three forms show the same value (bit for bit) or the same text, and no error. */
     private static void same(XSpreadsheet sheet, String when) throws Exception {
         for (int i = 0; i < FORMULAS.length; i++) {
             assertEquals(0, Sheets.cell(sheet, 0, i).getError(), when + ": " + FORMULAS[i]);
-            assertEquals(0, Sheets.cell(sheet, 1, i).getError(), when + ": packed " + FORMULAS[i]);
-            assertEquals(Sheets.text(Sheets.cell(sheet, 0, i)), Sheets.text(Sheets.cell(sheet, 1, i)),
-                    when + ": " + FORMULAS[i]);
-            assertEquals(Double.doubleToRawLongBits(Sheets.cell(sheet, 0, i).getValue()),
-                    Double.doubleToRawLongBits(Sheets.cell(sheet, 1, i).getValue()), when + ": " + FORMULAS[i]);
+            for (int c = 1; c <= 2; c++) {
+                String form = c == 1 ? "packed " : "packed as an array formula ";
+                assertEquals(0, Sheets.cell(sheet, c, i).getError(), when + ": " + form + FORMULAS[i]);
+                assertEquals(Sheets.text(Sheets.cell(sheet, 0, i)), Sheets.text(Sheets.cell(sheet, c, i)),
+                        when + ": " + form + FORMULAS[i]);
+                assertEquals(Double.doubleToRawLongBits(Sheets.cell(sheet, 0, i).getValue()),
+                        Double.doubleToRawLongBits(Sheets.cell(sheet, c, i).getValue()), when + ": " + form
+                        + FORMULAS[i]);
+            }
         }
     }
 

@@ -593,9 +593,10 @@ public final class FunctionCatalog {
                                     Problem.DATA_LENGTH, Problem.UNKNOWN_FIT_OUTPUT, Problem.BOILS,
                                     Problem.PATH_LIMIT))),
             new FunctionInfo("packCard", "MIX.PACK", "the card as one text, for fast single-cell formulas",
-                    "The card's whole content as one text, title and source first, to put in a cell and name "
-                            + "instead of the card's range in single-cell formulas. Calc then hands each call one text "
-                            + "instead of every cell of the range: results are identical, calls several times faster.",
+                    "The card's whole content as one text, title and source first: put it in one cell and name "
+                            + "that cell instead of the card's range in single-cell formulas. Calc then reads the range "
+                            + "once per recalculation instead of once per call; results are identical, calls about "
+                            + "twice as fast, and a card named as whole columns stops costing a pass per call.",
                     "—",
                     "=LEFT(MIX.PACK(card); 21)",
                     range("card", "card", "The named range holding the card: labels in the first column, values to "
