@@ -23,12 +23,16 @@ import org.miscela.core.card.TestCards;
  */
 @ExtendWith(OfficeParameterResolver.class)
 class PackedCardIT {
-    /** Column A the range form, column B the packed form; the packed card in D1. */
+    /**
+     * Column A the range form, column B the packed form (D1), column C the packed form entered as an array formula
+     * (D2); the trace's first two rows are the card's title and source.
+     */
     private static final String[] FORMULAS = {
         "=MIX.DENSITY(%s;0.4;20)",
         "=MIX.PARTIALVOLUME(%s;\"ethanol\";0.4;20)",
         "=MIX.EXCESSVOLUME(%s;0.25;15)",
         "=MIX.CONVERT(%s;40;\"%%vol\";\"mass fraction\")",
+        "=INDEX(MIX.TRACE(%s;0.3;20);1;2)",
         "=INDEX(MIX.TRACE(%s;0.3;20);2;2)",
     };
 
