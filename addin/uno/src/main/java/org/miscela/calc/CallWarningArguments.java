@@ -69,7 +69,14 @@ final class CallWarningArguments {
         }
     }
 
+    /** The functions that warm a blend with its heat capacity. */
+    private static final java.util.Set<String> WARMING = new java.util.HashSet<>(java.util.Arrays.asList(
+            "adiabaticRise", "temperaturePath", "blendHeatCapacity", "partialHeatCapacity"));
+
     private static void callWarnings(FunctionInfo f, Object[] p, Card card, List<String> out) {
+        if (WARMING.contains(f.method())) {
+            CallWarnings.pureHeatCapacity(card, out);
+        }
         int composition = index(f, COMPOSITIONS);
         int amounts = index(f, AMOUNTS);
         int unit = index(f, "unit");

@@ -21,6 +21,8 @@ import org.miscela.core.problem.Problem;
  *       unit one step too small. Laboratory batches are real.</li>
  *   <li>a volume correction whose reference temperature is none of the trade's (15 °C, 20 °C, 60 °F) while the
  *       measured one is: the two swapped. A correction to a working temperature is real.</li>
+ *   <li>a temperature rise, path or blend heat capacity on a card without an excess heat capacity: the pure
+ *       liquids' sum is used, which makes an aqueous acid's rise low. Such a card can be all there is.</li>
  * </ul>
  */
 public final class CallWarnings {
@@ -103,6 +105,16 @@ public final class CallWarnings {
                         Numbers.show(t), unit.symbol()));
                 return;
             }
+        }
+    }
+
+    /**
+     * A call that warms a blend with its heat capacity (a temperature rise, a path, the blend's heat capacity) on a
+     * card that gives no excess heat capacity: said, since the result is then the pure liquids' sum.
+     */
+    public static void pureHeatCapacity(Card card, List<String> out) {
+        if (card.mixture().heatCapacitySource() == org.miscela.core.card.HeatCapacitySource.PURE_LIQUIDS_ONLY) {
+            out.add(Problem.WARN_PURE_HEAT_CAPACITY.format());
         }
     }
 

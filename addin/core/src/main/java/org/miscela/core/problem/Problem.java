@@ -121,6 +121,11 @@ public enum Problem {
     WARN_SMALL_BATCH(SLIP, "%s %s %s in all, a batch %s: every result describes a batch of millilitres. If %s "
             + "was meant, write that unit (a unit 1000 times too small changes every result). A laboratory batch is "
             + "real; then nothing is wrong."),
+    WARN_PURE_HEAT_CAPACITY(SLIP, "The card gives no excess heat capacity (its excess enthalpy does not vary with "
+            + "temperature and it states no solution model), so the blend's heat capacity is taken as the sum of the "
+            + "pure liquids'. Real solutions such as aqueous acids hold less heat than that sum, and a temperature "
+            + "rise then comes out low (7 to 10 %% for sulfuric acid): add a 'solution heat capacity' row or "
+            + "temperature-dependent enthalpy coefficients (docs/card-format.md)."),
     WARN_SWAPPED_TEMPERATURES(SLIP, "The reference temperature %s %s is none of the trade's usual ones (15 °C, "
             + "20 °C, 60 °F), but the measured temperature %s %s is one: if the two were swapped, the factor is the "
             + "inverse of the one wanted (and the densities belong to the other temperature). A correction to a "

@@ -114,6 +114,21 @@ class CallWarningsTest {
         assertEquals(List.of(), out);
     }
 
+    /**
+     * A card whose excess enthalpy does not vary with temperature and that states no solution model is said to warm
+     * its blends with the pure liquids' heat capacities; one with Laliberté's solution model is not.
+     */
+    @Test
+    void aCardWithoutAnExcessHeatCapacityIsPointedAt() {
+        List<String> out = new ArrayList<>();
+        CallWarnings.pureHeatCapacity(TestCards.card("sulfuric-acid-water-nbs.tsv"), out);
+        assertEquals(1, out.size());
+        assertTrue(isA(Problem.WARN_PURE_HEAT_CAPACITY, out.get(0)), out.get(0));
+        out.clear();
+        CallWarnings.pureHeatCapacity(TestCards.card("sulfuric-acid-water-whole-range.tsv"), out);
+        assertEquals(List.of(), out);
+    }
+
     @Test
     void sixtyFahrenheitIsAUsualReferenceOnACardInFahrenheit() {
         // 60 °F is the petroleum trade's reference (15.5556 °C; °F = 9/5·°C + 32, NIST SP 811 (2008), B.8)
