@@ -13,10 +13,8 @@ import static org.miscela.examples.ExampleWorkbooks.col;
 import static org.miscela.examples.ExampleWorkbooks.fitted;
 import static org.miscela.examples.ExampleWorkbooks.head;
 import static org.miscela.examples.ExampleWorkbooks.merge;
-import static org.miscela.examples.ExampleWorkbooks.nameRange;
 import static org.miscela.examples.ExampleWorkbooks.pageSetup;
 import static org.miscela.examples.ExampleWorkbooks.prop;
-import static org.miscela.examples.ExampleWorkbooks.put;
 import static org.miscela.examples.ExampleWorkbooks.sheet;
 import static org.miscela.examples.ExampleWorkbooks.text;
 import static org.miscela.examples.ExampleWorkbooks.textHeight;
@@ -509,32 +507,7 @@ public final class AcidDilutionWorkbookBuilder {
         prop(s, "A3:" + last + "3", "VertJustify", com.sun.star.table.CellVertJustify2.TOP);
         ExampleWorkbooks.rowHeight(s, 2, textHeight("Source: " + source, width));
         band(s, "A3:" + last + "3", REFERENCE_COLOUR);
-        fitted(s, "A4:" + last + "4", 3, "The named range 'card' covers A" + (top + 1) + ":" + last
-                + (top + cells.length) + ": labels in column A, values to their right; in keyed rows column B names "
-                + "the component or the pair. Every function on the other sheets reads these cells; change them only "
-                + "for a card whose source you know, and write that source in the 'source' row.", width);
-        text(s, 0, 4, "Card check (MIX.CHECK)");
-        bold(s, "A5", 10);
-        s.getCellByPosition(1, 4).setFormula("=MIX.CHECK(card)");
-        String[] heads = {"label", "subject / value"};
-        for (int c = 0; c < columns; c++) {
-            text(s, c, top - 1, c < heads.length ? heads[c] : "value");
-        }
-        head(s, "A" + top + ":" + last + top);
-        for (int r = 0; r < cells.length; r++) {
-            for (int c = 0; c < cells[r].length; c++) {
-                put(s, c, top + r, cells[r][c]);
-            }
-        }
-        band(s, "A" + (top + 1) + ":" + last + (top + cells.length), REFERENCE_COLOUR);
-        nameRange(doc, "card", "$Card.$A$" + (top + 1) + ":$" + last + "$" + (top + cells.length));
-        int[] mm = new int[columns];
-        mm[0] = 74;
-        mm[1] = 40;
-        for (int c = 2; c < columns; c++) {
-            mm[c] = c == 2 ? 32 : 26;
-        }
-        widths(s, mm);
+        ExampleWorkbooks.cardTable(doc, s, cells, top, columns, 3, width, 32);
     }
 
     // --- small helpers

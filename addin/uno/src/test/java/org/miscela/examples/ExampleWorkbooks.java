@@ -170,13 +170,33 @@ final class ExampleWorkbooks {
                 width);
         band(s, "A2:" + last + "2", REFERENCE_COLOUR);
         bold(s, "A2", 10);
-        fitted(s, "A3:" + last + "3", 2, "The named range 'card' covers A" + (top + 1) + ":" + last
-                + (top + cells.length) + ": labels in column A, values to their right; in keyed rows column B names "
-                + "the component or the pair. Every function on the other sheets reads these cells; change them only "
-                + "for a card whose source you know, and write that source in the 'source' row.", width);
-        text(s, 0, 3, "Card check (MIX.CHECK)");
-        bold(s, "A4", 10);
-        s.getCellByPosition(1, 3).setFormula("=MIX.CHECK(card)");
+        cardTable(doc, s, cells, top, columns, 2, width, 26);
+        Object[][] padded = new Object[cells.length][columns];
+        for (int r = 0; r < cells.length; r++) {
+            for (int c = 0; c < columns; c++) {
+                padded[r][c] = c < cells[r].length ? cells[r][c] : "";
+            }
+        }
+        return padded;
+    }
+
+    /**
+     * A card's table on the Card sheet: the note on its named range in row {@code noteRow} (0-based), the MIX.CHECK
+     * row below it, the column heads in row {@code top} − 1, the cells from row {@code top}, their band, the named
+     * range 'card' over them, and the widths: 74 mm for the labels, 40 for the subjects, {@code third} for the third
+     * column and 26 for the rest.
+     */
+    static void cardTable(XComponent doc, XSpreadsheet s, Object[][] cells, int top, int columns, int noteRow,
+            int width, int third) throws Exception {
+        String last = col(columns - 1);
+        fitted(s, "A" + (noteRow + 1) + ":" + last + (noteRow + 1), noteRow, "The named range 'card' covers A"
+                + (top + 1) + ":" + last + (top + cells.length) + ": labels in column A, values to their right; in "
+                + "keyed rows column B names the component or the pair. Every function on the other sheets reads "
+                + "these cells; change them only for a card whose source you know, and write that source in the "
+                + "'source' row.", width);
+        text(s, 0, noteRow + 1, "Card check (MIX.CHECK)");
+        bold(s, "A" + (noteRow + 2), 10);
+        s.getCellByPosition(1, noteRow + 1).setFormula("=MIX.CHECK(card)");
         String[] heads = {"label", "subject / value"};
         for (int c = 0; c < columns; c++) {
             text(s, c, top - 1, c < heads.length ? heads[c] : "value");
@@ -193,16 +213,9 @@ final class ExampleWorkbooks {
         mm[0] = 74;
         mm[1] = 40;
         for (int c = 2; c < columns; c++) {
-            mm[c] = 26;
+            mm[c] = c == 2 ? third : 26;
         }
         widths(s, mm);
-        Object[][] padded = new Object[cells.length][columns];
-        for (int r = 0; r < cells.length; r++) {
-            for (int c = 0; c < columns; c++) {
-                padded[r][c] = c < cells[r].length ? cells[r][c] : "";
-            }
-        }
-        return padded;
     }
 
     /** Long, narrow tables print in portrait, scaled to the page width, on as many pages as they need. */
