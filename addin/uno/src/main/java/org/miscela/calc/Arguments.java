@@ -273,7 +273,7 @@ final class Arguments {
         if (t.equalsIgnoreCase("kg")) {
             return true;
         }
-        throw Problem.UNKNOWN_FIT_OUTPUT.raise(t, "mol, kg");
+        throw Problem.UNKNOWN_BASIS.raise(t, "mol, kg");
     }
 
     /** MIX.CHECK's result argument: the summary when left out. */

@@ -551,7 +551,7 @@ public final class FunctionCatalog {
                     "=MIX.HEATCAPACITY(acid; 0.5; 25)",
                     CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T, PER)
                     .shows("0.1071").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
-                            list(Problem.NO_HEAT_CAPACITY))),
+                            list(Problem.NO_HEAT_CAPACITY, Problem.UNKNOWN_BASIS))),
             new FunctionInfo("partialHeatCapacity", "MIX.PARTIALHEATCAPACITY",
                     "partial molar heat capacity of a component",
                     "Partial molar heat capacity of one component, ∂(N·Cp)/∂n_k, in the card's enthalpy unit per "
@@ -561,7 +561,7 @@ public final class FunctionCatalog {
                     "=MIX.PARTIALHEATCAPACITY(acid; \"water\"; 0.5; 25)",
                     CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T, PER)
                     .shows("0.07529").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
-                            COMPONENT_PROBLEMS, list(Problem.NO_HEAT_CAPACITY))),
+                            COMPONENT_PROBLEMS, list(Problem.NO_HEAT_CAPACITY, Problem.UNKNOWN_BASIS))),
             new FunctionInfo("temperaturePath", "MIX.TEMPERATUREPATH",
                     "temperature along the order of addition, and its peak",
                     "The batch's temperature along its order of addition: amount added and temperature as two "
