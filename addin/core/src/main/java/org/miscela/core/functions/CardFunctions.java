@@ -335,10 +335,8 @@ public final class CardFunctions {
                 return p.peak(steps)[1];
             case PEAK_AT:
                 return p.peak(steps)[0];
-            case FINAL: {
-                double[][] rows = p.path(1);
-                return rows[rows.length - 1][1];
-            }
+            case FINAL:
+                return p.end();
             default:
                 return p.path(steps);
         }

@@ -145,6 +145,11 @@ public final class TemperaturePath {
                 java.util.Arrays.copyOf(feedKelvin, charge + 1), vessel, feedKelvin[0], removed * share, e, boiling);
     }
 
+    /** The temperature (card unit) once every charge is in: the batch's own adiabatic result. */
+    public double end() {
+        return card.units().temperature().fromKelvin(kelvinAt(components.length - 1, 1.0));
+    }
+
     /**
      * The path: one row per point, the amount added so far (in the amounts' unit, the first charge not counted) and
      * the temperature in the card's unit; the first row is the vessel's first charge, then {@code steps} points per
