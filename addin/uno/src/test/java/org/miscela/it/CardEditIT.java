@@ -107,7 +107,8 @@ class CardEditIT {
         return sheet;
     }
 
-    private static int rowOf(Object[][] cells, String label) {
+    /** The 0-based row of the card cells whose label is {@code label}. */
+    static int rowOf(Object[][] cells, String label) {
         for (int r = 0; r < cells.length; r++) {
             if (label.equals(cells[r][0])) {
                 return r;

@@ -39,7 +39,7 @@ class PackedCardIT {
     @Test
     void thePackedCellGivesTheRangesResultsAcrossEditAndReload(Office office) throws Exception {
         Object[][] cells = TestCards.cells("ethanol-water-oiml.tsv");
-        int a0 = rowOf(cells, "excess volume A0");
+        int a0 = CardEditIT.rowOf(cells, "excess volume A0");
         XComponent doc = office.newSpreadsheet();
         double[] before = new double[FORMULAS.length];
         try {
@@ -115,14 +115,5 @@ class PackedCardIT {
                         + FORMULAS[i]);
             }
         }
-    }
-
-    private static int rowOf(Object[][] cells, String label) {
-        for (int r = 0; r < cells.length; r++) {
-            if (label.equals(cells[r][0])) {
-                return r;
-            }
-        }
-        throw new IllegalArgumentException(label);
     }
 }
