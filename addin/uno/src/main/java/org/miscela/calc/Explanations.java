@@ -122,6 +122,8 @@ final class Explanations {
         add("temperaturePath", (a, p) -> a.temperaturePath(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5], p[6],
                 p[7], p[8], p[9], p[10], p[11]));
         add("packCard", (a, p) -> a.packCard(r(p[0])));
+        add("libraryList", (a, p) -> a.libraryList(p[0]));
+        add("libraryCard", (a, p) -> a.libraryCard(r(p[0])));
     }
 
     private Explanations() {

@@ -10,6 +10,7 @@ import org.miscela.core.card.CardCache;
 import org.miscela.core.card.CardReader;
 import org.miscela.core.card.CardSanity;
 import org.miscela.core.card.PackedCard;
+import org.miscela.core.library.CardLibrary;
 import org.miscela.core.functions.CheckOutput;
 import org.miscela.core.functions.FitFunctions;
 import org.miscela.core.functions.FitOutput;
@@ -604,6 +605,24 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             return PackedCard.pack(PackedCard.cellsOf(card));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "packCard");
+        }
+    }
+
+    @Override
+    public Object libraryList(Object find) throws IllegalArgumentException {
+        try {
+            return Arguments.table(CardLibrary.table(Arguments.text("find", find, "")));
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "libraryList");
+        }
+    }
+
+    @Override
+    public Object libraryCard(Object[][] name) throws IllegalArgumentException {
+        try {
+            return Arguments.table(CardLibrary.find(Arguments.text("card's name", Arguments.value(name), "")).cells());
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "libraryCard");
         }
     }
 

@@ -392,7 +392,9 @@ final class FuzzCall {
                     Object[][] order = new Object[charges][1];
                     Object[][] amounts = new Object[charges][1];
                     for (int c = 0; c < charges; c++) {
-                        order[c][0] = clean ? (Object) (double) (c % n + 1) : component();
+                        // a cell of the charges range: a value, never a range (no cell holds one)
+                        Object who = clean ? (Object) (double) (c % n + 1) : component();
+                        order[c][0] = who instanceof Object[][] ? "nobody" : who;
                         amounts[c][0] = clean ? (Object) (0.5 + r.nextInt(10)) : pick(1.0, 10.0, 0.0, -1.0,
                                 junk(), "");
                     }
@@ -406,6 +408,14 @@ final class FuzzCall {
                         clean ? pick(Any.VOID, 60.0, 330.0) : pick(Any.VOID, 60.0, -300.0, junk())};
                     break;
                 }
+                case "libraryList":
+                    a = new Object[] {pick(Any.VOID, "chloride", "water", " Acid ", "", clean ? "sodium" : junk(),
+                        1.0, Boolean.TRUE)};
+                    break;
+                case "libraryCard":
+                    a = new Object[] {pick("NaCl", " nacl ", "sulfuric acid + water", "ethanol + water (OIML R 22)",
+                        clean ? "KCl" : junk(), "", 2.0)};
+                    break;
                 case "addInInfo":
                     a = new Object[] {pick(Any.VOID, "version", "card reads", "cards kept", " Cards Kept ",
                         clean ? "version" : "cards", "", 1.0, Boolean.TRUE)};

@@ -121,6 +121,9 @@ class MixtureAddInFuzzProperties {
                 return result instanceof String ? text(call, result) : table(call, result);
             case "addInInfo":
                 return info(call, result);
+            case "libraryList":
+            case "libraryCard":
+                return library(call, result);
             case "temperaturePath":
                 return path(call, result);
             case "packCard":
@@ -314,6 +317,26 @@ class MixtureAddInFuzzProperties {
             unexpected("returned the cell " + v + " (" + (v == null ? "null" : v.getClass().getName()) + ")", call,
                     null);
         }
+    }
+
+    /** A library listing or card: a rectangular table of texts and finite numbers; a card reads as one. */
+    private static String library(FuzzCall call, Object result) {
+        Object[][] g = grid(call, result);
+        for (Object[] row : g) {
+            if (row.length != g[0].length) {
+                unexpected("returned a ragged table", call, null);
+            }
+            for (Object v : row) {
+                if (!(v instanceof String) && !(v instanceof Double && Double.isFinite((Double) v))) {
+                    unexpected("returned the cell " + v, call, null);
+                }
+            }
+        }
+        if (call.method().equals("libraryCard")) {
+            org.miscela.core.card.CardReader.read(g);
+            return "library card";
+        }
+        return "library listing";
     }
 
     /** The array inside an Any result: rectangular, at least 1×1. */

@@ -30,6 +30,36 @@ class MixtureAddInTest {
         assertEquals(expected, (Double) r, 0.0);
     }
 
+    /**
+     * A library card placed by MIX.LIBRARYCARD is an ordinary card: MIX.DENSITY of 30 % w/w ethanol at 20 °C on the
+     * OIML R 22 card is the standard's 953.78 kg/m³ (its Table I, 953.784 by its formula); the same block with its
+     * last column or row cut off, as a too small array block leaves it, is refused instead of read short.
+     */
+    @Test
+    void aPlacedLibraryCardIsACardAndACutOneIsRefused() throws Exception {
+        Object[][] oiml = (Object[][]) ((Any) addIn.libraryCard(one("ethanol + water (OIML R 22)"))).getObject();
+        Object r = addIn.mixtureDensity(oiml, one(30.0), one(20.0), Any.VOID, "%w/w", Any.VOID);
+        assertEquals(953.784, (Double) r, 0.0005);
+        Object[][] narrower = new Object[oiml.length][];
+        for (int i = 0; i < oiml.length; i++) {
+            narrower[i] = java.util.Arrays.copyOf(oiml[i], oiml[i].length - 1);
+        }
+        com.sun.star.lang.IllegalArgumentException e = assertThrows(com.sun.star.lang.IllegalArgumentException.class,
+                () -> addIn.mixtureDensity(narrower, one(30.0), one(20.0), Any.VOID, "%w/w", Any.VOID));
+        assertTrue(e.getMessage().contains("cuts a card short"), e.getMessage());
+        Object[][] shorter = java.util.Arrays.copyOf(oiml, oiml.length - 1);
+        assertThrows(com.sun.star.lang.IllegalArgumentException.class,
+                () -> addIn.mixtureDensity(shorter, one(30.0), one(20.0), Any.VOID, "%w/w", Any.VOID));
+        Object[][] list = (Object[][]) ((Any) addIn.libraryList(" CHLORIDE ")).getObject();
+        assertEquals("name", list[0][0]);
+        assertEquals("sodium chloride + water", list[1][0]);
+        for (int i = 1; i < list.length; i++) {
+            assertTrue(((String) list[i][0]).contains("chloride") || ((String) list[i][4]).toLowerCase().contains(
+                    "chloride"), String.valueOf(list[i][0]));
+        }
+        assertThrows(com.sun.star.lang.IllegalArgumentException.class, () -> addIn.libraryCard(one("brine")));
+    }
+
     @Test
     void aColumnGivesAColumnAndBlanksStayBlank() throws Exception {
         Object[][] xs = {{0.1}, {""}, {0.5}};

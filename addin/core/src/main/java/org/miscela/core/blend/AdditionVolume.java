@@ -10,12 +10,18 @@ package org.miscela.core.blend;
  * codes and licensed practice.
  */
 public final class AdditionVolume {
+    private final org.miscela.core.card.Card card;
+    private final int component;
     private final double exact;
     private final double firstOrder;
     private final double pureVolume;
     private final double moles;
 
-    AdditionVolume(double exact, double firstOrder, double pureVolume, double moles) {
+    /** @param pureVolume NaN when the component's pure liquid is only a model limit (a dissolved salt) */
+    AdditionVolume(org.miscela.core.card.Card card, int component, double exact, double firstOrder,
+            double pureVolume, double moles) {
+        this.card = card;
+        this.component = component;
         this.exact = exact;
         this.firstOrder = firstOrder;
         this.pureVolume = pureVolume;
@@ -44,6 +50,7 @@ public final class AdditionVolume {
 
     /** The volume the added component had as a pure liquid at the batch temperature, Δn_k·V_k*(T). */
     public double pureVolume(AmountUnit unit) {
+        card.requireRealPure(component);
         return unit.require(AmountUnit.Dimension.VOLUME, "volume of the addition").fromBase(pureVolume);
     }
 

@@ -37,6 +37,15 @@ public final class BatchTotals {
         this.temperature = temperature;
     }
 
+    /** Refuses the pure volumes of a batch holding a component whose pure liquid is only a model limit. */
+    private void requireRealPures() {
+        for (int k = 0; k < moles.length; k++) {
+            if (moles[k] > 0.0) {
+                card.requireRealPure(k);
+            }
+        }
+    }
+
     /** Mole fractions in card order. */
     public double[] moleFractions() {
         return Checks.scaled(moles, 1.0 / totalMoles);
@@ -73,16 +82,19 @@ public final class BatchTotals {
 
     /** Σ n_k V_k*(T): the pure components' volumes before mixing, each at the mixture's temperature. */
     public double pureVolume(AmountUnit unit) {
+        requireRealPures();
         return unit.require(AmountUnit.Dimension.VOLUME, "volume of the pure components").fromBase(pureVolume);
     }
 
     /** Σ n_k V_k*(T) − V(T); positive for a contraction, negative for an expansion. */
     public double contraction(AmountUnit unit) {
+        requireRealPures();
         return unit.require(AmountUnit.Dimension.VOLUME, "contraction").fromBase(pureVolume - volume);
     }
 
     /** 100·(Σ n_k V_k*(T) − V(T))/Σ n_k V_k*(T). */
     public double contractionPercent() {
+        requireRealPures();
         return 100.0 * (pureVolume - volume) / pureVolume;
     }
 

@@ -1,5 +1,6 @@
 package org.miscela.core.blend;
 
+
 import org.miscela.core.problem.Problem;
 import org.miscela.core.card.Card;
 import org.miscela.core.card.Extrapolation;
@@ -36,7 +37,8 @@ public final class Batches {
         BatchTotals a = ofMoles(card, after, t, e);
         double exact = a.volume(AmountUnit.ML) - b.volume(AmountUnit.ML);
         double linear = Checks.partialMolarVolume(card, k, b.moleFractions(), t, e) * dn;
-        return new AdditionVolume(exact, linear, dn * Checks.pureMolarVolume(card, k, t, e), dn);
+        double pure = card.hypotheticalPure(k) ? Double.NaN : dn * Checks.pureMolarVolume(card, k, t, e);
+        return new AdditionVolume(card, k, exact, linear, pure, dn);
     }
 
     /** Totals of a batch given in moles; the composition is checked at t like any card evaluation. */
@@ -49,7 +51,9 @@ public final class Batches {
         double pure = 0.0;
         for (int k = 0; k < moles.length; k++) {
             mass += moles[k] * Checks.molarMass(card, k);
-            pure += moles[k] * Checks.pureMolarVolume(card, k, t, e);
+            // a dissolved salt has no pure-liquid volume: the batch's contraction is then refused when asked for
+            pure += moles[k] == 0.0 ? 0.0 : card.hypotheticalPure(k) ? Double.NaN
+                    : moles[k] * Checks.pureMolarVolume(card, k, t, e);
         }
         double density = card.units().density().fromKgPerM3(Checks.density(card, x, t, e));
         return new BatchTotals(card, moles, mass, total * vm, pure, density, t);

@@ -47,7 +47,8 @@ public final class Charge {
             densities = new double[n];
             for (int k = 0; k < n; k++) {
                 densities[k] = Double.NaN;
-                if (moles[k] > 0.0) {
+                volumes[k] = Double.NaN;
+                if (moles[k] > 0.0 && !card.hypotheticalPure(k)) {
                     double t = Checks.temperature(temperatures[k], "storage temperature of "
                             + Checks.name(card, k));
                     volumes[k] = moles[k] * Checks.pureMolarVolume(card, k, t, e);
@@ -77,6 +78,7 @@ public final class Charge {
                     throw Problem.NO_STORAGE_TEMPERATURES.raise(unit.needingTemperature(true));
                 }
                 source = volumes;
+                requireRealPures();
         }
         double[] out = new double[source.length];
         for (int k = 0; k < out.length; k++) {
@@ -89,12 +91,22 @@ public final class Charge {
         if (densities == null) {
             throw Problem.NO_STORAGE_TEMPERATURES.raise(unit.needingTemperature(true));
         }
+        requireRealPures();
         double[] out = new double[masses.length];
         for (int k = 0; k < out.length; k++) {
             out[k] = masses[k] > 0.0 ? masses[k] / Checks.trueMassPerConventional(card, densities[k],
                     Checks.name(card, k), temperatures[k]) : masses[k];
         }
         return out;
+    }
+
+    /** Refuses pure-liquid volumes or weighings of a charge holding a component that is no liquid alone. */
+    private void requireRealPures() {
+        for (int k = 0; k < moles.length; k++) {
+            if (moles[k] > 0.0) {
+                card.requireRealPure(k);
+            }
+        }
     }
 
     /** The storage temperatures given (card unit), or null. */

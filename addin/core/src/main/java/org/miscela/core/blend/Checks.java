@@ -77,7 +77,9 @@ final class Checks {
     /** The temperature in K after the card's temperature checks (range, and every pure density physical there). */
     static double kelvin(Card card, double t, Extrapolation e) {
         for (int k = 0; k < card.componentCount(); k++) {
-            CardFunctions.pureDensity(card, k, t, e);
+            if (!card.hypotheticalPure(k)) {
+                CardFunctions.pureDensity(card, k, t, e);
+            }
         }
         return card.units().temperature().toKelvin(t);
     }

@@ -2,7 +2,10 @@ package org.miscela.core.card;
 
 import org.miscela.core.model.BoilingCurve;
 import org.miscela.core.model.Component;
+import org.miscela.core.model.DensityModelVolume;
 import org.miscela.core.model.ExcessFunction;
+import org.miscela.core.model.ExcessModel;
+import org.miscela.core.model.MixtureDensityModel;
 import org.miscela.core.model.GeometricModel;
 import org.miscela.core.model.RedlichKister;
 import org.miscela.core.model.SolutionHeatCapacity;
@@ -35,6 +38,10 @@ public final class Card {
     private final SolutionHeatCapacity solutionHeatCapacity;
     /** The boiling temperatures the card states, or null. */
     private final BoilingCurve boiling;
+    /** The mixture-density model the card states instead of excess-volume coefficients, or null. */
+    private final MixtureDensityModel densityModel;
+    /** The excess volume: the Redlich–Kister section, the one the density model implies, or null. */
+    private final ExcessModel volumeModel;
 
     /**
      * 20 °C, the temperature at which alcoholic strength by volume is defined (OIML R 22 (1975)), used for every
@@ -57,18 +64,19 @@ public final class Card {
             ExcessFunction excessEnthalpy, Validity validity, boolean extrapolationAllowed,
             boolean missingPairsIdeal) {
         this(title, source, units, components, excessVolume, excessEnthalpy, validity, extrapolationAllowed,
-                missingPairsIdeal, Double.NaN, null, null);
+                missingPairsIdeal, Double.NaN, null, null, null);
     }
 
     /**
      * @param statedBasisReferenceKelvin the card's 'basis reference temperature' in K, or NaN when it has none
      * @param solutionHeatCapacity the solution heat-capacity model the card states, or null
      * @param boiling the boiling temperatures the card states, or null
+     * @param densityModel the mixture-density model the card states (then {@code excessVolume} is null), or null
      */
     Card(String title, String source, Units units, List<Component> components, ExcessFunction excessVolume,
             ExcessFunction excessEnthalpy, Validity validity, boolean extrapolationAllowed,
             boolean missingPairsIdeal, double statedBasisReferenceKelvin, SolutionHeatCapacity solutionHeatCapacity,
-            BoilingCurve boiling) {
+            BoilingCurve boiling, MixtureDensityModel densityModel) {
         this.title = title;
         this.source = source;
         this.units = units;
@@ -81,6 +89,19 @@ public final class Card {
         this.statedBasisReferenceKelvin = statedBasisReferenceKelvin;
         this.solutionHeatCapacity = solutionHeatCapacity;
         this.boiling = boiling;
+        this.densityModel = densityModel;
+        if (densityModel != null && excessVolume != null) {
+            throw new IllegalArgumentException("a card states its volumes one way");
+        }
+        if (densityModel != null) {
+            double[] masses = new double[components.size()];
+            for (int k = 0; k < masses.length; k++) {
+                masses[k] = components.get(k).molarMass();
+            }
+            this.volumeModel = new DensityModelVolume(densityModel, masses);
+        } else {
+            this.volumeModel = excessVolume;
+        }
         this.mixture = new Mixture(this);
     }
 
@@ -123,9 +144,25 @@ public final class Card {
         return excessVolume == null ? null : excessVolume.pair(i, j);
     }
 
-    /** The multicomponent excess volume (cm³/mol), or null for a card that describes enthalpy only. */
+    /**
+     * The multicomponent excess volume as Redlich–Kister sets (cm³/mol), or null for a card that describes enthalpy
+     * only or states a mixture-density model instead ({@link #volumeModel} covers both).
+     */
     public ExcessFunction excessVolume() {
         return excessVolume;
+    }
+
+    /**
+     * The excess volume whatever its form (cm³/mol): the Redlich–Kister section or the one the card's mixture-density
+     * model implies; null for a card that describes enthalpy only.
+     */
+    public ExcessModel volumeModel() {
+        return volumeModel;
+    }
+
+    /** The mixture-density model the card states (OIML R 22 form, Laliberté–Cooper), or null. */
+    public MixtureDensityModel densityModel() {
+        return densityModel;
     }
 
     /** The multicomponent excess enthalpy (J/mol), or null when the card holds none. */
@@ -152,7 +189,6 @@ public final class Card {
         return !Double.isNaN(statedBasisReferenceKelvin);
     }
 
-    /** The calculator for any number of components. */
     /** The solution heat-capacity model (Laliberté 2009) the card states, or null when it states none. */
     public SolutionHeatCapacity solutionHeatCapacity() {
         return solutionHeatCapacity;
@@ -163,6 +199,25 @@ public final class Card {
         return boiling;
     }
 
+    /** Whether component k's pure liquid is only a limit of the card's mixture-density model (a dissolved salt). */
+    public boolean hypotheticalPure(int k) {
+        return densityModel != null && densityModel.hypotheticalPure(k);
+    }
+
+    /** Refuses, with words, a use of component k's pure-liquid density or volume when its pure liquid is hypothetical. */
+    public void requireRealPure(int k) {
+        if (hypotheticalPure(k)) {
+            String solvent = "water";
+            for (int j = 0; j < components.size(); j++) {
+                if (!densityModel.hypotheticalPure(j)) {
+                    solvent = components.get(j).name();
+                }
+            }
+            throw Problem.PURE_HYPOTHETICAL.raise(densityModel.modelName(), components.get(k).name(), solvent);
+        }
+    }
+
+    /** The calculator for any number of components. */
     public Mixture mixture() {
         return mixture;
     }

@@ -21,7 +21,12 @@ import static org.miscela.core.card.CardLabels.TEMPERATURE_UNIT;
 import static org.miscela.core.card.CardLabels.TITLE;
 import static org.miscela.core.card.CardReader.normalise;
 
+import org.miscela.core.model.ApparentVolumeDensity;
 import org.miscela.core.model.Component;
+import org.miscela.core.model.Kell1975WaterDensity;
+import org.miscela.core.model.MassFractionPolynomialDensity;
+import org.miscela.core.model.MixtureDensityModel;
+import org.miscela.core.model.ModelLimitDensity;
 import org.miscela.core.model.ConstantDensity;
 import org.miscela.core.model.ExcessFunction;
 import org.miscela.core.model.GeometricModel;
@@ -55,12 +60,40 @@ final class CardBuilder {
     private final boolean pureOnly;
     private Units units;
 
-    CardBuilder(ParsedCard rows, boolean pureOnly) {
+    /** The rows and columns the range holds, to the last non-blank cell ({@link CardReader#extent}). */
+    private final int[] extent;
+
+    CardBuilder(ParsedCard rows, boolean pureOnly, int[] extent) {
         this.rows = rows;
         this.pureOnly = pureOnly;
+        this.extent = extent;
+    }
+
+    /**
+     * A card placed by an array formula states its size ('card size | rows | columns'); a block too small for it
+     * cuts rows or columns off without a sign, so a range smaller than the stated size is refused.
+     */
+    private void checkSize() {
+        CardRow r = rows.global(CardLabels.CARD_SIZE);
+        if (r == null) {
+            return;
+        }
+        r.atMost(2);
+        double statedRows = r.number(0);
+        double statedColumns = r.number(1);
+        for (double v : new double[] {statedRows, statedColumns}) {
+            if (!(v >= 1 && v == Math.rint(v) && v < 1e6)) {
+                throw Problem.MODEL_VALUES.raise(r.number, r.label, "card size", "a whole number of rows and of "
+                        + "columns", "found " + Numbers.show(v));
+            }
+        }
+        if (extent[0] < statedRows || extent[1] < statedColumns) {
+            throw Problem.CARD_CUT_SHORT.raise(r.number, (int) statedRows, (int) statedColumns, extent[0], extent[1]);
+        }
     }
 
     Card card() {
+        checkSize();
         Units.MolarEnthalpy enthalpyUnit = rows.global(ENTHALPY_UNIT) != null
                 ? unit(ENTHALPY_UNIT, Units.MolarEnthalpy.class) : null;
         units = new Units(unit(TEMPERATURE_UNIT, Units.Temperature.class), unit(DENSITY_UNIT, Units.Density.class),
@@ -97,17 +130,21 @@ final class CardBuilder {
         checkSubjects(componentRows);
         Subjects subjects = new Subjects(names);
         Validity validity = new ValidityBuilder(rows, subjects, units.temperature()).validity(pureOnly);
+        MixtureDensityModel mixtureDensity = mixtureDensity(names, validity);
         List<Component> components = new ArrayList<>();
         for (int i = 0; i < names.size(); i++) {
-            components.add(new Component(names.get(i), masses.get(i), density(names.get(i), validity),
-                    heatCapacity(names.get(i))));
+            components.add(new Component(names.get(i), masses.get(i), pureDensity(mixtureDensity, i, names,
+                    validity), heatCapacity(names.get(i))));
         }
         int[] asymmetric = {-1};
         GeometricModel model = model(subjects, asymmetric);
         boolean missingIdeal = choice(MISSING_PAIRS, "ideal", "refuse") || pureOnly;
         // A card may describe enthalpy alone; then the volumetric functions refuse rather than guess.
         boolean enthalpyOnly = rows.hasSection(EXCESS_ENTHALPY) && !rows.hasSection(EXCESS_VOLUME);
-        ExcessFunction volume = enthalpyOnly ? null
+        if (mixtureDensity != null && rows.hasSection(EXCESS_VOLUME)) {
+            throw Problem.VOLUME_STATED_TWICE.raise(mixtureDensity.modelName());
+        }
+        ExcessFunction volume = enthalpyOnly || mixtureDensity != null ? null
                 : section(EXCESS_VOLUME, units.molarVolume().toCm3PerMol(1.0), subjects, model, asymmetric[0],
                         missingIdeal);
         ExcessFunction enthalpy = null;
@@ -131,7 +168,167 @@ final class CardBuilder {
             basisReferenceKelvin = kelvin;
         }
         return new Card(title, source, units, components, volume, enthalpy, validity, allow, missingIdeal,
-                basisReferenceKelvin, solutionHeatCapacity(names, masses), boilingCurve(names));
+                basisReferenceKelvin, solutionHeatCapacity(names, masses), boilingCurve(names), mixtureDensity);
+    }
+
+    /**
+     * A component's pure-liquid density: its own 'density model' row, or, for a component the card's mixture-density
+     * model covers (every component of a mass-fraction polynomial, every solute of an apparent-volume model), the
+     * model's limit, in which case a 'density model' row of its own would be a second, conflicting statement.
+     */
+    private PureDensity pureDensity(MixtureDensityModel model, int k, List<String> names, Validity validity) {
+        boolean covered = model != null
+                && !(model instanceof ApparentVolumeDensity && ((ApparentVolumeDensity) model).solvent() == k);
+        if (!covered) {
+            if (model instanceof ApparentVolumeDensity) {
+                return ((ApparentVolumeDensity) model).water();
+            }
+            return density(names.get(k), validity);
+        }
+        for (String label : new String[] {DENSITY_MODEL, DENSITY_REFERENCE, DENSITY_COEFFICIENTS}) {
+            CardRow own = rows.keyed(label).get(normalise(names.get(k)));
+            if (own != null) {
+                throw Problem.DENSITY_FROM_MIXTURE_MODEL.raise(own.number, own.label, names.get(k),
+                        model.modelName());
+            }
+        }
+        return new ModelLimitDensity(model, k);
+    }
+
+    /**
+     * The mixture-density model the card states instead of excess-volume coefficients, or null: 'mixture density
+     * T0'…'T9' rows (a polynomial in one component's mass fraction and the temperature) or 'apparent density' rows
+     * (Laliberté–Cooper, one per solute, with the 'solvent' row naming the water).
+     */
+    private MixtureDensityModel mixtureDensity(List<String> names, Validity validity) {
+        Map<String, CardRow> apparent = rows.keyed(CardLabels.APPARENT_DENSITY);
+        CardRow[] terms = new CardRow[CardLabels.MIXTURE_DENSITY_TERMS];
+        CardRow anyTerm = null;
+        for (int j = 0; j < terms.length; j++) {
+            Map<String, CardRow> m = rows.keyed(CardLabels.MIXTURE_DENSITY_TERM + j);
+            if (m.size() > 1) {
+                CardRow second = new ArrayList<>(m.values()).get(1);
+                throw Problem.MODEL_VALUES.raise(second.number, second.label, MassFractionPolynomialDensity.NAME,
+                        "one mass fraction, so every 'mixture density' row names the same component",
+                        "this row names another");
+            }
+            terms[j] = m.isEmpty() ? null : m.values().iterator().next();
+            anyTerm = anyTerm == null ? terms[j] : anyTerm;
+        }
+        CardRow reference = rows.global(CardLabels.MIXTURE_DENSITY_REFERENCE);
+        if (anyTerm != null && !apparent.isEmpty()) {
+            CardRow a = apparent.values().iterator().next();
+            throw Problem.MODEL_VALUES.raise(a.number, a.label, ApparentVolumeDensity.NAME, "no 'mixture density' "
+                    + "rows", "the card states the mixture's density one way; remove one of them");
+        }
+        if (anyTerm == null) {
+            if (reference != null) {
+                throw Problem.MISSING_PAIR_ROW.raise(CardLabels.MIXTURE_DENSITY_REFERENCE, "the mixture",
+                        "mixture density T0");
+            }
+            return apparent.isEmpty() ? null : apparentVolume(names, apparent, validity);
+        }
+        return polynomial(names, terms, anyTerm, reference);
+    }
+
+    private MixtureDensityModel polynomial(List<String> names, CardRow[] terms, CardRow anyTerm, CardRow reference) {
+        String name = MassFractionPolynomialDensity.NAME;
+        if (names.size() != 2) {
+            throw Problem.MODEL_VALUES.raise(anyTerm.number, anyTerm.label, name, "two components",
+                    "this card has " + names.size());
+        }
+        if (terms[0] == null) {
+            throw Problem.MISSING_PAIR_ROW.raise("mixture density T0", "the mixture", anyTerm.label);
+        }
+        if (reference == null) {
+            throw Problem.MISSING_ROW.raise(CardLabels.MIXTURE_DENSITY_REFERENCE);
+        }
+        reference.atMost(1);
+        double referenceKelvin = units.temperature().toKelvin(reference.number(0));
+        int component = normalise(names.get(0)).equals(normalise(anyTerm.text(0))) ? 0 : 1;
+        int last = terms.length - 1;
+        while (terms[last] == null) {
+            last--;
+        }
+        double[][] a = new double[last + 1][];
+        for (int j = 0; j <= last; j++) {
+            if (terms[j] == null) {
+                a[j] = new double[0];
+                continue;
+            }
+            a[j] = terms[j].numbersFrom(1);
+            for (int i = 0; i < a[j].length; i++) {
+                a[j][i] = units.temperature().toPerKelvin(units.density().toKgPerM3(a[j][i]), j);
+            }
+        }
+        return new MassFractionPolynomialDensity(component, referenceKelvin, a);
+    }
+
+    private MixtureDensityModel apparentVolume(List<String> names, Map<String, CardRow> apparent,
+            Validity validity) {
+        int solvent = solvent(names);
+        double[][] c = soluteParameters(names, solvent, apparent, ApparentVolumeDensity.NAME, 5,
+                "five parameters c0 to c4");
+        return new ApparentVolumeDensity(solvent, density(names.get(solvent), validity), c);
+    }
+
+    /**
+     * The parameters of a solution model's rows, one row per solute naming the model ({@code model}, compared as
+     * {@link #sameKeyword} does) and then {@code count} numbers; null at the solvent, which must have no such row.
+     */
+    private static double[][] soluteParameters(List<String> names, int solvent, Map<String, CardRow> byComponent,
+            String model, int count, String takes) {
+        double[][] out = new double[names.size()][];
+        for (int k = 0; k < names.size(); k++) {
+            CardRow r = byComponent.get(normalise(names.get(k)));
+            if (k == solvent) {
+                if (r != null) {
+                    throw Problem.SOLVENT_WITH_SOLUTION_MODEL.raise(r.number, r.label, names.get(k));
+                }
+                continue;
+            }
+            if (r == null) {
+                throw Problem.NO_SOLUTION_MODEL.raise(names.get(solvent), names.get(k));
+            }
+            if (!sameKeyword(r.text(1), model)) {
+                throw Problem.BAD_KEYWORD.raise(r.number, r.label, r.text(1).trim(), model);
+            }
+            out[k] = r.numbersFrom(2);
+            if (out[k].length != count) {
+                throw Problem.MODEL_VALUES.raise(r.number, r.label, model, takes, "found " + out[k].length);
+            }
+        }
+        return out;
+    }
+
+    /** The component the 'solvent' row names (the water of a solution model); refused when the row is missing. */
+    private int solvent(List<String> names) {
+        CardRow solventRow = rows.global(CardLabels.SOLVENT);
+        if (solventRow == null) {
+            throw Problem.MISSING_ROW.raise(CardLabels.SOLVENT);
+        }
+        solventRow.atMost(1);
+        String solventName = solventRow.text(0).trim();
+        for (int k = 0; k < names.size(); k++) {
+            if (normalise(names.get(k)).equals(normalise(solventName))) {
+                return k;
+            }
+        }
+        throw Problem.UNKNOWN_COMPONENT.raise(solventRow.number, solventRow.label, solventName);
+    }
+
+    /**
+     * Whether a model's name as typed is this one: compared as labels are, and also with the accents dropped and any
+     * dash or hyphen taken alike ("Laliberte-Cooper 2004" is "Laliberté–Cooper 2004").
+     */
+    static boolean sameKeyword(String typed, String name) {
+        return plain(typed).equals(plain(name));
+    }
+
+    private static String plain(String s) {
+        String n = java.text.Normalizer.normalize(normalise(s), java.text.Normalizer.Form.NFD)
+                .replaceAll("\\p{M}", "");
+        return n.replaceAll("\\s*[-\u2010-\u2015]\\s*", "-");
     }
 
     /**
@@ -180,50 +377,19 @@ final class CardBuilder {
         Map<String, CardRow> solutes = rows.keyed(CardLabels.SOLUTION_HEAT_CAPACITY);
         CardRow solventRow = rows.global(CardLabels.SOLVENT);
         if (solutes.isEmpty()) {
-            if (solventRow != null) {
+            if (solventRow != null && rows.keyed(CardLabels.APPARENT_DENSITY).isEmpty()) {
                 throw Problem.MISSING_PAIR_ROW.raise(CardLabels.SOLVENT, "the solution",
                         CardLabels.SOLUTION_HEAT_CAPACITY);
             }
             return null;
         }
-        if (solventRow == null) {
-            throw Problem.MISSING_ROW.raise(CardLabels.SOLVENT);
-        }
-        solventRow.atMost(1);
-        String solventName = solventRow.text(0).trim();
-        int solvent = -1;
-        for (int k = 0; k < names.size(); k++) {
-            if (normalise(names.get(k)).equals(normalise(solventName))) {
-                solvent = k;
-            }
-        }
-        if (solvent < 0) {
-            throw Problem.UNKNOWN_COMPONENT.raise(solventRow.number, solventRow.label, solventName);
-        }
+        int solvent = solvent(names);
+        double[][] a = soluteParameters(names, solvent, solutes, "Laliberté 2009", 6, "six parameters a1 to a6");
         ApparentHeatCapacity[] apparent = new ApparentHeatCapacity[names.size()];
         double[] molarMass = new double[names.size()];
         for (int k = 0; k < names.size(); k++) {
             molarMass[k] = masses.get(k);
-            CardRow r = solutes.get(normalise(names.get(k)));
-            if (k == solvent) {
-                if (r != null) {
-                    throw Problem.SOLVENT_WITH_SOLUTION_MODEL.raise(r.number, r.label, names.get(k));
-                }
-                continue;
-            }
-            if (r == null) {
-                throw Problem.NO_SOLUTION_MODEL.raise(names.get(solvent), names.get(k));
-            }
-            String kind = normalise(r.text(1));
-            if (!kind.equals("laliberté 2009") && !kind.equals("laliberte 2009")) {
-                throw Problem.BAD_KEYWORD.raise(r.number, r.label, r.text(1).trim(), "Laliberté 2009");
-            }
-            double[] a = r.numbersFrom(2);
-            if (a.length != 6) {
-                throw Problem.MODEL_VALUES.raise(r.number, r.label, "Laliberté 2009", "six parameters a1 to a6",
-                        "found " + a.length);
-            }
-            apparent[k] = new ApparentHeatCapacity(a);
+            apparent[k] = k == solvent ? null : new ApparentHeatCapacity(a[k]);
         }
         return new SolutionHeatCapacity(solvent, molarMass, apparent);
     }
@@ -400,9 +566,17 @@ final class CardBuilder {
                         "no coefficients or reference temperature", "remove this row");
             }
             d = Tanaka2001WaterDensity.INSTANCE;
+        } else if (kind.equals(normalise(Kell1975WaterDensity.NAME))) {
+            CardRow extra = reference != null ? reference : coefficients;
+            if (extra != null) {
+                throw Problem.MODEL_VALUES.raise(extra.number, extra.label, Kell1975WaterDensity.NAME,
+                        "no coefficients or reference temperature", "remove this row");
+            }
+            d = Kell1975WaterDensity.INSTANCE;
         } else {
             throw Problem.BAD_KEYWORD.raise(model.number, model.label, model.text(1),
-                    ConstantDensity.NAME + ", " + PolynomialDensity.NAME + ", " + Tanaka2001WaterDensity.NAME);
+                    ConstantDensity.NAME + ", " + PolynomialDensity.NAME + ", " + Tanaka2001WaterDensity.NAME + ", "
+                            + Kell1975WaterDensity.NAME);
         }
         double lo = validity.lowestKelvin();
         double hi = validity.highestKelvin();

@@ -39,6 +39,12 @@ final class CardLabels {
     static final String SOLUTION_HEAT_CAPACITY = "solution heat capacity";
     static final String SOLVENT = "solvent";
     static final String BOILING = "boiling temperatures";
+    static final String MIXTURE_DENSITY_REFERENCE = "mixture density reference temperature";
+    /** 'mixture density T0' … 'mixture density T9': the terms of (T − T_ref)^j, keyed by the w component. */
+    static final String MIXTURE_DENSITY_TERM = "mixture density t";
+    static final int MIXTURE_DENSITY_TERMS = 10;
+    static final String APPARENT_DENSITY = "apparent density";
+    static final String CARD_SIZE = "card size";
 
     /**
      * Rows of an excess-property section: binary coefficients A0..A99 (group 2), ternary C0..C9 (group 3; only C0..C2
@@ -50,15 +56,16 @@ final class CardLabels {
     /** Rows whose values start in column 2. */
     private static final String[] GLOBAL = {TITLE, SOURCE, TEMPERATURE_UNIT, DENSITY_UNIT, MOLAR_VOLUME_UNIT,
         MOLAR_MASS_UNIT, VALID_TEMPERATURE, EXTRAPOLATION, MODEL, MISSING_PAIRS, ENTHALPY_UNIT, COMPONENT_ORDER, BASIS_REFERENCE,
-        SOLVENT};
+        SOLVENT, MIXTURE_DENSITY_REFERENCE, CARD_SIZE};
     /** Rows whose column 2 names a component (or a pair) and whose values follow. */
     private static final String[] KEYED = {COMPONENT, DENSITY_MODEL, DENSITY_REFERENCE, DENSITY_COEFFICIENTS,
         VALID_MOLE_FRACTION, HEAT_CAPACITY, HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION,
-        SOLUTION_HEAT_CAPACITY, BOILING};
+        SOLUTION_HEAT_CAPACITY, BOILING, APPARENT_DENSITY};
     /** Labels of version 2 beyond the excess-enthalpy and ternary rows. */
     private static final String[] VERSION_2 = {MODEL, MISSING_PAIRS, ENTHALPY_UNIT, HEAT_CAPACITY,
         EXCESS_VOLUME + " covariance", HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION,
-        COMPONENT_ORDER, BASIS_REFERENCE, SOLUTION_HEAT_CAPACITY, SOLVENT, BOILING};
+        COMPONENT_ORDER, BASIS_REFERENCE, SOLUTION_HEAT_CAPACITY, SOLVENT, BOILING, MIXTURE_DENSITY_REFERENCE,
+        APPARENT_DENSITY, CARD_SIZE};
     /** Keyed rows whose subject is a pair "a + b" rather than one component. */
     private static final String[] PAIR_KEYED = {VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION};
 
@@ -70,7 +77,16 @@ final class CardLabels {
     }
 
     static boolean isKeyed(String key) {
-        return among(key, KEYED);
+        return among(key, KEYED) || mixtureDensityTerm(key) >= 0;
+    }
+
+    /** j of a 'mixture density Tj' label (0 to 9), or −1 for any other label. */
+    static int mixtureDensityTerm(String key) {
+        if (key.length() == MIXTURE_DENSITY_TERM.length() + 1 && key.startsWith(MIXTURE_DENSITY_TERM)) {
+            char c = key.charAt(key.length() - 1);
+            return c >= '0' && c <= '9' ? c - '0' : -1;
+        }
+        return -1;
     }
 
     /** Whether the subject of a keyed row is a pair of components rather than one. */
@@ -80,7 +96,7 @@ final class CardLabels {
 
     /** Labels added in version 2: a version 1 card promised never to contain them. */
     static boolean isVersion2(String key) {
-        return among(key, VERSION_2) || key.startsWith(EXCESS_ENTHALPY + " ")
+        return among(key, VERSION_2) || mixtureDensityTerm(key) >= 0 || key.startsWith(EXCESS_ENTHALPY + " ")
                 || key.startsWith(EXCESS_VOLUME + " ternary");
     }
 

@@ -52,7 +52,9 @@ final class CardPlausibility {
         Iterator<CardRow> componentRows = rows.keyed(CardLabels.COMPONENT).values().iterator();
         double lo = card.validity().lowestKelvin();
         double hi = card.validity().highestKelvin();
+        int k = -1;
         for (Component c : card.components()) {
+            k++;
             CardRow row = componentRows.next();
             String subject = CardReader.normalise(c.name());
             CardRow coefficients = rows.keyed(CardLabels.DENSITY_COEFFICIENTS).get(subject);
@@ -63,6 +65,13 @@ final class CardPlausibility {
                 plausible = false;
                 out.add(Problem.WARN_MOLAR_MASS.format(row.number, row.label, c.name(), shown(m, 4),
                         Numbers.show(LIGHTEST_MOLAR_MASS), Numbers.show(HEAVIEST_MOLAR_MASS)));
+            }
+            if (card.hypotheticalPure(k)) {
+                continue; // no liquid: the model's limit may lie anywhere
+            }
+            if (densityRow == null) {
+                // a pure liquid of a mixture-density formula: the formula's rows are the ones to look at
+                densityRow = rows.keyed(CardLabels.MIXTURE_DENSITY_TERM + "0").values().iterator().next();
             }
             PureDensity d = c.density();
             Span density = new Span();

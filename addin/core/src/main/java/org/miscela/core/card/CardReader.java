@@ -41,7 +41,23 @@ public final class CardReader {
 
     /** The card the cells hold: a card's range, or one cell holding a packed card ({@link PackedCard}). */
     private static Card read(Object[][] cells, boolean pureOnly) {
-        return new CardBuilder(CardGrammar.parse(PackedCard.cellsOf(cells)), pureOnly).card();
+        Object[][] c = PackedCard.cellsOf(cells);
+        return new CardBuilder(CardGrammar.parse(c), pureOnly, extent(c)).card();
+    }
+
+    /** The rows down to the last with a non-blank cell, and the columns out to the rightmost non-blank cell. */
+    static int[] extent(Object[][] cells) {
+        int rows = 0;
+        int columns = 0;
+        for (int i = 0; cells != null && i < cells.length; i++) {
+            for (int j = 0; cells[i] != null && j < cells[i].length; j++) {
+                if (!isBlank(cells[i][j])) {
+                    rows = i + 1;
+                    columns = Math.max(columns, j + 1);
+                }
+            }
+        }
+        return new int[] {rows, columns};
     }
 
     /** Whether a cell counts as blank: null, or text of white space only. */

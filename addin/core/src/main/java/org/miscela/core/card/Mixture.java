@@ -2,6 +2,7 @@ package org.miscela.core.card;
 
 import org.miscela.core.functions.CardFunctions;
 import org.miscela.core.model.ExcessFunction;
+import org.miscela.core.model.ExcessModel;
 import org.miscela.core.model.HeatCapacity;
 import org.miscela.core.model.SolutionHeatCapacity;
 import org.miscela.core.problem.Problem;
@@ -196,8 +197,8 @@ public final class Mixture {
     }
 
     /** The card's excess volume; fails with a readable message when the card describes enthalpy only. */
-    public ExcessFunction volume() {
-        ExcessFunction v = card.excessVolume();
+    public ExcessModel volume() {
+        ExcessModel v = card.volumeModel();
         if (v == null) {
             throw Problem.NO_VOLUME.raise();
         }

@@ -163,14 +163,14 @@ public final class FunctionCatalog {
     private static final List<Problem> AMOUNT_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
             Problem.ARG_SHAPE, Problem.COMPOSITION_SHAPE,
             Problem.AMOUNT_NEGATIVE, Problem.AMOUNT_ZERO, Problem.AMOUNT_TOO_LARGE, Problem.UNKNOWN_BASIS,
-            Problem.LIGHTER_THAN_AIR);
+            Problem.LIGHTER_THAN_AIR, Problem.PURE_HYPOTHETICAL);
     private static final List<Problem> DATA_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
             Problem.ARG_NOT_SINGLE, Problem.DATA_SHAPE, Problem.DATA_LENGTH, Problem.DATA_PARTLY_BLANK, Problem.NOT_A_COUNT,
             Problem.UNKNOWN_FIT_OUTPUT);
     private static final List<Problem> FIT_ENGINE_PROBLEMS = fromACell(Problem.of(Problem.Section.FIT));
     private static final List<Problem> BLEND_PROBLEMS = union(fromACell(Problem.of(Problem.Section.BLEND)), list(Problem.ARG_BLANK,
             Problem.ARG_NOT_NUMBER, Problem.ARG_NOT_TEXT, Problem.ARG_NOT_SINGLE, Problem.COMPOSITION_SHAPE,
-            Problem.UNKNOWN_COMPONENT_ARG));
+            Problem.UNKNOWN_COMPONENT_ARG, Problem.PURE_HYPOTHETICAL));
 
     private static final List<FunctionInfo> FUNCTIONS = Collections.unmodifiableList(Arrays.asList(
             new FunctionInfo("excessMolarVolume", "MIX.EXCESSVOLUME", "excess molar volume V^E",
@@ -215,7 +215,7 @@ public final class FunctionCatalog {
                     CARD, COMPONENT, range("temperature", "temperature",
                             "Temperature in the card's temperature unit. A single value, or a range for an array "
                                     + "result."), EXTRAPOLATE)
-                    .shows("998.201").refuses(union(COMPONENT_PROBLEMS, list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER, Problem.ARG_NOT_FLAG, Problem.BELOW_ABSOLUTE_ZERO, Problem.OUTSIDE_TEMPERATURE, Problem.NON_PHYSICAL))),
+                    .shows("998.201").refuses(union(COMPONENT_PROBLEMS, list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER, Problem.ARG_NOT_FLAG, Problem.BELOW_ABSOLUTE_ZERO, Problem.OUTSIDE_TEMPERATURE, Problem.NON_PHYSICAL, Problem.PURE_HYPOTHETICAL))),
             new FunctionInfo("checkCard", "MIX.CHECK",
                     "\"OK\", the card's first problem naming its row, or \"OK with n warnings: …\"",
                     "\"OK\" when the card reads and nothing looks like a mistake; \"OK with n warnings: …\" when values "
@@ -364,7 +364,7 @@ public final class FunctionCatalog {
                                     + "\"partial volume\" (then give the component)."),
                     optional("component", "component", "For a partial volume: the component's number on the card "
                             + "or its name."), EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
-                    .shows("0.178").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, COMPONENT_PROBLEMS, list(Problem.NO_COVARIANCE, Problem.UNKNOWN_QUANTITY, Problem.ARG_NOT_TEXT))),
+                    .shows("0.178").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, COMPONENT_PROBLEMS, list(Problem.NO_COVARIANCE, Problem.NO_MODEL_COVARIANCE, Problem.UNKNOWN_QUANTITY, Problem.ARG_NOT_TEXT))),
             new FunctionInfo("convertComposition", "MIX.CONVERT",
                     "a composition on another basis: mole, mass or volume fraction, %vol, mol/L, g/L, mol/kg",
                     "A composition on one basis written on another: mole, mass or volume fraction, %vol, mol/L, g/L "
@@ -601,7 +601,27 @@ public final class FunctionCatalog {
                     "=LEFT(MIX.PACK(card); 21)",
                     range("card", "card", "The named range holding the card: labels in the first column, values to "
                             + "their right."))
-                    .shows("Miscela packed card 1").refuses(list())));
+                    .shows("Miscela packed card 1").refuses(list()),
+            new FunctionInfo("libraryList", "MIX.LIBRARY",
+                    "the cards that come with the add-in: names, validity, published sources and outside checks",
+                    "A table of the cards that come with Miscela, headings first: name, title, components, valid "
+                            + "temperatures, published source, stated accuracy and the outside check of each. "
+                            + "MIX.LIBRARYCARD places one in the sheet.",
+                    "—",
+                    "=INDEX(MIX.LIBRARY(\"chloride\"); 2; 1)",
+                    optional("find", "find", "Text to look for in the cards' names, titles, components and sources "
+                            + "(case does not matter); left out, every card is listed."))
+                    .shows("sodium chloride + water").refuses(list(Problem.ARG_NOT_TEXT, Problem.LIBRARY_NO_MATCH)),
+            new FunctionInfo("libraryCard", "MIX.LIBRARYCARD",
+                    "a card from the library as cells, to place in the sheet and name like any card",
+                    "The cells of one library card, source row included, to enter as an array formula (in one cell "
+                            + "with Ctrl+Shift+Enter). Name the block and use the name as any card. A block too small "
+                            + "for the card is refused, not read cut short.",
+                    "—",
+                    "=INDEX(MIX.LIBRARYCARD(\"NaCl\"); 1; 1)",
+                    value("name", "name", "The card's name as MIX.LIBRARY lists it, or another it is known by "
+                            + "(\"NaCl\"); case and extra spaces do not matter."))
+                    .shows("Miscela card").refuses(list(Problem.ARG_NOT_TEXT, Problem.UNKNOWN_LIBRARY_CARD))));
 
     private FunctionCatalog() {
     }

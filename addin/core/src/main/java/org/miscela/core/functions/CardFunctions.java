@@ -375,7 +375,7 @@ public final class CardFunctions {
                 throw Problem.CHECK_NEEDS_BOTH.raise();
             }
             if (x != null) {
-                if (card.excessVolume() != null) {
+                if (card.volumeModel() != null) {
                     density(card, x, t, e);
                 }
                 if (card.excessEnthalpy() != null) {

@@ -27,7 +27,9 @@ final class PointChecks {
             throw violations(card, x, kelvin, t).get(0).refusal();
         }
         for (int k = 0; k < x.length; k++) {
-            pureDensityAt(card, k, kelvin, t);
+            if (!card.hypotheticalPure(k)) {
+                pureDensityAt(card, k, kelvin, t);
+            }
         }
         return kelvin;
     }
@@ -136,6 +138,7 @@ final class PointChecks {
 
     /** The pure density of component k in kg/m³, refused when not positive and finite. */
     static double pureDensityAt(Card card, int k, double kelvin, double t) {
+        card.requireRealPure(k);
         double rho = card.components().get(k).density().at(kelvin);
         if (!(rho > 0.0) || Double.isInfinite(rho)) {
             throw nonPhysical(card, t, "density of " + card.components().get(k).name(), rho);

@@ -6,6 +6,7 @@ import org.miscela.core.card.Mixture;
 import org.miscela.core.card.Units;
 import org.miscela.core.model.Component;
 import org.miscela.core.model.ExcessFunction;
+import org.miscela.core.model.ExcessModel;
 import org.miscela.core.model.HeatCapacity;
 import org.miscela.core.model.RedlichKister;
 import org.miscela.core.model.TernaryTerm;
@@ -33,11 +34,16 @@ final class Trace {
         tr.add("property", property.word());
         tr.add("components", (double) card.componentCount());
         ExcessFunction f = property == PropertyKind.VOLUME ? card.excessVolume() : card.excessEnthalpy();
-        String model = f.model().cardName();
-        if (f.asymmetricComponent() >= 0) {
-            model += " (asymmetric component: " + name(card, f.asymmetricComponent()) + ")";
+        ExcessModel excess = property == PropertyKind.VOLUME ? card.volumeModel() : f;
+        if (f != null) {
+            String model = f.model().cardName();
+            if (f.asymmetricComponent() >= 0) {
+                model += " (asymmetric component: " + name(card, f.asymmetricComponent()) + ")";
+            }
+            tr.add("multicomponent model", model);
+        } else {
+            tr.add("mixture density model", card.densityModel().modelName());
         }
-        tr.add("multicomponent model", model);
         tr.add("temperature [" + tu + "]", t);
         tr.add("temperature [K]", kelvin);
         tr.add("extrapolation", extrapolation(card, e));
@@ -65,7 +71,9 @@ final class Trace {
             symbol = "V";
             for (int k = 0; k < x.length; k++) {
                 Component c = card.components().get(k);
-                tr.add("pure density model: " + c.name(), c.density().modelName());
+                boolean limit = card.hypotheticalPure(k);
+                tr.add("pure density model: " + c.name(), limit ? c.density().modelName()
+                        + " limit (no real liquid: the excess volume is measured from it)" : c.density().modelName());
                 tr.add("pure density: " + c.name() + " [" + u.density().symbol() + "]",
                         u.density().fromKgPerM3(c.density().at(kelvin)));
                 tr.add("pure molar volume: " + c.name() + " [" + unit + "]", scale * m.pureMolarVolume(k, kelvin));
@@ -76,9 +84,16 @@ final class Trace {
             symbol = "H";
         }
         String excessName = property == PropertyKind.VOLUME ? "excess molar volume" : "excess molar enthalpy";
-        tr.pairs(card, f, x, kelvin, scale, unit);
+        if (f != null) {
+            tr.pairs(card, f, x, kelvin, scale, unit);
+        } else {
+            double mass = m.meanMolarMass(x);
+            for (int k = 0; k < x.length; k++) {
+                tr.add("mass fraction: " + name(card, k), x[k] * card.components().get(k).molarMass() / mass);
+            }
+        }
         double[] g = new double[x.length];
-        double be = f.evaluate(x, kelvin, false, g, null);
+        double be = excess.evaluate(x, kelvin, false, g, null);
         tr.add(excessName + " [" + unit + "]", scale * be);
         double mean = 0.0;
         for (int k = 0; k < x.length; k++) {

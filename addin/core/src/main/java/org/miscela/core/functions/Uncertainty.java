@@ -46,7 +46,11 @@ final class Uncertainty {
      * @param component the component of a partial volume (ignored otherwise)
      */
     static double of(Card card, Quantity quantity, int component, double[] x, double kelvin) {
-        ExcessFunction f = card.mixture().volume();
+        card.mixture().volume();
+        if (card.densityModel() != null) {
+            throw Problem.NO_MODEL_COVARIANCE.raise(card.densityModel().modelName());
+        }
+        ExcessFunction f = card.excessVolume();
         int n = card.componentCount();
         double scale = 1.0;
         if (quantity == Quantity.DENSITY) {

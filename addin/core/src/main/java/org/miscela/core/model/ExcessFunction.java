@@ -11,7 +11,7 @@ import java.util.List;
  * <p>The gradient treats the n mole fractions as independent variables. Partial molar quantities only use it along
  * directions inside the simplex (B̄_k = B + Σ_j (δ_jk − x_j)·∂B/∂x_j), where the choice of extension does not matter.
  */
-public final class ExcessFunction {
+public final class ExcessFunction implements ExcessModel {
     private final int n;
     private final GeometricModel model;
     private final int asymmetric;
@@ -93,6 +93,7 @@ public final class ExcessFunction {
         return c == null ? null : copy(c);
     }
 
+    @Override
     public int componentCount() {
         return n;
     }
@@ -139,6 +140,7 @@ public final class ExcessFunction {
     }
 
     /** Whether any coefficient depends on temperature. */
+    @Override
     public boolean temperatureDependent() {
         for (RedlichKister r : expansion) {
             if (r.temperatureDependent()) {
@@ -177,15 +179,11 @@ public final class ExcessFunction {
         return ternary[t].accumulate(x, kelvin, false, null, null);
     }
 
-    /** B^E at this composition and temperature. */
-    public double value(double[] x, double kelvin) {
-        return evaluate(x, kelvin, false, null, null);
-    }
-
     /**
      * B^E (or ∂B^E/∂T when {@code temperatureSlope}) with, optionally, its gradient and Hessian with respect to the
      * mole fractions. The arrays are overwritten; pass null for what is not needed.
      */
+    @Override
     public double evaluate(double[] x, double kelvin, boolean temperatureSlope, double[] gradient,
             double[][] hessian) {
         if (gradient != null) {
@@ -206,43 +204,6 @@ public final class ExcessFunction {
             total += t.accumulate(x, kelvin, temperatureSlope, gradient, hessian);
         }
         return total;
-    }
-
-    /**
-     * The partial molar excess quantities B̄_k^E = B^E + ∂B^E/∂x_k − Σ_j x_j·∂B^E/∂x_j into {@code out}; returns B^E.
-     */
-    public double partials(double[] x, double kelvin, boolean temperatureSlope, double[] out) {
-        double[] g = new double[n];
-        double b = evaluate(x, kelvin, temperatureSlope, g, null);
-        double mean = 0.0;
-        for (int j = 0; j < n; j++) {
-            mean += x[j] * g[j];
-        }
-        for (int k = 0; k < n; k++) {
-            out[k] = b + g[k] - mean;
-        }
-        return b;
-    }
-
-    /**
-     * The derivatives of every B̄_k^E along a composition direction v (Σ v_j = 0 stays inside the simplex):
-     * dB̄_k = (H·v)_k − Σ_j x_j (H·v)_j, with H the Hessian of B^E. Used to check Gibbs–Duhem, Σ x_k dB̄_k = 0.
-     */
-    public void partialSlopes(double[] x, double kelvin, double[] direction, double[] out) {
-        double[][] h = new double[n][n];
-        evaluate(x, kelvin, false, null, h);
-        double mean = 0.0;
-        for (int k = 0; k < n; k++) {
-            double hv = 0.0;
-            for (int j = 0; j < n; j++) {
-                hv += h[k][j] * direction[j];
-            }
-            out[k] = hv;
-            mean += x[k] * hv;
-        }
-        for (int k = 0; k < n; k++) {
-            out[k] -= mean;
-        }
     }
 
     private double accumulatePair(int p, double[] x, double kelvin, boolean temperatureSlope, double[] s,

@@ -4,7 +4,7 @@ package org.miscela.core.model;
  * Density of air-free SMOW water at 101.325 kPa, 0–40 °C: M. Tanaka, G. Girard, R. Davis, A. Peuto, N. Bignell,
  * Metrologia 38, 301–309 (2001): ρ = a5 · [1 − (t + a1)² (t + a2) / (a3 (t + a4))], t in °C.
  */
-public final class Tanaka2001WaterDensity implements PureDensity {
+public final class Tanaka2001WaterDensity extends BuiltInWaterDensity {
     public static final String NAME = "Tanaka 2001";
     public static final Tanaka2001WaterDensity INSTANCE = new Tanaka2001WaterDensity();
 
@@ -15,6 +15,7 @@ public final class Tanaka2001WaterDensity implements PureDensity {
     private static final double A5 = 999.974950;
 
     private Tanaka2001WaterDensity() {
+        super(NAME, 273.15, 313.15);
     }
 
     @Override
@@ -22,20 +23,5 @@ public final class Tanaka2001WaterDensity implements PureDensity {
         double t = kelvin - 273.15;
         double s = t + A1;
         return A5 * (1.0 - s * s * (t + A2) / (A3 * (t + A4)));
-    }
-
-    @Override
-    public String modelName() {
-        return NAME;
-    }
-
-    @Override
-    public double lowestKelvin() {
-        return 273.15;
-    }
-
-    @Override
-    public double highestKelvin() {
-        return 313.15;
     }
 }

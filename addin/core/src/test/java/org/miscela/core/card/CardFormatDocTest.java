@@ -147,7 +147,7 @@ public class CardFormatDocTest {
     @Test
     void examplesBehaveAsDescribed() throws IOException {
         List<Example> examples = examples(lines());
-        assertEquals(8, examples.size());
+        assertEquals(10, examples.size());
         Card one = CardReader.read(examples.get(0).cells);
         // "the functions refuse x1 above 0.9 unless extrapolation is allowed"
         assertEquals(CardFunctions.OK, CardFunctions.check(one, 0.0, T, Extrapolation.AS_CARD));
@@ -208,6 +208,24 @@ public class CardFormatDocTest {
         assertEquals(15.0, eight.basisReferenceTemperature(), 1e-12);
         assertTrue(eight.statesBasisReference());
         assertEquals(20.0, one.basisReferenceTemperature() - 273.15, 1e-9, "example 1 (in K) keeps the 20 °C default");
+
+        // Example 9: the salt has no pure-liquid density; the solution's follows the model's equations.
+        Card nine = CardReader.read(examples.get(8).cells);
+        assertEquals(Problem.PURE_HYPOTHETICAL, org.junit.jupiter.api.Assertions.assertThrows(MiscelaException.class,
+                () -> CardFunctions.pureDensity(nine, 0, 20, Extrapolation.AS_CARD)).problem());
+        double w = 0.1;
+        double t = 20;
+        double water = org.miscela.core.model.Kell1975WaterDensity.INSTANCE.at(293.15);
+        double apparent = (0 * w + 0.06) * Math.exp(1e-6 * (t + 3300) * (t + 3300)) / (w + 1 + 0.015 * t);
+        double x9 = (w / 58.4) / (w / 58.4 + (1 - w) / 18.015);
+        assertEquals(1 / ((1 - w) / water + w / apparent), CardFunctions.density(nine, x9, 20, Extrapolation.AS_CARD),
+                1e-9);
+
+        // Example 10: ρ = 998 − 160·w − 0.2·(t − 20) − 0.6·w·(t − 20); at w = 0.3 and 25 °C, 948.1 kg/m³.
+        Card ten = CardReader.read(examples.get(9).cells);
+        double x10 = (0.3 / 46.07) / (0.3 / 46.07 + 0.7 / 18.015);
+        assertEquals(948.1, CardFunctions.density(ten, x10, 25, Extrapolation.AS_CARD), 1e-9);
+        assertEquals(998 - 0.2 * 5, CardFunctions.pureDensity(ten, 1, 25, Extrapolation.AS_CARD), 1e-9);
     }
 
     private static final Pattern CHECK_MARKER = Pattern.compile("^\\s*<!--\\s*check-example:(.*?)-->\\s*$");

@@ -313,6 +313,31 @@ class CardReaderTest {
                         new Object[][] {{PackedCard.pack(base(c -> c)).replace("n46.07", "n46.08")}}),
                 bad("a solution model with five parameters", Problem.MODEL_VALUES, 20, "six parameters a1 to a6",
                         v2(c -> c.row("solution heat capacity", "alpha", "Laliberté 2009", 1, 0, 0, 0, 1)
+                                .row("solvent", "beta"))),
+                // mixture-density models (invented coefficients: only the card's grammar is tested here)
+                bad("a density formula and excess volume rows", Problem.VOLUME_STATED_TWICE, 0,
+                        "by its mass fraction polynomial model and by 'excess volume' rows",
+                        v2(c -> c.set(12, "# off").set(13, "# off").set(14, "# off").set(15, "# off")
+                                .row("mixture density reference temperature", 293.15)
+                                .row("mixture density T0", "alpha", 997.0, -200.0))),
+                bad("a density formula and a component's own density", Problem.DENSITY_FROM_MIXTURE_MODEL, 12,
+                        "the density of alpha comes from the card's mass fraction polynomial model",
+                        v2(c -> c.row("mixture density reference temperature", 293.15)
+                                .row("mixture density T0", "alpha", 997.0, -200.0))),
+                bad("a density formula without its T0 row", Problem.MISSING_PAIR_ROW, 0, "mixture density T0",
+                        v2(c -> c.set(12, "# off").set(13, "# off").set(14, "# off").set(15, "# off")
+                                .row("mixture density reference temperature", 293.15)
+                                .row("mixture density T1", "alpha", -0.2))),
+                bad("an apparent density with four parameters", Problem.MODEL_VALUES, 20,
+                        "five parameters c0 to c4", v2(c -> c.set(12, "# off").set(13, "# off")
+                                .row("apparent density", "alpha", "Laliberté–Cooper 2004", 1, 2, 3, 4)
+                                .row("solvent", "beta"))),
+                bad("a card cut short by a small array block", Problem.CARD_CUT_SHORT, 20,
+                        "the card has 21 rows and 4 columns, but the range holds only 20 rows and 4 columns",
+                        v2(c -> c.row("card size", 21, 4))),
+                bad("an apparent density of another name", Problem.BAD_KEYWORD, 20, "\"Cooper 2004\"",
+                        v2(c -> c.set(12, "# off").set(13, "# off")
+                                .row("apparent density", "alpha", "Cooper 2004", 1, 2, 3, 4, 5)
                                 .row("solvent", "beta"))));
     }
 
@@ -340,7 +365,7 @@ class CardReaderTest {
         Set<Problem> missing = EnumSet.copyOf(card);
         missing.removeAll(produced);
         assertTrue(missing.isEmpty(), "no malformed card for " + missing);
-        assertEquals(41, card.size(), "the card problems changed; update the malformed cards");
+        assertEquals(44, card.size(), "the card problems changed; update the malformed cards");
     }
 
     // ------------------------------------------------------------------ well-formed cards

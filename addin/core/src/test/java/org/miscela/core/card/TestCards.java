@@ -11,7 +11,11 @@ public final class TestCards {
     private TestCards() {
     }
 
+    /** The cards a spec file or test names: a test resource under cards/, or "library:" and a library card's name. */
     public static Object[][] cells(String resource) {
+        if (resource.startsWith("library:")) {
+            return org.miscela.core.library.CardLibrary.find(resource.substring("library:".length())).cells();
+        }
         try (InputStream in = TestCards.class.getResourceAsStream("/cards/" + resource)) {
             if (in == null) {
                 throw new IllegalArgumentException("no test card " + resource);

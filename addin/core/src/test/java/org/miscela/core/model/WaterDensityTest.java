@@ -28,4 +28,20 @@ class WaterDensityTest {
         assertEquals(997.0476, WATER.at(298.15), 0.002);
         assertEquals(992.2164, WATER.at(313.15), 0.002);
     }
+
+    /**
+     * Kell 1975 (the water of the Laliberté–Cooper model) against two later, independent formulations: Tanaka et al.
+     * 2001 from 0 to 40 °C (measured: Kell is 0.0033 kg/m³ lower at 0 °C, the gap closing to 0.0006 at 40 °C;
+     * Kell's equation is on the 1968 temperature scale) and the IAPWS-95 release's own check value at 300 K and
+     * 0.0992418352 MPa, 996.5560 kg/m³ (Table 7, as copied in several open implementations' tests), within 0.002.
+     */
+    @Test
+    void kellAgreesWithTanakaAndIapws95() {
+        for (double t = 0; t <= 40; t += 2.5) {
+            assertEquals(WATER.at(t + 273.15), Kell1975WaterDensity.INSTANCE.at(t + 273.15), 0.004, t + " °C");
+        }
+        assertEquals(996.5560, Kell1975WaterDensity.INSTANCE.at(300.0), 0.002);
+        assertEquals(273.15, Kell1975WaterDensity.INSTANCE.lowestKelvin(), 0.0);
+        assertEquals(423.15, Kell1975WaterDensity.INSTANCE.highestKelvin(), 0.0);
+    }
 }
