@@ -195,6 +195,8 @@ class LibraryCardsTest {
             assertFalse(e.check().isBlank(), e.key());
             assertFalse(e.accuracy().isBlank(), e.key());
             assertEquals(e, CardLibrary.find(e.key().toUpperCase(Locale.ROOT)));
+            assertEquals(java.util.Collections.emptyList(), org.miscela.core.card.CardSanity.warnings(e.cells(), c),
+                    e.key() + ": MIX.CHECK has nothing to warn about");
         }
     }
 }

@@ -23,6 +23,8 @@ import static org.miscela.core.card.CardReader.normalise;
 
 import org.miscela.core.model.ApparentVolumeDensity;
 import org.miscela.core.model.Component;
+import org.miscela.core.model.Dippr105Density;
+import org.miscela.core.model.TabulatedDensity;
 import org.miscela.core.model.Kell1975WaterDensity;
 import org.miscela.core.model.MassFractionPolynomialDensity;
 import org.miscela.core.model.MixtureDensityModel;
@@ -59,6 +61,8 @@ final class CardBuilder {
     /** Whether only the pure-component part is read ({@link CardReader#readPureComponents}). */
     private final boolean pureOnly;
     private Units units;
+    /** g/mol by normalised component name (a DIPPR 105 density is in mol/dm³). */
+    private final Map<String, Double> molarMasses = new java.util.HashMap<>();
 
     /** The rows and columns the range holds, to the last non-blank cell ({@link CardReader#extent}). */
     private final int[] extent;
@@ -128,6 +132,9 @@ final class CardBuilder {
         }
         checkOrder(names);
         checkSubjects(componentRows);
+        for (int i = 0; i < names.size(); i++) {
+            molarMasses.put(normalise(names.get(i)), masses.get(i));
+        }
         Subjects subjects = new Subjects(names);
         Validity validity = new ValidityBuilder(rows, subjects, units.temperature()).validity(pureOnly);
         MixtureDensityModel mixtureDensity = mixtureDensity(names, validity);
@@ -566,6 +573,48 @@ final class CardBuilder {
                         "no coefficients or reference temperature", "remove this row");
             }
             d = Tanaka2001WaterDensity.INSTANCE;
+        } else if (kind.equals(normalise(Dippr105Density.NAME))) {
+            if (reference != null) {
+                throw Problem.MODEL_VALUES.raise(reference.number, reference.label, Dippr105Density.NAME,
+                        "no reference temperature", "remove this row");
+            }
+            if (coefficients == null) {
+                throw Problem.MODEL_VALUES.raise(model.number, model.label, Dippr105Density.NAME,
+                        "C1 to C4 in a 'density coefficients' row", "that row is missing");
+            }
+            double[] c = coefficients.numbersFrom(1);
+            if (c.length != 4) {
+                throw Problem.MODEL_VALUES.raise(coefficients.number, coefficients.label, Dippr105Density.NAME,
+                        "four coefficients C1 to C4 (C1 in mol/dm³, C3 in K, as the tables print them)",
+                        "found " + c.length);
+            }
+            d = new Dippr105Density(c[0], c[1], c[2], c[3], molarMasses.get(subject));
+        } else if (kind.equals(TabulatedDensity.NAME)) {
+            if (reference != null) {
+                throw Problem.MODEL_VALUES.raise(reference.number, reference.label, TabulatedDensity.NAME,
+                        "no reference temperature", "remove this row");
+            }
+            if (coefficients == null) {
+                throw Problem.MODEL_VALUES.raise(model.number, model.label, TabulatedDensity.NAME,
+                        "pairs of temperature and density in a 'density coefficients' row", "that row is missing");
+            }
+            double[] v = coefficients.numbersFrom(1);
+            if (v.length < 4 || v.length % 2 != 0) {
+                throw Problem.MODEL_VALUES.raise(coefficients.number, coefficients.label, TabulatedDensity.NAME,
+                        "pairs of temperature and density, at least two", "found " + v.length + " value(s)");
+            }
+            double[] kelvin = new double[v.length / 2];
+            double[] rho = new double[v.length / 2];
+            for (int i = 0; i < kelvin.length; i++) {
+                kelvin[i] = units.temperature().toKelvin(v[2 * i]);
+                rho[i] = units.density().toKgPerM3(v[2 * i + 1]);
+                if (i > 0 && !(kelvin[i] > kelvin[i - 1])) {
+                    throw Problem.MODEL_VALUES.raise(coefficients.number, coefficients.label, TabulatedDensity.NAME,
+                            "temperatures increasing from pair to pair", "found " + Numbers.show(v[2 * i])
+                                    + " after " + Numbers.show(v[2 * i - 2]));
+                }
+            }
+            d = new TabulatedDensity(kelvin, rho);
         } else if (kind.equals(normalise(Kell1975WaterDensity.NAME))) {
             CardRow extra = reference != null ? reference : coefficients;
             if (extra != null) {
@@ -576,7 +625,7 @@ final class CardBuilder {
         } else {
             throw Problem.BAD_KEYWORD.raise(model.number, model.label, model.text(1),
                     ConstantDensity.NAME + ", " + PolynomialDensity.NAME + ", " + Tanaka2001WaterDensity.NAME + ", "
-                            + Kell1975WaterDensity.NAME);
+                            + Kell1975WaterDensity.NAME + ", " + Dippr105Density.NAME + ", " + TabulatedDensity.NAME);
         }
         double lo = validity.lowestKelvin();
         double hi = validity.highestKelvin();

@@ -342,8 +342,10 @@ final class CardDigits {
         for (int i = 0; i < card.componentCount(); i++) {
             String subject = CardReader.normalise(card.components().get(i).name());
             CardRow r = rows.keyed(CardLabels.DENSITY_COEFFICIENTS).get(subject);
-            if (r == null) {
-                continue;
+            String model = card.components().get(i).density().modelName();
+            if (r == null || !(model.equals(org.miscela.core.model.PolynomialDensity.NAME)
+                    || model.equals(org.miscela.core.model.ConstantDensity.NAME))) {
+                continue; // a handbook form's coefficients or a table are not a polynomial's terms
             }
             CardRow reference = rows.keyed(CardLabels.DENSITY_REFERENCE).get(subject);
             double tRef = reference == null ? 0.0 : card.units().temperature().toKelvin(reference.number(1));

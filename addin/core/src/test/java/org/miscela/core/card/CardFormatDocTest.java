@@ -147,7 +147,7 @@ public class CardFormatDocTest {
     @Test
     void examplesBehaveAsDescribed() throws IOException {
         List<Example> examples = examples(lines());
-        assertEquals(10, examples.size());
+        assertEquals(11, examples.size());
         Card one = CardReader.read(examples.get(0).cells);
         // "the functions refuse x1 above 0.9 unless extrapolation is allowed"
         assertEquals(CardFunctions.OK, CardFunctions.check(one, 0.0, T, Extrapolation.AS_CARD));
@@ -226,6 +226,13 @@ public class CardFormatDocTest {
         double x10 = (0.3 / 46.07) / (0.3 / 46.07 + 0.7 / 18.015);
         assertEquals(948.1, CardFunctions.density(ten, x10, 25, Extrapolation.AS_CARD), 1e-9);
         assertEquals(998 - 0.2 * 5, CardFunctions.pureDensity(ten, 1, 25, Extrapolation.AS_CARD), 1e-9);
+
+        // Example 11: ρ_M = C1·M/C2^(1 + (1 − T/C3)^C4); the table passes through its points.
+        Card eleven = CardReader.read(examples.get(10).cells);
+        double tau = 1 - 293.15 / 514;
+        assertEquals(1.6 * 46.07 / Math.pow(0.27, 1 + Math.pow(tau, 0.23)),
+                CardFunctions.pureDensity(eleven, 0, 20, Extrapolation.AS_CARD), 1e-9);
+        assertEquals(996.0, CardFunctions.pureDensity(eleven, 1, 30, Extrapolation.AS_CARD), 0.0);
     }
 
     private static final Pattern CHECK_MARKER = Pattern.compile("^\\s*<!--\\s*check-example:(.*?)-->\\s*$");
