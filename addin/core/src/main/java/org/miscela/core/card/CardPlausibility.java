@@ -22,9 +22,10 @@ import org.miscela.core.problem.Problem;
  *       Physics' density tables at 20–25 °C run from pentane (626 kg/m³) to bromoform (2890 kg/m³); liquefied gases
  *       such as propane (493 kg/m³ under pressure) lie below and mercury (13,534 kg/m³) above (values from memory).
  *       998 kg/m³ typed as 998,2 in a locale that reads the comma as a thousands separator becomes 9982.</li>
- *   <li>Thermal expansion coefficient α = −(dρ/dT)/ρ from −5·10⁻⁴ to 3·10⁻³ per K: water's runs from −6.8·10⁻⁵ at
+ *   <li>Thermal expansion coefficient α = −(dρ/dT)/ρ from −7·10⁻⁴ to 3·10⁻³ per K: water's runs from −6.8·10⁻⁵ at
  *       0 °C to 3.9·10⁻⁴ at 40 °C (negative below its density maximum at 4 °C), ethanol's is 1.1·10⁻³ and diethyl
- *       ether's 1.6·10⁻³ per K at 20 °C (CRC Handbook, from memory). A temperature coefficient ten times too large or
+ *       ether's 1.6·10⁻³ per K at 20 °C (CRC Handbook, from memory); supercooled water's reaches −6.4·10⁻⁴ at
+ *       −20 °C by the OIML R 22 formula, whose range starts there. A temperature coefficient ten times too large or
  *       with the wrong sign leaves this range for most liquids.</li>
  *   <li>Molar volume M/ρ from 10 to 1000 cm³/mol, checked when the molar mass and the density are each plausible:
  *       water's 18 cm³/mol is the smallest of common liquids, triglycerides' near 1000 the largest (common
@@ -36,7 +37,7 @@ final class CardPlausibility {
     static final double HEAVIEST_MOLAR_MASS = 1000.0;
     static final double LIGHTEST_DENSITY = 500.0;
     static final double HEAVIEST_DENSITY = 3000.0;
-    static final double LEAST_EXPANSION = -5e-4;
+    static final double LEAST_EXPANSION = -7e-4;
     static final double MOST_EXPANSION = 3e-3;
     static final double SMALLEST_MOLAR_VOLUME = 10.0;
     static final double LARGEST_MOLAR_VOLUME = 1000.0;
