@@ -23,7 +23,6 @@ import static org.miscela.examples.ExampleWorkbooks.widths;
 import com.sun.star.awt.Rectangle;
 import com.sun.star.awt.Size;
 import com.sun.star.beans.XPropertySet;
-import com.sun.star.chart.ChartLegendPosition;
 import com.sun.star.chart.ChartSymbolType;
 import com.sun.star.chart.XAxisXSupplier;
 import com.sun.star.chart.XAxisYSupplier;
@@ -191,12 +190,7 @@ public final class AcidDilutionWorkbookBuilder {
                     + "25.5 °C is an extrapolation (the path functions get TRUE as 'extrapolate'), and above 55 °C "
                     + "beyond the heat-capacity fit too. Boiling is not checked: see section 5.",
         };
-        for (int i = 0; i < cautions.length; i++) {
-            String range = "A" + (3 + i) + ":K" + (3 + i);
-            fitted(s, range, 2 + i, cautions[i], WIDE_MM);
-            band(s, range, CAUTION_COLOUR);
-        }
-        bold(s, "A3:A5", 10);
+        ExampleWorkbooks.cautions(s, "K", WIDE_MM, 3, cautions);
 
         // 1. the batch
         heads(s, 7, "1. The batch in tank D-4 (change the blue cells)", "", "");
@@ -416,37 +410,24 @@ public final class AcidDilutionWorkbookBuilder {
     private static void addChart(XSpreadsheet s) throws Exception {
         XTableCharts charts = UnoRuntime.queryInterface(XTableChartsSupplier.class, s).getCharts();
         // from the top of F8 to just above the notes in F32, across F..K
-        com.sun.star.awt.Point p = position(s, 5, 7);
-        com.sun.star.awt.Point below = position(s, 5, NOTES_ROW);
-        com.sun.star.awt.Point right = position(s, 11, 7);
+        com.sun.star.awt.Point p = ExampleWorkbooks.position(s, 5, 7);
+        com.sun.star.awt.Point below = ExampleWorkbooks.position(s, 5, NOTES_ROW);
+        com.sun.star.awt.Point right = ExampleWorkbooks.position(s, 11, 7);
         CellRangeAddress data = new CellRangeAddress((short) 1, PLOT_COL, PATH_HEAD, PLOT_COL + 5, plotLast);
         charts.addNewByName(CHART_NAME, new Rectangle(p.X, p.Y, right.X - p.X - 200, below.Y - p.Y - 300),
                 new CellRangeAddress[] {data}, true, false);
         Object chart = UnoRuntime.queryInterface(XNameAccess.class, charts).getByName(CHART_NAME);
         XChartDocument cd = UnoRuntime.queryInterface(XChartDocument.class,
                 UnoRuntime.queryInterface(XEmbeddedObjectSupplier.class, chart).getEmbeddedObject());
-        XDiagram d = ExampleWorkbooks.xyDiagram(cd, "Tank D-4: temperature against the amount added (estimates)",
-                10f);
-        XPropertySet cp = UnoRuntime.queryInterface(XPropertySet.class, cd);
-        cp.setPropertyValue("HasLegend", Boolean.TRUE);
-        UnoRuntime.queryInterface(XPropertySet.class, cd.getLegend()).setPropertyValue("Alignment",
-                ChartLegendPosition.BOTTOM);
+        XDiagram d = ExampleWorkbooks.lineChart(cd, "Tank D-4: temperature against the amount added (estimates)",
+                10f, "amount added so far, kg (acid, or water in the forbidden order)", "temperature in the tank, °C");
         XPropertySet dp = UnoRuntime.queryInterface(XPropertySet.class, d);
-        dp.setPropertyValue("Lines", Boolean.TRUE);
         dp.setPropertyValue("SymbolType", ChartSymbolType.NONE);
         dp.setPropertyValue("MissingValueTreatment", com.sun.star.chart.MissingValueTreatment.LEAVE_GAP);
-        dp.setPropertyValue("HasXAxisTitle", Boolean.TRUE);
-        dp.setPropertyValue("HasYAxisTitle", Boolean.TRUE);
-        XAxisXSupplier xs = UnoRuntime.queryInterface(XAxisXSupplier.class, d);
-        UnoRuntime.queryInterface(XPropertySet.class, xs.getXAxisTitle()).setPropertyValue("String",
-                "amount added so far, kg (acid, or water in the forbidden order)");
-        XPropertySet xAxis = xs.getXAxis();
+        XPropertySet xAxis = UnoRuntime.queryInterface(XAxisXSupplier.class, d).getXAxis();
         xAxis.setPropertyValue("LinkNumberFormatToSource", Boolean.FALSE);
         xAxis.setPropertyValue("NumberFormat", formats.key("#,##0"));
-        XAxisYSupplier ys = UnoRuntime.queryInterface(XAxisYSupplier.class, d);
-        UnoRuntime.queryInterface(XPropertySet.class, ys.getYAxisTitle()).setPropertyValue("String",
-                "temperature in the tank, °C");
-        XPropertySet yAxis = ys.getYAxis();
+        XPropertySet yAxis = UnoRuntime.queryInterface(XAxisYSupplier.class, d).getYAxis();
         yAxis.setPropertyValue("LinkNumberFormatToSource", Boolean.FALSE);
         yAxis.setPropertyValue("NumberFormat", formats.key("0"));
         int[] colours = {0x2E6FB0, 0xC0392B, 0x3A9E5C};
@@ -466,11 +447,6 @@ public final class AcidDilutionWorkbookBuilder {
         limit.setPropertyValue("Color", 0x7F7F7F);
         limit.setPropertyValue("LineWidth", 25);
         limit.setPropertyValue("SymbolType", ChartSymbolType.NONE);
-    }
-
-    private static com.sun.star.awt.Point position(XSpreadsheet s, int c, int r) throws Exception {
-        return (com.sun.star.awt.Point) UnoRuntime.queryInterface(XPropertySet.class, s.getCellByPosition(c, r))
-                .getPropertyValue("Position");
     }
 
     /** The card from the test resource, unchanged, with its named range 'card' and a banner naming its source. */

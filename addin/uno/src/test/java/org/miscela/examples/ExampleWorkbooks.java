@@ -279,6 +279,21 @@ final class ExampleWorkbooks {
         rowHeight(s, row, textHeight(text, widthMm));
     }
 
+    /**
+     * The caution rows under a sheet's banner: one per text from row 3, each merged across A..{@code last}, fitted to
+     * {@code widthMm} and in the caution colour; the first {@code bolded} of them in bold.
+     */
+    static void cautions(XSpreadsheet s, String last, int widthMm, int bolded, String... texts) throws Exception {
+        for (int i = 0; i < texts.length; i++) {
+            String range = "A" + (3 + i) + ":" + last + (3 + i);
+            fitted(s, range, 2 + i, texts[i], widthMm);
+            band(s, range, CAUTION_COLOUR);
+        }
+        if (bolded > 0) {
+            bold(s, "A3:A" + (2 + bolded), 10);
+        }
+    }
+
     /** Writes text into a block of cells merged into one, wrapped and aligned to the top (row heights unchanged). */
     static void block(XSpreadsheet s, String range, String text) throws Exception {
         String first = range.substring(0, range.indexOf(':'));
@@ -426,6 +441,33 @@ final class ExampleWorkbooks {
         tp.setPropertyValue("String", title);
         tp.setPropertyValue("CharHeight", charHeight);
         return d;
+    }
+
+    /**
+     * An XY chart drawn with lines, its title at {@code charHeight}, its legend below the plot and both axes titled.
+     * Returns the diagram.
+     */
+    static com.sun.star.chart.XDiagram lineChart(com.sun.star.chart.XChartDocument cd, String title,
+            float charHeight, String xTitle, String yTitle) throws Exception {
+        com.sun.star.chart.XDiagram d = xyDiagram(cd, title, charHeight);
+        UnoRuntime.queryInterface(XPropertySet.class, cd).setPropertyValue("HasLegend", Boolean.TRUE);
+        UnoRuntime.queryInterface(XPropertySet.class, cd.getLegend()).setPropertyValue("Alignment",
+                com.sun.star.chart.ChartLegendPosition.BOTTOM);
+        XPropertySet dp = UnoRuntime.queryInterface(XPropertySet.class, d);
+        dp.setPropertyValue("Lines", Boolean.TRUE);
+        dp.setPropertyValue("HasXAxisTitle", Boolean.TRUE);
+        dp.setPropertyValue("HasYAxisTitle", Boolean.TRUE);
+        Object xAxisTitle = UnoRuntime.queryInterface(com.sun.star.chart.XAxisXSupplier.class, d).getXAxisTitle();
+        UnoRuntime.queryInterface(XPropertySet.class, xAxisTitle).setPropertyValue("String", xTitle);
+        Object yAxisTitle = UnoRuntime.queryInterface(com.sun.star.chart.XAxisYSupplier.class, d).getYAxisTitle();
+        UnoRuntime.queryInterface(XPropertySet.class, yAxisTitle).setPropertyValue("String", yTitle);
+        return d;
+    }
+
+    /** The position of a cell's top left corner on its sheet, in 1/100 mm (for placing a chart). */
+    static com.sun.star.awt.Point position(XSpreadsheet s, int c, int r) throws Exception {
+        return (com.sun.star.awt.Point) UnoRuntime.queryInterface(XPropertySet.class, s.getCellByPosition(c, r))
+                .getPropertyValue("Position");
     }
 
     /**

@@ -2,6 +2,7 @@ package org.miscela.examples;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.miscela.examples.TernaryWorkbookBuilder.ADDITION_HEAT_ROW;
 import static org.miscela.examples.TernaryWorkbookBuilder.AUDIT_PASS_ROW;
@@ -60,6 +61,8 @@ import org.miscela.core.functions.TemperaturePath;
 import org.miscela.core.functions.FitFunctions;
 import org.miscela.core.functions.FitOutput;
 import org.miscela.core.functions.PropertyKind;
+import org.miscela.core.library.CardLibrary;
+import org.miscela.core.problem.MiscelaException;
 import org.miscela.core.blend.BlendFunctions;
 import org.miscela.core.blend.CompositionBasis;
 import org.miscela.it.Office;
@@ -69,10 +72,11 @@ import org.miscela.testing.Figures;
 
 /**
  * The bundled example workbooks recalculate in the real office with no error cell and every check cell "OK"; the
- * ternary, quote, make-up, lab-fit and acid-dilution workbooks' numbers are the core library's, computed here in the
- * JVM from the card and the inputs read off their sheets; a few are checked against the OIML R 22 formula itself, the
- * acid dilution's heat of mixing against the card format's Redlich-Kister sum, and its paths against identities (each
- * order ends at MIX.TEMPERATURERISE's temperature; with the "cooling" removed the peak is the limit).
+ * ternary, quote, make-up, lab-fit, acid-dilution and brine-plant workbooks' numbers are the core library's, computed
+ * here in the JVM from the card and the inputs read off their sheets; a few are checked against the OIML R 22 formula
+ * itself, the acid dilution's heat of mixing against the card format's Redlich-Kister sum, and its paths against
+ * identities (each order ends at MIX.TEMPERATURERISE's temperature; with the "cooling" removed the peak is the limit);
+ * the brine plant's card block is the library's card, cell by cell, and its recipe against the recipe's definition.
  */
 @ExtendWith(OfficeParameterResolver.class)
 class ExamplesIT {
@@ -633,6 +637,117 @@ class ExamplesIT {
         }
     }
 
+    @Test
+    void brinePlantIsTheLibraryCardAndTheCoreLibrarysNumbers(Office office) throws Exception {
+        XComponent doc = open(office, BrinePlantWorkbookBuilder.FILE);
+        try {
+            // the named block is exactly the array that MIX.LIBRARYCARD places, cell by cell
+            CardLibrary.Entry entry = CardLibrary.find(BrinePlantWorkbookBuilder.LIBRARY_NAME);
+            Object[][] library = entry.cells();
+            Object[][] sheetCard = namedRange(doc, BrinePlantWorkbookBuilder.NAME);
+            assertEquals(library.length, sheetCard.length, "rows of the named block");
+            for (int r = 0; r < library.length; r++) {
+                assertEquals(library[r].length, sheetCard[r].length, "columns of the named block, row " + (r + 1));
+                for (int c = 0; c < library[r].length; c++) {
+                    assertEquals(library[r][c], sheetCard[r][c], "card cell " + (r + 1) + "/" + (c + 1));
+                }
+            }
+            assertEquals("{=MIX.LIBRARYCARD(\"" + BrinePlantWorkbookBuilder.LIBRARY_NAME + "\")}",
+                    UnoRuntime.queryInterface(com.sun.star.sheet.XArrayFormulaRange.class, namedCells(doc,
+                            BrinePlantWorkbookBuilder.NAME)).getArrayFormula(),
+                    "the named block is exactly one MIX.LIBRARYCARD array formula (the office shows it in braces)");
+            XSpreadsheet cardSheet = sheet(doc, "Card");
+            Card card = CardReader.read(sheetCard);
+            assertEquals("sodium chloride", card.components().get(0).name());
+            assertEquals("water", card.components().get(1).name());
+            assertTrue(card.source().contains("Laliberté"), card.source());
+            assertEquals("Source (the card's own 'source' row): " + card.source(),
+                    text(cardSheet.getCellByPosition(0, BrinePlantWorkbookBuilder.SOURCE_ROW)),
+                    "the note under the banner reads the card's own source row");
+            assertTrue(text(cardSheet.getCellByPosition(0, BrinePlantWorkbookBuilder.OUTSIDE_CHECK_ROW))
+                    .endsWith(": " + entry.check()), "the library's outside check for the card");
+            assertEquals(CardLibrary.entries().size(), value(cardSheet, 1,
+                    BrinePlantWorkbookBuilder.LIBRARY_COUNT_ROW), 0.0, "cards in the library");
+            assertEquals("OK", text(cardSheet.getCellByPosition(1, BrinePlantWorkbookBuilder.CHECK_ROW)),
+                    "MIX.CHECK of the library card");
+
+            XSpreadsheet m = sheet(doc, "Make-up");
+            Extrapolation e = Extrapolation.AS_CARD;
+            double strength = value(m, 1, BrinePlantWorkbookBuilder.STRENGTH_ROW);
+            double litres = value(m, 1, BrinePlantWorkbookBuilder.VOLUME_ROW);
+            double t = value(m, 1, BrinePlantWorkbookBuilder.TEMPERATURE_ROW);
+            CompositionBasis pct = BlendFunctions.basis(card, "%w/w", Double.NaN, BlendFunctions.DEFAULT_BALANCE);
+            double[] target = BlendFunctions.binary(card, strength, pct);
+            double[] kg = BlendFunctions.recipe(card, litres, "L", t, target, pct, null, null, e);
+            assertClose(kg[0], value(m, 1, BrinePlantWorkbookBuilder.SALT_ROW), "MIX.RECIPE salt, kg");
+            assertClose(kg[1], value(m, 1, BrinePlantWorkbookBuilder.WATER_ROW), "MIX.RECIPE water, kg");
+            // the recipe's definition: the masses are in the target's proportion and fill the target volume
+            assertEquals(strength, 100 * kg[0] / (kg[0] + kg[1]), 1e-9, "the recipe has the target strength");
+            double volume = value(m, 1, BrinePlantWorkbookBuilder.BATCH_VOLUME_ROW);
+            assertClose(BlendFunctions.batch(card, kg, "kg", null, t, "volume", "L", e), volume, "MIX.BATCH volume");
+            assertEquals(litres, volume, 1e-9 * litres, "the charge dissolves to the target volume");
+            double density = value(m, 1, BrinePlantWorkbookBuilder.DENSITY_ROW);
+            assertClose(BlendFunctions.batch(card, kg, "kg", null, t, "density", null, e), density,
+                    "MIX.BATCH density");
+            assertEquals((kg[0] + kg[1]) / (litres / 1000), density, 1e-9 * density, "density is mass over volume");
+
+            // the check by density
+            double sampleT = value(m, 1, BrinePlantWorkbookBuilder.SAMPLE_T_ROW);
+            double[] x = BlendFunctions.convert(card, target, pct, CompositionBasis.moleFraction(), e);
+            double expected = value(m, 1, BrinePlantWorkbookBuilder.EXPECTED_ROW);
+            assertClose(CardFunctions.density(card, x, sampleT, e), expected, "MIX.DENSITY of the target");
+            assertEquals(strength, BlendFunctions.fromDensity(card, expected, sampleT, 0, null, Double.NaN, Double.NaN,
+                    pct, e), 1e-6, "the expected reading gives the target back");
+            double reading = value(m, 1, BrinePlantWorkbookBuilder.READING_ROW);
+            double implied = value(m, 1, BrinePlantWorkbookBuilder.IMPLIED_ROW);
+            assertClose(BlendFunctions.fromDensity(card, reading, sampleT, 0, null, Double.NaN, Double.NaN, pct, e),
+                    implied, "MIX.FROMDENSITY of the reading");
+            assertTrue(reading < expected && implied < strength, "the shipped reading shows a weak batch: "
+                    + implied);
+            assertEquals(implied - strength, value(m, 1, BrinePlantWorkbookBuilder.SHORT_ROW), 1e-12, "short by");
+            double mass = kg[0] + kg[1];
+            double[] now = {mass * implied / 100, mass * (1 - implied / 100)};
+            double add = value(m, 1, BrinePlantWorkbookBuilder.ADD_SALT_ROW);
+            assertClose(((double[]) BlendFunctions.adjust(card, now, "kg", null, target, pct, t, null, Double.NaN,
+                    null, null, null, e))[0], add, "MIX.ADJUST salt to add");
+            assertEquals(strength, 100 * (now[0] + add) / (mass + add), 1e-9, "the salt added reaches the target");
+
+            // the table: one MIX.DENSITY array formula per temperature
+            for (int k = 0; k < BrinePlantWorkbookBuilder.TABLE_T.length; k++) {
+                int c = BrinePlantWorkbookBuilder.STRENGTH_COL + 1 + k;
+                double tk = value(m, c, BrinePlantWorkbookBuilder.TABLE_T_ROW);
+                for (int i = 0; i < BrinePlantWorkbookBuilder.TABLE_ROWS; i++) {
+                    int r = BrinePlantWorkbookBuilder.TABLE_FIRST + i;
+                    double w = value(m, BrinePlantWorkbookBuilder.STRENGTH_COL, r);
+                    double[] xi = BlendFunctions.convert(card, BlendFunctions.binary(card, w, pct), pct,
+                            CompositionBasis.moleFraction(), e);
+                    assertClose(CardFunctions.density(card, xi, tk, e), value(m, c, r), "density at " + w + " % w/w, "
+                            + tk + " °C");
+                }
+            }
+
+            // the refusals in words are the core's own
+            String pure = text(m.getCellByPosition(0, BrinePlantWorkbookBuilder.PURE_SALT_ROW + 1));
+            MiscelaException noPure = assertThrows(MiscelaException.class,
+                    () -> CardFunctions.pureDensity(card, 0, t, e));
+            assertTrue(pure.contains(noPure.getMessage()) && pure.contains("no pure-liquid density"), pure);
+            String strong = text(m.getCellByPosition(0, BrinePlantWorkbookBuilder.TOO_STRONG_ROW + 1));
+            double[] tooStrong = BlendFunctions.convert(card, BlendFunctions.binary(card,
+                    BrinePlantWorkbookBuilder.TOO_STRONG, pct), pct, CompositionBasis.moleFraction(),
+                    Extrapolation.ALLOW);
+            MiscelaException outside = assertThrows(MiscelaException.class,
+                    () -> CardFunctions.density(card, tooStrong, t, e));
+            assertTrue(strong.contains(outside.getMessage()) && strong.contains("outside the card's validity range"),
+                    strong);
+
+            Object charts = UnoRuntime.queryInterface(XTableChartsSupplier.class, m).getCharts();
+            assertTrue(UnoRuntime.queryInterface(XNameAccess.class, charts).hasByName(
+                    BrinePlantWorkbookBuilder.CHART_NAME), "the chart of the table is on sheet Make-up");
+        } finally {
+            close(doc);
+        }
+    }
+
     private static double path(Card card, int[] order, double[] amounts, double[] feeds,
             TemperaturePath.Output output, int steps, double vessel, double removed, double limit) {
         return (Double) CardFunctions.temperaturePath(card, order, amounts, AmountBasis.KG, feeds,
@@ -675,11 +790,14 @@ class ExamplesIT {
     }
 
     private static Object[][] namedRange(XComponent doc, String name) throws Exception {
+        return UnoRuntime.queryInterface(XCellRangeData.class, namedCells(doc, name)).getDataArray();
+    }
+
+    private static com.sun.star.table.XCellRange namedCells(XComponent doc, String name) throws Exception {
         XPropertySet dp = UnoRuntime.queryInterface(XPropertySet.class, doc);
         Object range = UnoRuntime.queryInterface(XNameAccess.class, dp.getPropertyValue("NamedRanges"))
                 .getByName(name);
-        return UnoRuntime.queryInterface(XCellRangeData.class, UnoRuntime.queryInterface(XCellRangeReferrer.class,
-                range).getReferredCells()).getDataArray();
+        return UnoRuntime.queryInterface(XCellRangeReferrer.class, range).getReferredCells();
     }
 
     private static XSpreadsheet sheet(XComponent doc, String name) throws Exception {

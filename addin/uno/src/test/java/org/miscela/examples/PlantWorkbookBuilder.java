@@ -1,6 +1,5 @@
 package org.miscela.examples;
 
-import static org.miscela.examples.ExampleWorkbooks.CAUTION_COLOUR;
 import static org.miscela.examples.ExampleWorkbooks.INPUT_COLOUR;
 import static org.miscela.examples.ExampleWorkbooks.INVENTED_COLOUR;
 import static org.miscela.examples.ExampleWorkbooks.array;
@@ -139,12 +138,7 @@ public final class PlantWorkbookBuilder {
             "These are model estimates with the card's fit error. Site procedures, local codes, safety data sheets "
                     + "and licensed practice take precedence over anything this workbook computes.",
         };
-        for (int i = 0; i < cautions.length; i++) {
-            String range = "A" + (3 + i) + ":K" + (3 + i);
-            fitted(s, range, 2 + i, cautions[i], WIDE_MM);
-            band(s, range, CAUTION_COLOUR);
-        }
-        bold(s, "A3:A4", 10);
+        ExampleWorkbooks.cautions(s, "K", WIDE_MM, 2, cautions);
 
         // the batch
         tableHead(s, 6, "The batch in tank T-3 (change the blue cells)");
