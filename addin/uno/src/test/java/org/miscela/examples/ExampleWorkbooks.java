@@ -475,6 +475,15 @@ final class ExampleWorkbooks {
      * and kept at the foot of the plot even when the values are negative.
      */
     static void moleFractionAxis(com.sun.star.chart.XDiagram d, String title, int numberFormat) throws Exception {
+        fixedXAxis(d, title, 1.0, 0.2, numberFormat);
+    }
+
+    /**
+     * The x axis of an XY chart: titled, fixed from 0 to {@code max} in steps of {@code step} with the given number
+     * format, and kept at the foot of the plot even when the values are negative.
+     */
+    static void fixedXAxis(com.sun.star.chart.XDiagram d, String title, double max, double step, int numberFormat)
+            throws Exception {
         com.sun.star.chart.XAxisXSupplier xs = com.sun.star.uno.UnoRuntime.queryInterface(
                 com.sun.star.chart.XAxisXSupplier.class, d);
         com.sun.star.uno.UnoRuntime.queryInterface(com.sun.star.beans.XPropertySet.class, xs.getXAxisTitle())
@@ -484,8 +493,8 @@ final class ExampleWorkbooks {
         xAxis.setPropertyValue("AutoMax", Boolean.FALSE);
         xAxis.setPropertyValue("AutoStepMain", Boolean.FALSE);
         xAxis.setPropertyValue("Min", 0.0);
-        xAxis.setPropertyValue("Max", 1.0);
-        xAxis.setPropertyValue("StepMain", 0.2);
+        xAxis.setPropertyValue("Max", max);
+        xAxis.setPropertyValue("StepMain", step);
         xAxis.setPropertyValue("LinkNumberFormatToSource", Boolean.FALSE);
         xAxis.setPropertyValue("NumberFormat", numberFormat);
         xAxis.setPropertyValue("CrossoverPosition", com.sun.star.chart.ChartAxisPosition.START);

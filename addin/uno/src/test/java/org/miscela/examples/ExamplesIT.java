@@ -754,7 +754,7 @@ class ExamplesIT {
                 Extrapolation.ALLOW, output, steps, vessel, removed, false, limit);
     }
 
-    private static XComponent open(Office office, String file) throws Exception {
+    static XComponent open(Office office, String file) throws Exception {
         Path wb = ExampleWorkbooks.repoRoot().resolve("examples").resolve(file);
         XComponent doc = office.load(office.stage(wb));
         recalculate(doc);
@@ -789,24 +789,24 @@ class ExamplesIT {
         return doc;
     }
 
-    private static Object[][] namedRange(XComponent doc, String name) throws Exception {
+    static Object[][] namedRange(XComponent doc, String name) throws Exception {
         return UnoRuntime.queryInterface(XCellRangeData.class, namedCells(doc, name)).getDataArray();
     }
 
-    private static com.sun.star.table.XCellRange namedCells(XComponent doc, String name) throws Exception {
+    static com.sun.star.table.XCellRange namedCells(XComponent doc, String name) throws Exception {
         XPropertySet dp = UnoRuntime.queryInterface(XPropertySet.class, doc);
         Object range = UnoRuntime.queryInterface(XNameAccess.class, dp.getPropertyValue("NamedRanges"))
                 .getByName(name);
         return UnoRuntime.queryInterface(XCellRangeReferrer.class, range).getReferredCells();
     }
 
-    private static XSpreadsheet sheet(XComponent doc, String name) throws Exception {
+    static XSpreadsheet sheet(XComponent doc, String name) throws Exception {
         return UnoRuntime.queryInterface(XSpreadsheet.class,
                 UnoRuntime.queryInterface(XSpreadsheetDocument.class, doc).getSheets().getByName(name));
     }
 
     /** A formula cell's numeric result, failing on an error result. */
-    private static double value(XSpreadsheet s, int c, int r) throws Exception {
+    static double value(XSpreadsheet s, int c, int r) throws Exception {
         XCell cell = s.getCellByPosition(c, r);
         assertEquals(0, cell.getError(), "cell " + (char) ('A' + c) + (r + 1) + " has no error");
         return cell.getValue();
@@ -828,19 +828,19 @@ class ExamplesIT {
         return v;
     }
 
-    private static void assertClose(double expected, double actual, String what) {
+    static void assertClose(double expected, double actual, String what) {
         assertEquals(expected, actual, RELATIVE * Math.max(1.0, Math.abs(expected)), what);
     }
 
-    private static String text(XCell c) {
+    static String text(XCell c) {
         return UnoRuntime.queryInterface(XText.class, c).getString();
     }
 
-    private static void recalculate(XComponent doc) {
+    static void recalculate(XComponent doc) {
         UnoRuntime.queryInterface(XCalculatable.class, doc).calculateAll();
     }
 
-    private static void close(XComponent doc) {
+    static void close(XComponent doc) {
         try {
             UnoRuntime.queryInterface(XCloseable.class, doc).close(true);
         } catch (Exception e) {
