@@ -263,7 +263,8 @@ public final class AqueousCardFitter {
         }
         return b.row("valid temperature", String.format(Locale.ROOT, "%.1f", s.celsius - 0.5),
                         String.format(Locale.ROOT, "%.1f", s.celsius + 0.5))
-                .row("valid mole fraction", s.name, "0", Math.floor(moleFraction(s, wMax) * 1e9) / 1e9)
+                // rounded up, so the table's last strength itself is inside
+                .row("valid mole fraction", s.name, "0", Math.ceil(moleFraction(s, wMax) * 1e9) / 1e9)
                 .row("extrapolation", "refuse")
                 .text();
     }

@@ -124,6 +124,11 @@ final class Explanations {
         add("packCard", (a, p) -> a.packCard(r(p[0])));
         add("libraryList", (a, p) -> a.libraryList(p[0]));
         add("libraryCard", (a, p) -> a.libraryCard(r(p[0])));
+        add("activityCoefficient", (a, p) -> a.activityCoefficient(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5],
+                p[6]));
+        add("bubblePressure", (a, p) -> a.bubblePressure(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
+        add("vapourFraction", (a, p) -> a.vapourFraction(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5], p[6]));
+        add("bubblePoint", (a, p) -> a.bubblePoint(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
     }
 
     private Explanations() {

@@ -14,6 +14,7 @@ import org.miscela.core.library.CardLibrary;
 import org.miscela.core.functions.CheckOutput;
 import org.miscela.core.functions.FitFunctions;
 import org.miscela.core.functions.FitOutput;
+import org.miscela.core.functions.PhaseFunctions;
 import org.miscela.core.functions.TemperaturePath;
 import org.miscela.core.blend.BlendFunctions;
 import org.miscela.core.blend.CompositionBasis;
@@ -623,6 +624,63 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             return Arguments.table(CardLibrary.find(Arguments.text("card's name", Arguments.value(name), "")).cells());
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "libraryCard");
+        }
+    }
+
+    @Override
+    public Object activityCoefficient(Object[][] card, Object[][] component, Object[][] moleFraction,
+            Object[][] temperature, Object extrapolate, Object basis, Object basisTemperature)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int i = Arguments.component(c, Arguments.value(component));
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return BasisArguments.overCompositions(c, moleFraction, temperature, BasisArguments.basis(c, basis,
+                    basisTemperature), e, (k, x, t) -> PhaseFunctions.activityCoefficient(k, i, x, t, e));
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "activityCoefficient");
+        }
+    }
+
+    @Override
+    public Object bubblePressure(Object[][] card, Object[][] moleFraction, Object[][] temperature,
+            Object extrapolate, Object basis, Object basisTemperature) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return BasisArguments.overCompositions(c, moleFraction, temperature, BasisArguments.basis(c, basis,
+                    basisTemperature), e, (k, x, t) -> PhaseFunctions.bubblePressure(k, x, t, e));
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "bubblePressure");
+        }
+    }
+
+    @Override
+    public Object vapourFraction(Object[][] card, Object[][] component, Object[][] moleFraction,
+            Object[][] temperature, Object extrapolate, Object basis, Object basisTemperature)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int i = Arguments.component(c, Arguments.value(component));
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return BasisArguments.overCompositions(c, moleFraction, temperature, BasisArguments.basis(c, basis,
+                    basisTemperature), e, (k, x, t) -> PhaseFunctions.vapourFraction(k, i, x, t, e));
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "vapourFraction");
+        }
+    }
+
+    @Override
+    public Object bubblePoint(Object[][] card, Object[][] moleFraction, Object[][] pressure, Object extrapolate,
+            Object basis, Object basisTemperature) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            // the pressures pair with the compositions as temperatures do elsewhere
+            return BasisArguments.overCompositions(c, moleFraction, pressure, BasisArguments.basis(c, basis,
+                    basisTemperature), e, (k, x, p) -> PhaseFunctions.bubblePoint(k, x, p, e));
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "bubblePoint");
         }
     }
 

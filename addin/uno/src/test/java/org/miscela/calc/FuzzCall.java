@@ -247,9 +247,23 @@ final class FuzzCall {
                 }
                 case "partialMolarVolume":
                 case "partialExcessMolarVolume":
-                case "partialExcessEnthalpy": {
+                case "partialExcessEnthalpy":
+                case "activityCoefficient":
+                case "vapourFraction": {
                     Object[][] x = composition();
                     a = new Object[] {component(), x, temperature(x), extrapolate()};
+                    break;
+                }
+                case "bubblePressure": {
+                    Object[][] x = composition();
+                    a = new Object[] {x, temperature(x), extrapolate()};
+                    break;
+                }
+                case "bubblePoint": {
+                    Object[][] x = composition();
+                    // pressures in the card's unit, whatever it is: a spread that sometimes meets a bubble point
+                    a = new Object[] {x, clean ? new Object[][] {{pick(1.0, 10.0, 101.325, 1000.0)}}
+                        : new Object[][] {{pick(0.0, -1.0, 1e300, Double.NaN, "", junk(), 50.0)}}, extrapolate()};
                     break;
                 }
                 case "pureDensity": {
@@ -444,6 +458,10 @@ final class FuzzCall {
                 case "insideValidity":
                 case "traceEvaluation":
                 case "uncertainty":
+                case "activityCoefficient":
+                case "vapourFraction":
+                case "bubblePressure":
+                case "bubblePoint":
                 case "mixtureMolarMass": {
                     Object[] out = java.util.Arrays.copyOf(a, a.length + 2);
                     out[a.length] = clean ? pick(Any.VOID, Any.VOID, "mole fraction", "mass fraction", "w")

@@ -25,7 +25,8 @@ import org.miscela.core.card.TestCards;
 class ReferenceExamplesIT {
     /** The cards the examples name, as listed in the reference's introduction. */
     static final String[][] CARDS = {{"card", "ethanol-water-oiml.tsv"}, {"tern", "ternary-invented.tsv"},
-        {"acid", "sulfuric-acid-water-nbs.tsv"}, {"cov", "ethanol-water-covariance.tsv"}};
+        {"acid", "sulfuric-acid-water-nbs.tsv"}, {"cov", "ethanol-water-covariance.tsv"},
+        {"vle", "ethanol-water-vle.tsv"}};
 
     @Test
     void everyExampleShowsItsPrintedValue(Office office) throws Exception {

@@ -1,5 +1,6 @@
 package org.miscela.core.card;
 
+import org.miscela.core.model.VapourPressure;
 import org.miscela.core.model.BoilingCurve;
 import org.miscela.core.model.Component;
 import org.miscela.core.model.DensityModelVolume;
@@ -42,6 +43,12 @@ public final class Card {
     private final MixtureDensityModel densityModel;
     /** The excess volume: the Redlich–Kister section, the one the density model implies, or null. */
     private final ExcessModel volumeModel;
+    /** G^E/RT (dimensionless) as Redlich–Kister sets, or null. */
+    private final ExcessFunction excessGibbs;
+    /** Each component's vapour pressure, null where the card gives none; null when it gives none at all. */
+    private final VapourPressure[] vapourPressures;
+    /** The unit of pressures on the card and in the functions, or null when the card states none. */
+    private final Units.Pressure pressureUnit;
 
     /**
      * 20 °C, the temperature at which alcoholic strength by volume is defined (OIML R 22 (1975)), used for every
@@ -64,7 +71,7 @@ public final class Card {
             ExcessFunction excessEnthalpy, Validity validity, boolean extrapolationAllowed,
             boolean missingPairsIdeal) {
         this(title, source, units, components, excessVolume, excessEnthalpy, validity, extrapolationAllowed,
-                missingPairsIdeal, Double.NaN, null, null, null);
+                missingPairsIdeal, Double.NaN, null, null, null, null);
     }
 
     /**
@@ -72,11 +79,12 @@ public final class Card {
      * @param solutionHeatCapacity the solution heat-capacity model the card states, or null
      * @param boiling the boiling temperatures the card states, or null
      * @param densityModel the mixture-density model the card states (then {@code excessVolume} is null), or null
+     * @param phase the phase-equilibrium data, or null
      */
     Card(String title, String source, Units units, List<Component> components, ExcessFunction excessVolume,
             ExcessFunction excessEnthalpy, Validity validity, boolean extrapolationAllowed,
             boolean missingPairsIdeal, double statedBasisReferenceKelvin, SolutionHeatCapacity solutionHeatCapacity,
-            BoilingCurve boiling, MixtureDensityModel densityModel) {
+            BoilingCurve boiling, MixtureDensityModel densityModel, PhaseData phase) {
         this.title = title;
         this.source = source;
         this.units = units;
@@ -90,6 +98,9 @@ public final class Card {
         this.solutionHeatCapacity = solutionHeatCapacity;
         this.boiling = boiling;
         this.densityModel = densityModel;
+        this.excessGibbs = phase == null ? null : phase.gibbs;
+        this.vapourPressures = phase == null || phase.vapour == null ? null : phase.vapour.clone();
+        this.pressureUnit = phase == null ? null : phase.pressure;
         if (densityModel != null && excessVolume != null) {
             throw new IllegalArgumentException("a card states its volumes one way");
         }
@@ -197,6 +208,34 @@ public final class Card {
     /** The boiling temperatures the card states, or null when it states none. */
     public BoilingCurve boiling() {
         return boiling;
+    }
+
+    /** What a card states about phase equilibrium: G^E/RT, vapour pressures, the pressure unit (each may be null). */
+    static final class PhaseData {
+        final ExcessFunction gibbs;
+        final VapourPressure[] vapour;
+        final Units.Pressure pressure;
+
+        PhaseData(ExcessFunction gibbs, VapourPressure[] vapour, Units.Pressure pressure) {
+            this.gibbs = gibbs;
+            this.vapour = vapour;
+            this.pressure = pressure;
+        }
+    }
+
+    /** G^E/RT of the liquid as Redlich–Kister sets (dimensionless), or null when the card gives none. */
+    public ExcessFunction excessGibbs() {
+        return excessGibbs;
+    }
+
+    /** Component k's vapour pressure, or null when the card gives none for it. */
+    public VapourPressure vapourPressure(int k) {
+        return vapourPressures == null ? null : vapourPressures[k];
+    }
+
+    /** The card's pressure unit, or null when it states none. */
+    public Units.Pressure pressureUnit() {
+        return pressureUnit;
     }
 
     /** Whether component k's pure liquid is only a limit of the card's mixture-density model (a dissolved salt). */

@@ -21,6 +21,9 @@ import static org.miscela.core.card.CardLabels.TEMPERATURE_UNIT;
 import static org.miscela.core.card.CardLabels.TITLE;
 import static org.miscela.core.card.CardReader.normalise;
 
+import org.miscela.core.model.AntoineVapourPressure;
+import org.miscela.core.model.VapourPressure;
+import org.miscela.core.model.WagnerVapourPressure;
 import org.miscela.core.model.ApparentVolumeDensity;
 import org.miscela.core.model.Component;
 import org.miscela.core.model.Dippr105Density;
@@ -147,7 +150,8 @@ final class CardBuilder {
         GeometricModel model = model(subjects, asymmetric);
         boolean missingIdeal = choice(MISSING_PAIRS, "ideal", "refuse") || pureOnly;
         // A card may describe enthalpy alone; then the volumetric functions refuse rather than guess.
-        boolean enthalpyOnly = rows.hasSection(EXCESS_ENTHALPY) && !rows.hasSection(EXCESS_VOLUME);
+        boolean enthalpyOnly = !rows.hasSection(EXCESS_VOLUME) && (rows.hasSection(EXCESS_ENTHALPY)
+                || rows.hasSection(CardLabels.EXCESS_GIBBS));
         if (mixtureDensity != null && rows.hasSection(EXCESS_VOLUME)) {
             throw Problem.VOLUME_STATED_TWICE.raise(mixtureDensity.modelName());
         }
@@ -174,8 +178,74 @@ final class CardBuilder {
             }
             basisReferenceKelvin = kelvin;
         }
+        ExcessFunction gibbs = rows.hasSection(CardLabels.EXCESS_GIBBS) ? section(CardLabels.EXCESS_GIBBS, 1.0,
+                subjects, model, asymmetric[0], missingIdeal) : null;
+        Units.Pressure pressure = rows.global(CardLabels.PRESSURE_UNIT) != null
+                ? unit(CardLabels.PRESSURE_UNIT, Units.Pressure.class) : null;
+        VapourPressure[] vapour = vapourPressures(names, pressure);
         return new Card(title, source, units, components, volume, enthalpy, validity, allow, missingIdeal,
-                basisReferenceKelvin, solutionHeatCapacity(names, masses), boilingCurve(names), mixtureDensity);
+                basisReferenceKelvin, solutionHeatCapacity(names, masses), boilingCurve(names), mixtureDensity,
+                new Card.PhaseData(gibbs, vapour, pressure));
+    }
+
+    /**
+     * Each component's 'vapour pressure' row: the form, then its constants in the card's temperature and pressure
+     * units, then optionally the lowest and highest temperature they hold for; null when the card has no such row.
+     * 'Antoine': A, B, C of log10(p) = A − B/(C + t). 'Wagner 3-6' (six coefficients) and 'Wagner 2.5-5' (four): T_c and
+     * p_c, then a_1 … of ln(p/p_c) = (T_c/T)·Σ a_i·τ^e_i, τ = 1 − T/T_c.
+     */
+    private VapourPressure[] vapourPressures(List<String> names, Units.Pressure pressure) {
+        Map<String, CardRow> byComponent = rows.keyed(CardLabels.VAPOUR_PRESSURE);
+        if (byComponent.isEmpty()) {
+            return null;
+        }
+        if (pressure == null) {
+            throw Problem.MISSING_ROW.raise(CardLabels.PRESSURE_UNIT);
+        }
+        Units.Temperature tu = units.temperature();
+        // t = perKelvin·T + offset in the card's temperature unit
+        double offset = tu.fromKelvin(0.0);
+        double perKelvin = tu.fromKelvin(1.0) - offset;
+        String forms = AntoineVapourPressure.NAME + ", " + WagnerVapourPressure.NAME_3_6 + ", "
+                + WagnerVapourPressure.NAME_2_5;
+        VapourPressure[] out = new VapourPressure[names.size()];
+        for (int k = 0; k < names.size(); k++) {
+            CardRow r = byComponent.get(normalise(names.get(k)));
+            if (r == null) {
+                continue;
+            }
+            String form = r.text(1).trim();
+            int constants = sameKeyword(form, AntoineVapourPressure.NAME) ? 3
+                    : sameKeyword(form, WagnerVapourPressure.NAME_3_6) ? 8
+                    : sameKeyword(form, WagnerVapourPressure.NAME_2_5) ? 6 : -1;
+            if (constants < 0) {
+                throw Problem.BAD_KEYWORD.raise(r.number, r.label, form, forms);
+            }
+            double[] v = r.numbersFrom(2);
+            if (v.length != constants && v.length != constants + 2) {
+                throw Problem.MODEL_VALUES.raise(r.number, r.label, form, constants + " constants, then optionally "
+                        + "the lowest and highest temperature they hold for", "found " + v.length + " value(s)");
+            }
+            double lo = v.length > constants ? tu.toKelvin(v[constants]) : Double.NEGATIVE_INFINITY;
+            double hi = v.length > constants ? tu.toKelvin(v[constants + 1]) : Double.POSITIVE_INFINITY;
+            if (v.length > constants && !(hi > lo)) {
+                throw Problem.MODEL_VALUES.raise(r.number, r.label, form, "a lowest temperature below the highest",
+                        "found " + Numbers.show(v[constants]) + " and " + Numbers.show(v[constants + 1]));
+            }
+            if (constants == 3) {
+                out[k] = new AntoineVapourPressure(v[0], v[1], v[2], perKelvin, offset, pressure.toPascal(1.0), lo,
+                        hi);
+            } else {
+                double tc = tu.toKelvin(v[0]);
+                double pc = pressure.toPascal(v[1]);
+                if (!(tc > 0) || !(pc > 0)) {
+                    throw Problem.NOT_POSITIVE.raise(r.number, r.label, "the critical temperature (in kelvin) and "
+                            + "pressure", Numbers.show(tc) + " K and " + Numbers.show(pc) + " Pa");
+                }
+                out[k] = new WagnerVapourPressure(tc, pc, java.util.Arrays.copyOfRange(v, 2, constants), lo, hi);
+            }
+        }
+        return out;
     }
 
     /**

@@ -45,27 +45,31 @@ final class CardLabels {
     static final int MIXTURE_DENSITY_TERMS = 10;
     static final String APPARENT_DENSITY = "apparent density";
     static final String CARD_SIZE = "card size";
+    static final String EXCESS_GIBBS = "excess gibbs energy";
+    static final String PRESSURE_UNIT = "pressure unit";
+    static final String VAPOUR_PRESSURE = "vapour pressure";
 
     /**
      * Rows of an excess-property section: binary coefficients A0..A99 (group 2), ternary C0..C9 (group 3; only C0..C2
      * exist), the reference temperature (group 4) and the covariance (group 5); group 1 is the section's prefix.
      */
     private static final Pattern SECTION_ROW = Pattern.compile(
-            "(excess volume|excess enthalpy) (?:a(\\d{1,2})|ternary c(\\d)|(reference temperature)|(covariance))");
+            "(excess volume|excess enthalpy|excess gibbs energy) (?:a(\\d{1,2})|ternary c(\\d)|(reference temperature)|"
+                    + "(covariance))");
 
     /** Rows whose values start in column 2. */
     private static final String[] GLOBAL = {TITLE, SOURCE, TEMPERATURE_UNIT, DENSITY_UNIT, MOLAR_VOLUME_UNIT,
         MOLAR_MASS_UNIT, VALID_TEMPERATURE, EXTRAPOLATION, MODEL, MISSING_PAIRS, ENTHALPY_UNIT, COMPONENT_ORDER, BASIS_REFERENCE,
-        SOLVENT, MIXTURE_DENSITY_REFERENCE, CARD_SIZE};
+        SOLVENT, MIXTURE_DENSITY_REFERENCE, CARD_SIZE, PRESSURE_UNIT};
     /** Rows whose column 2 names a component (or a pair) and whose values follow. */
     private static final String[] KEYED = {COMPONENT, DENSITY_MODEL, DENSITY_REFERENCE, DENSITY_COEFFICIENTS,
         VALID_MOLE_FRACTION, HEAT_CAPACITY, HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION,
-        SOLUTION_HEAT_CAPACITY, BOILING, APPARENT_DENSITY};
+        SOLUTION_HEAT_CAPACITY, BOILING, APPARENT_DENSITY, VAPOUR_PRESSURE};
     /** Labels of version 2 beyond the excess-enthalpy and ternary rows. */
     private static final String[] VERSION_2 = {MODEL, MISSING_PAIRS, ENTHALPY_UNIT, HEAT_CAPACITY,
         EXCESS_VOLUME + " covariance", HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION,
         COMPONENT_ORDER, BASIS_REFERENCE, SOLUTION_HEAT_CAPACITY, SOLVENT, BOILING, MIXTURE_DENSITY_REFERENCE,
-        APPARENT_DENSITY, CARD_SIZE};
+        APPARENT_DENSITY, CARD_SIZE, PRESSURE_UNIT, VAPOUR_PRESSURE};
     /** Keyed rows whose subject is a pair "a + b" rather than one component. */
     private static final String[] PAIR_KEYED = {VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION};
 
@@ -97,6 +101,7 @@ final class CardLabels {
     /** Labels added in version 2: a version 1 card promised never to contain them. */
     static boolean isVersion2(String key) {
         return among(key, VERSION_2) || mixtureDensityTerm(key) >= 0 || key.startsWith(EXCESS_ENTHALPY + " ")
+                || key.startsWith(EXCESS_GIBBS + " ")
                 || key.startsWith(EXCESS_VOLUME + " ternary");
     }
 

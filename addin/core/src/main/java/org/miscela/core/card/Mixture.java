@@ -205,6 +205,47 @@ public final class Mixture {
         return v;
     }
 
+    /** ln γ_k for every k into {@code out} (the partial molar quantities of G^E/RT); returns G^E/RT. */
+    public double logActivityCoefficients(double[] x, double kelvin, double[] out) {
+        return gibbs().partials(x, kelvin, false, out);
+    }
+
+    /** Component k's vapour pressure in Pa; fails with a readable message when the card gives none. */
+    public double vapourPressure(int k, double kelvin) {
+        org.miscela.core.model.VapourPressure p = card.vapourPressure(k);
+        if (p == null) {
+            throw Problem.NO_VAPOUR_PRESSURE.raise(card.components().get(k).name());
+        }
+        return p.pascal(kelvin);
+    }
+
+    /**
+     * The bubble pressure p = Σ x_k γ_k p_k* in Pa (modified Raoult's law: an ideal vapour, the liquid's volume
+     * neglected), each component's share x_k γ_k p_k* into {@code partial} when it is not null.
+     */
+    public double bubblePressure(double[] x, double kelvin, double[] partial) {
+        double[] lnGamma = new double[x.length];
+        logActivityCoefficients(x, kelvin, lnGamma);
+        double p = 0.0;
+        for (int k = 0; k < x.length; k++) {
+            double share = x[k] == 0.0 ? 0.0 : x[k] * Math.exp(lnGamma[k]) * vapourPressure(k, kelvin);
+            if (partial != null) {
+                partial[k] = share;
+            }
+            p += share;
+        }
+        return p;
+    }
+
+    /** The card's G^E/RT; fails with a readable message when the card has none. */
+    public ExcessFunction gibbs() {
+        ExcessFunction g = card.excessGibbs();
+        if (g == null) {
+            throw Problem.NO_GIBBS.raise();
+        }
+        return g;
+    }
+
     /** The card's excess enthalpy; fails with a readable message when the card has none. */
     public ExcessFunction enthalpy() {
         ExcessFunction h = card.excessEnthalpy();

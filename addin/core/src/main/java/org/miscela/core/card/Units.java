@@ -186,6 +186,43 @@ public final class Units {
         }
     }
 
+    /**
+     * Pressure units: the factor to Pa. Exact by definition (SI Brochure 2019; NIST SP 811 (2008), appendix B):
+     * 1 atm = 101 325 Pa, 1 bar = 10⁵ Pa, 1 Torr = 101 325/760 Pa, 1 mmHg (conventional, 13.5951 g/cm³ under
+     * standard gravity) = 133.322 387 415 Pa, 1 psi = 6 894.757 293 168 Pa (the avoirdupois pound-force per square
+     * inch).
+     */
+    public enum Pressure implements Spelled {
+        KPA("kPa", 1e3, "kPa"),
+        PA("Pa", 1.0, "Pa"),
+        MPA("MPa", 1e6, "MPa"),
+        BAR("bar", 1e5, "bar"),
+        MBAR("mbar", 100.0, "mbar", "hPa"),
+        ATM("atm", 101325.0, "atm"),
+        MMHG("mmHg", 133.322387415, "mmHg", "mm Hg"),
+        TORR("Torr", 101325.0 / 760.0, "Torr", "torr"),
+        PSI("psi", 6894.757293168, "psi", "psia", "lbf/in²", "lbf/in2");
+
+        private final Scale scale;
+
+        Pressure(String symbol, double factor, String... spellings) {
+            this.scale = new Scale(symbol, factor, spellings);
+        }
+
+        @Override
+        public Scale scale() {
+            return scale;
+        }
+
+        public double toPascal(double v) {
+            return v * scale.factor;
+        }
+
+        public double fromPascal(double v) {
+            return v / scale.factor;
+        }
+    }
+
     /** A unit with a display symbol and the spellings a card may use for it. */
     public interface Spelled {
         /** The unit's symbol, spellings, and its factor (and, for a temperature scale, offset) to internal units. */

@@ -99,6 +99,9 @@ public final class FunctionCatalog {
                     + "is refused: it would boil first.");
     private static final ArgumentInfo PER = optional("per", "per",
             "\"mol\" (left out): per mole of blend (or of the component); \"kg\": per kilogram of it.");
+    private static final ArgumentInfo PRESSURE = range("pressure", "pressure",
+            "Pressure in the card's pressure unit: one value, or one per composition (a column for a block, as x1 "
+                    + "for a range).");
     private static final ArgumentInfo BASIS = optional("basis", "basis",
             "The unit of the amounts: \"mol\" (left out), \"kmol\", \"g\", \"kg\", \"t\", \"lb\" or a mass weighed in "
                     + "air (\"kg (conventional)\"). Masses are converted with the card's molar masses.");
@@ -159,6 +162,8 @@ public final class FunctionCatalog {
             Problem.OUTSIDE_TEMPERATURE, Problem.OUTSIDE_COMPOSITION, Problem.OUTSIDE_PAIR_TEMPERATURE,
             Problem.OUTSIDE_PAIR_COMPOSITION, Problem.NON_PHYSICAL);
     private static final List<Problem> VOLUME_PROBLEMS = list(Problem.NO_VOLUME);
+    private static final List<Problem> VAPOUR_PROBLEMS = list(Problem.NO_GIBBS, Problem.NO_VAPOUR_PRESSURE,
+            Problem.OUTSIDE_VAPOUR_PRESSURE, Problem.NO_PRESSURE_UNIT);
     private static final List<Problem> COMPONENT_PROBLEMS = list(Problem.UNKNOWN_COMPONENT_ARG, Problem.ARG_NOT_SINGLE);
     private static final List<Problem> AMOUNT_PROBLEMS = list(Problem.ARG_BLANK, Problem.ARG_NOT_NUMBER,
             Problem.ARG_SHAPE, Problem.COMPOSITION_SHAPE,
@@ -621,7 +626,41 @@ public final class FunctionCatalog {
                     "=INDEX(MIX.LIBRARYCARD(\"NaCl\"); 1; 1)",
                     value("name", "name", "The card's name as MIX.LIBRARY lists it, or another it is known by "
                             + "(\"NaCl\"); case and extra spaces do not matter."))
-                    .shows("Miscela card").refuses(list(Problem.ARG_NOT_TEXT, Problem.UNKNOWN_LIBRARY_CARD))));
+                    .shows("Miscela card").refuses(list(Problem.ARG_NOT_TEXT, Problem.UNKNOWN_LIBRARY_CARD)),
+            new FunctionInfo("activityCoefficient", "MIX.ACTIVITY", "activity coefficient of a component in the liquid",
+                    "Activity coefficient γ of one component in the liquid blend, from the card's excess Gibbs "
+                            + "energy (G^E/RT as Redlich–Kister coefficients); 1 in an ideal solution.",
+                    "ln γ_k = ∂(n·G^E/RT)/∂n_k = g + ∂g/∂x_k − Σ_j x_j·∂g/∂x_j, g = G^E/RT",
+                    "=MIX.ACTIVITY(vle; \"ethanol\"; 0.1; 70)",
+                    CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("3.244").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
+                            COMPONENT_PROBLEMS, list(Problem.NO_GIBBS))),
+            new FunctionInfo("bubblePressure", "MIX.BUBBLEPRESSURE",
+                    "the blend's vapour pressure (bubble pressure) at a temperature, by modified Raoult's law",
+                    "Vapour pressure of the liquid blend at a temperature (its bubble pressure), in the card's pressure "
+                            + "unit, by modified Raoult's law: an ideal vapour, at low pressure.",
+                    "p = Σ_k x_k·γ_k·p_k*(T)",
+                    "=MIX.BUBBLEPRESSURE(vle; 0.1; 70)",
+                    CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("52.47").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS, VAPOUR_PROBLEMS)),
+            new FunctionInfo("vapourFraction", "MIX.VAPOURFRACTION",
+                    "mole fraction of a component in the vapour over the blend at its bubble point",
+                    "Mole fraction of one component in the first vapour over the liquid blend at a temperature (at its "
+                            + "bubble point), by modified Raoult's law.",
+                    "y_k = x_k·γ_k·p_k*(T) / Σ_j x_j·γ_j·p_j*(T)",
+                    "=MIX.VAPOURFRACTION(vle; \"ethanol\"; 0.1; 70)",
+                    CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("0.4474").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
+                            COMPONENT_PROBLEMS, VAPOUR_PROBLEMS)),
+            new FunctionInfo("bubblePoint", "MIX.BUBBLEPOINT",
+                    "the temperature at which the blend starts to boil at a pressure (its bubble point)",
+                    "Temperature at which the liquid blend starts to boil at a pressure (its bubble point), in the "
+                            + "card's temperature unit, by modified Raoult's law, searched within the card's range.",
+                    "Σ_k x_k·γ_k(T)·p_k*(T) = p, solved for T (Brent's method)",
+                    "=MIX.BUBBLEPOINT(vle; 0.1; 101.325)",
+                    CARD, MOLE_FRACTION, PRESSURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("85.97").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS, VAPOUR_PROBLEMS,
+                            list(Problem.NO_BUBBLE_POINT)))));
 
     private FunctionCatalog() {
     }

@@ -67,6 +67,9 @@ public final class FitFunctions {
             return new Object[][] {{CardFunctions.OK}};
         }
         Units u = pure.units();
+        if (pure.densityModel() != null) {
+            throw Problem.FIT_PURE_FROM_MODEL.raise(pure.densityModel().modelName());
+        }
         if (orderInT > 0 && Double.isNaN(reference)) {
             throw Problem.FIT_NEEDS_REFERENCE.raise();
         }

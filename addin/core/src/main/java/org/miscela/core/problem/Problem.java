@@ -149,6 +149,11 @@ public enum Problem {
     NO_ENTHALPY(CALL, "The card holds no excess enthalpy data: add an 'enthalpy unit' row and 'excess enthalpy A0' rows (see docs/card-format.md).", Advice.INSIDE_RANGE),
     NO_VOLUME(CALL, "The card holds no excess volume data (it describes enthalpy only), so it gives no volumes or densities: add 'excess volume A0' rows (see docs/card-format.md).", Advice.INSIDE_RANGE),
     PURE_HYPOTHETICAL(CALL, "The card's %s model describes %s only dissolved in %s, so it has no pure-liquid density or volume: give its amount by mass or moles, not as a volume or volume fraction of the pure liquid."),
+    NO_GIBBS(CALL, "The card gives no 'excess Gibbs energy' rows, so it gives no activity coefficients or vapour pressures of a blend: add 'excess Gibbs energy A0' rows (coefficients of G^E/RT, see docs/card-format.md).", Advice.INSIDE_RANGE),
+    NO_VAPOUR_PRESSURE(CALL, "The card gives no 'vapour pressure' row for %s; the blend's vapour pressure needs one for every component present.", Advice.INSIDE_RANGE),
+    OUTSIDE_VAPOUR_PRESSURE(CALL, "The temperature %s %s is outside the range %s to %s %s the vapour pressure constants of %s hold for.", Advice.EXTRAPOLATION),
+    NO_BUBBLE_POINT(CALL, "No temperature from %s to %s %s gives this blend a bubble pressure of %s %s: over that range it runs from %s to %s %s."),
+    NO_PRESSURE_UNIT(CALL, "The card states no 'pressure unit', the unit of the pressures this function takes and gives: add one (kPa, bar, atm, mmHg, …).", Advice.INSIDE_RANGE),
     NO_HEAT_CAPACITY(CALL, "The card gives no 'heat capacity' row for %s; the temperature rise needs the heat capacity of every component.", Advice.INSIDE_RANGE),
     NO_TEMPERATURE_ROOT(CALL, "No temperature between %s and %s K balances the heat of mixing; the card's heat capacities or excess enthalpy are not physical there."),
     OUTSIDE_PAIR_TEMPERATURE(CALL, "The temperature %s %s is outside the range %s to %s %s stated for the pair %s.", Advice.EXTRAPOLATION),
@@ -198,6 +203,7 @@ public enum Problem {
 
     // --- the fitting engine (point numbers count from 1, as a user reads rows)
     NO_POINTS(FIT, "No data points were given."),
+    FIT_PURE_FROM_MODEL(FIT, "The card given for the pure liquids states its density by a %s model, not by pure-liquid density rows, so coefficients fitted against it would fit no card: give the top of a card with a 'density model' row for each component."),
     LENGTH_MISMATCH(FIT, "There are %d %s but %d %s; give one of each per point."),
     RAGGED_DESIGN(FIT, "Row %d of the design has %d column(s) but row 1 has %d."),
     NO_PARAMETERS(FIT, "The design has no column: a fit needs at least one parameter."),

@@ -147,7 +147,7 @@ public class CardFormatDocTest {
     @Test
     void examplesBehaveAsDescribed() throws IOException {
         List<Example> examples = examples(lines());
-        assertEquals(11, examples.size());
+        assertEquals(12, examples.size());
         Card one = CardReader.read(examples.get(0).cells);
         // "the functions refuse x1 above 0.9 unless extrapolation is allowed"
         assertEquals(CardFunctions.OK, CardFunctions.check(one, 0.0, T, Extrapolation.AS_CARD));
@@ -233,6 +233,20 @@ public class CardFormatDocTest {
         assertEquals(1.6 * 46.07 / Math.pow(0.27, 1 + Math.pow(tau, 0.23)),
                 CardFunctions.pureDensity(eleven, 0, 20, Extrapolation.AS_CARD), 1e-9);
         assertEquals(996.0, CardFunctions.pureDensity(eleven, 1, 30, Extrapolation.AS_CARD), 0.0);
+
+        // Example 12: ln γ1 = x2²·(A0 + A1·(4·x1 − 1)) for a two-term expansion; p = Σ x γ p*; no volumes.
+        Card twelve = CardReader.read(examples.get(11).cells);
+        double[] x12 = {0.3, 0.7};
+        assertEquals(Math.exp(0.49 * (1.2 - 0.3 * 0.2)), org.miscela.core.functions.PhaseFunctions
+                .activityCoefficient(twelve, 0, x12, 50, Extrapolation.AS_CARD), 1e-12);
+        double p1 = Math.pow(10, 7.2 - 1600 / 275.0);
+        double p2 = Math.pow(10, 7.1 - 1690 / 280.0);
+        double g1 = Math.exp(0.49 * (1.2 - 0.3 * 0.2));
+        double g2 = Math.exp(0.09 * (1.2 - 0.3 * (4 * 0.3 - 3)));
+        assertEquals(0.3 * g1 * p1 + 0.7 * g2 * p2, org.miscela.core.functions.PhaseFunctions.bubblePressure(twelve,
+                x12, 50, Extrapolation.AS_CARD), 1e-9);
+        assertEquals(Problem.NO_VOLUME, org.junit.jupiter.api.Assertions.assertThrows(MiscelaException.class,
+                () -> CardFunctions.density(twelve, 0.3, 50, Extrapolation.AS_CARD)).problem());
     }
 
     private static final Pattern CHECK_MARKER = Pattern.compile("^\\s*<!--\\s*check-example:(.*?)-->\\s*$");

@@ -352,11 +352,13 @@ public final class FuzzCards {
             boolean heat = enthalpy && r.nextBoolean();
             boolean covariance = volume && r.nextInt(4) == 0;
             boolean pairLimits = r.nextInt(5) == 0;
-            boolean v2 = model || missingIdeal || ternary || enthalpy || covariance || pairLimits || r.nextBoolean();
+            boolean phase = r.nextInt(3) == 0;
+            boolean v2 = model || missingIdeal || ternary || enthalpy || covariance || pairLimits || phase
+                    || r.nextBoolean();
             history.append(String.format(Locale.ROOT, "n=%d%s%s%s%s%s%s%s%s", n, v2 ? " v2" : " v1",
                     missingIdeal ? " missing-ideal" : "", ternary ? " ternary" : "", enthalpy ? " enthalpy" : "",
                     enthalpyOnly ? "-only" : "", heat ? " heat-capacities" : "", covariance ? " covariance" : "",
-                    pairLimits ? " pair-limits" : ""));
+                    pairLimits ? " pair-limits" : "") + (phase ? " phase-equilibrium" : ""));
 
             temperatureUnit = new String[] {"K", "°C", "degC", "C"}[r.nextInt(4)];
             pickTemperatureRange();
@@ -442,8 +444,21 @@ public final class FuzzCards {
                     enthalpyRows = true;
                 }
             }
+            boolean gibbsRows = false;
+            if (phase) {
+                // G^E/RT and Antoine vapour pressures of some 10 to 100 (pressure unit) mid-range
+                gibbsRows = section("excess gibbs energy", 1.5, missingIdeal, false, reversed);
+                row(label("pressure unit"), new String[] {"kPa", "bar", "atm", "mmHg"}[r.nextInt(4)]);
+                double mid = t((lowestK + highestK) / 2);
+                for (int i = 0; i < n; i++) {
+                    double b = 1400 + 400 * r.nextDouble();
+                    double c = 280 - mid;
+                    row(label("vapour pressure"), names.get(i), "Antoine", 1 + r.nextDouble() + b / 280, b, c);
+                }
+            }
             enthalpy = enthalpyRows;
-            volume = !(enthalpyRows && !volumeRows);
+            // a card without volume rows but with enthalpy or Gibbs rows describes no volume
+            volume = volumeRows || !(enthalpyRows || gibbsRows);
             covariance &= volumeRows && coverAll;
             if (pairLimits) {
                 pairLimits(n);

@@ -38,8 +38,8 @@ class ProblemTest {
                         + "or write 'extrapolation | allow' on the card."), p.toString());
             }
         }
-        // the five validity limits and the blending path outside the validity range
-        assertEquals(Arrays.asList(Problem.OUTSIDE_PAIR_TEMPERATURE, Problem.OUTSIDE_PAIR_COMPOSITION,
+        // the validity limits (the vapour-pressure constants' range among them) and the blending path outside them
+        assertEquals(Arrays.asList(Problem.OUTSIDE_VAPOUR_PRESSURE, Problem.OUTSIDE_PAIR_TEMPERATURE, Problem.OUTSIDE_PAIR_COMPOSITION,
                 Problem.OUTSIDE_FINAL_TEMPERATURE, Problem.OUTSIDE_TEMPERATURE, Problem.OUTSIDE_COMPOSITION,
                 Problem.EMPTY_PATH), advised);
     }

@@ -1,0 +1,125 @@
+package org.miscela.core.functions;
+
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.miscela.core.card.Card;
+import org.miscela.core.card.Extrapolation;
+import org.miscela.core.card.Units;
+import org.miscela.core.model.VapourPressure;
+import org.miscela.core.problem.Numbers;
+import org.miscela.core.problem.Problem;
+
+/**
+ * The cell functions of the Gibbs-energy half: activity coefficients from the card's G^E/RT, and the blend's vapour
+ * by modified Raoult's law, y_k·p = x_k·γ_k·p_k* (an ideal vapour and a liquid whose volume is neglected: good at low
+ * pressure, say below a few bar, and stated as such in the documentation). Arguments and results in the card's units;
+ * the composition, temperature and vapour-pressure ranges are checked unless extrapolation is allowed.
+ */
+public final class PhaseFunctions {
+    /** The bubble-point search stops when the temperature is known to 10⁻⁹ K. */
+    private static final double ACCURACY_KELVIN = 1e-9;
+
+    private PhaseFunctions() {
+    }
+
+    /** γ_k of one component at a composition and temperature. */
+    public static double activityCoefficient(Card card, int component, double[] x, double t, Extrapolation e) {
+        double[] z = CardFunctions.moleFractions(card, x);
+        int k = CardFunctions.componentByNumber(card, component + 1);
+        double kelvin = PointChecks.checkPoint(card, z, t, e);
+        double[] lnGamma = new double[z.length];
+        card.mixture().logActivityCoefficients(z, kelvin, lnGamma);
+        return finite(card, t, "activity coefficient of " + card.components().get(k).name(), Math.exp(lnGamma[k]));
+    }
+
+    /** The bubble pressure Σ x_k γ_k p_k* in the card's pressure unit. */
+    public static double bubblePressure(Card card, double[] x, double t, Extrapolation e) {
+        double[] z = CardFunctions.moleFractions(card, x);
+        Units.Pressure unit = pressureUnit(card);
+        double kelvin = checkVapourPoint(card, z, t, e);
+        return unit.fromPascal(finite(card, t, "bubble pressure", card.mixture().bubblePressure(z, kelvin, null)));
+    }
+
+    /** y_k, the mole fraction of one component in the vapour at the bubble point at t. */
+    public static double vapourFraction(Card card, int component, double[] x, double t, Extrapolation e) {
+        double[] z = CardFunctions.moleFractions(card, x);
+        int k = CardFunctions.componentByNumber(card, component + 1);
+        double kelvin = checkVapourPoint(card, z, t, e);
+        double[] partial = new double[z.length];
+        double p = card.mixture().bubblePressure(z, kelvin, partial);
+        return finite(card, t, "vapour mole fraction of " + card.components().get(k).name(), partial[k] / p);
+    }
+
+    /**
+     * The bubble-point temperature at a pressure (card units): the root of Σ x_k γ_k(T) p_k*(T) = p, searched over the
+     * card's validity range and, unless extrapolation is allowed, the range every present component's vapour
+     * pressure constants hold for; refused with the bubble pressures at the ends when there is none there.
+     */
+    public static double bubblePoint(Card card, double[] x, double pressure, Extrapolation e) {
+        double[] z = CardFunctions.moleFractions(card, x);
+        Units.Pressure unit = pressureUnit(card);
+        if (!(pressure > 0.0) || Double.isInfinite(pressure)) {
+            throw Problem.BLEND_NOT_POSITIVE.raise("pressure", Numbers.show(pressure));
+        }
+        double target = unit.toPascal(pressure);
+        double lo = card.validity().lowestKelvin();
+        double hi = card.validity().highestKelvin();
+        if (!card.mayExtrapolate(e)) {
+            for (int k = 0; k < z.length; k++) {
+                VapourPressure p = card.vapourPressure(k);
+                if (z[k] > 0.0 && p != null && p.hasRange()) {
+                    lo = Math.max(lo, p.lowestKelvin());
+                    hi = Math.min(hi, p.highestKelvin());
+                }
+            }
+        }
+        Units.Temperature tu = card.units().temperature();
+        double pLo = card.mixture().bubblePressure(z, lo, null);
+        double pHi = card.mixture().bubblePressure(z, hi, null);
+        if (!(hi > lo) || !(pLo <= target && target <= pHi)) {
+            throw Problem.NO_BUBBLE_POINT.raise(Numbers.show(tu.fromKelvin(lo)), Numbers.show(tu.fromKelvin(hi)),
+                    tu.symbol(), Numbers.show(pressure), unit.symbol(), Numbers.show(unit.fromPascal(pLo)),
+                    Numbers.show(unit.fromPascal(pHi)), unit.symbol());
+        }
+        BrentSolver solver = new BrentSolver(1e-15, ACCURACY_KELVIN);
+        double kelvin = pLo == target ? lo : pHi == target ? hi : solver.solve(200,
+                tk -> Math.log(card.mixture().bubblePressure(z, tk, null) / target), lo, hi);
+        double t = tu.fromKelvin(kelvin);
+        checkVapourPoint(card, z, t, e);
+        return t;
+    }
+
+    /** The card's pressure unit; refused with words when it states none. */
+    private static Units.Pressure pressureUnit(Card card) {
+        if (card.pressureUnit() == null) {
+            throw Problem.NO_PRESSURE_UNIT.raise();
+        }
+        return card.pressureUnit();
+    }
+
+    /** The point's checks, then each present component's vapour pressure range (unless extrapolation is allowed). */
+    private static double checkVapourPoint(Card card, double[] z, double t, Extrapolation e) {
+        double kelvin = PointChecks.checkPoint(card, z, t, e);
+        card.mixture().gibbs();
+        for (int k = 0; k < z.length; k++) {
+            if (z[k] == 0.0) {
+                continue;
+            }
+            card.mixture().vapourPressure(k, kelvin); // refuses a component without a row
+            VapourPressure p = card.vapourPressure(k);
+            if (!card.mayExtrapolate(e) && p.hasRange() && (kelvin < p.lowestKelvin() || kelvin > p.highestKelvin())) {
+                Units.Temperature tu = card.units().temperature();
+                throw Problem.OUTSIDE_VAPOUR_PRESSURE.raise(Numbers.show(t), tu.symbol(),
+                        Numbers.show(tu.fromKelvin(p.lowestKelvin())), Numbers.show(tu.fromKelvin(p.highestKelvin())),
+                        tu.symbol(), card.components().get(k).name());
+            }
+        }
+        return kelvin;
+    }
+
+    private static double finite(Card card, double t, String what, double v) {
+        if (!Double.isFinite(v) || !(v >= 0.0)) {
+            throw PointChecks.nonPhysical(card, t, what, v);
+        }
+        return v;
+    }
+}
