@@ -121,7 +121,7 @@ public final class ExampleWorkbookBuilder {
     /** Composition table on sheet Blend: header row and first data row (0-based), first column, rows. */
     static final int TABLE_HEAD = 6;
     static final int TABLE_FIRST = 7;
-    /** 0 to 57 % w/w in steps of 3: the card's limit, 60 %, is written to nine digits and refuses 60 itself. */
+    /** 0 to 57 % w/w in steps of 3, the last step below the card's limit of 60 %. */
     static final int TABLE_ROWS = 20;
     static final double TABLE_STEP = 3.0;
     static final int TABLE_COL = 5; // column F: % w/w; G: x1; H..N: the add-in's arrays
@@ -450,8 +450,8 @@ public final class ExampleWorkbookBuilder {
         text(s, TABLE_COL, end, "V̄ = partial molar volume; V̄ᴱ = partial molar excess volume; "
                 + "Vm = molar volume of the blend; x1 from the card's molar masses.");
         prop(s, col(TABLE_COL) + (end + 1), "CharPosture", com.sun.star.awt.FontSlant.ITALIC);
-        text(s, TABLE_COL, end + 1, "The table stops at 57 %: the card's limit is 60 % w/w (x1 = 0.303315168, "
-                + "written to nine digits, so exactly 60 is refused).");
+        text(s, TABLE_COL, end + 1, "The table runs in steps of 3 % to 57 %; the card holds up to 60 % w/w, the "
+                + "CRC table's last strength, and refuses more.");
         prop(s, col(TABLE_COL) + (end + 2), "CharPosture", com.sun.star.awt.FontSlant.ITALIC);
         rowHeight(s, TABLE_HEAD, 900);
         widths(s, BLEND_WIDTHS);
