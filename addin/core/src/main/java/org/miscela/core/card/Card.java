@@ -43,8 +43,8 @@ public final class Card {
     private final MixtureDensityModel densityModel;
     /** The excess volume: the Redlich–Kister section, the one the density model implies, or null. */
     private final ExcessModel volumeModel;
-    /** G^E/RT (dimensionless) as Redlich–Kister sets, or null. */
-    private final ExcessFunction excessGibbs;
+    /** G^E/RT (dimensionless): Redlich–Kister sets or a local-composition model, or null. */
+    private final ExcessModel excessGibbs;
     /** Each component's vapour pressure, null where the card gives none; null when it gives none at all. */
     private final VapourPressure[] vapourPressures;
     /** The unit of pressures on the card and in the functions, or null when the card states none. */
@@ -212,19 +212,19 @@ public final class Card {
 
     /** What a card states about phase equilibrium: G^E/RT, vapour pressures, the pressure unit (each may be null). */
     static final class PhaseData {
-        final ExcessFunction gibbs;
+        final ExcessModel gibbs;
         final VapourPressure[] vapour;
         final Units.Pressure pressure;
 
-        PhaseData(ExcessFunction gibbs, VapourPressure[] vapour, Units.Pressure pressure) {
+        PhaseData(ExcessModel gibbs, VapourPressure[] vapour, Units.Pressure pressure) {
             this.gibbs = gibbs;
             this.vapour = vapour;
             this.pressure = pressure;
         }
     }
 
-    /** G^E/RT of the liquid as Redlich–Kister sets (dimensionless), or null when the card gives none. */
-    public ExcessFunction excessGibbs() {
+    /** G^E/RT of the liquid (dimensionless), or null when the card gives none. */
+    public ExcessModel excessGibbs() {
         return excessGibbs;
     }
 

@@ -28,7 +28,9 @@ import org.miscela.core.model.ApparentVolumeDensity;
 import org.miscela.core.model.Component;
 import org.miscela.core.model.Dippr105Density;
 import org.miscela.core.model.TabulatedDensity;
+import org.miscela.core.model.ExcessModel;
 import org.miscela.core.model.Kell1975WaterDensity;
+import org.miscela.core.model.LocalCompositionGibbs;
 import org.miscela.core.model.MassFractionPolynomialDensity;
 import org.miscela.core.model.MixtureDensityModel;
 import org.miscela.core.model.ModelLimitDensity;
@@ -151,7 +153,8 @@ final class CardBuilder {
         boolean missingIdeal = choice(MISSING_PAIRS, "ideal", "refuse") || pureOnly;
         // A card may describe enthalpy alone; then the volumetric functions refuse rather than guess.
         boolean enthalpyOnly = !rows.hasSection(EXCESS_VOLUME) && (rows.hasSection(EXCESS_ENTHALPY)
-                || rows.hasSection(CardLabels.EXCESS_GIBBS));
+                || rows.hasSection(CardLabels.EXCESS_GIBBS) || !rows.keyed(CardLabels.WILSON).isEmpty()
+                || !rows.keyed(CardLabels.NRTL).isEmpty());
         if (mixtureDensity != null && rows.hasSection(EXCESS_VOLUME)) {
             throw Problem.VOLUME_STATED_TWICE.raise(mixtureDensity.modelName());
         }
@@ -178,14 +181,123 @@ final class CardBuilder {
             }
             basisReferenceKelvin = kelvin;
         }
-        ExcessFunction gibbs = rows.hasSection(CardLabels.EXCESS_GIBBS) ? section(CardLabels.EXCESS_GIBBS, 1.0,
+        ExcessModel gibbs = rows.hasSection(CardLabels.EXCESS_GIBBS) ? section(CardLabels.EXCESS_GIBBS, 1.0,
                 subjects, model, asymmetric[0], missingIdeal) : null;
+        ExcessModel local = localComposition(subjects, missingIdeal);
+        if (local != null && gibbs != null) {
+            CardRow r = rows.keyed(((LocalCompositionGibbs) local).kind() == LocalCompositionGibbs.Kind.WILSON
+                    ? CardLabels.WILSON : CardLabels.NRTL).values().iterator().next();
+            throw Problem.MODEL_VALUES.raise(r.number, r.label, r.label, "no 'excess Gibbs energy' rows beside it",
+                    "the card states G^E one way; remove one of them");
+        }
+        gibbs = gibbs != null ? gibbs : local;
         Units.Pressure pressure = rows.global(CardLabels.PRESSURE_UNIT) != null
                 ? unit(CardLabels.PRESSURE_UNIT, Units.Pressure.class) : null;
         VapourPressure[] vapour = vapourPressures(names, pressure);
         return new Card(title, source, units, components, volume, enthalpy, validity, allow, missingIdeal,
                 basisReferenceKelvin, solutionHeatCapacity(names, masses), boilingCurve(names), mixtureDensity,
                 new Card.PhaseData(gibbs, vapour, pressure));
+    }
+
+    /**
+     * G^E/RT by Wilson's or the NRTL model, or null: one row per pair, 'Wilson | a + b | Δλ_ab/R | Δλ_ba/R' (K) or
+     * with a, b, c of each (a + b·T + c·T²), and 'Wilson volume | component | V' (molar volume unit) for every
+     * component; or 'NRTL | a + b | τ_ab | τ_ba | α' or 'NRTL | a + b | A_ab | B_ab | A_ba | B_ba | α' (τ = A + B/T, B
+     * in K). A pair without a row is an error unless the card says 'missing pairs | ideal'.
+     */
+    private ExcessModel localComposition(Subjects subjects, boolean missingIdeal) {
+        Map<String, CardRow> wilson = rows.keyed(CardLabels.WILSON);
+        Map<String, CardRow> nrtl = rows.keyed(CardLabels.NRTL);
+        Map<String, CardRow> volumes = rows.keyed(CardLabels.WILSON_VOLUME);
+        if (wilson.isEmpty() && nrtl.isEmpty()) {
+            if (!volumes.isEmpty()) {
+                throw Problem.MISSING_PAIR_ROW.raise(CardLabels.WILSON_VOLUME, "the mixture", "Wilson");
+            }
+            return null;
+        }
+        if (!wilson.isEmpty() && !nrtl.isEmpty()) {
+            CardRow r = nrtl.values().iterator().next();
+            throw Problem.MODEL_VALUES.raise(r.number, r.label, "NRTL", "no 'Wilson' rows beside it",
+                    "the card states G^E one way; remove one of them");
+        }
+        boolean isWilson = !wilson.isEmpty();
+        int n = subjects.size();
+        double[][] a = new double[n][n];
+        double[][] b = new double[n][n];
+        double[][] c = new double[n][n];
+        double[][] alpha = new double[n][n];
+        boolean[][] ideal = new boolean[n][n];
+        boolean[][] seen = new boolean[n][n];
+        for (CardRow r : (isWilson ? wilson : nrtl).values()) {
+            int[] m = subjects.members(r, 2);
+            int i = m[0];
+            int j = m[1];
+            if (seen[i][j]) {
+                throw Problem.DUPLICATE_ROW.raise(r.number, r.label, r.number);
+            }
+            seen[i][j] = true;
+            seen[j][i] = true;
+            double[] v = r.numbersFrom(1);
+            if (isWilson) {
+                if (v.length != 2 && v.length != 6) {
+                    throw Problem.MODEL_VALUES.raise(r.number, r.label, "Wilson", "Δλ/R (K) of each order, 2 values, or "
+                            + "a, b, c of each, 6 values", "found " + v.length);
+                }
+                int per = v.length / 2;
+                a[i][j] = v[0];
+                a[j][i] = v[per];
+                if (per == 3) {
+                    b[i][j] = v[1];
+                    c[i][j] = v[2];
+                    b[j][i] = v[4];
+                    c[j][i] = v[5];
+                }
+            } else {
+                if (v.length != 3 && v.length != 5) {
+                    throw Problem.MODEL_VALUES.raise(r.number, r.label, "NRTL", "τ_ab, τ_ba and α, or A_ab, B_ab, A_ba, "
+                            + "B_ba and α", "found " + v.length);
+                }
+                if (v.length == 3) {
+                    a[i][j] = v[0];
+                    a[j][i] = v[1];
+                } else {
+                    a[i][j] = v[0];
+                    b[i][j] = v[1];
+                    a[j][i] = v[2];
+                    b[j][i] = v[3];
+                }
+                alpha[i][j] = v[v.length - 1];
+                alpha[j][i] = v[v.length - 1];
+            }
+        }
+        for (int i = 0; i < n; i++) {
+            for (int j = i + 1; j < n; j++) {
+                if (!seen[i][j]) {
+                    if (!missingIdeal) {
+                        throw Problem.MISSING_MODEL_PAIR.raise(isWilson ? "Wilson" : "NRTL", subjects.name(i),
+                                subjects.name(j));
+                    }
+                    ideal[i][j] = true;
+                    ideal[j][i] = true;
+                }
+            }
+        }
+        if (!isWilson) {
+            return LocalCompositionGibbs.nrtl(a, b, alpha, ideal);
+        }
+        double[] volume = new double[n];
+        for (int k = 0; k < n; k++) {
+            CardRow r = volumes.get(normalise(subjects.name(k)));
+            if (r == null) {
+                throw Problem.MISSING_PAIR_ROW.raise("Wilson", subjects.name(k), CardLabels.WILSON_VOLUME);
+            }
+            r.atMost(2);
+            volume[k] = units.molarVolume().toCm3PerMol(r.number(1));
+            if (!(volume[k] > 0) || Double.isInfinite(volume[k])) {
+                throw Problem.NOT_POSITIVE.raise(r.number, r.label, "the molar volume", Numbers.show(volume[k]));
+            }
+        }
+        return LocalCompositionGibbs.wilson(volume, a, b, c, ideal);
     }
 
     /**

@@ -238,8 +238,8 @@ public final class Mixture {
     }
 
     /** The card's G^E/RT; fails with a readable message when the card has none. */
-    public ExcessFunction gibbs() {
-        ExcessFunction g = card.excessGibbs();
+    public ExcessModel gibbs() {
+        ExcessModel g = card.excessGibbs();
         if (g == null) {
             throw Problem.NO_GIBBS.raise();
         }

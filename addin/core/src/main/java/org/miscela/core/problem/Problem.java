@@ -59,6 +59,7 @@ public enum Problem {
     MISSING_DENSITY(CARD, "The card gives no 'density model' row for component \"%s\".", Advice.INSIDE_RANGE),
     MODEL_VALUES(CARD, "Card row %d (%s): the %s model takes %s; %s."),
     CARD_CUT_SHORT(CARD, "Card row %d (card size): the card has %d rows and %d columns, but the range holds only %d rows and %d columns to its last value: an array formula entered over too small a block cuts a card short. Select a block at least that large, or enter the formula in one cell with Ctrl+Shift+Enter, which sizes the block."),
+    MISSING_MODEL_PAIR(CARD, "The card gives no '%s' row for the pair %s + %s: add one, or write 'missing pairs | ideal' on the card to treat every pair without one as ideal.", Advice.INSIDE_RANGE),
     VOLUME_STATED_TWICE(CARD, "The card states the mixture's volume twice: by its %s model and by 'excess volume' rows; keep one of them (see docs/card-format.md)."),
     DENSITY_FROM_MIXTURE_MODEL(CARD, "Card row %d (%s): the density of %s comes from the card's %s model, so a row of its own would state it a second time; remove this row."),
     MODEL_RANGE(CARD, "Card row %d (%s): the %s model is valid from %s to %s K, but the card's 'valid temperature' range runs from %s to %s K."),

@@ -40,4 +40,64 @@ class ActivityProperties {
         double scale = Math.abs(x[0] * (up[0] - down[0])) + Math.abs(x[1] * (up[1] - down[1]));
         assertTrue(Math.abs(gd) <= 1e-9 + 1e-6 * scale, "Gibbs–Duhem: Σ x_k Δln γ_k = " + gd);
     }
+
+    /** Three components by Wilson's model (parameters of a published example, see LocalCompositionTest) and by NRTL
+     * (invented parameters): the same identities, from values, anywhere inside the triangle. */
+    private static Card local(boolean wilson) {
+        java.util.List<Object[]> c = new java.util.ArrayList<>(java.util.Arrays.asList(new Object[][] {
+            {"Miscela card", 2.0}, {"source", "invented densities; Wilson parameters of a published example, NRTL "
+                + "parameters invented values"}, {"temperature unit", "K"}, {"density unit", "kg/m³"},
+            {"molar volume unit", "cm³/mol"}, {"molar mass unit", "g/mol"}, {"valid temperature", 300.0, 360.0},
+            {"component", "P", 58.08}, {"density model", "P", "constant"}, {"density coefficients", "P", 784.0},
+            {"component", "Q", 119.38}, {"density model", "Q", "constant"}, {"density coefficients", "Q", 1480.0},
+            {"component", "R", 32.04}, {"density model", "R", "constant"}, {"density coefficients", "R", 791.0},
+            {"valid mole fraction", "P", 0.0, 1.0}}));
+        if (wilson) {
+            c.add(new Object[] {"Wilson", "P + Q", 375.2835, -3.78434, 7.91073e-3, -1722.58, 6.405502, -7.47788e-3});
+            c.add(new Object[] {"Wilson", "P + R", 31.1208, -0.67704, 8.68371e-4, 747.217, -0.256645, -1.24796e-3});
+            c.add(new Object[] {"Wilson", "Q + R", -1140.79, 2.59359, 3.1e-5, 3596.17, -6.2234, 3e-5});
+            c.add(new Object[] {"Wilson volume", "P", 74.04});
+            c.add(new Object[] {"Wilson volume", "Q", 80.67});
+            c.add(new Object[] {"Wilson volume", "R", 40.73});
+        } else {
+            c.add(new Object[] {"NRTL", "P + Q", 0.3, 120.0, -0.5, 300.0, 0.3});
+            c.add(new Object[] {"NRTL", "P + R", 1.1, -50.0, 0.2, 80.0, 0.47});
+            c.add(new Object[] {"NRTL", "Q + R", -0.2, 200.0, 0.9, -100.0, 0.2});
+        }
+        return CardReader.read(c.toArray(new Object[0][]));
+    }
+
+    private static final Card WILSON = local(true);
+    private static final Card NRTL = local(false);
+
+    @Property(tries = 500)
+    void localCompositionModelsKeepTheIdentities(@ForAll @DoubleRange(min = 0.02, max = 0.96) double a,
+            @ForAll @DoubleRange(min = 0.02, max = 0.96) double b, @ForAll @DoubleRange(min = 300, max = 360) double t,
+            @ForAll boolean wilson) {
+        if (a + b > 0.98) {
+            return;
+        }
+        double[] x = {a, b, 1 - a - b};
+        Mixture m = (wilson ? WILSON : NRTL).mixture();
+        double[] lnGamma = new double[3];
+        double g = m.logActivityCoefficients(x, t, lnGamma);
+        assertEquals(g, x[0] * lnGamma[0] + x[1] * lnGamma[1] + x[2] * lnGamma[2], 1e-13, "summability");
+        double h = PartialsFromValues.step(x);
+        for (int k = 0; k < 3; k++) {
+            PartialsFromValues.Estimate e = PartialsFromValues.partial(z -> m.gibbs().value(z, t), x, k, h, 1e-14);
+            assertEquals(e.value, lnGamma[k], e.bound + 1e-11, "ln γ_" + k);
+        }
+        double step = 1e-5;
+        double[] up = new double[3];
+        double[] down = new double[3];
+        m.logActivityCoefficients(new double[] {a + step, b, 1 - a - b - step}, t, up);
+        m.logActivityCoefficients(new double[] {a - step, b, 1 - a - b + step}, t, down);
+        double gd = 0;
+        double scale = 0;
+        for (int k = 0; k < 3; k++) {
+            gd += x[k] * (up[k] - down[k]);
+            scale += Math.abs(x[k] * (up[k] - down[k]));
+        }
+        assertTrue(Math.abs(gd) <= 1e-9 + 1e-6 * scale, "Gibbs–Duhem: " + gd);
+    }
 }

@@ -332,6 +332,11 @@ class CardReaderTest {
                         "five parameters c0 to c4", v2(c -> c.set(12, "# off").set(13, "# off")
                                 .row("apparent density", "alpha", "Laliberté–Cooper 2004", 1, 2, 3, 4)
                                 .row("solvent", "beta"))),
+                bad("a three-component Wilson card without one pair", Problem.MISSING_MODEL_PAIR, 0,
+                        "no 'Wilson' row for the pair beta + gamma", ternary(c -> c.set(1, "Miscela card", 2)
+                                .row("wilson", "alpha + beta", 100, 200).row("wilson", "alpha + gamma", 100, 200)
+                                .row("wilson volume", "alpha", 58).row("wilson volume", "beta", 18)
+                                .row("wilson volume", "gamma", 73))),
                 bad("a card cut short by a small array block", Problem.CARD_CUT_SHORT, 20,
                         "the card has 21 rows and 4 columns, but the range holds only 20 rows and 4 columns",
                         v2(c -> c.row("card size", 21, 4))),
@@ -365,7 +370,7 @@ class CardReaderTest {
         Set<Problem> missing = EnumSet.copyOf(card);
         missing.removeAll(produced);
         assertTrue(missing.isEmpty(), "no malformed card for " + missing);
-        assertEquals(44, card.size(), "the card problems changed; update the malformed cards");
+        assertEquals(45, card.size(), "the card problems changed; update the malformed cards");
     }
 
     // ------------------------------------------------------------------ well-formed cards
