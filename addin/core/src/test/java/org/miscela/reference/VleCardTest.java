@@ -86,4 +86,31 @@ class VleCardTest {
         assertEquals(351.44 - 273.15, PhaseFunctions.bubblePoint(VLE, new double[] {1, 0}, 101.325, E), 0.2);
         assertEquals(101325, VLE.mixture().vapourPressure(1, 373.1243), 0.5);
     }
+
+    /**
+     * The dew point of the vapour over a bubbling liquid is that liquid's bubble point (an identity of the two
+     * searches, 10⁻⁶ K); and against Kirschbaum and Gerstner's 98.66 kPa data, the dew point of each measured vapour
+     * within 0.6 K of the measured temperature (measured: 0.47 K at most below 6 mol % ethanol in the liquid, 0.54
+     * above).
+     */
+    @Test
+    void dewPoints() {
+        for (double x1 : new double[] {0.02, 0.1, 0.3, 0.6, 0.85, 0.95}) {
+            double[] x = {x1, 1 - x1};
+            double tb = PhaseFunctions.bubblePoint(VLE, x, 101.325, E);
+            double y1 = PhaseFunctions.vapourFraction(VLE, 0, x, tb, E);
+            assertEquals(tb, PhaseFunctions.dewPoint(VLE, new double[] {y1, 1 - y1}, 101.325, E), 1e-6, "x1 = " + x1);
+        }
+        int n = 0;
+        for (String[] r : VleCardFitter.rows()) {
+            if (r[0].equals("isobaric-kirschbaum")) {
+                double x1 = Double.parseDouble(r[3]);
+                double y1 = Double.parseDouble(r[4]);
+                double td = PhaseFunctions.dewPoint(VLE, new double[] {y1, 1 - y1}, Double.parseDouble(r[1]), E);
+                assertEquals(Double.parseDouble(r[2]) - 273.15, td, 0.6, "y1 = " + y1 + " (x1 = " + x1 + ")");
+                n++;
+            }
+        }
+        assertTrue(n >= 15);
+    }
 }

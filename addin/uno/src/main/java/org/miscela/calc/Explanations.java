@@ -129,6 +129,7 @@ final class Explanations {
         add("bubblePressure", (a, p) -> a.bubblePressure(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
         add("vapourFraction", (a, p) -> a.vapourFraction(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5], p[6]));
         add("bubblePoint", (a, p) -> a.bubblePoint(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
+        add("dewPoint", (a, p) -> a.dewPoint(r(p[0]), r(p[1]), r(p[2]), p[3]));
     }
 
     private Explanations() {

@@ -259,7 +259,8 @@ final class FuzzCall {
                     a = new Object[] {x, temperature(x), extrapolate()};
                     break;
                 }
-                case "bubblePoint": {
+                case "bubblePoint":
+                case "dewPoint": {
                     Object[][] x = composition();
                     // pressures in the card's unit, whatever it is: a spread that sometimes meets a bubble point
                     a = new Object[] {x, clean ? new Object[][] {{pick(1.0, 10.0, 101.325, 1000.0)}}

@@ -37,7 +37,9 @@ import org.miscela.core.card.TestCards;
 class CalcFuzzIT {
     private static final int CELLS = Integer.getInteger("miscela.calcfuzz.cells", 10_000);
     private static final long SEED = Long.getLong("miscela.calcfuzz.seed", 20261201L);
-    private static final String[] CARDS = {"card", "tern", "acid", "cov", "broken", "junk", "$Inputs.A1:C3"};
+    private static final String[] CARDS = {"card", "tern", "acid", "cov", "vle", "broken", "junk", "$Inputs.A1:C3"};
+    /** The first cards of {@link #CARDS} read; the rest do not. */
+    private static final int GOOD_CARDS = 5;
     private static final String[] SCALARS = {"0", "1", "0.5", "-1", "1E+300", "-1E+300", "1E-300", "0.3", "45",
         "-300", "20", "25", "2", "3", "99", "\"water\"", "\"Q\"", "\"\"", "\"abc\"", "\"kg\"", "\"mol\"",
         "\"enthalpy\"", "\"orders\"", "\"check\"", "\"density\"", "\"partial volume\"", "TRUE()", "FALSE()",
@@ -73,7 +75,7 @@ class CalcFuzzIT {
             XSpreadsheet cards = Sheets.sheet(doc, "Cards");
             String[][] named = {{"card", "ethanol-water-oiml.tsv"}, {"tern", "ternary-invented.tsv"},
                 {"acid", "sulfuric-acid-water-nbs.tsv"}, {"cov", "ethanol-water-covariance.tsv"},
-                {"broken", "broken-unit.tsv"}};
+                {"vle", "ethanol-water-vle.tsv"}, {"broken", "broken-unit.tsv"}};
             int row = 0;
             for (String[] c : named) {
                 Object[][] cells = TestCards.cells(c[1]);
@@ -179,7 +181,7 @@ class CalcFuzzIT {
     private static String argument(String name, Random r) {
         int pick = r.nextInt(10);
         if (name.equals("card") || name.equals("pure")) {
-            return pick < 8 ? CARDS[r.nextInt(4)] : CARDS[r.nextInt(CARDS.length)];
+            return pick < 8 ? CARDS[r.nextInt(GOOD_CARDS)] : CARDS[r.nextInt(CARDS.length)];
         }
         if (pick == 0) {
             return ""; // left out

@@ -660,7 +660,18 @@ public final class FunctionCatalog {
                     "=MIX.BUBBLEPOINT(vle; 0.1; 101.325)",
                     CARD, MOLE_FRACTION, PRESSURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
                     .shows("85.97").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS, VAPOUR_PROBLEMS,
-                            list(Problem.NO_BUBBLE_POINT)))));
+                            list(Problem.NO_BUBBLE_POINT))),
+            new FunctionInfo("dewPoint", "MIX.DEWPOINT",
+                    "the temperature at which a vapour starts to condense at a pressure (its dew point)",
+                    "Temperature at which a vapour of the given composition starts to condense at a pressure (its dew "
+                            + "point), in the card's temperature unit, by modified Raoult's law.",
+                    "Σ_k y_k·p / (γ_k(x, T)·p_k*(T)) = 1, x_k = y_k·p/(γ_k·p_k*), solved for T",
+                    "=MIX.DEWPOINT(vle; 0.5; 101.325)",
+                    CARD, range("vapourComposition", "y", "The vapour's mole fractions in card order (a row, a column, a "
+                            + "block of one per row), or y1 alone on a two-component card."),
+                    PRESSURE, EXTRAPOLATE)
+                    .shows("84.07").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VAPOUR_PROBLEMS,
+                            list(Problem.NO_DEW_POINT, Problem.BLEND_NOT_POSITIVE, Problem.ARG_NOT_SINGLE)))));
 
     private FunctionCatalog() {
     }

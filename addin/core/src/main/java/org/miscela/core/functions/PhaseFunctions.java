@@ -61,17 +61,9 @@ public final class PhaseFunctions {
             throw Problem.BLEND_NOT_POSITIVE.raise("pressure", Numbers.show(pressure));
         }
         double target = unit.toPascal(pressure);
-        double lo = card.validity().lowestKelvin();
-        double hi = card.validity().highestKelvin();
-        if (!card.mayExtrapolate(e)) {
-            for (int k = 0; k < z.length; k++) {
-                VapourPressure p = card.vapourPressure(k);
-                if (z[k] > 0.0 && p != null && p.hasRange()) {
-                    lo = Math.max(lo, p.lowestKelvin());
-                    hi = Math.min(hi, p.highestKelvin());
-                }
-            }
-        }
+        double[] range = searchRange(card, z, e);
+        double lo = range[0];
+        double hi = range[1];
         Units.Temperature tu = card.units().temperature();
         double pLo = card.mixture().bubblePressure(z, lo, null);
         double pHi = card.mixture().bubblePressure(z, hi, null);
@@ -86,6 +78,97 @@ public final class PhaseFunctions {
         double t = tu.fromKelvin(kelvin);
         checkVapourPoint(card, z, t, e);
         return t;
+    }
+
+    /**
+     * The dew-point temperature of a vapour of composition y at a pressure (card units): the temperature at which the
+     * first drop forms, Σ_k y_k·p/(γ_k(x, T)·p_k*(T)) = 1 with the drop's composition x_k = y_k·p/(γ_k·p_k*) found by
+     * successive substitution inside Brent's search on T, over the same range as {@link #bubblePoint}.
+     */
+    public static double dewPoint(Card card, double[] y, double pressure, Extrapolation e) {
+        double[] z = CardFunctions.moleFractions(card, y);
+        Units.Pressure unit = pressureUnit(card);
+        if (!(pressure > 0.0) || Double.isInfinite(pressure)) {
+            throw Problem.BLEND_NOT_POSITIVE.raise("pressure", Numbers.show(pressure));
+        }
+        double target = unit.toPascal(pressure);
+        double[] range = searchRange(card, z, e);
+        double lo = range[0];
+        double hi = range[1];
+        Units.Temperature tu = card.units().temperature();
+        double fLo = dewResidual(card, z, lo, target);
+        double fHi = dewResidual(card, z, hi, target);
+        if (!(hi > lo) || !(fLo >= 0.0 && fHi <= 0.0)) {
+            throw Problem.NO_DEW_POINT.raise(Numbers.show(tu.fromKelvin(lo)), Numbers.show(tu.fromKelvin(hi)),
+                    tu.symbol(), Numbers.show(pressure), unit.symbol());
+        }
+        BrentSolver solver = new BrentSolver(1e-15, ACCURACY_KELVIN);
+        double kelvin = fLo == 0.0 ? lo : fHi == 0.0 ? hi : solver.solve(200, tk -> dewResidual(card, z, tk, target),
+                lo, hi);
+        double t = tu.fromKelvin(kelvin);
+        checkVapourPoint(card, dropComposition(card, z, kelvin, target), t, e);
+        return t;
+    }
+
+    /** ln Σ_k y_k·p/(γ_k·p_k*) at T, with the drop's composition found by successive substitution. */
+    private static double dewResidual(Card card, double[] y, double kelvin, double pascal) {
+        double[] x = dropComposition(card, y, kelvin, pascal);
+        double[] lnGamma = new double[y.length];
+        card.mixture().logActivityCoefficients(x, kelvin, lnGamma);
+        double sum = 0.0;
+        for (int k = 0; k < y.length; k++) {
+            if (y[k] > 0.0) {
+                sum += y[k] * pascal / (Math.exp(lnGamma[k]) * card.mixture().vapourPressure(k, kelvin));
+            }
+        }
+        return Math.log(sum);
+    }
+
+    /**
+     * The liquid in equilibrium with vapour y at T and p: x_k ∝ y_k·p/(γ_k(x)·p_k*), iterated from the ideal drop
+     * until no fraction moves by more than 10⁻¹³ (at most 500 rounds; a liquid split would not settle, and the last
+     * round is then used, which the search's bracket still checks).
+     */
+    private static double[] dropComposition(Card card, double[] y, double kelvin, double pascal) {
+        int n = y.length;
+        double[] x = new double[n];
+        double[] lnGamma = new double[n];
+        for (int round = 0; round < 500; round++) {
+            double[] next = new double[n];
+            double sum = 0.0;
+            for (int k = 0; k < n; k++) {
+                next[k] = y[k] == 0.0 ? 0.0 : y[k] * pascal / (Math.exp(round == 0 ? 0.0 : lnGamma[k])
+                        * card.mixture().vapourPressure(k, kelvin));
+                sum += next[k];
+            }
+            double moved = 0.0;
+            for (int k = 0; k < n; k++) {
+                next[k] /= sum;
+                moved = Math.max(moved, Math.abs(next[k] - x[k]));
+            }
+            x = next;
+            card.mixture().logActivityCoefficients(x, kelvin, lnGamma);
+            if (moved < 1e-13) {
+                break;
+            }
+        }
+        return x;
+    }
+
+    /** The temperature search range: the card's validity and, unless extrapolating, the vapour pressures' ranges. */
+    private static double[] searchRange(Card card, double[] z, Extrapolation e) {
+        double lo = card.validity().lowestKelvin();
+        double hi = card.validity().highestKelvin();
+        if (!card.mayExtrapolate(e)) {
+            for (int k = 0; k < z.length; k++) {
+                VapourPressure p = card.vapourPressure(k);
+                if (z[k] > 0.0 && p != null && p.hasRange()) {
+                    lo = Math.max(lo, p.lowestKelvin());
+                    hi = Math.min(hi, p.highestKelvin());
+                }
+            }
+        }
+        return new double[] {lo, hi};
     }
 
     /** The card's pressure unit; refused with words when it states none. */

@@ -154,6 +154,7 @@ public enum Problem {
     NO_VAPOUR_PRESSURE(CALL, "The card gives no 'vapour pressure' row for %s; the blend's vapour pressure needs one for every component present.", Advice.INSIDE_RANGE),
     OUTSIDE_VAPOUR_PRESSURE(CALL, "The temperature %s %s is outside the range %s to %s %s the vapour pressure constants of %s hold for.", Advice.EXTRAPOLATION),
     NO_BUBBLE_POINT(CALL, "No temperature from %s to %s %s gives this blend a bubble pressure of %s %s: over that range it runs from %s to %s %s."),
+    NO_DEW_POINT(CALL, "No temperature from %s to %s %s is the dew point of this vapour at %s %s: the vapour condenses at all of them, or at none."),
     NO_PRESSURE_UNIT(CALL, "The card states no 'pressure unit', the unit of the pressures this function takes and gives: add one (kPa, bar, atm, mmHg, …).", Advice.INSIDE_RANGE),
     NO_HEAT_CAPACITY(CALL, "The card gives no 'heat capacity' row for %s; the temperature rise needs the heat capacity of every component.", Advice.INSIDE_RANGE),
     NO_TEMPERATURE_ROOT(CALL, "No temperature between %s and %s K balances the heat of mixing; the card's heat capacities or excess enthalpy are not physical there."),
