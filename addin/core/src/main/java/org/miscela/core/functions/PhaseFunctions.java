@@ -57,27 +57,12 @@ public final class PhaseFunctions {
     public static double bubblePoint(Card card, double[] x, double pressure, Extrapolation e) {
         double[] z = CardFunctions.moleFractions(card, x);
         Units.Pressure unit = pressureUnit(card);
-        if (!(pressure > 0.0) || Double.isInfinite(pressure)) {
-            throw Problem.BLEND_NOT_POSITIVE.raise("pressure", Numbers.show(pressure));
-        }
-        double target = unit.toPascal(pressure);
-        double[] range = searchRange(card, z, e);
-        double lo = range[0];
-        double hi = range[1];
-        Units.Temperature tu = card.units().temperature();
-        double pLo = card.mixture().bubblePressure(z, lo, null);
-        double pHi = card.mixture().bubblePressure(z, hi, null);
-        if (!(hi > lo) || !(pLo <= target && target <= pHi)) {
-            throw Problem.NO_BUBBLE_POINT.raise(Numbers.show(tu.fromKelvin(lo)), Numbers.show(tu.fromKelvin(hi)),
-                    tu.symbol(), Numbers.show(pressure), unit.symbol(), Numbers.show(unit.fromPascal(pLo)),
-                    Numbers.show(unit.fromPascal(pHi)), unit.symbol());
-        }
-        BrentSolver solver = new BrentSolver(1e-15, ACCURACY_KELVIN);
-        double kelvin = pLo == target ? lo : pHi == target ? hi : solver.solve(200,
-                tk -> Math.log(card.mixture().bubblePressure(z, tk, null) / target), lo, hi);
-        double t = tu.fromKelvin(kelvin);
-        checkVapourPoint(card, z, t, e);
-        return t;
+        return searchTemperature(card, z, pressure, e, tk -> z,
+            (tk, p) -> Math.log(p / card.mixture().bubblePressure(z, tk, null)),
+            (lo, hi, tu) -> Problem.NO_BUBBLE_POINT.raise(Numbers.show(tu.fromKelvin(lo)),
+                    Numbers.show(tu.fromKelvin(hi)), tu.symbol(), Numbers.show(pressure), unit.symbol(),
+                    Numbers.show(unit.fromPascal(card.mixture().bubblePressure(z, lo, null))),
+                    Numbers.show(unit.fromPascal(card.mixture().bubblePressure(z, hi, null))), unit.symbol()));
     }
 
     /**
@@ -88,25 +73,47 @@ public final class PhaseFunctions {
     public static double dewPoint(Card card, double[] y, double pressure, Extrapolation e) {
         double[] z = CardFunctions.moleFractions(card, y);
         Units.Pressure unit = pressureUnit(card);
+        double pascal = unit.toPascal(pressure);
+        return searchTemperature(card, z, pressure, e, tk -> dropComposition(card, z, tk, pascal),
+            (tk, p) -> dewResidual(card, z, tk, p),
+            (lo, hi, tu) -> Problem.NO_DEW_POINT.raise(Numbers.show(tu.fromKelvin(lo)),
+                    Numbers.show(tu.fromKelvin(hi)), tu.symbol(), Numbers.show(pressure), unit.symbol()));
+    }
+
+    /** A residual of the temperature search: positive below the root, negative above (T in K, p in Pa). */
+    private interface Residual {
+        double at(double kelvin, double pascal);
+    }
+
+    /** The refusal when the search range holds no root. */
+    private interface NoRoot {
+        RuntimeException at(double loKelvin, double hiKelvin, Units.Temperature unit);
+    }
+
+    /**
+     * The root in T of a residual over the card's validity range and, unless extrapolating, the vapour pressures'
+     * ranges (Brent's method to 10⁻⁹ K); the point is then checked like any other, with the liquid at the root (the
+     * blend itself for a bubble point, the drop for a dew point).
+     */
+    private static double searchTemperature(Card card, double[] z, double pressure, Extrapolation e,
+            java.util.function.DoubleFunction<double[]> liquidAt, Residual f, NoRoot none) {
         if (!(pressure > 0.0) || Double.isInfinite(pressure)) {
             throw Problem.BLEND_NOT_POSITIVE.raise("pressure", Numbers.show(pressure));
         }
-        double target = unit.toPascal(pressure);
+        Units.Temperature tu = card.units().temperature();
+        double target = card.pressureUnit().toPascal(pressure);
         double[] range = searchRange(card, z, e);
         double lo = range[0];
         double hi = range[1];
-        Units.Temperature tu = card.units().temperature();
-        double fLo = dewResidual(card, z, lo, target);
-        double fHi = dewResidual(card, z, hi, target);
+        double fLo = f.at(lo, target);
+        double fHi = f.at(hi, target);
         if (!(hi > lo) || !(fLo >= 0.0 && fHi <= 0.0)) {
-            throw Problem.NO_DEW_POINT.raise(Numbers.show(tu.fromKelvin(lo)), Numbers.show(tu.fromKelvin(hi)),
-                    tu.symbol(), Numbers.show(pressure), unit.symbol());
+            throw none.at(lo, hi, tu);
         }
         BrentSolver solver = new BrentSolver(1e-15, ACCURACY_KELVIN);
-        double kelvin = fLo == 0.0 ? lo : fHi == 0.0 ? hi : solver.solve(200, tk -> dewResidual(card, z, tk, target),
-                lo, hi);
+        double kelvin = fLo == 0.0 ? lo : fHi == 0.0 ? hi : solver.solve(200, tk -> f.at(tk, target), lo, hi);
         double t = tu.fromKelvin(kelvin);
-        checkVapourPoint(card, dropComposition(card, z, kelvin, target), t, e);
+        checkVapourPoint(card, liquidAt.apply(kelvin), t, e);
         return t;
     }
 
