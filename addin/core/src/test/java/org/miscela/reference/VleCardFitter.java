@@ -157,9 +157,50 @@ public final class VleCardFitter {
         return out;
     }
 
+    /** Λ12 = 0.154 and Λ21 = 0.888 at 343.15 K: Gmehling et al. 2012, problem P05.01a (ethanol + water). */
+    static final double[] WILSON_LAMBDA = {0.154, 0.888};
+    static final double WILSON_KELVIN = 343.15;
+
+    /**
+     * The same liquids by Wilson's model with the parameters of J. Gmehling, B. Kolbe, M. Kleiber, J. Rarey, Chemical
+     * Thermodynamics for Process Simulation (Wiley-VCH 2012), problem P05.01a: Λ12 = 0.154 and Λ21 = 0.888 at 70 °C,
+     * written as Δλ/R = −T·ln Λ with equal Wilson volumes (so Λ = exp(−Δλ/RT): the temperature dependence is this
+     * card's assumption, the book gives Λ at 70 °C only); vapour pressures and densities as on the card above.
+     */
+    static String wilsonCard() {
+        StringBuilder b = new StringBuilder();
+        for (String line : card().split("\n")) {
+            String label = line.split("\t", -1)[0];
+            if (label.startsWith("excess Gibbs energy")) {
+                continue;
+            }
+            if (label.equals("title")) {
+                line = "title\tEthanol + water by Wilson's model: activity coefficients and vapour pressures, 30 to 100 °C";
+            } else if (label.equals("source")) {
+                line = "source\tWilson: J. Gmehling, B. Kolbe, M. Kleiber, J. Rarey, Chemical Thermodynamics for Process "
+                        + "Simulation (Wiley-VCH 2012), problem P05.01a, Lambda12 = 0.154 and Lambda21 = 0.888 at 70 C, "
+                        + "written as dlambda/R = -T ln Lambda with equal Wilson volumes (an assumption of this card: the "
+                        + "book gives 70 C only)" + line.substring(line.indexOf("; vapour pressures"));
+            } else if (label.equals("note")) {
+                line = "note\tThe temperature dependence of Lambda is assumed, not published.";
+            }
+            b.append(line).append('\n');
+            if (label.equals("density model") && line.contains("water")) {
+                TsvCard w = new TsvCard()
+                        .row("Wilson", "ethanol + water", -WILSON_KELVIN * Math.log(WILSON_LAMBDA[0]),
+                                -WILSON_KELVIN * Math.log(WILSON_LAMBDA[1]))
+                        .row("Wilson volume", "ethanol", "1")
+                        .row("Wilson volume", "water", "1");
+                b.append(w.text());
+            }
+        }
+        return b.toString();
+    }
+
     public static void main(String[] args) throws IOException {
         System.out.println(points().length + " points; coefficients " + java.util.Arrays.deepToString(
                 fit().coefficients()));
         TsvCard.write(args[0], card());
+        TsvCard.write(args[1], wilsonCard());
     }
 }

@@ -130,6 +130,9 @@ final class Explanations {
         add("vapourFraction", (a, p) -> a.vapourFraction(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5], p[6]));
         add("bubblePoint", (a, p) -> a.bubblePoint(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
         add("dewPoint", (a, p) -> a.dewPoint(r(p[0]), r(p[1]), r(p[2]), p[3]));
+        add("relativeVolatility", (a, p) -> a.relativeVolatility(r(p[0]), r(p[1]), r(p[2]), r(p[3]), r(p[4]), p[5],
+                p[6], p[7]));
+        add("azeotrope", (a, p) -> a.azeotrope(r(p[0]), r(p[1]), p[2], p[3]));
     }
 
     private Explanations() {

@@ -698,6 +698,38 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
         }
     }
 
+    @Override
+    public Object relativeVolatility(Object[][] card, Object[][] component, Object[][] reference,
+            Object[][] moleFraction, Object[][] temperature, Object extrapolate, Object basis, Object basisTemperature)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int i = Arguments.component(c, Arguments.value(component));
+            int j = Arguments.component(c, Arguments.value(reference));
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return BasisArguments.overCompositions(c, moleFraction, temperature, BasisArguments.basis(c, basis,
+                    basisTemperature), e, (k, x, t) -> PhaseFunctions.relativeVolatility(k, i, j, x, t, e));
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "relativeVolatility");
+        }
+    }
+
+    @Override
+    public Object azeotrope(Object[][] card, Object[][] pressure, Object result, Object extrapolate)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            double p = Arguments.number("pressure", Arguments.value(pressure));
+            String r = Arguments.text("result", result, "composition").trim().toLowerCase(java.util.Locale.ROOT);
+            if (!r.isEmpty() && !r.equals("composition") && !r.equals("temperature")) {
+                throw Problem.UNKNOWN_RESULT.raise(r, "composition, temperature");
+            }
+            return PhaseFunctions.azeotrope(c, p, r.equals("temperature"), Arguments.extrapolation(extrapolate));
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "azeotrope");
+        }
+    }
+
     /** The path's rows as a range, or its peak, the amount at the peak or its end as a number. */
     private static Object pathResult(Object result) {
         if (result instanceof double[][]) {

@@ -254,6 +254,15 @@ final class FuzzCall {
                     a = new Object[] {component(), x, temperature(x), extrapolate()};
                     break;
                 }
+                case "relativeVolatility": {
+                    Object[][] x = composition();
+                    a = new Object[] {component(), component(), x, temperature(x), extrapolate()};
+                    break;
+                }
+                case "azeotrope":
+                    a = new Object[] {clean ? pick(10.0, 50.0, 101.325) : pick(0.0, -1.0, 1e300, "", junk(), 50.0),
+                        pick(Any.VOID, "composition", "temperature", clean ? "temperature" : "x"), extrapolate()};
+                    break;
                 case "bubblePressure": {
                     Object[][] x = composition();
                     a = new Object[] {x, temperature(x), extrapolate()};
@@ -463,6 +472,7 @@ final class FuzzCall {
                 case "vapourFraction":
                 case "bubblePressure":
                 case "bubblePoint":
+                case "relativeVolatility":
                 case "mixtureMolarMass": {
                     Object[] out = java.util.Arrays.copyOf(a, a.length + 2);
                     out[a.length] = clean ? pick(Any.VOID, Any.VOID, "mole fraction", "mass fraction", "w")

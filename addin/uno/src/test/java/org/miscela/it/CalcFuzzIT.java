@@ -196,7 +196,7 @@ class CalcFuzzIT {
         if (pick == 2) {
             return inlineArray(r);
         }
-        if (pick < 6) {
+        if (pick < 7) {
             return plausible(name, r);
         }
         return SCALARS[r.nextInt(SCALARS.length)];
@@ -206,12 +206,21 @@ class CalcFuzzIT {
     private static String plausible(String name, Random r) {
         switch (name) {
             case "moleFraction":
+            case "vapourComposition":
                 return r.nextBoolean() ? String.format(Locale.ROOT, "%.3f", r.nextDouble())
                         : String.format(Locale.ROOT, "{%.2f;%.2f;%.2f}", 0.2, 0.5, 0.3);
             case "temperature":
-                return String.format(Locale.ROOT, "%.1f", 10 + 20 * r.nextDouble());
+                // 10 to 40 °C: inside the volumetric cards' ranges, and the phase-equilibrium card's from 30 °C
+                return String.format(Locale.ROOT, "%.1f", 10 + 30 * r.nextDouble());
+            case "pressure":
+                return r.nextBoolean() ? "101.325" : "50";
             case "component":
+            case "reference":
                 return Integer.toString(1 + r.nextInt(3));
+            case "find":
+                return r.nextBoolean() ? "\"chloride\"" : "\"water\"";
+            case "name":
+                return r.nextBoolean() ? "\"NaCl\"" : "\"glycerol\"";
             case "compositionBasis":
                 return new String[] {"", "\"mole fraction\"", "\"x\"", "\"mass fraction\""}[r.nextInt(4)];
             case "basisTemperature":

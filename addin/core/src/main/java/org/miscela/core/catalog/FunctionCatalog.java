@@ -671,7 +671,31 @@ public final class FunctionCatalog {
                             + "block of one per row), or y1 alone on a two-component card."),
                     PRESSURE, EXTRAPOLATE)
                     .shows("84.07").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VAPOUR_PROBLEMS,
-                            list(Problem.NO_DEW_POINT, Problem.BLEND_NOT_POSITIVE, Problem.ARG_NOT_SINGLE)))));
+                            list(Problem.NO_DEW_POINT, Problem.BLEND_NOT_POSITIVE, Problem.ARG_NOT_SINGLE))),
+            new FunctionInfo("relativeVolatility", "MIX.RELATIVEVOLATILITY",
+                    "relative volatility of one component to another over the blend at a temperature",
+                    "Relative volatility of one component to another in the vapour over the liquid blend at a "
+                            + "temperature, by modified Raoult's law: above 1, the first goes to the vapour more.",
+                    "α_ij = (y_i/x_i)/(y_j/x_j) = γ_i·p_i* / (γ_j·p_j*)",
+                    "=MIX.RELATIVEVOLATILITY(vle; \"ethanol\"; \"water\"; 0.1; 80)",
+                    CARD, COMPONENT, value("reference", "reference", "The component it is compared with, by number or "
+                            + "name as for the first."), MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS,
+                    BASIS_T)
+                    .shows("7.251").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
+                            COMPONENT_PROBLEMS, VAPOUR_PROBLEMS)),
+            new FunctionInfo("azeotrope", "MIX.AZEOTROPE",
+                    "the azeotrope of a two-component blend at a pressure: its composition or temperature",
+                    "The azeotrope of a two-component blend at a pressure, where vapour and liquid agree: its "
+                            + "mole fraction x1, or its boiling temperature. Refused when there is none, or several.",
+                    "y1(x1) = x1 at the bubble point, i.e. α12 = 1 (scan of 400 compositions, then Brent's method)",
+                    "=MIX.AZEOTROPE(vlw; 101.325)",
+                    CARD, value("pressure", "pressure", "The pressure, in the card's pressure unit."),
+                    optional("result", "result", "\"composition\" (left out) for x1, or \"temperature\" for its "
+                            + "boiling temperature in the card's unit."), EXTRAPOLATE)
+                    .shows("0.9007").refuses(union(POINT_PROBLEMS, VAPOUR_PROBLEMS, list(Problem.NO_AZEOTROPE,
+                            Problem.SEVERAL_AZEOTROPES, Problem.NOT_BINARY_AZEOTROPE, Problem.NO_BUBBLE_POINT,
+                            Problem.BLEND_NOT_POSITIVE, Problem.ARG_NOT_NUMBER, Problem.ARG_NOT_TEXT,
+                            Problem.UNKNOWN_RESULT)))));
 
     private FunctionCatalog() {
     }

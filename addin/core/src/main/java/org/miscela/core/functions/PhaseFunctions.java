@@ -80,6 +80,76 @@ public final class PhaseFunctions {
                     Numbers.show(tu.fromKelvin(hi)), tu.symbol(), Numbers.show(pressure), unit.symbol()));
     }
 
+    /**
+     * The relative volatility of component i to component j in the vapour over the liquid at t:
+     * α_ij = (y_i/x_i)/(y_j/x_j) = γ_i·p_i* / (γ_j·p_j*) (at infinite dilution where a fraction is zero).
+     */
+    public static double relativeVolatility(Card card, int i, int j, double[] x, double t, Extrapolation e) {
+        double[] z = CardFunctions.moleFractions(card, x);
+        double kelvin = checkVapourPoint(card, z, t, e);
+        for (int k : new int[] {i, j}) {
+            if (z[k] == 0.0) {
+                card.mixture().vapourPressure(k, kelvin); // refuses a component without a row
+            }
+        }
+        double[] lnGamma = new double[z.length];
+        card.mixture().logActivityCoefficients(z, kelvin, lnGamma);
+        return finite(card, t, "relative volatility", Math.exp(lnGamma[i] - lnGamma[j])
+                * card.mixture().vapourPressure(i, kelvin) / card.mixture().vapourPressure(j, kelvin));
+    }
+
+    /** The number of compositions the azeotrope search looks at before refining a change of sign. */
+    static final int AZEOTROPE_SCAN = 400;
+
+    /**
+     * The azeotrope of a two-component card at a pressure: the liquid mole fraction x1 where the vapour has the
+     * liquid's composition (α12 = 1 at the bubble point), searched between 0.0025 and 0.9975 (a scan of
+     * {@value #AZEOTROPE_SCAN} points, each change of sign refined by Brent's method); {@code temperature} asks for
+     * its bubble-point temperature instead. Refused with words when there is none, and when there are several (the
+     * card's G^E is then not to be trusted for it).
+     */
+    public static double azeotrope(Card card, double pressure, boolean temperature, Extrapolation e) {
+        if (card.componentCount() != 2) {
+            throw Problem.NOT_BINARY_AZEOTROPE.raise(card.componentCount());
+        }
+        pressureUnit(card);
+        java.util.function.DoubleUnaryOperator f = x1 -> {
+            double[] x = {x1, 1 - x1};
+            double t = bubblePoint(card, x, pressure, e);
+            return Math.log(relativeVolatility(card, 0, 1, x, t, e));
+        };
+        java.util.List<Double> roots = new java.util.ArrayList<>();
+        double step = 0.995 / AZEOTROPE_SCAN;
+        double a = 0.0025;
+        double fa = f.applyAsDouble(a);
+        BrentSolver solver = new BrentSolver(1e-13, 1e-12);
+        for (int s = 1; s <= AZEOTROPE_SCAN; s++) {
+            double b = 0.0025 + step * s;
+            double fb = f.applyAsDouble(b);
+            if (fa == 0.0) {
+                roots.add(a);
+            } else if (fa * fb < 0.0) {
+                roots.add(solver.solve(200, f::applyAsDouble, a, b));
+            }
+            a = b;
+            fa = fb;
+        }
+        Units.Pressure unit = card.pressureUnit();
+        if (roots.isEmpty()) {
+            throw Problem.NO_AZEOTROPE.raise(card.components().get(0).name(), card.components().get(1).name(),
+                    Numbers.show(pressure), unit.symbol());
+        }
+        if (roots.size() > 1) {
+            StringBuilder list = new StringBuilder();
+            for (double r : roots) {
+                list.append(list.length() == 0 ? "" : ", ").append(Numbers.show(Math.round(r * 1e4) / 1e4));
+            }
+            throw Problem.SEVERAL_AZEOTROPES.raise(roots.size(), Numbers.show(pressure), unit.symbol(), list);
+        }
+        double x1 = roots.get(0);
+        return temperature ? bubblePoint(card, new double[] {x1, 1 - x1}, pressure, e) : x1;
+    }
+
     /** A residual of the temperature search: positive below the root, negative above (T in K, p in Pa). */
     private interface Residual {
         double at(double kelvin, double pascal);
