@@ -222,6 +222,45 @@ class LibraryCardsTest {
         }
     }
 
+    /**
+     * The model code itself: the sodium chloride card at 0 °C and w = 0.0037838838 against the value the thermo
+     * library (CalebBell/thermo, a general-purpose package from the registries) documents for the Laliberté–Cooper
+     * equations with these parameters, 1002.6250120185854 kg/m³; and the same card with Laliberté 2009's heat-capacity
+     * rows added (the card format's companion of the density model) gives both the density and the solution's heat
+     * capacity, w_w·Cp_w + w·Cp_app with Cp_app = a1·exp(a2·t + a3·exp(0.01·t) + a4·w) + a5·w^a6 (J/(g·K)).
+     */
+    @Test
+    void theDensityModelCodeAndItsHeatCapacityCompanion() {
+        Card nacl = CardLibrary.find("NaCl").card();
+        double w = 0.0037838838;
+        double x = x(nacl, w);
+        assertEquals(1002.6250120185854, nacl.mixture().density(new double[] {x, 1 - x}, 273.15), 1e-9);
+        List<Object[]> cells = new ArrayList<>(java.util.Arrays.asList(CardLibrary.find("NaCl").cells()));
+        double[] a = {-0.0693559668993322, -0.0782134167486952, 3.84798479408635, -11.2762109247072,
+            8.73187698542672, 1.81245930472755};
+        cells.add(new Object[] {"enthalpy unit", "kJ/mol"});
+        cells.add(new Object[] {"solution heat capacity", "sodium chloride", "Laliberté 2009", a[0], a[1], a[2], a[3],
+            a[4], a[5]});
+        cells.add(new Object[] {"heat capacity", "water", 0.07533898202, -1.141090799E-05, 4.367075878E-07,
+            -3.461183091E-09, 1.541047444E-11});
+        cells.add(new Object[] {"heat capacity reference temperature", "water", 25.0});
+        cells.remove(1); // the 'card size' row: this card has grown
+        Card both = org.miscela.core.card.CardReader.read(cells.toArray(new Object[0][]));
+        double t = 40;
+        double w2 = 0.15;
+        double x2 = x(both, w2);
+        double[] z = {x2, 1 - x2};
+        assertEquals(nacl.mixture().density(z, t + 273.15), both.mixture().density(z, t + 273.15), 0.0);
+        double dt = t - 25;
+        double cpWaterMolar = 1000 * (0.07533898202 + dt * (-1.141090799E-05 + dt * (4.367075878E-07
+                + dt * (-3.461183091E-09 + dt * 1.541047444E-11))));
+        double cpWater = cpWaterMolar / both.components().get(1).molarMass();
+        double cpApp = a[0] * Math.exp(a[1] * t + a[2] * Math.exp(0.01 * t) + a[3] * w2) + a[4] * Math.pow(w2, a[5]);
+        double expected = (1 - w2) * cpWater + w2 * cpApp; // J/(g·K)
+        double perGram = both.mixture().heatCapacity(z, t + 273.15) / both.mixture().meanMolarMass(z);
+        assertEquals(expected, perGram, 1e-12);
+    }
+
     /** Each committed Laliberté card carries the parameters of the data file it was written from, digit for digit. */
     @Test
     void theCardsCarryTheDataFilesParameters() throws IOException {
