@@ -261,6 +261,27 @@ class LibraryCardsTest {
         assertEquals(expected, perGram, 1e-12);
     }
 
+    /** MIX.TRACE and MIX.CHECK's digits table work on cards whose volume is a density formula, and say which. */
+    @Test
+    void traceAndDigitsOfDensityFormulaCards() {
+        for (String name : new String[] {"OIML R 22", "NaCl"}) {
+            CardLibrary.Entry e = CardLibrary.find(name);
+            Object[][] trace = org.miscela.core.functions.CardFunctions.trace(e.card(), new double[] {0.05, 0.95}, 20,
+                    org.miscela.core.functions.PropertyKind.VOLUME, Extrapolation.AS_CARD);
+            boolean model = false;
+            double rho = Double.NaN;
+            for (Object[] row : trace) {
+                model |= row[0].equals("mixture density model");
+                if (row[0].equals("mixture density [kg/m³]")) {
+                    rho = (Double) row[1];
+                }
+            }
+            assertTrue(model, name);
+            assertEquals(e.card().mixture().density(new double[] {0.05, 0.95}, 293.15), rho, 1e-9, name);
+            assertTrue(org.miscela.core.card.CardSanity.digits(e.cells(), e.card()).length >= 1, name);
+        }
+    }
+
     /** Each committed Laliberté card carries the parameters of the data file it was written from, digit for digit. */
     @Test
     void theCardsCarryTheDataFilesParameters() throws IOException {

@@ -117,6 +117,7 @@ public final class VleCardFitter {
                 .row("molar volume unit", "cm³/mol")
                 .row("molar mass unit", "g/mol")
                 .row("pressure unit", "kPa")
+                .row("enthalpy unit", "J/mol")
                 .row("component", "ethanol", "46.069")
                 .row("component", "water", "18.015")
                 .row("density model", "ethanol", "DIPPR 105")

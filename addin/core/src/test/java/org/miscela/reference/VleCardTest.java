@@ -137,4 +137,19 @@ class VleCardTest {
         }
         assertTrue(n >= 15);
     }
+
+    /** G^E = Σ x_k·Ḡ_k^E and Ḡ_k^E = R·T·ln γ_k (R = 8.314462618 J/(mol·K), exact in the 2019 SI). */
+    @Test
+    void excessGibbsEnergies() {
+        for (double x1 : new double[] {0.05, 0.3, 0.7, 0.95}) {
+            double[] x = {x1, 1 - x1};
+            double g = PhaseFunctions.excessGibbs(VLE, -1, x, 50, E);
+            double g1 = PhaseFunctions.excessGibbs(VLE, 0, x, 50, E);
+            double g2 = PhaseFunctions.excessGibbs(VLE, 1, x, 50, E);
+            assertEquals(g, x1 * g1 + (1 - x1) * g2, 1e-9);
+            assertEquals(8.314462618 * 323.15 * Math.log(PhaseFunctions.activityCoefficient(VLE, 0, x, 50, E)), g1,
+                    1e-9);
+            assertTrue(g > 0, "ethanol + water has a positive G^E");
+        }
+    }
 }

@@ -133,6 +133,9 @@ final class Explanations {
         add("relativeVolatility", (a, p) -> a.relativeVolatility(r(p[0]), r(p[1]), r(p[2]), r(p[3]), r(p[4]), p[5],
                 p[6], p[7]));
         add("azeotrope", (a, p) -> a.azeotrope(r(p[0]), r(p[1]), p[2], p[3]));
+        add("excessGibbs", (a, p) -> a.excessGibbs(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
+        add("partialExcessGibbs", (a, p) -> a.partialExcessGibbs(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5],
+                p[6]));
     }
 
     private Explanations() {

@@ -249,7 +249,8 @@ final class FuzzCall {
                 case "partialExcessMolarVolume":
                 case "partialExcessEnthalpy":
                 case "activityCoefficient":
-                case "vapourFraction": {
+                case "vapourFraction":
+                case "partialExcessGibbs": {
                     Object[][] x = composition();
                     a = new Object[] {component(), x, temperature(x), extrapolate()};
                     break;
@@ -263,7 +264,8 @@ final class FuzzCall {
                     a = new Object[] {clean ? pick(10.0, 50.0, 101.325) : pick(0.0, -1.0, 1e300, "", junk(), 50.0),
                         pick(Any.VOID, "composition", "temperature", clean ? "temperature" : "x"), extrapolate()};
                     break;
-                case "bubblePressure": {
+                case "bubblePressure":
+                case "excessGibbs": {
                     Object[][] x = composition();
                     a = new Object[] {x, temperature(x), extrapolate()};
                     break;
@@ -473,6 +475,8 @@ final class FuzzCall {
                 case "bubblePressure":
                 case "bubblePoint":
                 case "relativeVolatility":
+                case "excessGibbs":
+                case "partialExcessGibbs":
                 case "mixtureMolarMass": {
                     Object[] out = java.util.Arrays.copyOf(a, a.length + 2);
                     out[a.length] = clean ? pick(Any.VOID, Any.VOID, "mole fraction", "mass fraction", "w")

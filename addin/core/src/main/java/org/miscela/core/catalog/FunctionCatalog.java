@@ -695,7 +695,25 @@ public final class FunctionCatalog {
                     .shows("0.9007").refuses(union(POINT_PROBLEMS, VAPOUR_PROBLEMS, list(Problem.NO_AZEOTROPE,
                             Problem.SEVERAL_AZEOTROPES, Problem.NOT_BINARY_AZEOTROPE, Problem.NO_BUBBLE_POINT,
                             Problem.BLEND_NOT_POSITIVE, Problem.ARG_NOT_NUMBER, Problem.ARG_NOT_TEXT,
-                            Problem.UNKNOWN_RESULT)))));
+                            Problem.UNKNOWN_RESULT))),
+            new FunctionInfo("excessGibbs", "MIX.EXCESSGIBBS",
+                    "excess molar Gibbs energy G^E of the liquid blend",
+                    "Excess molar Gibbs energy of the liquid blend from the card's G^E/RT, in the card's enthalpy "
+                            + "unit; positive when the liquids would rather stay apart.",
+                    "G^E = R·T·g, g = G^E/RT = Σ_k x_k·ln γ_k (R = 8.314462618 J/(mol·K))",
+                    "=MIX.EXCESSGIBBS(vle; 0.3; 50)",
+                    CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("758.67").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
+                            list(Problem.NO_GIBBS, Problem.NO_ENERGY_UNIT))),
+            new FunctionInfo("partialExcessGibbs", "MIX.PARTIALGIBBS",
+                    "partial molar excess Gibbs energy of a component (R·T·ln γ)",
+                    "Partial molar excess Gibbs energy of one component, R·T·ln γ, from the card's G^E/RT, in the "
+                            + "card's enthalpy unit.",
+                    "Ḡ_k^E = ∂(n·G^E)/∂n_k = R·T·ln γ_k",
+                    "=MIX.PARTIALGIBBS(vle; \"ethanol\"; 0.3; 50)",
+                    CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("1462.93").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
+                            COMPONENT_PROBLEMS, list(Problem.NO_GIBBS, Problem.NO_ENERGY_UNIT)))));
 
     private FunctionCatalog() {
     }

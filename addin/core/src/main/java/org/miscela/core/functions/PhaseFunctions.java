@@ -31,6 +31,28 @@ public final class PhaseFunctions {
         return finite(card, t, "activity coefficient of " + card.components().get(k).name(), Math.exp(lnGamma[k]));
     }
 
+    /** The gas constant, J/(mol·K), exact since the 2019 SI (N_A·k). */
+    public static final double GAS_CONSTANT = 8.314462618;
+
+    /**
+     * G^E = RT·g (component < 0) or the partial molar excess Gibbs energy Ḡ_k^E = RT·ln γ_k, in the card's enthalpy
+     * unit (refused with words when the card states none).
+     */
+    public static double excessGibbs(Card card, int component, double[] x, double t, Extrapolation e) {
+        double[] z = CardFunctions.moleFractions(card, x);
+        double kelvin = PointChecks.checkPoint(card, z, t, e);
+        if (card.units().enthalpy() == null) {
+            throw Problem.NO_ENERGY_UNIT.raise();
+        }
+        double[] lnGamma = new double[z.length];
+        double g = card.mixture().logActivityCoefficients(z, kelvin, lnGamma);
+        double v = GAS_CONSTANT * kelvin * (component < 0 ? g : lnGamma[component]);
+        if (!Double.isFinite(v)) {
+            throw PointChecks.nonPhysical(card, t, "excess Gibbs energy", v);
+        }
+        return card.units().enthalpy().fromJoulePerMol(v);
+    }
+
     /** The bubble pressure Σ x_k γ_k p_k* in the card's pressure unit. */
     public static double bubblePressure(Card card, double[] x, double t, Extrapolation e) {
         double[] z = CardFunctions.moleFractions(card, x);
