@@ -227,16 +227,17 @@ final class CardBuilder {
         double[][] c = new double[n][n];
         double[][] alpha = new double[n][n];
         boolean[][] ideal = new boolean[n][n];
-        boolean[][] seen = new boolean[n][n];
+        // the row of each pair: 'a + b' and 'b + a' are different subjects to the grammar, one pair here
+        CardRow[][] seen = new CardRow[n][n];
         for (CardRow r : (isWilson ? wilson : nrtl).values()) {
             int[] m = subjects.members(r, 2);
             int i = m[0];
             int j = m[1];
-            if (seen[i][j]) {
-                throw Problem.DUPLICATE_ROW.raise(r.number, r.label, r.number);
+            if (seen[i][j] != null) {
+                throw Problem.DUPLICATE_ROW.raise(r.number, r.label, seen[i][j].number);
             }
-            seen[i][j] = true;
-            seen[j][i] = true;
+            seen[i][j] = r;
+            seen[j][i] = r;
             double[] v = r.numbersFrom(1);
             if (isWilson) {
                 if (v.length != 2 && v.length != 6) {
@@ -272,7 +273,7 @@ final class CardBuilder {
         }
         for (int i = 0; i < n; i++) {
             for (int j = i + 1; j < n; j++) {
-                if (!seen[i][j]) {
+                if (seen[i][j] == null) {
                     if (!missingIdeal) {
                         throw Problem.MISSING_MODEL_PAIR.raise(isWilson ? "Wilson" : "NRTL", subjects.name(i),
                                 subjects.name(j));

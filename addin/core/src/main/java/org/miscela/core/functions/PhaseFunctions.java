@@ -24,11 +24,11 @@ public final class PhaseFunctions {
     /** γ_k of one component at a composition and temperature. */
     public static double activityCoefficient(Card card, int component, double[] x, double t, Extrapolation e) {
         double[] z = CardFunctions.moleFractions(card, x);
-        int k = CardFunctions.componentByNumber(card, component + 1);
         double kelvin = PointChecks.checkPoint(card, z, t, e);
         double[] lnGamma = new double[z.length];
         card.mixture().logActivityCoefficients(z, kelvin, lnGamma);
-        return finite(card, t, "activity coefficient of " + card.components().get(k).name(), Math.exp(lnGamma[k]));
+        return finite(card, t, "activity coefficient of " + card.components().get(component).name(),
+                Math.exp(lnGamma[component]));
     }
 
     /** The gas constant, J/(mol·K), exact since the 2019 SI (N_A·k). */
@@ -64,11 +64,11 @@ public final class PhaseFunctions {
     /** y_k, the mole fraction of one component in the vapour at the bubble point at t. */
     public static double vapourFraction(Card card, int component, double[] x, double t, Extrapolation e) {
         double[] z = CardFunctions.moleFractions(card, x);
-        int k = CardFunctions.componentByNumber(card, component + 1);
         double kelvin = checkVapourPoint(card, z, t, e);
         double[] partial = new double[z.length];
         double p = card.mixture().bubblePressure(z, kelvin, partial);
-        return finite(card, t, "vapour mole fraction of " + card.components().get(k).name(), partial[k] / p);
+        return finite(card, t, "vapour mole fraction of " + card.components().get(component).name(),
+                partial[component] / p);
     }
 
     /**
@@ -109,11 +109,6 @@ public final class PhaseFunctions {
     public static double relativeVolatility(Card card, int i, int j, double[] x, double t, Extrapolation e) {
         double[] z = CardFunctions.moleFractions(card, x);
         double kelvin = checkVapourPoint(card, z, t, e);
-        for (int k : new int[] {i, j}) {
-            if (z[k] == 0.0) {
-                card.mixture().vapourPressure(k, kelvin); // refuses a component without a row
-            }
-        }
         double[] lnGamma = new double[z.length];
         card.mixture().logActivityCoefficients(z, kelvin, lnGamma);
         return finite(card, t, "relative volatility", Math.exp(lnGamma[i] - lnGamma[j])

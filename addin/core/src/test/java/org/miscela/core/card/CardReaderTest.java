@@ -337,6 +337,9 @@ class CardReaderTest {
                                 .row("wilson", "alpha + beta", 100, 200).row("wilson", "alpha + gamma", 100, 200)
                                 .row("wilson volume", "alpha", 58).row("wilson volume", "beta", 18)
                                 .row("wilson volume", "gamma", 73))),
+                bad("a Wilson pair written both ways", Problem.DUPLICATE_ROW, 21, "row 20",
+                        v2(c -> c.row("wilson", "alpha + beta", 100, 200).row("wilson", "beta + alpha", 200, 100)
+                                .row("wilson volume", "alpha", 58).row("wilson volume", "beta", 18))),
                 bad("a card cut short by a small array block", Problem.CARD_CUT_SHORT, 20,
                         "the card has 21 rows and 4 columns, but the range holds only 20 rows and 4 columns",
                         v2(c -> c.row("card size", 21, 4))),
