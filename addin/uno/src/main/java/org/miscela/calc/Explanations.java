@@ -136,6 +136,8 @@ final class Explanations {
         add("excessGibbs", (a, p) -> a.excessGibbs(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
         add("partialExcessGibbs", (a, p) -> a.partialExcessGibbs(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5],
                 p[6]));
+        add("fitVapourLiquid", (a, p) -> a.fitVapourLiquid(r(p[0]), p[1], r(p[2]), p[3], r(p[4]), r(p[5]), p[6],
+                p[7], p[8], p[9], p[10], p[11], p[12]));
     }
 
     private Explanations() {

@@ -21,6 +21,7 @@ import org.miscela.core.blend.CompositionBasis;
 import org.miscela.core.functions.CardFunctions;
 import org.miscela.core.card.Extrapolation;
 import org.miscela.core.fit.RedlichKisterFitter;
+import org.miscela.core.fit.VleFitter;
 import org.miscela.core.problem.MiscelaException;
 import org.miscela.core.problem.Problem;
 
@@ -755,6 +756,30 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
                     basisTemperature), e, (k, x, t) -> PhaseFunctions.excessGibbs(k, i, x, t, e));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "partialExcessGibbs");
+        }
+    }
+
+    @Override
+    public Object fitVapourLiquid(Object[][] pure, Object pair, Object[][] moleFraction, Object vapourFraction,
+            Object[][] temperature, Object[][] pressure, Object model, Object order, Object orderInTemperature,
+            Object referenceTemperature, Object alpha, Object weights, Object result) throws IllegalArgumentException {
+        try {
+            FitOutput output = Arguments.fitOutput(result);
+            Card c = CardReader.readPureComponents(pure);
+            int[] p = Arguments.pair(c, pair);
+            VleFitter.Model m = VleFitter.Model.lookup(Arguments.text("model", model, "Redlich-Kister"));
+            int k = Arguments.count("order", order, RedlichKisterFitter.MAX_ORDER_IN_X, -1);
+            int mt = Arguments.count("order in T", orderInTemperature, RedlichKisterFitter.MAX_ORDER_IN_T, 0);
+            double a = Arguments.unwrap(alpha) == null ? FitFunctions.DEFAULT_NRTL_ALPHA
+                    : Arguments.optionalNumber("alpha", alpha);
+            double[][] d = DataArguments.dataColumns(new String[] {"mole fraction", "vapour mole fraction",
+                "temperature", "pressure", "weight"}, new Object[][][] {moleFraction,
+                    Arguments.optionalRange(vapourFraction), temperature, pressure, Arguments.optionalRange(weights)},
+                    new boolean[] {false, false, true, true, false});
+            return Arguments.table(FitFunctions.vle(c, p[0], p[1], d[0], d[1], d[2], d[3], m, k, mt,
+                    Arguments.optionalNumber("reference temperature", referenceTemperature), a, d[4], output));
+        } catch (RuntimeException ex) {
+            return checkOrRefuse(result, ex, "fitVapourLiquid");
         }
     }
 

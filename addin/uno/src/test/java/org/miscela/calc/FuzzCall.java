@@ -329,6 +329,9 @@ final class FuzzCall {
                 case "fitDensity":
                     a = fitDensity();
                     break;
+                case "fitVapourLiquid":
+                    a = fitVapourLiquid();
+                    break;
                 case "leastSquares":
                     a = leastSquares();
                     break;
@@ -940,17 +943,10 @@ final class FuzzCall {
             } catch (MiscelaException e) {
                 // no pure data: the densities below are plausible numbers only
             }
-            int first = 0;
-            int second = Math.min(1, Math.max(card.componentCount() - 1, 0));
-            Object pair = Any.VOID;
-            if (card.componentCount() > 2 || r.nextInt(4) == 0) {
-                int[] p = {r.nextInt(Math.max(card.componentCount(), 1)), r.nextInt(Math.max(card.componentCount(), 1))};
-                first = p[0];
-                second = p[1];
-                pair = card.names.isEmpty() ? "a + b" : pick(card.names.get(first) + " + " + card.names.get(second),
-                        card.names.get(first) + "+" + card.names.get(second), "nobody + " + card.names.get(first),
-                        "", 1.0);
-            }
+            int[] members = new int[2];
+            Object pair = pairArgument(members);
+            int first = members[0];
+            int second = members[1];
             for (int i = 0; i < points; i++) {
                 t[i] = card.lowest + (card.highest - card.lowest) * r.nextDouble();
                 rho[i] = plausibleDensity(pure, first, second, x[i], t[i]);
@@ -962,6 +958,72 @@ final class FuzzCall {
                 r.nextBoolean() ? Any.VOID : order(2, 10),
                 r.nextBoolean() ? Any.VOID : (Object) ((card.lowest + card.highest) / 2),
                 r.nextInt(3) == 0 ? vector(w, row) : Any.VOID, fitResult()};
+        }
+
+        /** The pair argument of a fit (left out on a binary card, often): its members into {@code members}. */
+        Object pairArgument(int[] members) {
+            members[0] = 0;
+            members[1] = Math.min(1, Math.max(card.componentCount() - 1, 0));
+            if (card.componentCount() <= 2 && r.nextInt(4) != 0) {
+                return Any.VOID;
+            }
+            members[0] = r.nextInt(Math.max(card.componentCount(), 1));
+            members[1] = r.nextInt(Math.max(card.componentCount(), 1));
+            String a = card.names.isEmpty() ? "a" : card.names.get(members[0]);
+            String b = card.names.isEmpty() ? "b" : card.names.get(members[1]);
+            return pick(a + " + " + b, a + "+" + b, "nobody + " + a, "", 1.0);
+        }
+
+        /** Vapour–liquid data for MIX.FITVLE: near-ideal pressures from the card's vapour pressures where it has them. */
+        Object[] fitVapourLiquid() {
+            int points = !clean && r.nextInt(20) == 0 ? 0 : 1 + r.nextInt(25);
+            double[] x = fractions(points);
+            double[] y = new double[points];
+            double[] t = new double[points];
+            double[] p = new double[points];
+            double[] w = new double[points];
+            Card pure = null;
+            try {
+                pure = CardReader.readPureComponents(card.cells);
+            } catch (MiscelaException e) {
+                // no pure data: the pressures below are plausible numbers only
+            }
+            int[] members = new int[2];
+            Object pair = pairArgument(members);
+            double scale = 0.5 + 1.5 * r.nextDouble();
+            for (int i = 0; i < points; i++) {
+                t[i] = card.lowest + (card.highest - card.lowest) * r.nextDouble();
+                double[] ideal = idealBubble(pure, members, x[i], t[i]);
+                p[i] = ideal[0] * scale * (1 + 0.2 * x[i] * (1 - x[i]));
+                y[i] = ideal[1];
+                w[i] = !clean && r.nextInt(10) == 0 ? pick(0.0, -1.0) : 0.5 + r.nextDouble();
+            }
+            boolean row = r.nextInt(6) == 0;
+            Object model = clean ? pick(Any.VOID, "Redlich-Kister", "Wilson", "NRTL")
+                    : pick(Any.VOID, "Redlich-Kister", "wilson", "NRTL", "UNIQUAC", "", 1.0);
+            return new Object[] {pair, vector(x, row), r.nextInt(3) == 0 ? Any.VOID : vector(y, row),
+                r.nextInt(5) == 0 && points > 0 ? new Object[][] {{t[0]}} : vector(t, row), vector(p, row), model,
+                r.nextInt(3) == 0 ? order(3, 30) : Any.VOID, r.nextInt(4) == 0 ? order(1, 10) : Any.VOID,
+                r.nextBoolean() ? Any.VOID : (Object) ((card.lowest + card.highest) / 2),
+                r.nextInt(4) == 0 ? pick(0.2, 0.3, 0.47, clean ? 0.3 : 0.0, clean ? 0.3 : 2.0) : Any.VOID,
+                r.nextInt(3) == 0 ? vector(w, row) : Any.VOID,
+                r.nextInt(5) == 0 ? "consistency" : fitResult()};
+        }
+
+        /** {p, y1} of an ideal solution from the card's vapour pressures (card units), or plausible numbers. */
+        double[] idealBubble(Card pure, int[] members, double x, double t) {
+            if (pure != null && pure.pressureUnit() != null && members[0] < pure.componentCount()
+                    && members[1] < pure.componentCount() && pure.vapourPressure(members[0]) != null
+                    && pure.vapourPressure(members[1]) != null && x >= 0 && x <= 1) {
+                double kelvin = pure.units().temperature().toKelvin(t);
+                double p1 = x * pure.vapourPressure(members[0]).pascal(kelvin);
+                double p2 = (1 - x) * pure.vapourPressure(members[1]).pascal(kelvin);
+                double p = pure.pressureUnit().fromPascal(p1 + p2);
+                if (Double.isFinite(p) && p > 0) {
+                    return new double[] {p, p1 / (p1 + p2)};
+                }
+            }
+            return new double[] {1 + 100 * r.nextDouble(), r.nextDouble()};
         }
 
         /** An ideal-mixture density from the card's pure data with a small excess, in the card's unit. */

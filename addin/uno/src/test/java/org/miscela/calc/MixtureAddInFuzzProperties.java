@@ -117,6 +117,7 @@ class MixtureAddInFuzzProperties {
                 return trace(call, result);
             case "fitExcessVolume":
             case "fitDensity":
+            case "fitVapourLiquid":
             case "leastSquares":
                 return result instanceof String ? text(call, result) : table(call, result);
             case "addInInfo":

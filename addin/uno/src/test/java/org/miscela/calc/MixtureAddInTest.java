@@ -389,6 +389,43 @@ class MixtureAddInTest {
         assertEquals("OK", ((Object[][]) ((Any) ok).getObject())[0][0], "with the order given");
     }
 
+    /**
+     * MIX.FITVLE through the adapter: bubble pressures at 70 °C from the Wilson card (Gmehling et al. 2012, problem
+     * P05.01a: Λ12 = 0.154, Λ21 = 0.888, written as Δλ/R = 641.966 and 40.761 K with equal volumes), fitted by
+     * Barker's method, give back the card's Wilson row, shaped as the row takes it; the Redlich–Kister and NRTL fits
+     * of the same points come out shaped as their rows; data typed in Pa on a card in kPa are refused in words.
+     */
+    @Test
+    void theVapourLiquidFitGivesBackTheCardsWilsonRow() throws Exception {
+        Object[][] wilson = TestCards.cells("ethanol-water-wilson.tsv");
+        Object[][] x = {{0.1}, {0.3}, {0.5}, {0.7}, {0.9}};
+        Object[][] p = new Object[5][1];
+        for (int i = 0; i < 5; i++) {
+            p[i][0] = addIn.bubblePressure(wilson, new Object[][] {{x[i][0]}}, one(70.0), Any.VOID, Any.VOID,
+                    Any.VOID);
+        }
+        Object[][] row = (Object[][]) ((Any) addIn.fitVapourLiquid(wilson, Any.VOID, x, Any.VOID, one(70.0), p,
+                "Wilson", Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID)).getObject();
+        assertEquals(1, row.length);
+        assertEquals(641.9659384644834, (Double) row[0][0], 1e-3);
+        assertEquals(40.76057037495717, (Double) row[0][1], 1e-3);
+        Object[][] rk = (Object[][]) ((Any) addIn.fitVapourLiquid(wilson, Any.VOID, x, Any.VOID, one(70.0), p,
+                Any.VOID, one(3.0), Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID)).getObject();
+        assertEquals(4, rk.length, "A0..A3, one per row");
+        Object[][] nrtl = (Object[][]) ((Any) addIn.fitVapourLiquid(wilson, Any.VOID, x, Any.VOID, one(70.0), p,
+                "NRTL", Any.VOID, Any.VOID, Any.VOID, one(0.25), Any.VOID, Any.VOID)).getObject();
+        assertEquals(5, nrtl[0].length, "A, B, A, B, alpha");
+        assertEquals(0.25, (Double) nrtl[0][4], 0.0);
+        Object[][] pascal = new Object[5][1];
+        for (int i = 0; i < 5; i++) {
+            pascal[i][0] = 1000 * (Double) p[i][0];
+        }
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> addIn.fitVapourLiquid(
+                wilson, Any.VOID, x, Any.VOID, one(70.0), pascal, Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID,
+                Any.VOID, Any.VOID));
+        assertTrue(e.getMessage().startsWith("The best fit misses the measured pressures by"), e.getMessage());
+    }
+
     /** Numbers a message quotes from an argument are written as a person writes them ("31", not "31.0"). */
     @Test
     void messagesQuoteNumbersAsWritten() {

@@ -52,6 +52,13 @@ class UnreachableProblemsTest {
             throw new Checked(Problem.CHECK_NEEDS_BOTH, answer);
         });
         m.put(Problem.NO_CONVERGENCE, () -> SolverAccess.finalTemperature(t -> 1.0, 300.0, 1324.0));
+        m.put(Problem.VLE_FIT_NOT_CONVERGED, () -> {
+            Card vle = TestCards.card("ethanol-water-vle.tsv");
+            new org.miscela.core.fit.VleFitter(org.miscela.core.fit.VleFitter.Model.NRTL, 0, 0, 298.15, 0.3, null,
+                    vle.vapourPressure(0), vle.vapourPressure(1), new double[] {0.1, 0.5, 0.9},
+                    new double[] {0.45, 0.65, 0.9}, new double[] {343.15, 343.15, 343.15},
+                    new double[] {50000, 66000, 72000}, null).fit(true, 1);
+        });
         m.put(Problem.RAGGED_DESIGN, () -> LinearLeastSquares.fit(new double[][] {{1, 0}, {1}}, new double[2],
                 null));
         m.put(Problem.NO_PARAMETERS, () -> LinearLeastSquares.fit(new double[][] {{}}, new double[1], null));

@@ -49,6 +49,8 @@ public final class Card {
     private final VapourPressure[] vapourPressures;
     /** The unit of pressures on the card and in the functions, or null when the card states none. */
     private final Units.Pressure pressureUnit;
+    /** The molar volumes of 'Wilson volume' rows (cm³/mol; NaN for a component without one), or null. */
+    private final double[] wilsonVolumes;
 
     /**
      * 20 °C, the temperature at which alcoholic strength by volume is defined (OIML R 22 (1975)), used for every
@@ -101,6 +103,7 @@ public final class Card {
         this.excessGibbs = phase == null ? null : phase.gibbs;
         this.vapourPressures = phase == null || phase.vapour == null ? null : phase.vapour.clone();
         this.pressureUnit = phase == null ? null : phase.pressure;
+        this.wilsonVolumes = phase == null || phase.wilsonVolumes == null ? null : phase.wilsonVolumes.clone();
         if (densityModel != null && excessVolume != null) {
             throw new IllegalArgumentException("a card states its volumes one way");
         }
@@ -215,11 +218,13 @@ public final class Card {
         final ExcessModel gibbs;
         final VapourPressure[] vapour;
         final Units.Pressure pressure;
+        final double[] wilsonVolumes;
 
-        PhaseData(ExcessModel gibbs, VapourPressure[] vapour, Units.Pressure pressure) {
+        PhaseData(ExcessModel gibbs, VapourPressure[] vapour, Units.Pressure pressure, double[] wilsonVolumes) {
             this.gibbs = gibbs;
             this.vapour = vapour;
             this.pressure = pressure;
+            this.wilsonVolumes = wilsonVolumes;
         }
     }
 
@@ -231,6 +236,14 @@ public final class Card {
     /** Component k's vapour pressure, or null when the card gives none for it. */
     public VapourPressure vapourPressure(int k) {
         return vapourPressures == null ? null : vapourPressures[k];
+    }
+
+    /**
+     * The molar volume (cm³/mol) of component k's 'Wilson volume' row, or NaN when it has none: the volumes Λ uses,
+     * also read from the pure part of a card that a Wilson fit is given.
+     */
+    public double wilsonVolume(int k) {
+        return wilsonVolumes == null ? Double.NaN : wilsonVolumes[k];
     }
 
     /** The card's pressure unit, or null when it states none. */

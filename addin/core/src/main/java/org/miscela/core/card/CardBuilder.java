@@ -65,6 +65,8 @@ final class CardBuilder {
     private final ParsedCard rows;
     /** Whether only the pure-component part is read ({@link CardReader#readPureComponents}). */
     private final boolean pureOnly;
+    /** Set by {@link #localComposition}: the 'Wilson volume' rows (cm³/mol), or null. */
+    private double[] wilsonVolumes;
     private Units units;
     /** g/mol by normalised component name (a DIPPR 105 density is in mol/dm³). */
     private final Map<String, Double> molarMasses = new java.util.HashMap<>();
@@ -196,7 +198,7 @@ final class CardBuilder {
         VapourPressure[] vapour = vapourPressures(names, pressure);
         return new Card(title, source, units, components, volume, enthalpy, validity, allow, missingIdeal,
                 basisReferenceKelvin, solutionHeatCapacity(names, masses), boilingCurve(names), mixtureDensity,
-                new Card.PhaseData(gibbs, vapour, pressure));
+                new Card.PhaseData(gibbs, vapour, pressure, wilsonVolumes));
     }
 
     /**
@@ -211,7 +213,11 @@ final class CardBuilder {
         Map<String, CardRow> volumes = rows.keyed(CardLabels.WILSON_VOLUME);
         if (wilson.isEmpty() && nrtl.isEmpty()) {
             if (!volumes.isEmpty()) {
-                throw Problem.MISSING_PAIR_ROW.raise(CardLabels.WILSON_VOLUME, "the mixture", "Wilson");
+                if (!pureOnly) {
+                    throw Problem.MISSING_PAIR_ROW.raise(CardLabels.WILSON_VOLUME, "the mixture", "Wilson");
+                }
+                // the pure part a Wilson fit reads: the volumes the fitted rows below it will use
+                wilsonVolumes = wilsonVolumes(subjects, volumes, false);
             }
             return null;
         }
@@ -286,11 +292,23 @@ final class CardBuilder {
         if (!isWilson) {
             return LocalCompositionGibbs.nrtl(a, b, alpha, ideal);
         }
+        double[] volume = wilsonVolumes(subjects, volumes, true);
+        wilsonVolumes = volume;
+        return LocalCompositionGibbs.wilson(volume, a, b, c, ideal);
+    }
+
+    /** The 'Wilson volume' rows in cm³/mol, NaN for a component without one unless each must have one. */
+    private double[] wilsonVolumes(Subjects subjects, Map<String, CardRow> volumes, boolean required) {
+        int n = subjects.size();
         double[] volume = new double[n];
         for (int k = 0; k < n; k++) {
             CardRow r = volumes.get(normalise(subjects.name(k)));
             if (r == null) {
-                throw Problem.MISSING_PAIR_ROW.raise("Wilson", subjects.name(k), CardLabels.WILSON_VOLUME);
+                if (required) {
+                    throw Problem.MISSING_PAIR_ROW.raise("Wilson", subjects.name(k), CardLabels.WILSON_VOLUME);
+                }
+                volume[k] = Double.NaN;
+                continue;
             }
             r.atMost(2);
             volume[k] = units.molarVolume().toCm3PerMol(r.number(1));
@@ -298,7 +316,7 @@ final class CardBuilder {
                 throw Problem.NOT_POSITIVE.raise(r.number, r.label, "the molar volume", Numbers.show(volume[k]));
             }
         }
-        return LocalCompositionGibbs.wilson(volume, a, b, c, ideal);
+        return volume;
     }
 
     /**

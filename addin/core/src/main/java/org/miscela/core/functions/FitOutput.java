@@ -10,6 +10,8 @@ public enum FitOutput {
     COVARIANCE("covariance"),
     RESIDUALS("residuals"),
     ORDERS("orders"),
+    /** The thermodynamic-consistency tests of vapour–liquid equilibrium data (MIX.FITVLE only). */
+    CONSISTENCY("consistency"),
     /** "OK" or the message saying why the fit is refused: the fit's companion check, never an error itself. */
     CHECK("check");
 

@@ -252,7 +252,7 @@ class FitOutputsTest {
         assertEquals(Problem.UNKNOWN_PROPERTY,
                 assertThrows(MiscelaException.class, () -> PropertyKind.lookup("entropy")).problem());
         assertEquals(Problem.UNKNOWN_FIT_OUTPUT.format("all", "coefficients, standard errors, statistics, covariance, "
-                + "residuals, orders, check"), assertThrows(MiscelaException.class, () -> FitOutput.lookup(" all "))
+                + "residuals, orders, consistency, check"), assertThrows(MiscelaException.class, () -> FitOutput.lookup(" all "))
                 .getMessage());
     }
 
