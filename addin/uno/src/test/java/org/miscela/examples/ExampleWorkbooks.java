@@ -191,7 +191,10 @@ final class ExampleWorkbooks {
         cardTable(doc, s, cells, top, columns, noteRow, width, third, "card");
     }
 
-    /** As {@link #cardTable(XComponent, XSpreadsheet, Object[][], int, int, int, int, int)}, the range named {@code name}. */
+    /**
+     * As {@link #cardTable(XComponent, XSpreadsheet, Object[][], int, int, int, int, int)}, the range named
+     * {@code name}.
+     */
     static void cardTable(XComponent doc, XSpreadsheet s, Object[][] cells, int top, int columns, int noteRow,
             int width, int third, String name) throws Exception {
         String last = col(columns - 1);

@@ -786,7 +786,8 @@ class ExamplesIT {
             double[] x = {x1, 1 - x1};
             double tb = value(s, 1, SolventRecoveryWorkbookBuilder.CHARGE_T_ROW);
             assertClose(PhaseFunctions.bubblePoint(wilson, x, p, e), tb, "MIX.BUBBLEPOINT of the charge");
-            assertEquals(p, PhaseFunctions.bubblePressure(wilson, x, tb, e), 1e-6, "its bubble pressure is the still's");
+            assertEquals(p, PhaseFunctions.bubblePressure(wilson, x, tb, e), 1e-6,
+                    "its bubble pressure is the still's");
             double y1 = value(s, 1, SolventRecoveryWorkbookBuilder.CHARGE_Y_ROW);
             assertClose(PhaseFunctions.vapourFraction(wilson, 0, x, tb, e), y1, "first vapour");
             assertTrue(y1 > x1, "the vapour is richer in ethanol below the azeotrope: " + y1);

@@ -443,9 +443,9 @@ public final class SolventRecoveryWorkbookBuilder {
         fitted(s, "A3:O3", 2, "Beside each point, the Wilson card's prediction at the point's pressure and x1 "
                 + "(MIX.BUBBLEPOINT, then MIX.VAPOURFRACTION at that temperature) and the deviations, card minus "
                 + "data. The Redlich–Kister card is not used here: its coefficients were fitted to this very isobar "
-                + "(with a 30 °C isotherm), so it would be no independent check. The block " + col(FIT_FIRST_COL) + ".."
-                + col(FIT_LAST_COL) + " to the right is left EMPTY on purpose, for the parameters fitted to the data "
-                + "block.", wide);
+                + "(with a 30 °C isotherm), so it would be no independent check. The block " + col(FIT_FIRST_COL)
+                + ".." + col(FIT_LAST_COL) + " to the right is left EMPTY on purpose, for the parameters fitted to "
+                + "the data block.", wide);
         String last = col(LAB_DY);
         text(s, 0, LAB_HEAD_ROW, "Lab VLE data (stand-in: Rieder & Thompson 1949, 101.3 kPa)");
         head(s, "A" + (LAB_HEAD_ROW + 1) + ":" + last + (LAB_HEAD_ROW + 1));
@@ -601,8 +601,9 @@ public final class SolventRecoveryWorkbookBuilder {
         Object chart = UnoRuntime.queryInterface(XNameAccess.class, charts).getByName(CHART_NAME);
         XChartDocument cd = UnoRuntime.queryInterface(XChartDocument.class,
                 UnoRuntime.queryInterface(XEmbeddedObjectSupplier.class, chart).getEmbeddedObject());
-        XDiagram d = ExampleWorkbooks.lineChart(cd, "Ethanol + water at 101.325 kPa: T–x–y (Wilson card, estimates)",
-                10f, "mole fraction of ethanol: x1 in the liquid, y1 in the vapour", "temperature, °C");
+        XDiagram d = ExampleWorkbooks.lineChart(cd,
+                "Ethanol + water at 101.325 kPa: T–x–y (Wilson card, estimates)", 10f,
+                "mole fraction of ethanol: x1 in the liquid, y1 in the vapour", "temperature, °C");
         XPropertySet dp = UnoRuntime.queryInterface(XPropertySet.class, d);
         dp.setPropertyValue("SymbolType", ChartSymbolType.NONE);
         dp.setPropertyValue("MissingValueTreatment", com.sun.star.chart.MissingValueTreatment.LEAVE_GAP);
