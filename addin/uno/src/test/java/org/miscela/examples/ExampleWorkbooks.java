@@ -188,15 +188,24 @@ final class ExampleWorkbooks {
      */
     static void cardTable(XComponent doc, XSpreadsheet s, Object[][] cells, int top, int columns, int noteRow,
             int width, int third) throws Exception {
+        cardTable(doc, s, cells, top, columns, noteRow, width, third, "card");
+    }
+
+    /**
+     * As {@link #cardTable(XComponent, XSpreadsheet, Object[][], int, int, int, int, int)}, the range named
+     * {@code name}.
+     */
+    static void cardTable(XComponent doc, XSpreadsheet s, Object[][] cells, int top, int columns, int noteRow,
+            int width, int third, String name) throws Exception {
         String last = col(columns - 1);
-        fitted(s, "A" + (noteRow + 1) + ":" + last + (noteRow + 1), noteRow, "The named range 'card' covers A"
+        fitted(s, "A" + (noteRow + 1) + ":" + last + (noteRow + 1), noteRow, "The named range '" + name + "' covers A"
                 + (top + 1) + ":" + last + (top + cells.length) + ": labels in column A, values to their right; in "
                 + "keyed rows column B names the component or the pair. Every function on the other sheets reads "
                 + "these cells; change them only for a card whose source you know, and write that source in the "
                 + "'source' row.", width);
         text(s, 0, noteRow + 1, "Card check (MIX.CHECK)");
         bold(s, "A" + (noteRow + 2), 10);
-        s.getCellByPosition(1, noteRow + 1).setFormula("=MIX.CHECK(card)");
+        s.getCellByPosition(1, noteRow + 1).setFormula("=MIX.CHECK(" + name + ")");
         String[] heads = {"label", "subject / value"};
         for (int c = 0; c < columns; c++) {
             text(s, c, top - 1, c < heads.length ? heads[c] : "value");
@@ -208,7 +217,9 @@ final class ExampleWorkbooks {
             }
         }
         band(s, "A" + (top + 1) + ":" + last + (top + cells.length), REFERENCE_COLOUR);
-        nameRange(doc, "card", "$Card.$A$" + (top + 1) + ":$" + last + "$" + (top + cells.length));
+        String sheetName = UnoRuntime.queryInterface(XNamed.class, s).getName();
+        String quoted = sheetName.matches("[A-Za-z0-9_]+") ? sheetName : "'" + sheetName + "'";
+        nameRange(doc, name, "$" + quoted + ".$A$" + (top + 1) + ":$" + last + "$" + (top + cells.length));
         int[] mm = new int[columns];
         mm[0] = 74;
         mm[1] = 40;

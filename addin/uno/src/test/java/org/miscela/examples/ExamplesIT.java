@@ -60,6 +60,7 @@ import org.miscela.core.card.TestCards;
 import org.miscela.core.functions.TemperaturePath;
 import org.miscela.core.functions.FitFunctions;
 import org.miscela.core.functions.FitOutput;
+import org.miscela.core.functions.PhaseFunctions;
 import org.miscela.core.functions.PropertyKind;
 import org.miscela.core.library.CardLibrary;
 import org.miscela.core.problem.MiscelaException;
@@ -76,7 +77,9 @@ import org.miscela.testing.Figures;
  * here in the JVM from the card and the inputs read off their sheets; a few are checked against the OIML R 22 formula
  * itself, the acid dilution's heat of mixing against the card format's Redlich-Kister sum, and its paths against
  * identities (each order ends at MIX.TEMPERATURERISE's temperature; with the "cooling" removed the peak is the limit);
- * the brine plant's card block is the library's card, cell by cell, and its recipe against the recipe's definition.
+ * the brine plant's card block is the library's card, cell by cell, and its recipe against the recipe's definition;
+ * the solvent recovery's phase equilibria against Wilson's equation with published parameters, the published
+ * azeotrope at 1 atm, the pure liquids' boiling points and a published isobar.
  */
 @ExtendWith(OfficeParameterResolver.class)
 class ExamplesIT {
@@ -746,6 +749,185 @@ class ExamplesIT {
         } finally {
             close(doc);
         }
+    }
+
+    /**
+     * The solvent-recovery workbook: both ethanol + water cards are the project's test cards, cell by cell; every
+     * phase-equilibrium number is the core's on the Wilson card; against outside values: the activity table at 70 °C
+     * against Wilson's equation with Gmehling et al.'s printed Λ12 = 0.154, Λ21 = 0.888 (the card's constants are
+     * those Λ written as −T ln Λ, so agreement to 10⁻⁹), the azeotrope against the published 78.17 °C at
+     * x1 = 0.8947 (Evans 1916 as cited in reference/ethanol-water-vle.tsv; measured +0.0060 and −0.04 K, asserted
+     * within 0.01 and 0.1 K as in VleCardTest), water's end of the T–x–y table against Wagner and Pruß's check value
+     * (101.325 kPa at 373.1243 K) and ethanol's against its normal boiling point 351.44 K (CRC Handbook, as the data
+     * note copies it; measured 78.29 °C, asserted within 0.2 K), and the published isobar of Rieder and Thompson
+     * 1949 on sheet Lab VLE (measured: bubble points within 0.90 K, vapour within 0.033; asserted within 1.0 K and
+     * 0.035). The Redlich–Kister card's refusal of the azeotrope is shown in the core's own words, and the area
+     * left for fitted parameters is empty.
+     */
+    @Test
+    void solventRecoveryIsTheCoreLibrarysNumbersAndMeetsPublishedData(Office office) throws Exception {
+        XComponent doc = open(office, SolventRecoveryWorkbookBuilder.FILE);
+        try {
+            Card wilson = sheetCard(doc, SolventRecoveryWorkbookBuilder.WILSON,
+                    SolventRecoveryWorkbookBuilder.WILSON_CARD, "Wilson card");
+            Card rk = sheetCard(doc, SolventRecoveryWorkbookBuilder.RK, SolventRecoveryWorkbookBuilder.RK_CARD,
+                    "RK card");
+            Extrapolation e = Extrapolation.AS_CARD;
+            XSpreadsheet s = sheet(doc, "Recovery");
+            double p = value(s, 1, SolventRecoveryWorkbookBuilder.PRESSURE_ROW);
+            assertEquals(101.325, p, 0.0, "the still at 1 atm");
+
+            // the charge: % w/w to x1 by the definition with the card's molar masses, then the core
+            double w = value(s, 1, SolventRecoveryWorkbookBuilder.CHARGE_ROW);
+            double m1 = wilson.components().get(0).molarMass();
+            double m2 = wilson.components().get(1).molarMass();
+            double x1 = (w / m1) / (w / m1 + (100 - w) / m2);
+            assertEquals(x1, value(s, 1, SolventRecoveryWorkbookBuilder.CHARGE_X_ROW), 1e-12, "x1 of the charge");
+            double[] x = {x1, 1 - x1};
+            double tb = value(s, 1, SolventRecoveryWorkbookBuilder.CHARGE_T_ROW);
+            assertClose(PhaseFunctions.bubblePoint(wilson, x, p, e), tb, "MIX.BUBBLEPOINT of the charge");
+            assertEquals(p, PhaseFunctions.bubblePressure(wilson, x, tb, e), 1e-6,
+                    "its bubble pressure is the still's");
+            double y1 = value(s, 1, SolventRecoveryWorkbookBuilder.CHARGE_Y_ROW);
+            assertClose(PhaseFunctions.vapourFraction(wilson, 0, x, tb, e), y1, "first vapour");
+            assertTrue(y1 > x1, "the vapour is richer in ethanol below the azeotrope: " + y1);
+            assertEquals(100 * y1 * m1 / (y1 * m1 + (1 - y1) * m2), value(s, 1,
+                    SolventRecoveryWorkbookBuilder.CHARGE_YW_ROW), 1e-9, "the vapour in % w/w");
+            assertClose(PhaseFunctions.relativeVolatility(wilson, 0, 1, x, tb, e), value(s, 1,
+                    SolventRecoveryWorkbookBuilder.ALPHA_ROW), "relative volatility");
+
+            // the azeotrope: the core, then the published one
+            double ax = value(s, 1, SolventRecoveryWorkbookBuilder.AZ_X_ROW);
+            double at = value(s, 1, SolventRecoveryWorkbookBuilder.AZ_T_ROW);
+            assertClose(PhaseFunctions.azeotrope(wilson, p, false, e), ax, "MIX.AZEOTROPE x1");
+            assertClose(PhaseFunctions.azeotrope(wilson, p, true, e), at, "MIX.AZEOTROPE temperature");
+            assertEquals(SolventRecoveryWorkbookBuilder.PUBLISHED_AZEOTROPE_X, value(s, 1,
+                    SolventRecoveryWorkbookBuilder.PUB_X_ROW), 0.0, "the published x1 on the sheet");
+            assertEquals(SolventRecoveryWorkbookBuilder.PUBLISHED_AZEOTROPE_C, value(s, 1,
+                    SolventRecoveryWorkbookBuilder.PUB_T_ROW), 0.0, "the published temperature on the sheet");
+            assertEquals(0.8947, ax, 0.01, "azeotrope x1 against the published 0.8947");
+            assertEquals(78.17, at, 0.1, "azeotrope temperature against the published 78.17 °C");
+            assertEquals(ax - 0.8947, value(s, 1, SolventRecoveryWorkbookBuilder.DEV_X_ROW), 1e-12, "x1 deviation");
+            assertEquals(at - 78.17, value(s, 1, SolventRecoveryWorkbookBuilder.DEV_T_ROW), 1e-12, "T deviation");
+            assertEquals(ax, value(s, 1, SolventRecoveryWorkbookBuilder.AZ_Y_ROW), 1e-9, "vapour = liquid there");
+            MiscelaException several = assertThrows(MiscelaException.class,
+                    () -> PhaseFunctions.azeotrope(rk, p, false, e));
+            assertEquals(org.miscela.core.problem.Problem.SEVERAL_AZEOTROPES, several.problem());
+            String words = text(s.getCellByPosition(0, SolventRecoveryWorkbookBuilder.RK_ROW + 1));
+            assertTrue(words.contains(several.getMessage()), "the refusal in the core's words: " + words);
+
+            // table 3: activity, bubble pressure and vapour at one temperature; Wilson's equation by hand at 70 °C
+            int first = SolventRecoveryWorkbookBuilder.TABLE_FIRST;
+            double t = value(s, SolventRecoveryWorkbookBuilder.ACT_Y, SolventRecoveryWorkbookBuilder.TABLE_INPUT_ROW);
+            assertEquals(70.0, t, 0.0, "the activity table at the temperature of the book's parameters");
+            double l12 = 0.154;
+            double l21 = 0.888;
+            for (int i = 0; i < SolventRecoveryWorkbookBuilder.TABLE_ROWS; i++) {
+                int r = first + i;
+                double xi = value(s, SolventRecoveryWorkbookBuilder.ACT_X, r);
+                double[] z = {xi, 1 - xi};
+                double g1 = value(s, SolventRecoveryWorkbookBuilder.ACT_G1, r);
+                double g2 = value(s, SolventRecoveryWorkbookBuilder.ACT_G2, r);
+                assertClose(PhaseFunctions.activityCoefficient(wilson, 0, z, t, e), g1, "γ1 at x1 = " + xi);
+                assertClose(PhaseFunctions.activityCoefficient(wilson, 1, z, t, e), g2, "γ2 at x1 = " + xi);
+                double c = l12 / (z[0] + l12 * z[1]) - l21 / (z[1] + l21 * z[0]);
+                assertEquals(-Math.log(z[0] + l12 * z[1]) + z[1] * c, Math.log(g1), 1e-9, "Wilson ln γ1, x1 = " + xi);
+                assertEquals(-Math.log(z[1] + l21 * z[0]) - z[0] * c, Math.log(g2), 1e-9, "Wilson ln γ2, x1 = " + xi);
+                assertClose(PhaseFunctions.bubblePressure(wilson, z, t, e), value(s,
+                        SolventRecoveryWorkbookBuilder.ACT_P, r), "bubble pressure at x1 = " + xi);
+                assertClose(PhaseFunctions.vapourFraction(wilson, 0, z, t, e), value(s,
+                        SolventRecoveryWorkbookBuilder.ACT_Y, r), "y1 at x1 = " + xi);
+
+                // table 4: T-x-y at the still's pressure
+                assertEquals(xi, value(s, SolventRecoveryWorkbookBuilder.TXY_X, r), 0.0, "the same grid");
+                double bubble = value(s, SolventRecoveryWorkbookBuilder.TXY_T, r);
+                assertClose(PhaseFunctions.bubblePoint(wilson, z, p, e), bubble, "bubble point at x1 = " + xi);
+                assertClose(PhaseFunctions.vapourFraction(wilson, 0, z, bubble, e), value(s,
+                        SolventRecoveryWorkbookBuilder.TXY_Y, r), "y1 at the bubble point, x1 = " + xi);
+                double dew = value(s, SolventRecoveryWorkbookBuilder.TXY_DEW, r);
+                assertClose(PhaseFunctions.dewPoint(wilson, z, p, e), dew, "dew point at y1 = " + xi);
+                assertTrue(dew >= bubble - 1e-6, "the dew line lies on or above the bubble line at " + xi);
+            }
+            assertEquals(373.1243 - 273.15, value(s, SolventRecoveryWorkbookBuilder.TXY_T, first), 2e-4,
+                    "water boils at 373.1243 K at 101.325 kPa (Wagner and Pruß's check value)");
+            assertEquals(351.44 - 273.15, value(s, SolventRecoveryWorkbookBuilder.TXY_T,
+                    first + SolventRecoveryWorkbookBuilder.TABLE_ROWS - 1), 0.2, "ethanol's normal boiling point");
+
+            // the published isobar on sheet Lab VLE, the card's predictions and the deviations
+            XSpreadsheet lab = sheet(doc, "Lab VLE");
+            List<String[]> rows = SolventRecoveryWorkbookBuilder.dataRows();
+            assertTrue(rows.size() >= 30, rows.size() + " points");
+            double worstT = 0;
+            double worstY = 0;
+            for (int i = 0; i < rows.size(); i++) {
+                int r = SolventRecoveryWorkbookBuilder.LAB_FIRST + i;
+                String[] f = rows.get(i);
+                assertTrue(f[4].startsWith("Rieder, R.M.; Thompson, A.R."), f[4]);
+                double lx = value(lab, SolventRecoveryWorkbookBuilder.LAB_X, r);
+                double ly = value(lab, SolventRecoveryWorkbookBuilder.LAB_Y, r);
+                double lt = value(lab, SolventRecoveryWorkbookBuilder.LAB_T, r);
+                double lp = value(lab, SolventRecoveryWorkbookBuilder.LAB_P, r);
+                assertEquals(Double.parseDouble(f[2]), lx, 0.0, "x1 of point " + (i + 1));
+                assertEquals(Double.parseDouble(f[3]), ly, 0.0, "y1 of point " + (i + 1));
+                assertEquals(Double.parseDouble(f[1]) - 273.15, lt, 1e-9, "T of point " + (i + 1));
+                assertEquals(Double.parseDouble(f[0]), lp, 0.0, "P of point " + (i + 1));
+                double[] z = {lx, 1 - lx};
+                double pt = value(lab, SolventRecoveryWorkbookBuilder.LAB_T_PRED, r);
+                double py = value(lab, SolventRecoveryWorkbookBuilder.LAB_Y_PRED, r);
+                assertClose(PhaseFunctions.bubblePoint(wilson, z, lp, e), pt, "bubble point of point " + (i + 1));
+                assertClose(PhaseFunctions.vapourFraction(wilson, 0, z, pt, e), py, "y1 of point " + (i + 1));
+                assertEquals(pt - lt, value(lab, SolventRecoveryWorkbookBuilder.LAB_DT, r), 1e-12, "ΔT " + (i + 1));
+                assertEquals(py - ly, value(lab, SolventRecoveryWorkbookBuilder.LAB_DY, r), 1e-12, "Δy " + (i + 1));
+                worstT = Math.max(worstT, Math.abs(pt - lt));
+                worstY = Math.max(worstY, Math.abs(py - ly));
+            }
+            assertTrue(worstT < 1.0, "bubble points within 1.0 K of Rieder and Thompson's: " + worstT);
+            assertTrue(worstY < 0.035, "vapour within 0.035 of Rieder and Thompson's: " + worstY);
+            int stats = SolventRecoveryWorkbookBuilder.LAB_FIRST + rows.size() + 2;
+            assertEquals(worstT, value(lab, SolventRecoveryWorkbookBuilder.LAB_DT, stats + 2), 1e-12, "largest ΔT");
+            assertEquals(worstY, value(lab, SolventRecoveryWorkbookBuilder.LAB_DY, stats + 2), 1e-12, "largest Δy");
+            XCellRangesQuery fit = UnoRuntime.queryInterface(XCellRangesQuery.class, lab.getCellRangeByPosition(
+                    SolventRecoveryWorkbookBuilder.FIT_FIRST_COL, SolventRecoveryWorkbookBuilder.LAB_LABEL_ROW,
+                    SolventRecoveryWorkbookBuilder.FIT_LAST_COL, SolventRecoveryWorkbookBuilder.LAB_LABEL_ROW
+                            + SolventRecoveryWorkbookBuilder.FIT_ROWS - 1));
+            assertFalse(fit.queryContentCells((short) (CellFlags.VALUE | CellFlags.STRING | CellFlags.FORMULA))
+                    .getCells().createEnumeration().hasMoreElements(), "the area for fitted parameters is empty");
+
+            Object charts = UnoRuntime.queryInterface(XTableChartsSupplier.class, s).getCharts();
+            assertTrue(UnoRuntime.queryInterface(XNameAccess.class, charts).hasByName(
+                    SolventRecoveryWorkbookBuilder.CHART_NAME), "the T-x-y chart is on sheet Recovery");
+            for (String name : new String[] {"Recovery", "Lab VLE", "Diagram data", "Wilson card", "RK card"}) {
+                XCellRangesQuery q = UnoRuntime.queryInterface(XCellRangesQuery.class, sheet(doc, name));
+                assertFalse(q.queryFormulaCells(FormulaResult.ERROR).getCells().createEnumeration().hasMoreElements(),
+                        "no cell of sheet " + name + " shows an error");
+            }
+        } finally {
+            close(doc);
+        }
+    }
+
+    /** A card named on a sheet: the test resource, cell by cell (ODF keeps 15 digits), MIX.CHECK "OK", read. */
+    private static Card sheetCard(XComponent doc, String name, String resource, String sheetName) throws Exception {
+        Object[][] sheetCard = namedRange(doc, name);
+        Object[][] cells = TestCards.cells(resource);
+        assertEquals(cells.length, sheetCard.length, "rows of card " + name);
+        for (int r = 0; r < cells.length; r++) {
+            for (int c = 0; c < sheetCard[r].length; c++) {
+                Object want = c < cells[r].length ? cells[r][c] : "";
+                Object got = sheetCard[r][c];
+                if (want instanceof Double) {
+                    assertEquals((Double) want, (Double) got, 1e-14 * Math.abs((Double) want),
+                            name + " cell " + (r + 1) + "/" + (c + 1));
+                } else {
+                    assertEquals(want, got, name + " cell " + (r + 1) + "/" + (c + 1));
+                }
+            }
+        }
+        assertEquals("OK", text(sheet(doc, sheetName).getCellByPosition(1, 4)), "MIX.CHECK of card " + name);
+        Card card = CardReader.read(sheetCard);
+        assertEquals("ethanol", card.components().get(0).name());
+        assertEquals("water", card.components().get(1).name());
+        return card;
     }
 
     private static double path(Card card, int[] order, double[] amounts, double[] feeds,
