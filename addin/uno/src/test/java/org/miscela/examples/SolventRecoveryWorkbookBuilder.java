@@ -57,11 +57,12 @@ import org.miscela.examples.ExampleWorkbooks.Formats;
  * (Redlich–Kister G^E/RT fitted to published data), named {@link #RK}, which is shown refusing the azeotrope in its
  * own words. The lab-data sheet holds a published isobar (Rieder and Thompson 1949, as transcribed in
  * reference/ethanol-water-vle.tsv) standing in for the lab's own points, with the card's predictions and deviations,
- * and an empty block to its right left for fitted parameters.
+ * and to its right MIX.FITVLE's fit of Wilson's model to those points, whose parameters are the Wilson row of a
+ * third card, {@link #FITTED} (sheet Fitted card), with the fit's statistics and the data's consistency tests.
  *
  * <p>Sheets: Recovery (the still's charge, the azeotrope with the refusal in words, the activity table at a stated
  * temperature, the T–x–y table at the still's pressure, the chart), Lab VLE, Diagram data (the chart's columns),
- * Wilson card and RK card. The constants that locate cells are shared with ExamplesIT (0-based rows and columns).
+ * Wilson card, RK card and Fitted card. The constants that locate cells are shared with ExamplesIT (0-based rows and columns).
  *
  * <p>Run: {@code mvn -q -B test-compile exec:java -pl addin/uno -Dexec.classpathScope=test
  * -Dexec.mainClass=org.miscela.examples.SolventRecoveryWorkbookBuilder -Dmiscela.oxt=$PWD/addin/uno/target/miscela.oxt}
@@ -76,6 +77,8 @@ public final class SolventRecoveryWorkbookBuilder {
     /** The range names of the two cards. */
     static final String WILSON = "wilson";
     static final String RK = "rk";
+    /** The card whose Wilson row is MIX.FITVLE's fit of sheet Lab VLE's data block. */
+    static final String FITTED = "fitted";
     static final String CHART_NAME = "TxyDiagram";
     /** The data set on sheet Lab VLE: its tag in the reference file. */
     static final String DATA_SET = "isobaric-rieder";
@@ -140,7 +143,7 @@ public final class SolventRecoveryWorkbookBuilder {
     /** How the numbers are worked out: under the explanation of the refusal, in A..C. */
     static final int NOTES_ROW = WHY_ROW + 2;
 
-    // --- Lab VLE: the data block (A..J) and the empty area for fitted parameters (L..P)
+    // --- Lab VLE: the data block (A..I) and the fit of Wilson's model to it (K..O)
     static final int LAB_HEAD_ROW = 5;
     static final int LAB_LABEL_ROW = 6;
     static final int LAB_FIRST = 7;
@@ -155,7 +158,16 @@ public final class SolventRecoveryWorkbookBuilder {
     static final int LAB_DY = 8;
     static final int FIT_FIRST_COL = 10;
     static final int FIT_LAST_COL = 14;
-    static final int FIT_ROWS = 20;
+    static final int FIT_ROWS = 21;
+    /** Rows of the fit area (0-based): the Wilson parameters, their standard errors, the fitted card's azeotrope. */
+    static final int FIT_PARAMETERS_ROW = LAB_LABEL_ROW + 1;
+    static final int FIT_ERRORS_ROW = LAB_LABEL_ROW + 2;
+    static final int FIT_AZ_X_ROW = LAB_LABEL_ROW + 3;
+    static final int FIT_AZ_T_ROW = LAB_LABEL_ROW + 4;
+    /** First row of the fit's statistics (K..L) and consistency tests (N..O). */
+    static final int FIT_TABLES_ROW = LAB_LABEL_ROW + 6;
+    static final int FIT_STATISTICS_ROWS = 15;
+    static final int FIT_CONSISTENCY_ROWS = 12;
 
     // --- Diagram data
     static final int PLOT_HEAD = 3;
@@ -174,7 +186,7 @@ public final class SolventRecoveryWorkbookBuilder {
 
     static void build(XComponent doc) throws Exception {
         XSpreadsheets sheets = ExampleWorkbooks.nameSheets(doc, "Recovery", "Lab VLE", "Diagram data", "Wilson card",
-                "RK card");
+                "RK card", "Fitted card");
         formats = new Formats(doc);
         writeCard(doc, sheet(sheets, "Wilson card"), WILSON_CARD, WILSON, "Wilson's model with Gmehling et al.'s "
                 + "published parameters", "Every result on sheets Recovery and Lab VLE uses this card. Its note row "
@@ -186,6 +198,7 @@ public final class SolventRecoveryWorkbookBuilder {
                 + "give two compositions at 1 atm where vapour and liquid agree, and the function refuses to choose. "
                 + "Note that its fit used the very isobar that sheet Lab VLE shows, so it is no independent check "
                 + "of those points.");
+        writeFittedCard(doc, sheet(sheets, "Fitted card"));
         writeLab(sheet(sheets, "Lab VLE"));
         XSpreadsheet r = sheet(sheets, "Recovery");
         writeRecovery(r);
@@ -444,8 +457,9 @@ public final class SolventRecoveryWorkbookBuilder {
                 + "(MIX.BUBBLEPOINT, then MIX.VAPOURFRACTION at that temperature) and the deviations, card minus "
                 + "data. The Redlich–Kister card is not used here: its coefficients were fitted to this very isobar "
                 + "(with a 30 °C isotherm), so it would be no independent check. The block " + col(FIT_FIRST_COL)
-                + ".." + col(FIT_LAST_COL) + " to the right is left EMPTY on purpose, for the parameters fitted to "
-                + "the data block.", wide);
+                + ".." + col(FIT_LAST_COL) + " to the right fits Wilson's model to the data block itself "
+                + "(MIX.FITVLE): its parameters are the Wilson row of card 'fitted' (sheet Fitted card), so new "
+                + "points refit that card and everything computed from it.", wide);
         String last = col(LAB_DY);
         text(s, 0, LAB_HEAD_ROW, "Lab VLE data (stand-in: Rieder & Thompson 1949, 101.3 kPa)");
         head(s, "A" + (LAB_HEAD_ROW + 1) + ":" + last + (LAB_HEAD_ROW + 1));
@@ -516,28 +530,89 @@ public final class SolventRecoveryWorkbookBuilder {
                 + "tenths of a kelvin and 0.01. Points 3 and 4 (x1 = 0.0137 and 0.0144, both 96.0 °C, y1 = 0.157 and "
                 + "0.135) show the data's own scatter at the dilute end.", (12 + 18 * 4 + 19 * 2 + 18 * 2) * 17 / 20);
 
-        // the empty area for the fitted parameters
+        writeFit(s);
+        widths(s, 12, 18, 18, 18, 18, 19, 19, 18, 18, 4, 70, 40, 30, 100, 24);
+    }
+
+    /** The fit of the data block: Wilson's Δλ/R, their standard errors, statistics, consistency, the fitted azeotrope. */
+    private static void writeFit(XSpreadsheet s) throws Exception {
         String f0 = col(FIT_FIRST_COL);
         String f1 = col(FIT_LAST_COL);
-        text(s, FIT_FIRST_COL, LAB_HEAD_ROW, "Fitted parameters (left empty: for a fit of the data block)");
+        text(s, FIT_FIRST_COL, LAB_HEAD_ROW, "Wilson's model fitted to the data block (MIX.FITVLE, p and y)");
         head(s, f0 + (LAB_HEAD_ROW + 1) + ":" + f1 + (LAB_HEAD_ROW + 1));
-        String area = f0 + (LAB_LABEL_ROW + 1) + ":" + f1 + (LAB_LABEL_ROW + FIT_ROWS);
-        com.sun.star.table.BorderLine2 line = new com.sun.star.table.BorderLine2();
-        line.OuterLineWidth = 26;
-        line.LineWidth = 26;
-        line.Color = 0x7F7F7F;
-        line.LineStyle = com.sun.star.table.BorderLineStyle.DASHED;
-        com.sun.star.table.TableBorder2 border = new com.sun.star.table.TableBorder2();
-        border.TopLine = line;
-        border.BottomLine = line;
-        border.LeftLine = line;
-        border.RightLine = line;
-        border.IsTopLineValid = true;
-        border.IsBottomLineValid = true;
-        border.IsLeftLineValid = true;
-        border.IsRightLineValid = true;
-        prop(s, area, "TableBorder2", border);
-        widths(s, 12, 18, 18, 18, 18, 19, 19, 18, 18, 4, 22, 22, 22, 22, 22);
+        String call = "MIX.FITVLE(" + WILSON + ";;" + range(LAB_X, LAB_FIRST, labRows) + ";"
+                + range(LAB_Y, LAB_FIRST, labRows) + ";" + range(LAB_T, LAB_FIRST, labRows) + ";"
+                + range(LAB_P, LAB_FIRST, labRows) + ";\"Wilson\"";
+        String a = col(FIT_FIRST_COL + 1);
+        String b = col(FIT_FIRST_COL + 2);
+        text(s, FIT_FIRST_COL, LAB_LABEL_ROW, "pure part read: card 'wilson'");
+        text(s, FIT_FIRST_COL + 1, LAB_LABEL_ROW, "Δλ12/R, K");
+        text(s, FIT_FIRST_COL + 2, LAB_LABEL_ROW, "Δλ21/R, K");
+        head(s, f0 + (LAB_LABEL_ROW + 1) + ":" + b + (LAB_LABEL_ROW + 1));
+        text(s, FIT_FIRST_COL, FIT_PARAMETERS_ROW, "fitted (the Wilson row of card 'fitted')");
+        array(s, a + (FIT_PARAMETERS_ROW + 1) + ":" + b + (FIT_PARAMETERS_ROW + 1), "=" + call + ")");
+        text(s, FIT_FIRST_COL, FIT_ERRORS_ROW, "standard errors");
+        array(s, a + (FIT_ERRORS_ROW + 1) + ":" + b + (FIT_ERRORS_ROW + 1), "=" + call
+                + ";;;;;;\"standard errors\")");
+        prop(s, a + (FIT_PARAMETERS_ROW + 1) + ":" + b + (FIT_ERRORS_ROW + 1), "NumberFormat", formats.key("0.0"));
+        text(s, FIT_FIRST_COL, FIT_AZ_X_ROW, "card 'fitted': azeotrope at 101.325 kPa, x1");
+        s.getCellByPosition(FIT_FIRST_COL + 1, FIT_AZ_X_ROW).setFormula("=MIX.AZEOTROPE(" + FITTED + ";101.325)");
+        prop(s, a + (FIT_AZ_X_ROW + 1), "NumberFormat", formats.key("0.0000"));
+        text(s, FIT_FIRST_COL, FIT_AZ_T_ROW, "… its boiling temperature, °C");
+        s.getCellByPosition(FIT_FIRST_COL + 1, FIT_AZ_T_ROW).setFormula("=MIX.AZEOTROPE(" + FITTED
+                + ";101.325;\"temperature\")");
+        prop(s, a + (FIT_AZ_T_ROW + 1), "NumberFormat", formats.key("0.00"));
+        text(s, FIT_FIRST_COL + 2, FIT_AZ_X_ROW, "published 0.8947");
+        text(s, FIT_FIRST_COL + 2, FIT_AZ_T_ROW, "published 78.17");
+        text(s, FIT_FIRST_COL, FIT_TABLES_ROW - 1, "Fit statistics (\"statistics\")");
+        text(s, FIT_FIRST_COL + 3, FIT_TABLES_ROW - 1, "Consistency of the data (\"consistency\")");
+        head(s, f0 + FIT_TABLES_ROW + ":" + f1 + FIT_TABLES_ROW);
+        array(s, f0 + (FIT_TABLES_ROW + 1) + ":" + a + (FIT_TABLES_ROW + FIT_STATISTICS_ROWS), "=" + call
+                + ";;;;;;\"statistics\")");
+        String c0 = col(FIT_FIRST_COL + 3);
+        array(s, c0 + (FIT_TABLES_ROW + 1) + ":" + f1 + (FIT_TABLES_ROW + FIT_CONSISTENCY_ROWS), "=" + call
+                + ";;;;;;\"consistency\")");
+        prop(s, a + (FIT_TABLES_ROW + 1) + ":" + a + (FIT_TABLES_ROW + FIT_STATISTICS_ROWS), "NumberFormat",
+                formats.key("0.####"));
+        prop(s, f1 + (FIT_TABLES_ROW + 1) + ":" + f1 + (FIT_TABLES_ROW + FIT_CONSISTENCY_ROWS), "NumberFormat",
+                formats.key("0.####"));
+    }
+
+    /**
+     * Sheet Fitted card: the Wilson card's rows with its Wilson row replaced by the fit on sheet Lab VLE, and its
+     * title, note and source saying so.
+     */
+    private static void writeFittedCard(XComponent doc, XSpreadsheet s) throws Exception {
+        writeCard(doc, s, WILSON_CARD, FITTED, "Wilson's model fitted to sheet Lab VLE's data", "");
+        Object[][] cells = TestCards.cells(WILSON_CARD);
+        int top = 6;
+        for (int r = 0; r < cells.length; r++) {
+            Object label = cells[r][0];
+            if ("Wilson".equals(label)) {
+                s.getCellByPosition(2, top + r).setFormula("=$'Lab VLE'.$" + col(FIT_FIRST_COL + 1) + "$"
+                        + (FIT_PARAMETERS_ROW + 1));
+                s.getCellByPosition(3, top + r).setFormula("=$'Lab VLE'.$" + col(FIT_FIRST_COL + 2) + "$"
+                        + (FIT_PARAMETERS_ROW + 1));
+            } else if ("title".equals(label)) {
+                text(s, 1, top + r, "Ethanol + water by Wilson's model fitted to the data block "
+                        + "of sheet Lab VLE, with the Wilson card's vapour pressures and volumes");
+            } else if ("note".equals(label)) {
+                text(s, 1, top + r, "The Wilson row is MIX.FITVLE's fit on sheet Lab VLE: new "
+                        + "points there refit it. Constant Δλ/R (as the fit gives them) carry it to other "
+                        + "temperatures.");
+            } else if ("source".equals(label)) {
+                text(s, 1, top + r, "Wilson: fitted by MIX.FITVLE to " + DATA_SOURCE
+                        + ", 101.3 kPa (sheet Lab VLE); vapour pressures: water W. Wagner, A. Pruss, J. Phys. Chem. "
+                        + "Ref. Data 22 (1993) 783, ethanol the Wagner 2.5-5 constants of B. E. Poling, J. M. "
+                        + "Prausnitz, J. P. O'Connell, The Properties of Gases and Liquids, 5th ed. (2001), appendix "
+                        + "A; densities: ethanol DIPPR 105 (Perry's Chemical Engineers' Handbook, 8th ed., Table "
+                        + "2-32), water Kell 1975; molar masses CIAAW 2021 abridged");
+            }
+        }
+        text(s, 0, 1, "FITTED TO PUBLISHED DATA. These rows are the Wilson card's, with its "
+                + "Wilson row taken from the fit on sheet Lab VLE (cells " + col(FIT_FIRST_COL + 1)
+                + (FIT_PARAMETERS_ROW + 1) + ":" + col(FIT_FIRST_COL + 2) + (FIT_PARAMETERS_ROW + 1) + ") and its "
+                + "title, note and source rewritten to say so.");
     }
 
     private static void labFormat(XSpreadsheet s, int c, String code) throws Exception {

@@ -288,13 +288,13 @@ public final class FitFunctions {
 
     private static Object[][] vleStatistics(VleFit fit, Card pure, int[] pair, double[] volumes, Units u) {
         List<Object[]> rows = new ArrayList<>();
-        rows.add(new Object[] {"fitted to", fit.withVapour() ? "p and y (modified Raoult's law)"
-                : "p alone (Barker's method, modified Raoult's law)"});
+        rows.add(new Object[] {"fitted to", fit.withVapour() ? "p and y"
+                : "p alone (Barker's method)"});
         rows.add(new Object[] {"model", fit.model().word()});
         rows.add(new Object[] {"points", (double) fit.points()});
         rows.add(new Object[] {"parameters", (double) fit.parameters().length});
         rows.add(new Object[] {"degrees of freedom", (double) fit.degreesOfFreedom()});
-        rows.add(new Object[] {"standard deviation of the fit (relative p, and y)", fit.degreesOfFreedom() > 0
+        rows.add(new Object[] {"standard deviation (relative p and y)", fit.degreesOfFreedom() > 0
                 ? (Object) fit.standardDeviation() : "none: as many residuals as parameters"});
         double[] p = fit.relativePressureDeviation();
         rows.add(new Object[] {"root mean square of p_calc/p − 1", p[0]});
@@ -323,20 +323,20 @@ public final class FitFunctions {
         double[] point = fitter.pointTest();
         double[] area = fitter.areaTest();
         List<Object[]> rows = new ArrayList<>();
-        rows.add(new Object[] {"point test (Van Ness, Byer and Gibbs 1973): fit to p alone, y compared", ""});
+        rows.add(new Object[] {"point test (Van Ness et al. 1973): fit to p, compare y", ""});
         rows.add(new Object[] {"mean |y_calc − y|", point[0]});
         rows.add(new Object[] {"largest |y_calc − y|", point[1]});
         rows.add(new Object[] {"at point", point[2] + 1});
-        rows.add(new Object[] {"point test (mean below " + VleFitter.POINT_TEST_LIMIT
-                + ", Fredenslund et al. 1977)", point[0] < VleFitter.POINT_TEST_LIMIT ? "passes" : "fails"});
-        rows.add(new Object[] {"area test (Redlich and Kister 1948, Herington 1951): ∫ ln(γ1/γ2) dx1", ""});
-        rows.add(new Object[] {"area above the axis, A", area[0]});
-        rows.add(new Object[] {"area below the axis, B", area[1]});
+        rows.add(new Object[] {"point test: mean below " + VleFitter.POINT_TEST_LIMIT
+                + " (Fredenslund et al. 1977)", point[0] < VleFitter.POINT_TEST_LIMIT ? "passes" : "fails"});
+        rows.add(new Object[] {"area test (Redlich–Kister 1948, Herington 1951)", ""});
+        rows.add(new Object[] {"A = ∫ ln(γ1/γ2) dx1 above 0", area[0]});
+        rows.add(new Object[] {"B = −∫ ln(γ1/γ2) dx1 below 0", area[1]});
         rows.add(new Object[] {"D = 100·|A − B|/(A + B)", area[2]});
         rows.add(new Object[] {"J = 150·(T_max − T_min)/T_min", area[3]});
-        rows.add(new Object[] {"area test (D − J below " + (int) VleFitter.AREA_TEST_LIMIT + ")",
+        rows.add(new Object[] {"area test: D − J below " + (int) VleFitter.AREA_TEST_LIMIT,
             area[2] - area[3] < VleFitter.AREA_TEST_LIMIT ? "passes" : "fails"});
-        rows.add(new Object[] {"note", "the area test ignores the pressures; the point test is the stronger"});
+        rows.add(new Object[] {"note", "the area test ignores p: the point test is stronger"});
         return rows.toArray(new Object[0][]);
     }
 
