@@ -44,6 +44,11 @@ class ActivityProperties {
     /** Three components by Wilson's model (parameters of a published example, see LocalCompositionTest) and by NRTL
      * (invented parameters): the same identities, from values, anywhere inside the triangle. */
     private static Card local(boolean wilson) {
+        return local(wilson, 3);
+    }
+
+    /** The same card with only its first {@code components} components (and their pairs' rows). */
+    private static Card local(boolean wilson, int components) {
         java.util.List<Object[]> c = new java.util.ArrayList<>(java.util.Arrays.asList(new Object[][] {
             {"Miscela card", 2.0}, {"source", "invented densities; Wilson parameters of a published example, NRTL "
                 + "parameters invented values"}, {"temperature unit", "K"}, {"density unit", "kg/m³"},
@@ -63,6 +68,9 @@ class ActivityProperties {
             c.add(new Object[] {"NRTL", "P + Q", 0.3, 120.0, -0.5, 300.0, 0.3});
             c.add(new Object[] {"NRTL", "P + R", 1.1, -50.0, 0.2, 80.0, 0.47});
             c.add(new Object[] {"NRTL", "Q + R", -0.2, 200.0, 0.9, -100.0, 0.2});
+        }
+        if (components == 2) {
+            c.removeIf(r -> r.length > 1 && (r[1].equals("R") || String.valueOf(r[1]).endsWith("+ R")));
         }
         return CardReader.read(c.toArray(new Object[0][]));
     }
@@ -100,4 +108,30 @@ class ActivityProperties {
         }
         assertTrue(Math.abs(gd) <= 1e-9 + 1e-6 * scale, "Gibbs–Duhem: " + gd);
     }
+
+    /**
+     * Model reduction: with the third component absent, the ternary card's ln γ of P and Q are the binary card's (the
+     * same pair rows without R); and the infinite-dilution limit: ln γ_P at x_P = 0 is the limit of its values as x_P
+     * falls to zero.
+     */
+    @Property(tries = 300)
+    void localCompositionModelsReduceToTheBinaryAndReachTheirLimits(
+            @ForAll @DoubleRange(min = 0.0, max = 1.0) double a, @ForAll @DoubleRange(min = 300, max = 360) double t,
+            @ForAll boolean wilson) {
+        double[] ternary = new double[3];
+        double[] binary = new double[2];
+        (wilson ? WILSON : NRTL).mixture().logActivityCoefficients(new double[] {a, 1 - a, 0}, t, ternary);
+        (wilson ? WILSON_PQ : NRTL_PQ).mixture().logActivityCoefficients(new double[] {a, 1 - a}, t, binary);
+        assertEquals(binary[0], ternary[0], 1e-13, "ln γ_P without R");
+        assertEquals(binary[1], ternary[1], 1e-13, "ln γ_Q without R");
+        double[] limit = new double[2];
+        double[] near = new double[2];
+        Mixture m = (wilson ? WILSON_PQ : NRTL_PQ).mixture();
+        m.logActivityCoefficients(new double[] {0, 1}, t, limit);
+        m.logActivityCoefficients(new double[] {1e-7, 1 - 1e-7}, t, near);
+        assertEquals(limit[0], near[0], 1e-5 * (1 + Math.abs(limit[0])), "ln γ_P at infinite dilution");
+    }
+
+    private static final Card WILSON_PQ = local(true, 2);
+    private static final Card NRTL_PQ = local(false, 2);
 }
