@@ -136,6 +136,9 @@ final class Explanations {
         add("excessGibbs", (a, p) -> a.excessGibbs(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
         add("partialExcessGibbs", (a, p) -> a.partialExcessGibbs(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5],
                 p[6]));
+        add("excessEntropy", (a, p) -> a.excessEntropy(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
+        add("partialExcessEntropy", (a, p) -> a.partialExcessEntropy(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5],
+                p[6]));
     }
 
     private Explanations() {

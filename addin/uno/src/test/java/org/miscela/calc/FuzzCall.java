@@ -250,7 +250,8 @@ final class FuzzCall {
                 case "partialExcessEnthalpy":
                 case "activityCoefficient":
                 case "vapourFraction":
-                case "partialExcessGibbs": {
+                case "partialExcessGibbs":
+                case "partialExcessEntropy": {
                     Object[][] x = composition();
                     a = new Object[] {component(), x, temperature(x), extrapolate()};
                     break;
@@ -265,7 +266,8 @@ final class FuzzCall {
                         pick(Any.VOID, "composition", "temperature", clean ? "temperature" : "x"), extrapolate()};
                     break;
                 case "bubblePressure":
-                case "excessGibbs": {
+                case "excessGibbs":
+                case "excessEntropy": {
                     Object[][] x = composition();
                     a = new Object[] {x, temperature(x), extrapolate()};
                     break;
@@ -477,6 +479,8 @@ final class FuzzCall {
                 case "relativeVolatility":
                 case "excessGibbs":
                 case "partialExcessGibbs":
+                case "excessEntropy":
+                case "partialExcessEntropy":
                 case "mixtureMolarMass": {
                     Object[] out = java.util.Arrays.copyOf(a, a.length + 2);
                     out[a.length] = clean ? pick(Any.VOID, Any.VOID, "mole fraction", "mass fraction", "w")

@@ -713,7 +713,25 @@ public final class FunctionCatalog {
                     "=MIX.PARTIALGIBBS(vle; \"ethanol\"; 0.3; 50)",
                     CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
                     .shows("1462.93").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
-                            COMPONENT_PROBLEMS, list(Problem.NO_GIBBS, Problem.NO_ENERGY_UNIT)))));
+                            COMPONENT_PROBLEMS, list(Problem.NO_GIBBS, Problem.NO_ENERGY_UNIT))),
+            new FunctionInfo("excessEntropy", "MIX.EXCESSENTROPY",
+                    "excess molar entropy S^E of the liquid blend, from its H^E and G^E",
+                    "Excess molar entropy of the liquid blend, (H^E − G^E)/T, from the card's excess enthalpy and its "
+                            + "G^E/RT, in the card's enthalpy unit per kelvin (J/(mol·K) for J/mol).",
+                    "S^E = (H^E − G^E)/T, G^E = R·T·Σ_k x_k·ln γ_k (T in K)",
+                    "=MIX.EXCESSENTROPY(gibhelm; 0.3; 40)",
+                    CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("1.0893").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
+                            list(Problem.NO_GIBBS, Problem.NO_ENTHALPY))),
+            new FunctionInfo("partialExcessEntropy", "MIX.PARTIALENTROPY",
+                    "partial molar excess entropy of a component, from its H̄^E and R·T·ln γ",
+                    "Partial molar excess entropy of one component, (H̄_k^E − R·T·ln γ_k)/T, from the card's excess "
+                            + "enthalpy and its G^E/RT, in the card's enthalpy unit per kelvin.",
+                    "S̄_k^E = (H̄_k^E − Ḡ_k^E)/T, Ḡ_k^E = R·T·ln γ_k; S^E = Σ_k x_k·S̄_k^E",
+                    "=MIX.PARTIALENTROPY(gibhelm; 1; 0.3; 40)",
+                    CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("1.2506").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
+                            COMPONENT_PROBLEMS, list(Problem.NO_GIBBS, Problem.NO_ENTHALPY)))));
 
     private FunctionCatalog() {
     }

@@ -53,6 +53,28 @@ public final class PhaseFunctions {
         return card.units().enthalpy().fromJoulePerMol(v);
     }
 
+    /**
+     * S^E = (H^E − G^E)/T (component < 0) or the partial molar excess entropy S̄_k^E = (H̄_k^E − R·T·ln γ_k)/T, from
+     * the card's excess enthalpy and its G^E/RT, in the card's enthalpy unit per kelvin (per °F on a card in °F);
+     * refused with words when the card lacks either section.
+     */
+    public static double excessEntropy(Card card, int component, double[] x, double t, Extrapolation e) {
+        double[] z = CardFunctions.moleFractions(card, x);
+        double kelvin = PointChecks.checkPoint(card, z, t, e);
+        card.mixture().gibbs();
+        card.mixture().enthalpy(); // a card with excess enthalpy rows always states its enthalpy unit
+        double[] lnGamma = new double[z.length];
+        double g = card.mixture().logActivityCoefficients(z, kelvin, lnGamma);
+        double[] hBar = new double[z.length];
+        double h = card.mixture().partialExcessEnthalpies(z, kelvin, hBar);
+        double v = component < 0 ? h / kelvin - GAS_CONSTANT * g
+                : hBar[component] / kelvin - GAS_CONSTANT * lnGamma[component];
+        if (!Double.isFinite(v)) {
+            throw PointChecks.nonPhysical(card, t, "excess entropy", v);
+        }
+        return card.units().temperature().fromPerKelvin(card.units().enthalpy().fromJoulePerMol(v), 1);
+    }
+
     /** The bubble pressure Σ x_k γ_k p_k* in the card's pressure unit. */
     public static double bubblePressure(Card card, double[] x, double t, Extrapolation e) {
         double[] z = CardFunctions.moleFractions(card, x);
