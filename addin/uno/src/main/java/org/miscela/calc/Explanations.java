@@ -139,6 +139,8 @@ final class Explanations {
         add("excessEntropy", (a, p) -> a.excessEntropy(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
         add("partialExcessEntropy", (a, p) -> a.partialExcessEntropy(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5],
                 p[6]));
+        add("infiniteDilutionActivity", (a, p) -> a.infiniteDilutionActivity(r(p[0]), r(p[1]), r(p[2]), r(p[3]),
+                p[4], p[5], p[6]));
     }
 
     private Explanations() {

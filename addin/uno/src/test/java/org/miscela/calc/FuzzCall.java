@@ -251,7 +251,8 @@ final class FuzzCall {
                 case "activityCoefficient":
                 case "vapourFraction":
                 case "partialExcessGibbs":
-                case "partialExcessEntropy": {
+                case "partialExcessEntropy":
+                case "infiniteDilutionActivity": {
                     Object[][] x = composition();
                     a = new Object[] {component(), x, temperature(x), extrapolate()};
                     break;
@@ -481,6 +482,7 @@ final class FuzzCall {
                 case "partialExcessGibbs":
                 case "excessEntropy":
                 case "partialExcessEntropy":
+                case "infiniteDilutionActivity":
                 case "mixtureMolarMass": {
                     Object[] out = java.util.Arrays.copyOf(a, a.length + 2);
                     out[a.length] = clean ? pick(Any.VOID, Any.VOID, "mole fraction", "mass fraction", "w")

@@ -731,7 +731,20 @@ public final class FunctionCatalog {
                     "=MIX.PARTIALENTROPY(gibhelm; 1; 0.3; 40)",
                     CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
                     .shows("1.2506").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
-                            COMPONENT_PROBLEMS, list(Problem.NO_GIBBS, Problem.NO_ENTHALPY)))));
+                            COMPONENT_PROBLEMS, list(Problem.NO_GIBBS, Problem.NO_ENTHALPY))),
+            new FunctionInfo("infiniteDilutionActivity", "MIX.ACTIVITYLIMIT",
+                    "activity coefficient of a component at infinite dilution in the rest of the blend",
+                    "Activity coefficient γ∞ of one component at infinite dilution in the other liquids of the given "
+                            + "composition, from the card's G^E/RT; its own entry is ignored, the rest renormalised.",
+                    "γ_k^∞ = lim γ_k as x_k → 0 at x_j/(1 − x_k) fixed (j ≠ k); Wilson, binary: ln γ_1^∞ = 1 − ln Λ12 "
+                            + "− Λ21",
+                    "=MIX.ACTIVITYLIMIT(vlw; \"ethanol\"; 0; 70)",
+                    CARD, COMPONENT, range("moleFraction", "x", "The liquids it is diluted in: mole fractions in card "
+                            + "order, the component's own entry ignored and the rest renormalised. A row or column, a "
+                            + "block with one composition per row, or x1 alone on a two-component card, as for "
+                            + "MIX.ACTIVITY."), TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("7.263").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
+                            COMPONENT_PROBLEMS, list(Problem.NO_GIBBS, Problem.NO_DILUENT)))));
 
     private FunctionCatalog() {
     }

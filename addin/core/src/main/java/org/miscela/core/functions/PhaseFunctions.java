@@ -31,6 +31,32 @@ public final class PhaseFunctions {
                 Math.exp(lnGamma[component]));
     }
 
+    /**
+     * γ_k^∞, the activity coefficient of one component at infinite dilution in the rest of the given composition: the
+     * component's own entry is ignored and the others renormalised to add up to 1 (x_j/(1 − x_k), j ≠ k), and ln γ_k
+     * is taken there at x_k = 0. Refused when nothing but the component is left. The point checks (validity range)
+     * apply to that solvent composition.
+     */
+    public static double infiniteDilutionActivity(Card card, int component, double[] x, double t, Extrapolation e) {
+        double[] z = CardFunctions.moleFractions(card, x);
+        double rest = 0.0;
+        for (int j = 0; j < z.length; j++) {
+            rest += j == component ? 0.0 : z[j];
+        }
+        if (!(rest > 0.0)) {
+            throw Problem.NO_DILUENT.raise(card.components().get(component).name());
+        }
+        double[] s = new double[z.length];
+        for (int j = 0; j < z.length; j++) {
+            s[j] = j == component ? 0.0 : z[j] / rest;
+        }
+        double kelvin = PointChecks.checkPoint(card, s, t, e);
+        double[] lnGamma = new double[s.length];
+        card.mixture().logActivityCoefficients(s, kelvin, lnGamma);
+        return finite(card, t, "activity coefficient at infinite dilution of " + card.components().get(component).name(),
+                Math.exp(lnGamma[component]));
+    }
+
     /** The gas constant, J/(mol·K), exact since the 2019 SI (N_A·k). */
     public static final double GAS_CONSTANT = 8.314462618;
 

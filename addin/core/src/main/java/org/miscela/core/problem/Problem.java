@@ -158,6 +158,7 @@ public enum Problem {
     NO_AZEOTROPE(CALL, "The card gives %s + %s no azeotrope at %s %s: the vapour is richer in the same component over the whole range (x1 from 0.0025 to 0.9975)."),
     SEVERAL_AZEOTROPES(CALL, "The card gives %d compositions where vapour and liquid agree at %s %s (x1 = %s): its excess Gibbs energy is not fixed well enough there to name one azeotrope."),
     NOT_BINARY_AZEOTROPE(CALL, "An azeotrope is searched on a two-component card only; this card has %d components."),
+    NO_DILUENT(CALL, "The composition holds nothing but %s, so there is nothing to dilute it in: give the mole fractions of the liquids around it (its own entry is ignored)."),
     NO_ENERGY_UNIT(CALL, "The card states no 'enthalpy unit', the unit an excess Gibbs energy is given in: add one (J/mol or kJ/mol).", Advice.INSIDE_RANGE),
     NO_PRESSURE_UNIT(CALL, "The card states no 'pressure unit', the unit of the pressures this function takes and gives: add one (kPa, bar, atm, mmHg, …).", Advice.INSIDE_RANGE),
     NO_HEAT_CAPACITY(CALL, "The card gives no 'heat capacity' row for %s; the temperature rise needs the heat capacity of every component.", Advice.INSIDE_RANGE),
