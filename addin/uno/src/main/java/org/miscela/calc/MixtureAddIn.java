@@ -801,6 +801,20 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
         }
     }
 
+    @Override
+    public Object dewPressure(Object[][] card, Object[][] vapourComposition, Object[][] temperature,
+            Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            // a vapour composition is read as mole fractions only: no liquid basis applies to it
+            return CompositionArguments.overCompositions(c, vapourComposition, temperature,
+                    (k, y, t) -> PhaseFunctions.dewPressure(k, y, t, e));
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "dewPressure");
+        }
+    }
+
     /** The path's rows as a range, or its peak, the amount at the peak or its end as a number. */
     private static Object pathResult(Object result) {
         if (result instanceof double[][]) {

@@ -268,7 +268,8 @@ final class FuzzCall {
                     break;
                 case "bubblePressure":
                 case "excessGibbs":
-                case "excessEntropy": {
+                case "excessEntropy":
+                case "dewPressure": {
                     Object[][] x = composition();
                     a = new Object[] {x, temperature(x), extrapolate()};
                     break;

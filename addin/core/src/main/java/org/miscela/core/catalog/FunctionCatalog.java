@@ -118,9 +118,10 @@ public final class FunctionCatalog {
                     + "differ in sign, at most 1024 K wide (40 bisection steps), within 200 evaluations, the balance's "
                     + "non-finite values refused before (NO_TEMPERATURE_ROOT); the hardest balance tried, a triple root "
                     + "in the widest bracket, needs 101 to 120 (FinalTemperatureSearchTest), and no card is known that "
-                    + "reaches it; and the cooling's (MIX.TEMPERATUREPATH's \"cooling\"), whose peak falls without "
-                    + "bound as the heat removed grows, so its doubling always brackets the limit. Calc would show "
-                    + "Err:523",
+                    + "reaches it; the cooling's (MIX.TEMPERATUREPATH's \"cooling\"), whose peak falls without "
+                    + "bound as the heat removed grows, so its doubling always brackets the limit; and MIX.DEWPRESSURE's "
+                    + "successive substitution of the drop, which settled on every card and vapour "
+                    + "tried, liquids that split among them (DewPressureTest). Calc would show Err:523",
             Problem.RAGGED_DESIGN, "a range or an inline array is rectangular, so every row of a design has as "
                     + "many columns as the first",
             Problem.NO_PARAMETERS, "a range has at least one column, and a Redlich–Kister fit at least one "
@@ -744,7 +745,17 @@ public final class FunctionCatalog {
                             + "block with one composition per row, or x1 alone on a two-component card, as for "
                             + "MIX.ACTIVITY."), TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
                     .shows("7.263").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
-                            COMPONENT_PROBLEMS, list(Problem.NO_GIBBS, Problem.NO_DILUENT)))));
+                            COMPONENT_PROBLEMS, list(Problem.NO_GIBBS, Problem.NO_DILUENT))),
+            new FunctionInfo("dewPressure", "MIX.DEWPRESSURE",
+                    "the pressure at which a vapour starts to condense at a temperature (its dew pressure)",
+                    "Pressure at which a vapour of the given composition starts to condense at a temperature (its dew "
+                            + "pressure), in the card's pressure unit, by modified Raoult's law: an ideal vapour.",
+                    "1/p = Σ_k y_k / (γ_k(x)·p_k*(T)), x_k = y_k·p/(γ_k·p_k*) (successive substitution from γ = 1)",
+                    "=MIX.DEWPRESSURE(vle; 0.5; 70)",
+                    CARD, range("vapourComposition", "y", "The vapour's mole fractions in card order (a row, a column, a "
+                            + "block of one per row), or y1 alone on a two-component card."),
+                    TEMPERATURE, EXTRAPOLATE)
+                    .shows("56.50").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VAPOUR_PROBLEMS))));
 
     private FunctionCatalog() {
     }

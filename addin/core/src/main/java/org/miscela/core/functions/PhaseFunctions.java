@@ -150,6 +150,59 @@ public final class PhaseFunctions {
                     Numbers.show(tu.fromKelvin(hi)), tu.symbol(), Numbers.show(pressure), unit.symbol()));
     }
 
+    /** The dew-pressure substitution stops when no fraction of the drop moves by more than this. */
+    private static final double DROP_SETTLED = 1e-13;
+    /** The dew-pressure substitution gives up after this many rounds. */
+    static final int DEW_PRESSURE_ROUNDS = 500;
+
+    /**
+     * The dew pressure of a vapour of composition y at t (card units): the pressure at which the first drop forms,
+     * 1/p = Σ_k y_k/(γ_k(x)·p_k*) with the drop's composition x_k = y_k·p/(γ_k·p_k*), by successive substitution
+     * from the ideal drop (γ = 1), each round's p making Σ x_k = 1 exactly, until no fraction of the drop moves by
+     * more than 10⁻¹³ (at most {@value #DEW_PRESSURE_ROUNDS} rounds, else NO_CONVERGENCE). Where the card's G^E splits
+     * the liquid, the drop found is the one the substitution reaches from the ideal drop. The point is checked with the
+     * vapour's components and then with the drop (its composition within the card's validity range).
+     */
+    public static double dewPressure(Card card, double[] y, double t, Extrapolation e) {
+        double[] z = CardFunctions.moleFractions(card, y);
+        Units.Pressure unit = pressureUnit(card);
+        double kelvin = checkVapourPoint(card, z, t, e);
+        int n = z.length;
+        double[] pure = new double[n];
+        for (int k = 0; k < n; k++) {
+            pure[k] = z[k] == 0.0 ? Double.NaN : card.mixture().vapourPressure(k, kelvin);
+        }
+        double[] lnGamma = new double[n];
+        double[] x = new double[n];
+        double p = Double.NaN;
+        boolean settled = false;
+        for (int round = 0; round < DEW_PRESSURE_ROUNDS && !settled; round++) {
+            double sum = 0.0;
+            for (int k = 0; k < n; k++) {
+                sum += z[k] == 0.0 ? 0.0 : z[k] / (Math.exp(lnGamma[k]) * pure[k]);
+            }
+            p = 1.0 / sum;
+            double moved = 0.0;
+            for (int k = 0; k < n; k++) {
+                double next = z[k] == 0.0 ? 0.0 : z[k] * p / (Math.exp(lnGamma[k]) * pure[k]);
+                moved = Math.max(moved, Math.abs(next - x[k]));
+                x[k] = next;
+            }
+            if (!(moved >= 0.0)) {
+                throw PointChecks.nonPhysical(card, t, "dew pressure", p);
+            }
+            settled = round > 0 && moved <= DROP_SETTLED;
+            card.mixture().logActivityCoefficients(x, kelvin, lnGamma);
+        }
+        if (!settled) {
+            throw Problem.NO_CONVERGENCE.raise("the drop that forms from this vapour at " + Numbers.show(t) + " "
+                    + card.units().temperature().symbol(), "its composition still moved after " + DEW_PRESSURE_ROUNDS
+                    + " rounds of successive substitution; the card's G^E may split the liquid there");
+        }
+        checkVapourPoint(card, x, t, e);
+        return unit.fromPascal(finite(card, t, "dew pressure", p));
+    }
+
     /**
      * The relative volatility of component i to component j in the vapour over the liquid at t:
      * α_ij = (y_i/x_i)/(y_j/x_j) = γ_i·p_i* / (γ_j·p_j*) (at infinite dilution where a fraction is zero).
