@@ -301,8 +301,8 @@ final class FuzzCall {
                 }
                 case "traceEvaluation": {
                     Object[][] x = composition();
-                    a = new Object[] {x, temperature(x), pick(Any.VOID, "volume", "enthalpy", " ENTHALPY ", "mass",
-                        "", 1.0, Boolean.TRUE), extrapolate()};
+                    a = new Object[] {x, temperature(x), pick(Any.VOID, "volume", "enthalpy", " ENTHALPY ", "vapour",
+                        "mass", "", 1.0, Boolean.TRUE), extrapolate()};
                     break;
                 }
                 case "mixingHeat": {

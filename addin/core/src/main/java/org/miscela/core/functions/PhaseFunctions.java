@@ -375,7 +375,7 @@ public final class PhaseFunctions {
     }
 
     /** The point's checks, then each present component's vapour pressure range (unless extrapolation is allowed). */
-    private static double checkVapourPoint(Card card, double[] z, double t, Extrapolation e) {
+    static double checkVapourPoint(Card card, double[] z, double t, Extrapolation e) {
         double kelvin = PointChecks.checkPoint(card, z, t, e);
         card.mixture().gibbs();
         for (int k = 0; k < z.length; k++) {

@@ -33,4 +33,9 @@ public final class Dippr101VapourPressure extends RangedVapourPressure {
         }
         return Math.exp(c1 + c2 / kelvin + c3 * Math.log(kelvin) + c4 * Math.pow(kelvin, c5));
     }
+
+    @Override
+    public String form() {
+        return NAME;
+    }
 }
