@@ -109,6 +109,11 @@ public enum Problem {
     WARN_DIGITS(CHECK, "Card row %d (%s): %s written with %s, but the card needs %s for its %s to stay within %s: "
             + "its terms cancel (one is %s times %s), so rounding in the last digits written moves the %s by up to %s "
             + "here and %s in all. Copy the coefficients with all their digits."),
+    WARN_GIBBS_HELMHOLTZ(CHECK, "The card's excess Gibbs energy and excess enthalpy disagree by the Gibbs–Helmholtz "
+            + "relation H^E = −T²·∂(G^E/T)/∂T: the temperature slope of its G^E/RT implies H^E = %s %s where its "
+            + "excess enthalpy rows give %s %s (at %s %s, %s: the worst difference, %s %s, of %d points over the "
+            + "validity range). One of them is not to be trusted for heats, or for how the phase equilibrium moves "
+            + "with temperature: a G^E fitted at one temperature, or with an assumed slope in T, often disagrees so."),
     CHECK_EXTENT_TIGHT(CHECK, "The range is %d rows × %d columns; the card fills it to row %d and column %d (%d "
             + "non-blank rows read). Its last row is filled: a row typed below the range is not part of the card, so "
             + "insert rows inside the range, or widen it (Sheet ▸ Named Ranges and Expressions ▸ Manage)."),
