@@ -138,6 +138,12 @@ final class Explanations {
                 p[6]));
         add("fitVapourLiquid", (a, p) -> a.fitVapourLiquid(r(p[0]), p[1], r(p[2]), p[3], r(p[4]), r(p[5]), p[6],
                 p[7], p[8], p[9], p[10], p[11], p[12]));
+        add("excessEntropy", (a, p) -> a.excessEntropy(r(p[0]), r(p[1]), r(p[2]), p[3], p[4], p[5]));
+        add("partialExcessEntropy", (a, p) -> a.partialExcessEntropy(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5],
+                p[6]));
+        add("infiniteDilutionActivity", (a, p) -> a.infiniteDilutionActivity(r(p[0]), r(p[1]), r(p[2]), r(p[3]),
+                p[4], p[5], p[6]));
+        add("dewPressure", (a, p) -> a.dewPressure(r(p[0]), r(p[1]), r(p[2]), p[3]));
     }
 
     private Explanations() {

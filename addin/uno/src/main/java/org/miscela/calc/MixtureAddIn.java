@@ -783,6 +783,63 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
         }
     }
 
+    @Override
+    public Object excessEntropy(Object[][] card, Object[][] moleFraction, Object[][] temperature, Object extrapolate,
+            Object basis, Object basisTemperature) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return BasisArguments.overCompositions(c, moleFraction, temperature, BasisArguments.basis(c, basis,
+                    basisTemperature), e, (k, x, t) -> PhaseFunctions.excessEntropy(k, -1, x, t, e));
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "excessEntropy");
+        }
+    }
+
+    @Override
+    public Object partialExcessEntropy(Object[][] card, Object[][] component, Object[][] moleFraction,
+            Object[][] temperature, Object extrapolate, Object basis, Object basisTemperature)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int i = Arguments.component(c, Arguments.value(component));
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return BasisArguments.overCompositions(c, moleFraction, temperature, BasisArguments.basis(c, basis,
+                    basisTemperature), e, (k, x, t) -> PhaseFunctions.excessEntropy(k, i, x, t, e));
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "partialExcessEntropy");
+        }
+    }
+
+    @Override
+    public Object infiniteDilutionActivity(Object[][] card, Object[][] component, Object[][] moleFraction,
+            Object[][] temperature, Object extrapolate, Object basis, Object basisTemperature)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int i = Arguments.component(c, Arguments.value(component));
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return BasisArguments.overCompositions(c, moleFraction, temperature, BasisArguments.basis(c, basis,
+                    basisTemperature), e, (k, x, t) -> PhaseFunctions.infiniteDilutionActivity(k, i, x, t, e));
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "infiniteDilutionActivity");
+        }
+    }
+
+    @Override
+    public Object dewPressure(Object[][] card, Object[][] vapourComposition, Object[][] temperature,
+            Object extrapolate) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            // a vapour composition is read as mole fractions only: no liquid basis applies to it
+            return CompositionArguments.overCompositions(c, vapourComposition, temperature,
+                    (k, y, t) -> PhaseFunctions.dewPressure(k, y, t, e));
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "dewPressure");
+        }
+    }
+
     /** The path's rows as a range, or its peak, the amount at the peak or its end as a number. */
     private static Object pathResult(Object result) {
         if (result instanceof double[][]) {

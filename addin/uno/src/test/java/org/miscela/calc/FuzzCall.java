@@ -250,7 +250,9 @@ final class FuzzCall {
                 case "partialExcessEnthalpy":
                 case "activityCoefficient":
                 case "vapourFraction":
-                case "partialExcessGibbs": {
+                case "partialExcessGibbs":
+                case "partialExcessEntropy":
+                case "infiniteDilutionActivity": {
                     Object[][] x = composition();
                     a = new Object[] {component(), x, temperature(x), extrapolate()};
                     break;
@@ -265,7 +267,9 @@ final class FuzzCall {
                         pick(Any.VOID, "composition", "temperature", clean ? "temperature" : "x"), extrapolate()};
                     break;
                 case "bubblePressure":
-                case "excessGibbs": {
+                case "excessGibbs":
+                case "excessEntropy":
+                case "dewPressure": {
                     Object[][] x = composition();
                     a = new Object[] {x, temperature(x), extrapolate()};
                     break;
@@ -297,8 +301,8 @@ final class FuzzCall {
                 }
                 case "traceEvaluation": {
                     Object[][] x = composition();
-                    a = new Object[] {x, temperature(x), pick(Any.VOID, "volume", "enthalpy", " ENTHALPY ", "mass",
-                        "", 1.0, Boolean.TRUE), extrapolate()};
+                    a = new Object[] {x, temperature(x), pick(Any.VOID, "volume", "enthalpy", " ENTHALPY ", "vapour",
+                        "mass", "", 1.0, Boolean.TRUE), extrapolate()};
                     break;
                 }
                 case "mixingHeat": {
@@ -480,6 +484,9 @@ final class FuzzCall {
                 case "relativeVolatility":
                 case "excessGibbs":
                 case "partialExcessGibbs":
+                case "excessEntropy":
+                case "partialExcessEntropy":
+                case "infiniteDilutionActivity":
                 case "mixtureMolarMass": {
                     Object[] out = java.util.Arrays.copyOf(a, a.length + 2);
                     out[a.length] = clean ? pick(Any.VOID, Any.VOID, "mole fraction", "mass fraction", "w")

@@ -530,4 +530,47 @@ class MixtureAddInTest {
                 () -> addIn.mixtureMolarMass(tern, new Object[][] {{0.5, 0.5}}, Any.VOID, Any.VOID));
         assertEquals("Problem.COMPOSITION_SHAPE", Catalogue.entryOf(two.getMessage()), two.getMessage());
     }
+
+    /**
+     * The phase functions added with the excess entropy: each adapter method gives the core's number for one point, a
+     * column of x1 values gives a column of results, and a refusal carries the catalogue's entry (the values
+     * themselves are checked against their sources in the core's tests).
+     */
+    @Test
+    void entropyInfiniteDilutionDewPressureAndTheVapourTrace() throws Exception {
+        Object[][] gh = TestCards.cells("invented-gibbs-helmholtz.tsv");
+        Object[][] vle = TestCards.cells("ethanol-water-vle.tsv");
+        Object[][] vlw = TestCards.cells("ethanol-water-wilson.tsv");
+        org.miscela.core.card.Card ghCard = TestCards.card("invented-gibbs-helmholtz.tsv");
+        org.miscela.core.card.Card vleCard = TestCards.card("ethanol-water-vle.tsv");
+        Extrapolation e = Extrapolation.AS_CARD;
+        double[] x = {0.3, 0.7};
+        assertEquals(org.miscela.core.functions.PhaseFunctions.excessEntropy(ghCard, -1, x, 40, e),
+                (Double) addIn.excessEntropy(gh, one(0.3), one(40.0), Any.VOID, Any.VOID, Any.VOID), 0.0);
+        assertEquals(org.miscela.core.functions.PhaseFunctions.excessEntropy(ghCard, 1, x, 40, e),
+                (Double) addIn.partialExcessEntropy(gh, one("liquid Q"), one(0.3), one(40.0), Any.VOID, Any.VOID,
+                        Any.VOID), 0.0);
+        assertEquals(Math.exp(1 - Math.log(0.154) - 0.888), (Double) addIn.infiniteDilutionActivity(vlw,
+                one("ethanol"), one(0.5), one(70.0), Any.VOID, Any.VOID, Any.VOID), 1e-11);
+        assertEquals(org.miscela.core.functions.PhaseFunctions.dewPressure(vleCard, x, 60, e),
+                (Double) addIn.dewPressure(vle, one(0.3), one(60.0), Any.VOID), 0.0);
+        Object column = addIn.dewPressure(vle, new Object[][] {{0.2}, {0.6}}, one(60.0), Any.VOID);
+        Object[][] rows = (Object[][]) (column instanceof Any ? ((Any) column).getObject() : column);
+        assertEquals(2, rows.length);
+        assertEquals(org.miscela.core.functions.PhaseFunctions.dewPressure(vleCard, new double[] {0.6, 0.4}, 60, e),
+                (Double) rows[1][0], 0.0);
+        Object trace = addIn.traceEvaluation(vlw, one(0.3), one(70.0), "vapour", Any.VOID, Any.VOID, Any.VOID);
+        Object[][] t = (Object[][]) (trace instanceof Any ? ((Any) trace).getObject() : trace);
+        assertEquals("vapour", t[2][1]);
+        IllegalArgumentException none = assertThrows(IllegalArgumentException.class,
+                () -> addIn.infiniteDilutionActivity(vle, one(1.0), one(1.0), one(50.0), Any.VOID, Any.VOID,
+                        Any.VOID));
+        assertEquals("Problem.NO_DILUENT", Catalogue.entryOf(none.getMessage()), none.getMessage());
+        IllegalArgumentException noH = assertThrows(IllegalArgumentException.class,
+                () -> addIn.excessEntropy(vle, one(0.3), one(50.0), Any.VOID, Any.VOID, Any.VOID));
+        assertEquals("Problem.NO_ENTHALPY", Catalogue.entryOf(noH.getMessage()), noH.getMessage());
+        IllegalArgumentException noP = assertThrows(IllegalArgumentException.class,
+                () -> addIn.dewPressure(CARD, one(0.3), one(20.0), Any.VOID));
+        assertEquals("Problem.NO_PRESSURE_UNIT", Catalogue.entryOf(noP.getMessage()), noP.getMessage());
+    }
 }

@@ -32,7 +32,7 @@ class PackedCardEquivalenceTest {
         MixtureAddIn addIn = new MixtureAddIn();
         int numbers = 0;
         int refusals = 0;
-        for (int i = 0; i < 600; i++) {
+        for (int i = 0; i < 800; i++) {
             FuzzCards.Kind kind = i % 5 == 0 ? FuzzCards.Kind.MUTATED : i % 5 == 1 ? FuzzCards.Kind.EXTREME
                     : FuzzCards.Kind.VALID;
             FuzzCall call = FuzzCall.of(functions.get(r.nextInt(functions.size())), FuzzCards.of(kind, r.nextLong()),
@@ -53,7 +53,7 @@ class PackedCardEquivalenceTest {
             }
         }
         assertTrue(numbers > 100 && refusals > 50, numbers + " results, " + refusals + " refusals");
-        Figures.note(PackedCardEquivalenceTest.class, "600 fuzz calls: %d results and %d refusals identical with the "
+        Figures.note(PackedCardEquivalenceTest.class, "800 fuzz calls: %d results and %d refusals identical with the "
                 + "packed card", numbers, refusals);
     }
 

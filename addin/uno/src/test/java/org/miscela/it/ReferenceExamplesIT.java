@@ -26,7 +26,8 @@ class ReferenceExamplesIT {
     /** The cards the examples name, as listed in the reference's introduction. */
     static final String[][] CARDS = {{"card", "ethanol-water-oiml.tsv"}, {"tern", "ternary-invented.tsv"},
         {"acid", "sulfuric-acid-water-nbs.tsv"}, {"cov", "ethanol-water-covariance.tsv"},
-        {"vle", "ethanol-water-vle.tsv"}, {"vlw", "ethanol-water-wilson.tsv"}};
+        {"vle", "ethanol-water-vle.tsv"}, {"vlw", "ethanol-water-wilson.tsv"},
+        {"gibhelm", "invented-gibbs-helmholtz.tsv"}};
 
     @Test
     void everyExampleShowsItsPrintedValue(Office office) throws Exception {

@@ -22,6 +22,7 @@ import static org.miscela.core.card.CardLabels.TITLE;
 import static org.miscela.core.card.CardReader.normalise;
 
 import org.miscela.core.model.AntoineVapourPressure;
+import org.miscela.core.model.Dippr101VapourPressure;
 import org.miscela.core.model.VapourPressure;
 import org.miscela.core.model.WagnerVapourPressure;
 import org.miscela.core.model.ApparentVolumeDensity;
@@ -323,7 +324,10 @@ final class CardBuilder {
      * Each component's 'vapour pressure' row: the form, then its constants in the card's temperature and pressure
      * units, then optionally the lowest and highest temperature they hold for; null when the card has no such row.
      * 'Antoine': A, B, C of log10(p) = A − B/(C + t). 'Wagner 3-6' (six coefficients) and 'Wagner 2.5-5' (four): T_c and
-     * p_c, then a_1 … of ln(p/p_c) = (T_c/T)·Σ a_i·τ^e_i, τ = 1 − T/T_c.
+     * p_c, then a_1 … of ln(p/p_c) = (T_c/T)·Σ a_i·τ^e_i, τ = 1 − T/T_c. 'DIPPR 101': C1 … C5 of
+     * ln(p/Pa) = C1 + C2/T + C3·ln T + C4·T^C5 with T in K, always in K and Pa as Perry's Table 2-8 prints them (the
+     * form needs an absolute temperature, and a pressure unit would shift C1 by its logarithm, a step easily missed);
+     * only its range is in the card's temperature unit.
      */
     private VapourPressure[] vapourPressures(List<String> names, Units.Pressure pressure) {
         Map<String, CardRow> byComponent = rows.keyed(CardLabels.VAPOUR_PRESSURE);
@@ -338,7 +342,7 @@ final class CardBuilder {
         double offset = tu.fromKelvin(0.0);
         double perKelvin = tu.fromKelvin(1.0) - offset;
         String forms = AntoineVapourPressure.NAME + ", " + WagnerVapourPressure.NAME_3_6 + ", "
-                + WagnerVapourPressure.NAME_2_5;
+                + WagnerVapourPressure.NAME_2_5 + ", " + Dippr101VapourPressure.NAME;
         VapourPressure[] out = new VapourPressure[names.size()];
         for (int k = 0; k < names.size(); k++) {
             CardRow r = byComponent.get(normalise(names.get(k)));
@@ -348,7 +352,8 @@ final class CardBuilder {
             String form = r.text(1).trim();
             int constants = sameKeyword(form, AntoineVapourPressure.NAME) ? 3
                     : sameKeyword(form, WagnerVapourPressure.NAME_3_6) ? 8
-                    : sameKeyword(form, WagnerVapourPressure.NAME_2_5) ? 6 : -1;
+                    : sameKeyword(form, WagnerVapourPressure.NAME_2_5) ? 6
+                    : sameKeyword(form, Dippr101VapourPressure.NAME) ? 5 : -1;
             if (constants < 0) {
                 throw Problem.BAD_KEYWORD.raise(r.number, r.label, form, forms);
             }
@@ -363,7 +368,10 @@ final class CardBuilder {
                 throw Problem.MODEL_VALUES.raise(r.number, r.label, form, "a lowest temperature below the highest",
                         "found " + Numbers.show(v[constants]) + " and " + Numbers.show(v[constants + 1]));
             }
-            if (constants == 3) {
+            if (constants == 5) {
+                // Perry's and the DIPPR tables give the constants for T in K and p in Pa: they are read as printed
+                out[k] = new Dippr101VapourPressure(v[0], v[1], v[2], v[3], v[4], lo, hi);
+            } else if (constants == 3) {
                 out[k] = new AntoineVapourPressure(v[0], v[1], v[2], perKelvin, offset, pressure.toPascal(1.0), lo,
                         hi);
             } else {

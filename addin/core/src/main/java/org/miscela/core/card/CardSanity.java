@@ -19,7 +19,8 @@ import org.miscela.core.problem.Problem;
  *   <li>molar masses, pure densities, thermal expansion and molar volumes outside the ranges of common liquids
  *       ({@link CardPlausibility});</li>
  *   <li>coefficients written with fewer significant digits than the card needs because its terms cancel
- *       ({@link CardDigits}).</li>
+ *       ({@link CardDigits});</li>
+ *   <li>a G^E and an H^E on one card that disagree by the Gibbs–Helmholtz relation ({@link CardGibbsHelmholtz}).</li>
  * </ul>
  */
 public final class CardSanity {
@@ -145,6 +146,7 @@ public final class CardSanity {
         }
         CardPlausibility.warnings(rows, card, out);
         CardDigits.warnings(rows, card, out);
+        CardGibbsHelmholtz.warnings(card, out);
         return Collections.unmodifiableList(out);
     }
 

@@ -119,9 +119,10 @@ public final class FunctionCatalog {
                     + "differ in sign, at most 1024 K wide (40 bisection steps), within 200 evaluations, the balance's "
                     + "non-finite values refused before (NO_TEMPERATURE_ROOT); the hardest balance tried, a triple root "
                     + "in the widest bracket, needs 101 to 120 (FinalTemperatureSearchTest), and no card is known that "
-                    + "reaches it; and the cooling's (MIX.TEMPERATUREPATH's \"cooling\"), whose peak falls without "
-                    + "bound as the heat removed grows, so its doubling always brackets the limit. Calc would show "
-                    + "Err:523",
+                    + "reaches it; the cooling's (MIX.TEMPERATUREPATH's \"cooling\"), whose peak falls without "
+                    + "bound as the heat removed grows, so its doubling always brackets the limit; and MIX.DEWPRESSURE's "
+                    + "successive substitution of the drop, which settled on every card and vapour "
+                    + "tried, liquids that split among them (DewPressureTest). Calc would show Err:523",
             Problem.VLE_FIT_NOT_CONVERGED, "MIX.FITVLE's Levenberg–Marquardt search stops on its cost and "
                     + "parameter tolerances long before its " + org.miscela.core.fit.VleFitter.MAX_ITERATIONS
                     + " iterations on every data set tried (the published sets of VleFitTest take 5 to 14, slips of "
@@ -308,9 +309,10 @@ public final class FunctionCatalog {
                     "—",
                     "=MIX.TRACE(card; 0.3; 20)",
                     CARD, MOLE_FRACTION_ONE, TEMPERATURE_ONE, optional("quantity", "property",
-                            "\"volume\" (left out) or \"enthalpy\": which of the card's properties to "
-                                    + "trace."), EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
-                    .shows("card").refuses(union(BLEND_PROBLEMS, ONE_COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, list(Problem.NO_ENTHALPY, Problem.UNKNOWN_PROPERTY, Problem.ARG_NOT_SINGLE))),
+                            "\"volume\" (left out), \"enthalpy\" or \"vapour\": which of the card's properties to "
+                                    + "trace. \"vapour\": γ, the bubble pressure and the vapour by modified Raoult's "
+                                    + "law."), EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("card").refuses(union(BLEND_PROBLEMS, ONE_COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, list(Problem.NO_ENTHALPY, Problem.UNKNOWN_PROPERTY, Problem.ARG_NOT_SINGLE), VAPOUR_PROBLEMS)),
             new FunctionInfo("fitExcessVolume", "MIX.FITEXCESS",
                     "Redlich–Kister coefficients fitted to excess volumes (or their statistics)",
                     "Redlich–Kister coefficients fitted by least squares to excess volumes, or the fit's standard "
@@ -760,7 +762,48 @@ public final class FunctionCatalog {
                             Problem.UNKNOWN_PAIR_ARG, Problem.ARG_NOT_TEXT, Problem.UNKNOWN_GIBBS_MODEL,
                             Problem.FIT_ORDER_NOT_HERE, Problem.NRTL_ALPHA, Problem.FIT_NEEDS_WILSON_VOLUMES,
                             Problem.FIT_OUTSIDE_VAPOUR_PRESSURE, Problem.VLE_FIT_UNDETERMINED, Problem.VLE_FIT_POOR, Problem.CONSISTENCY_NEEDS_VAPOUR, Problem.NO_PRESSURE_UNIT,
-                            Problem.NO_VAPOUR_PRESSURE, Problem.FIT_OUTPUT_NOT_HERE)))));
+                            Problem.NO_VAPOUR_PRESSURE, Problem.FIT_OUTPUT_NOT_HERE))),
+            new FunctionInfo("excessEntropy", "MIX.EXCESSENTROPY",
+                    "excess molar entropy S^E of the liquid blend, from its H^E and G^E",
+                    "Excess molar entropy of the liquid blend, (H^E − G^E)/T, from the card's excess enthalpy and its "
+                            + "G^E/RT, in the card's enthalpy unit per kelvin (J/(mol·K) for J/mol).",
+                    "S^E = (H^E − G^E)/T, G^E = R·T·Σ_k x_k·ln γ_k (T in K)",
+                    "=MIX.EXCESSENTROPY(gibhelm; 0.3; 40)",
+                    CARD, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("1.0893").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
+                            list(Problem.NO_GIBBS, Problem.NO_ENTHALPY))),
+            new FunctionInfo("partialExcessEntropy", "MIX.PARTIALENTROPY",
+                    "partial molar excess entropy of a component, from its H̄^E and R·T·ln γ",
+                    "Partial molar excess entropy of one component, (H̄_k^E − R·T·ln γ_k)/T, from the card's excess "
+                            + "enthalpy and its G^E/RT, in the card's enthalpy unit per kelvin.",
+                    "S̄_k^E = (H̄_k^E − Ḡ_k^E)/T, Ḡ_k^E = R·T·ln γ_k; S^E = Σ_k x_k·S̄_k^E",
+                    "=MIX.PARTIALENTROPY(gibhelm; 1; 0.3; 40)",
+                    CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("1.2506").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
+                            COMPONENT_PROBLEMS, list(Problem.NO_GIBBS, Problem.NO_ENTHALPY))),
+            new FunctionInfo("infiniteDilutionActivity", "MIX.ACTIVITYLIMIT",
+                    "activity coefficient of a component at infinite dilution in the rest of the blend",
+                    "Activity coefficient γ∞ of one component at infinite dilution in the other liquids of the given "
+                            + "composition, from the card's G^E/RT; its own entry is ignored, the rest renormalised.",
+                    "γ_k^∞ = lim γ_k as x_k → 0 at x_j/(1 − x_k) fixed (j ≠ k); Wilson, binary: ln γ_1^∞ = 1 − ln Λ12 "
+                            + "− Λ21",
+                    "=MIX.ACTIVITYLIMIT(vlw; \"ethanol\"; 0; 70)",
+                    CARD, COMPONENT, range("moleFraction", "x", "The liquids it is diluted in: mole fractions in card "
+                            + "order, the component's own entry ignored and the rest renormalised. A row or column, a "
+                            + "block with one composition per row, or x1 alone on a two-component card, as for "
+                            + "MIX.ACTIVITY."), TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("7.263").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
+                            COMPONENT_PROBLEMS, list(Problem.NO_GIBBS, Problem.NO_DILUENT))),
+            new FunctionInfo("dewPressure", "MIX.DEWPRESSURE",
+                    "the pressure at which a vapour starts to condense at a temperature (its dew pressure)",
+                    "Pressure at which a vapour of the given composition starts to condense at a temperature (its dew "
+                            + "pressure), in the card's pressure unit, by modified Raoult's law: an ideal vapour.",
+                    "1/p = Σ_k y_k / (γ_k(x)·p_k*(T)), x_k = y_k·p/(γ_k·p_k*) (successive substitution from γ = 1)",
+                    "=MIX.DEWPRESSURE(vle; 0.5; 70)",
+                    CARD, range("vapourComposition", "y", "The vapour's mole fractions in card order (a row, a column, a "
+                            + "block of one per row), or y1 alone on a two-component card."),
+                    TEMPERATURE, EXTRAPOLATE)
+                    .shows("56.50").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VAPOUR_PROBLEMS))));
 
     private FunctionCatalog() {
     }

@@ -453,13 +453,22 @@ public final class CardFunctions {
     /** Every intermediate of one evaluation, for auditors: see {@link Trace}. */
     public static Object[][] trace(Card card, double[] x, double t, PropertyKind property, Extrapolation e) {
         double[] z = moleFractions(card, x);
-        double kelvin = PointChecks.checkPoint(card, z, t, e);
-        if (property == PropertyKind.ENTHALPY) {
-            card.mixture().enthalpy();
+        Object[][] rows;
+        if (property == PropertyKind.VAPOUR) {
+            if (card.pressureUnit() == null) {
+                throw Problem.NO_PRESSURE_UNIT.raise();
+            }
+            double kelvin = PhaseFunctions.checkVapourPoint(card, z, t, e);
+            rows = Trace.vapour(card, z, t, kelvin, e, PointChecks.violations(card, z, kelvin, t));
         } else {
-            card.mixture().volume();
+            double kelvin = PointChecks.checkPoint(card, z, t, e);
+            if (property == PropertyKind.ENTHALPY) {
+                card.mixture().enthalpy();
+            } else {
+                card.mixture().volume();
+            }
+            rows = Trace.of(card, z, t, kelvin, property, e, PointChecks.violations(card, z, kelvin, t));
         }
-        Object[][] rows = Trace.of(card, z, t, kelvin, property, e, PointChecks.violations(card, z, kelvin, t));
         for (Object[] row : rows) {
             // An intermediate that overflows (say a pure molar volume M/ρ of a card with extreme numbers) is refused
             // like a final result that does: a trace never shows NaN or infinity.

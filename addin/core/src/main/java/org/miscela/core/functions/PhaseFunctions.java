@@ -31,6 +31,32 @@ public final class PhaseFunctions {
                 Math.exp(lnGamma[component]));
     }
 
+    /**
+     * γ_k^∞, the activity coefficient of one component at infinite dilution in the rest of the given composition: the
+     * component's own entry is ignored and the others renormalised to add up to 1 (x_j/(1 − x_k), j ≠ k), and ln γ_k
+     * is taken there at x_k = 0. Refused when nothing but the component is left. The point checks (validity range)
+     * apply to that solvent composition.
+     */
+    public static double infiniteDilutionActivity(Card card, int component, double[] x, double t, Extrapolation e) {
+        double[] z = CardFunctions.moleFractions(card, x);
+        double rest = 0.0;
+        for (int j = 0; j < z.length; j++) {
+            rest += j == component ? 0.0 : z[j];
+        }
+        if (!(rest > 0.0)) {
+            throw Problem.NO_DILUENT.raise(card.components().get(component).name());
+        }
+        double[] s = new double[z.length];
+        for (int j = 0; j < z.length; j++) {
+            s[j] = j == component ? 0.0 : z[j] / rest;
+        }
+        double kelvin = PointChecks.checkPoint(card, s, t, e);
+        double[] lnGamma = new double[s.length];
+        card.mixture().logActivityCoefficients(s, kelvin, lnGamma);
+        return finite(card, t, "activity coefficient at infinite dilution of " + card.components().get(component).name(),
+                Math.exp(lnGamma[component]));
+    }
+
     /** The gas constant, J/(mol·K), exact since the 2019 SI (N_A·k). */
     public static final double GAS_CONSTANT = 8.314462618;
 
@@ -51,6 +77,28 @@ public final class PhaseFunctions {
             throw PointChecks.nonPhysical(card, t, "excess Gibbs energy", v);
         }
         return card.units().enthalpy().fromJoulePerMol(v);
+    }
+
+    /**
+     * S^E = (H^E − G^E)/T (component < 0) or the partial molar excess entropy S̄_k^E = (H̄_k^E − R·T·ln γ_k)/T, from
+     * the card's excess enthalpy and its G^E/RT, in the card's enthalpy unit per kelvin (per °F on a card in °F);
+     * refused with words when the card lacks either section.
+     */
+    public static double excessEntropy(Card card, int component, double[] x, double t, Extrapolation e) {
+        double[] z = CardFunctions.moleFractions(card, x);
+        double kelvin = PointChecks.checkPoint(card, z, t, e);
+        card.mixture().gibbs();
+        card.mixture().enthalpy(); // a card with excess enthalpy rows always states its enthalpy unit
+        double[] lnGamma = new double[z.length];
+        double g = card.mixture().logActivityCoefficients(z, kelvin, lnGamma);
+        double[] hBar = new double[z.length];
+        double h = card.mixture().partialExcessEnthalpies(z, kelvin, hBar);
+        double v = component < 0 ? h / kelvin - GAS_CONSTANT * g
+                : hBar[component] / kelvin - GAS_CONSTANT * lnGamma[component];
+        if (!Double.isFinite(v)) {
+            throw PointChecks.nonPhysical(card, t, "excess entropy", v);
+        }
+        return card.units().temperature().fromPerKelvin(card.units().enthalpy().fromJoulePerMol(v), 1);
     }
 
     /** The bubble pressure Σ x_k γ_k p_k* in the card's pressure unit. */
@@ -100,6 +148,59 @@ public final class PhaseFunctions {
             (tk, p) -> dewResidual(card, z, tk, p),
             (lo, hi, tu) -> Problem.NO_DEW_POINT.raise(Numbers.show(tu.fromKelvin(lo)),
                     Numbers.show(tu.fromKelvin(hi)), tu.symbol(), Numbers.show(pressure), unit.symbol()));
+    }
+
+    /** The dew-pressure substitution stops when no fraction of the drop moves by more than this. */
+    private static final double DROP_SETTLED = 1e-13;
+    /** The dew-pressure substitution gives up after this many rounds. */
+    static final int DEW_PRESSURE_ROUNDS = 500;
+
+    /**
+     * The dew pressure of a vapour of composition y at t (card units): the pressure at which the first drop forms,
+     * 1/p = Σ_k y_k/(γ_k(x)·p_k*) with the drop's composition x_k = y_k·p/(γ_k·p_k*), by successive substitution
+     * from the ideal drop (γ = 1), each round's p making Σ x_k = 1 exactly, until no fraction of the drop moves by
+     * more than 10⁻¹³ (at most {@value #DEW_PRESSURE_ROUNDS} rounds, else NO_CONVERGENCE). Where the card's G^E splits
+     * the liquid, the drop found is the one the substitution reaches from the ideal drop. The point is checked with the
+     * vapour's components and then with the drop (its composition within the card's validity range).
+     */
+    public static double dewPressure(Card card, double[] y, double t, Extrapolation e) {
+        double[] z = CardFunctions.moleFractions(card, y);
+        Units.Pressure unit = pressureUnit(card);
+        double kelvin = checkVapourPoint(card, z, t, e);
+        int n = z.length;
+        double[] pure = new double[n];
+        for (int k = 0; k < n; k++) {
+            pure[k] = z[k] == 0.0 ? Double.NaN : card.mixture().vapourPressure(k, kelvin);
+        }
+        double[] lnGamma = new double[n];
+        double[] x = new double[n];
+        double p = Double.NaN;
+        boolean settled = false;
+        for (int round = 0; round < DEW_PRESSURE_ROUNDS && !settled; round++) {
+            double sum = 0.0;
+            for (int k = 0; k < n; k++) {
+                sum += z[k] == 0.0 ? 0.0 : z[k] / (Math.exp(lnGamma[k]) * pure[k]);
+            }
+            p = 1.0 / sum;
+            double moved = 0.0;
+            for (int k = 0; k < n; k++) {
+                double next = z[k] == 0.0 ? 0.0 : z[k] * p / (Math.exp(lnGamma[k]) * pure[k]);
+                moved = Math.max(moved, Math.abs(next - x[k]));
+                x[k] = next;
+            }
+            if (!(moved >= 0.0)) {
+                throw PointChecks.nonPhysical(card, t, "dew pressure", p);
+            }
+            settled = round > 0 && moved <= DROP_SETTLED;
+            card.mixture().logActivityCoefficients(x, kelvin, lnGamma);
+        }
+        if (!settled) {
+            throw Problem.NO_CONVERGENCE.raise("the drop that forms from this vapour at " + Numbers.show(t) + " "
+                    + card.units().temperature().symbol(), "its composition still moved after " + DEW_PRESSURE_ROUNDS
+                    + " rounds of successive substitution; the card's G^E may split the liquid there");
+        }
+        checkVapourPoint(card, x, t, e);
+        return unit.fromPascal(finite(card, t, "dew pressure", p));
     }
 
     /**
@@ -274,7 +375,7 @@ public final class PhaseFunctions {
     }
 
     /** The point's checks, then each present component's vapour pressure range (unless extrapolation is allowed). */
-    private static double checkVapourPoint(Card card, double[] z, double t, Extrapolation e) {
+    static double checkVapourPoint(Card card, double[] z, double t, Extrapolation e) {
         double kelvin = PointChecks.checkPoint(card, z, t, e);
         card.mixture().gibbs();
         for (int k = 0; k < z.length; k++) {

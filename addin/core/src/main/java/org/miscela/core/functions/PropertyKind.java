@@ -5,7 +5,9 @@ import org.miscela.core.problem.Problem;
 /** The extensive properties a card can describe, for functions that take the property as an argument. */
 public enum PropertyKind {
     VOLUME("volume"),
-    ENTHALPY("enthalpy");
+    ENTHALPY("enthalpy"),
+    /** The liquid's activity coefficients and the vapour over it (MIX.TRACE only). */
+    VAPOUR("vapour");
 
     private final String word;
 
@@ -24,6 +26,6 @@ public enum PropertyKind {
                 return p;
             }
         }
-        throw Problem.UNKNOWN_PROPERTY.raise(text.trim(), "volume, enthalpy");
+        throw Problem.UNKNOWN_PROPERTY.raise(text.trim(), "volume, enthalpy, vapour");
     }
 }

@@ -8,6 +8,7 @@ import org.miscela.core.model.Component;
 import org.miscela.core.model.ExcessFunction;
 import org.miscela.core.model.ExcessModel;
 import org.miscela.core.model.HeatCapacity;
+import org.miscela.core.model.LocalCompositionGibbs;
 import org.miscela.core.model.RedlichKister;
 import org.miscela.core.model.TernaryTerm;
 import java.util.ArrayList;
@@ -144,6 +145,94 @@ final class Trace {
                         known ? (Object) scaleT.fromPerKelvin(scale * partial[k], 1) : "not on the card");
             }
         }
+        return tr.rows.toArray(new Object[0][]);
+    }
+
+    /** The words of the vapour trace's assumption row. */
+    static final String RAOULT = "modified Raoult's law, y_k·p = x_k·γ_k·p_k*: an ideal vapour, the liquid's volume "
+            + "(Poynting factor) neglected; good at low pressure (up to a few bar)";
+
+    /**
+     * The trace of an activity-coefficient and bubble-pressure evaluation: the G^E/RT model and its parameters at T,
+     * ln γ_k and γ_k, each pure liquid's vapour pressure with its form, the partial pressures, the bubble pressure, the
+     * vapour's composition and the assumption behind them.
+     */
+    static Object[][] vapour(Card card, double[] x, double t, double kelvin, Extrapolation e, List<Violation> outside) {
+        Trace tr = new Trace();
+        Units u = card.units();
+        tr.add("card", card.title());
+        tr.add("source", card.source());
+        tr.add("property", PropertyKind.VAPOUR.word());
+        tr.add("components", (double) card.componentCount());
+        ExcessModel gibbs = card.mixture().gibbs();
+        int n = x.length;
+        if (gibbs instanceof ExcessFunction) {
+            tr.add("activity model", "Redlich–Kister expansion of G^E/RT (" + ((ExcessFunction) gibbs).model()
+                    .cardName() + ")");
+        } else {
+            tr.add("activity model", ((LocalCompositionGibbs) gibbs).kind().cardName());
+        }
+        tr.add("temperature [" + u.temperature().symbol() + "]", t);
+        tr.add("temperature [K]", kelvin);
+        tr.add("extrapolation", extrapolation(card, e));
+        if (outside.isEmpty()) {
+            tr.add("outside validity", "none");
+        }
+        for (Violation v : outside) {
+            tr.add("outside validity", v.limit());
+        }
+        for (int k = 0; k < n; k++) {
+            tr.add("mole fraction: " + name(card, k), x[k]);
+        }
+        if (gibbs instanceof ExcessFunction) {
+            tr.pairs(card, (ExcessFunction) gibbs, x, kelvin, 1.0, "1");
+        } else {
+            LocalCompositionGibbs lc = (LocalCompositionGibbs) gibbs;
+            for (int i = 0; i < n; i++) {
+                for (int j = 0; j < n; j++) {
+                    if (i == j) {
+                        continue;
+                    }
+                    String pair = name(card, i) + " + " + name(card, j);
+                    if (lc.kind() == LocalCompositionGibbs.Kind.WILSON) {
+                        tr.add("Lambda at T: " + pair, lc.lambda(i, j, kelvin));
+                    } else {
+                        tr.add("tau at T: " + pair, lc.tau(i, j, kelvin));
+                        tr.add("alpha: " + pair, lc.alpha(i, j));
+                        tr.add("G at T: " + pair, lc.nrtlG(i, j, kelvin));
+                    }
+                }
+            }
+        }
+        double[] lnGamma = new double[n];
+        double g = card.mixture().logActivityCoefficients(x, kelvin, lnGamma);
+        tr.add("excess Gibbs energy G^E/RT", g);
+        for (int k = 0; k < n; k++) {
+            tr.add("ln activity coefficient: " + name(card, k), lnGamma[k]);
+        }
+        for (int k = 0; k < n; k++) {
+            tr.add("activity coefficient: " + name(card, k), Math.exp(lnGamma[k]));
+        }
+        Units.Pressure pu = card.pressureUnit();
+        String ps = pu.symbol();
+        double[] partial = new double[n];
+        double p = card.mixture().bubblePressure(x, kelvin, partial);
+        for (int k = 0; k < n; k++) {
+            org.miscela.core.model.VapourPressure vp = card.vapourPressure(k);
+            boolean absent = x[k] == 0.0 && vp == null;
+            tr.add("vapour pressure form: " + name(card, k), vp == null ? "not on the card (absent from the blend)"
+                    : vp.form());
+            tr.add("vapour pressure: " + name(card, k) + " [" + ps + "]", absent ? "not needed (absent)"
+                    : (Object) pu.fromPascal(card.mixture().vapourPressure(k, kelvin)));
+        }
+        for (int k = 0; k < n; k++) {
+            tr.add("partial pressure: " + name(card, k) + " [" + ps + "]", pu.fromPascal(partial[k]));
+        }
+        tr.add("bubble pressure [" + ps + "]", pu.fromPascal(p));
+        for (int k = 0; k < n; k++) {
+            tr.add("vapour mole fraction: " + name(card, k), partial[k] / p);
+        }
+        tr.add("assumption", RAOULT);
         return tr.rows.toArray(new Object[0][]);
     }
 

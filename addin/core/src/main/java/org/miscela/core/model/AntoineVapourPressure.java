@@ -39,4 +39,9 @@ public final class AntoineVapourPressure extends RangedVapourPressure {
         }
         return pascalPerUnit * Math.pow(10.0, a - b / (c + t));
     }
+
+    @Override
+    public String form() {
+        return NAME;
+    }
 }

@@ -94,7 +94,7 @@ public final class LocalCompositionGibbs implements ExcessModel {
     }
 
     /** Λ_ij (Wilson) at T. */
-    double lambda(int i, int j, double kelvin) {
+    public double lambda(int i, int j, double kelvin) {
         if (i == j || ideal[i][j]) {
             return 1.0;
         }
@@ -102,8 +102,18 @@ public final class LocalCompositionGibbs implements ExcessModel {
         return volume[j] / volume[i] * Math.exp(-dl / kelvin);
     }
 
+    /** G_ij = exp(−α_ij·τ_ij) (NRTL) at T. */
+    public double nrtlG(int i, int j, double kelvin) {
+        return Math.exp(-alpha[i][j] * tau(i, j, kelvin));
+    }
+
+    /** α_ij (NRTL). */
+    public double alpha(int i, int j) {
+        return alpha[i][j];
+    }
+
     /** τ_ij (NRTL) at T. */
-    double tau(int i, int j, double kelvin) {
+    public double tau(int i, int j, double kelvin) {
         return i == j || ideal[i][j] ? 0.0 : a[i][j] + b[i][j] / kelvin;
     }
 

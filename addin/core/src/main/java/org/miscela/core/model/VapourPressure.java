@@ -2,6 +2,9 @@ package org.miscela.core.model;
 
 /** The vapour pressure of a pure liquid as a function of temperature, in K and Pa. Implementations are immutable. */
 public interface VapourPressure {
+    /** The form's name as a card writes it ("Antoine", "Wagner 3-6", …). */
+    String form();
+
     /** p in Pa at T in K; NaN where the form is not defined. */
     double pascal(double kelvin);
 

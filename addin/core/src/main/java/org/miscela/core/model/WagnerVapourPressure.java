@@ -42,4 +42,9 @@ public final class WagnerVapourPressure extends RangedVapourPressure {
         }
         return criticalPascal * Math.exp(criticalKelvin / kelvin * sum);
     }
+
+    @Override
+    public String form() {
+        return a.length == 6 ? NAME_3_6 : NAME_2_5;
+    }
 }

@@ -109,6 +109,11 @@ public enum Problem {
     WARN_DIGITS(CHECK, "Card row %d (%s): %s written with %s, but the card needs %s for its %s to stay within %s: "
             + "its terms cancel (one is %s times %s), so rounding in the last digits written moves the %s by up to %s "
             + "here and %s in all. Copy the coefficients with all their digits."),
+    WARN_GIBBS_HELMHOLTZ(CHECK, "The card's excess Gibbs energy and excess enthalpy disagree by the Gibbs–Helmholtz "
+            + "relation H^E = −T²·∂(G^E/T)/∂T: the temperature slope of its G^E/RT implies H^E = %s %s where its "
+            + "excess enthalpy rows give %s %s (at %s %s, %s: the worst difference, %s %s, of %d points over the "
+            + "validity range). One of them is not to be trusted for heats, or for how the phase equilibrium moves "
+            + "with temperature: a G^E fitted at one temperature, or with an assumed slope in T, often disagrees so."),
     CHECK_EXTENT_TIGHT(CHECK, "The range is %d rows × %d columns; the card fills it to row %d and column %d (%d "
             + "non-blank rows read). Its last row is filled: a row typed below the range is not part of the card, so "
             + "insert rows inside the range, or widen it (Sheet ▸ Named Ranges and Expressions ▸ Manage)."),
@@ -158,6 +163,7 @@ public enum Problem {
     NO_AZEOTROPE(CALL, "The card gives %s + %s no azeotrope at %s %s: the vapour is richer in the same component over the whole range (x1 from 0.0025 to 0.9975)."),
     SEVERAL_AZEOTROPES(CALL, "The card gives %d compositions where vapour and liquid agree at %s %s (x1 = %s): its excess Gibbs energy is not fixed well enough there to name one azeotrope."),
     NOT_BINARY_AZEOTROPE(CALL, "An azeotrope is searched on a two-component card only; this card has %d components."),
+    NO_DILUENT(CALL, "The composition holds nothing but %s, so there is nothing to dilute it in: give the mole fractions of the liquids around it (its own entry is ignored)."),
     NO_ENERGY_UNIT(CALL, "The card states no 'enthalpy unit', the unit an excess Gibbs energy is given in: add one (J/mol or kJ/mol).", Advice.INSIDE_RANGE),
     NO_PRESSURE_UNIT(CALL, "The card states no 'pressure unit', the unit of the pressures this function takes and gives: add one (kPa, bar, atm, mmHg, …).", Advice.INSIDE_RANGE),
     NO_HEAT_CAPACITY(CALL, "The card gives no 'heat capacity' row for %s; the temperature rise needs the heat capacity of every component.", Advice.INSIDE_RANGE),

@@ -337,6 +337,13 @@ class CardReaderTest {
                                 .row("wilson", "alpha + beta", 100, 200).row("wilson", "alpha + gamma", 100, 200)
                                 .row("wilson volume", "alpha", 58).row("wilson volume", "beta", 18)
                                 .row("wilson volume", "gamma", 73))),
+                bad("a DIPPR 101 vapour pressure with four constants", Problem.MODEL_VALUES, 21,
+                        "5 constants, then optionally the lowest and highest temperature",
+                        v2(c -> c.row("pressure unit", "kPa")
+                                .row("vapour pressure", "alpha", "DIPPR 101", 73.3, -7122.3, -7.14, 2.9e-6))),
+                bad("an unknown vapour-pressure form names DIPPR 101 among the forms", Problem.BAD_KEYWORD, 21,
+                        "DIPPR 101", v2(c -> c.row("pressure unit", "kPa")
+                                .row("vapour pressure", "alpha", "DIPPR 105", 1, 2, 3, 4, 5))),
                 bad("a Wilson pair written both ways", Problem.DUPLICATE_ROW, 21, "row 20",
                         v2(c -> c.row("wilson", "alpha + beta", 100, 200).row("wilson", "beta + alpha", 200, 100)
                                 .row("wilson volume", "alpha", 58).row("wilson volume", "beta", 18))),

@@ -46,6 +46,24 @@ class TraceDocTest {
         for (Component c : enthalpy.components()) {
             names.add(c.name());
         }
+        names.add("ethanol");
+        names.add("water");
+        // the vapour trace by each G^E model: Redlich–Kister, Wilson, NRTL (the Redlich–Kister card's rows replaced)
+        double[] binary = {0.3, 0.7};
+        traces.add(CardFunctions.trace(org.miscela.core.card.TestCards.card("ethanol-water-vle.tsv"), binary, 50,
+                PropertyKind.VAPOUR, Extrapolation.AS_CARD));
+        traces.add(CardFunctions.trace(org.miscela.core.card.TestCards.card("ethanol-water-wilson.tsv"), binary, 70,
+                PropertyKind.VAPOUR, Extrapolation.AS_CARD));
+        List<Object[]> nrtl = new ArrayList<>();
+        for (Object[] row : org.miscela.core.card.TestCards.cells("ethanol-water-vle.tsv")) {
+            if (!String.valueOf(row[0]).startsWith("excess Gibbs energy")
+                    && !(String.valueOf(row[0]).equals("vapour pressure") && "ethanol".equals(row[1]))) {
+                nrtl.add(row);
+            }
+        }
+        nrtl.add(new Object[] {"NRTL", "ethanol + water", 0.1, 1.2, 0.3});
+        traces.add(CardFunctions.trace(org.miscela.core.card.CardReader.read(nrtl.toArray(new Object[0][])),
+                new double[] {0, 1}, 60, PropertyKind.VAPOUR, Extrapolation.AS_CARD));
         int labels = 0;
         for (Object[][] t : traces) {
             for (Object[] row : t) {
