@@ -840,6 +840,21 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
         }
     }
 
+    @Override
+    public Object partialPressure(Object[][] card, Object[][] component, Object[][] moleFraction,
+            Object[][] temperature, Object extrapolate, Object basis, Object basisTemperature)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int i = Arguments.component(c, Arguments.value(component));
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            return BasisArguments.overCompositions(c, moleFraction, temperature, BasisArguments.basis(c, basis,
+                    basisTemperature), e, (k, x, t) -> PhaseFunctions.partialPressure(k, i, x, t, e));
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "partialPressure");
+        }
+    }
+
     /** The path's rows as a range, or its peak, the amount at the peak or its end as a number. */
     private static Object pathResult(Object result) {
         if (result instanceof double[][]) {

@@ -250,6 +250,7 @@ final class FuzzCall {
                 case "partialExcessEnthalpy":
                 case "activityCoefficient":
                 case "vapourFraction":
+                case "partialPressure":
                 case "partialExcessGibbs":
                 case "partialExcessEntropy":
                 case "infiniteDilutionActivity": {
@@ -479,6 +480,7 @@ final class FuzzCall {
                 case "uncertainty":
                 case "activityCoefficient":
                 case "vapourFraction":
+                case "partialPressure":
                 case "bubblePressure":
                 case "bubblePoint":
                 case "relativeVolatility":

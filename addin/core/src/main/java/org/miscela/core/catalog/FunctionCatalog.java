@@ -758,7 +758,7 @@ public final class FunctionCatalog {
                             + "\"statistics\", \"covariance\", \"residuals\", \"consistency\" or \"check\". "
                             + "\"residuals\" gives p_calc − p and y_calc − y per point; \"consistency\" the point "
                             + "and area tests of the data."))
-                    .shows("1.2").refuses(union(DATA_PROBLEMS, FIT_ENGINE_PROBLEMS, list(Problem.FIT_NEEDS_REFERENCE,
+                    .shows("1.210").refuses(union(DATA_PROBLEMS, FIT_ENGINE_PROBLEMS, list(Problem.FIT_NEEDS_REFERENCE,
                             Problem.UNKNOWN_PAIR_ARG, Problem.ARG_NOT_TEXT, Problem.UNKNOWN_GIBBS_MODEL,
                             Problem.FIT_ORDER_NOT_HERE, Problem.NRTL_ALPHA, Problem.FIT_NEEDS_WILSON_VOLUMES,
                             Problem.FIT_OUTSIDE_VAPOUR_PRESSURE, Problem.VLE_FIT_UNDETERMINED, Problem.VLE_FIT_POOR, Problem.CONSISTENCY_NEEDS_VAPOUR, Problem.NO_PRESSURE_UNIT,
@@ -803,7 +803,16 @@ public final class FunctionCatalog {
                     CARD, range("vapourComposition", "y", "The vapour's mole fractions in card order (a row, a column, a "
                             + "block of one per row), or y1 alone on a two-component card."),
                     TEMPERATURE, EXTRAPOLATE)
-                    .shows("56.50").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VAPOUR_PROBLEMS))));
+                    .shows("56.50").refuses(union(COMPOSITION_PROBLEMS, POINT_PROBLEMS, VAPOUR_PROBLEMS)),
+            new FunctionInfo("partialPressure", "MIX.PARTIALPRESSURE",
+                    "partial pressure of a component over the blend at a temperature, by modified Raoult's law",
+                    "Partial pressure of one component in the vapour over the liquid blend at a temperature (at its "
+                            + "bubble point), in the card's pressure unit, by modified Raoult's law: an ideal vapour.",
+                    "p_k = y_k·p = x_k·γ_k·p_k*(T); Σ_k p_k = p, the bubble pressure",
+                    "=MIX.PARTIALPRESSURE(vle; \"ethanol\"; 0.1; 70)",
+                    CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("23.47").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
+                            COMPONENT_PROBLEMS, VAPOUR_PROBLEMS))));
 
     private FunctionCatalog() {
     }

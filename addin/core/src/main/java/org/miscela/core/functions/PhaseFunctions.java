@@ -119,6 +119,17 @@ public final class PhaseFunctions {
                 partial[component] / p);
     }
 
+    /** p_k = y_k·p = x_k·γ_k·p_k*, one component's partial pressure over the blend at t, in the card's pressure unit. */
+    public static double partialPressure(Card card, int component, double[] x, double t, Extrapolation e) {
+        double[] z = CardFunctions.moleFractions(card, x);
+        Units.Pressure unit = pressureUnit(card);
+        double kelvin = checkVapourPoint(card, z, t, e);
+        double[] partial = new double[z.length];
+        card.mixture().bubblePressure(z, kelvin, partial);
+        return unit.fromPascal(finite(card, t, "partial pressure of " + card.components().get(component).name(),
+                partial[component]));
+    }
+
     /**
      * The bubble-point temperature at a pressure (card units): the root of Σ x_k γ_k(T) p_k*(T) = p, searched over the
      * card's validity range and, unless extrapolation is allowed, the range every present component's vapour
