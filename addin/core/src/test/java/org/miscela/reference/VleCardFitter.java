@@ -108,7 +108,8 @@ public final class VleCardFitter {
                         + "Wagner 2.5-5 constants of B. E. Poling, J. M. Prausnitz, J. P. O'Connell, The Properties of "
                         + "Gases and Liquids, 5th ed. (2001), appendix A; densities: "
                         + "ethanol DIPPR 105 (Perry's Chemical Engineers' Handbook, 8th ed., Table 2-32), water Kell "
-                        + "1975; molar masses CIAAW 2021 abridged")
+                        + "1975; molar masses CIAAW 2021 abridged; flash point of ethanol: NFPA 497 (2008), 13 C, as "
+                        + "transcribed")
                 .row("note", "Data from 30 °C to the boiling mixtures at 1 atm; no excess volume on this card. Against other "
                         + "data: bubble points at 98.66 kPa up to 1.5 K low below 6 mol % ethanol (Kirschbaum and "
                         + "Gerstner 1939), bubble pressures at 50 °C within 1.5 % (Kurihara et al. 1995).")
@@ -130,7 +131,9 @@ public final class VleCardFitter {
         for (int k = 0; k < a.length; k++) {
             b.row("excess Gibbs energy A" + k, "ethanol + water", a[k]);
         }
-        return b.row("valid temperature", "30", "100")
+        return b.row("flash point", "ethanol", "13", "closed cup (NFPA 497, 2008)")
+                .row("flash point", "water", "none")
+                .row("valid temperature", "30", "100")
                 .row("valid mole fraction", "ethanol", "0", "1")
                 .row("extrapolation", "refuse")
                 .text();

@@ -253,6 +253,18 @@ final class Arguments {
     }
 
     /** An optional text argument: {@code absent} when left out. */
+    /** The activity argument: true for "ideal" (γ = 1), false for "card" or left out; refused otherwise. */
+    static boolean idealActivity(Object value) {
+        String a = text("activity", value, "card").trim().toLowerCase(java.util.Locale.ROOT);
+        if (a.isEmpty() || a.equals("card")) {
+            return false;
+        }
+        if (a.equals("ideal")) {
+            return true;
+        }
+        throw Problem.UNKNOWN_ACTIVITY.raise(a);
+    }
+
     static String text(String what, Object value, String absent) {
         Object v = unwrap(value);
         if (v == null) {

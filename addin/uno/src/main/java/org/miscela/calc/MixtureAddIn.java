@@ -14,6 +14,7 @@ import org.miscela.core.library.CardLibrary;
 import org.miscela.core.functions.CheckOutput;
 import org.miscela.core.functions.FitFunctions;
 import org.miscela.core.functions.FitOutput;
+import org.miscela.core.functions.FlashPoints;
 import org.miscela.core.functions.PhaseFunctions;
 import org.miscela.core.functions.TemperaturePath;
 import org.miscela.core.blend.BlendFunctions;
@@ -852,6 +853,38 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
                     basisTemperature), e, (k, x, t) -> PhaseFunctions.partialPressure(k, i, x, t, e));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "partialPressure");
+        }
+    }
+
+    @Override
+    public Object flashPoint(Object[][] card, Object[][] moleFraction, Object activity, Object extrapolate,
+            Object basis, Object basisTemperature) throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            boolean ideal = Arguments.idealActivity(activity);
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            // no temperature: each composition is paired with 0, which the search never reads
+            return BasisArguments.overCompositions(c, moleFraction, new Object[][] {{0.0}},
+                    BasisArguments.basis(c, basis, basisTemperature), e,
+                    (k, x, unused) -> FlashPoints.flashPoint(k, x, ideal, e));
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "flashPoint");
+        }
+    }
+
+    @Override
+    public Object flashMinimum(Object[][] card, Object result, Object activity, Object extrapolate)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            String r = Arguments.text("result", result, "composition").trim().toLowerCase(java.util.Locale.ROOT);
+            if (!r.isEmpty() && !r.equals("composition") && !r.equals("temperature")) {
+                throw Problem.UNKNOWN_RESULT.raise(r, "composition, temperature");
+            }
+            return FlashPoints.minimum(c, r.equals("temperature"), Arguments.idealActivity(activity),
+                    Arguments.extrapolation(extrapolate));
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "flashMinimum");
         }
     }
 

@@ -337,6 +337,15 @@ final class FuzzCall {
                 case "fitVapourLiquid":
                     a = fitVapourLiquid();
                     break;
+                case "flashPoint": {
+                    Object[][] x = composition();
+                    a = new Object[] {x, activity(), extrapolate()};
+                    break;
+                }
+                case "flashMinimum":
+                    a = new Object[] {pick(Any.VOID, "composition", "temperature", clean ? "temperature" : "peak",
+                        clean ? Any.VOID : 1.0), activity(), extrapolate()};
+                    break;
                 case "leastSquares":
                     a = leastSquares();
                     break;
@@ -489,6 +498,7 @@ final class FuzzCall {
                 case "excessEntropy":
                 case "partialExcessEntropy":
                 case "infiniteDilutionActivity":
+                case "flashPoint":
                 case "mixtureMolarMass": {
                     Object[] out = java.util.Arrays.copyOf(a, a.length + 2);
                     out[a.length] = clean ? pick(Any.VOID, Any.VOID, "mole fraction", "mass fraction", "w")
@@ -967,6 +977,12 @@ final class FuzzCall {
                 r.nextBoolean() ? Any.VOID : order(2, 10),
                 r.nextBoolean() ? Any.VOID : (Object) ((card.lowest + card.highest) / 2),
                 r.nextInt(3) == 0 ? vector(w, row) : Any.VOID, fitResult()};
+        }
+
+        /** The activity argument of the flash-point functions: left out, "card" or "ideal" (or junk, unclean). */
+        Object activity() {
+            return clean ? pick(Any.VOID, Any.VOID, "card", "ideal")
+                    : pick(Any.VOID, "card", "ideal", "Ideal ", "raoult", "", 1.0);
         }
 
         /** The pair argument of a fit (left out on a binary card, often): its members into {@code members}. */

@@ -49,6 +49,8 @@ public final class Card {
     private final VapourPressure[] vapourPressures;
     /** The unit of pressures on the card and in the functions, or null when the card states none. */
     private final Units.Pressure pressureUnit;
+    private final double[] flashKelvin;
+    private final String[] flashMethod;
     /** The molar volumes of 'Wilson volume' rows (cm³/mol; NaN for a component without one), or null. */
     private final double[] wilsonVolumes;
 
@@ -104,6 +106,8 @@ public final class Card {
         this.vapourPressures = phase == null || phase.vapour == null ? null : phase.vapour.clone();
         this.pressureUnit = phase == null ? null : phase.pressure;
         this.wilsonVolumes = phase == null || phase.wilsonVolumes == null ? null : phase.wilsonVolumes.clone();
+        this.flashKelvin = phase == null || phase.flashKelvin == null ? null : phase.flashKelvin.clone();
+        this.flashMethod = phase == null || phase.flashMethod == null ? null : phase.flashMethod.clone();
         if (densityModel != null && excessVolume != null) {
             throw new IllegalArgumentException("a card states its volumes one way");
         }
@@ -219,12 +223,19 @@ public final class Card {
         final VapourPressure[] vapour;
         final Units.Pressure pressure;
         final double[] wilsonVolumes;
+        /** Each component's flash point in K: NaN without a row, +∞ for one that does not flash. */
+        final double[] flashKelvin;
+        /** Each flash point's test method as the card writes it (null without a row). */
+        final String[] flashMethod;
 
-        PhaseData(ExcessModel gibbs, VapourPressure[] vapour, Units.Pressure pressure, double[] wilsonVolumes) {
+        PhaseData(ExcessModel gibbs, VapourPressure[] vapour, Units.Pressure pressure, double[] wilsonVolumes,
+                double[] flashKelvin, String[] flashMethod) {
             this.gibbs = gibbs;
             this.vapour = vapour;
             this.pressure = pressure;
             this.wilsonVolumes = wilsonVolumes;
+            this.flashKelvin = flashKelvin;
+            this.flashMethod = flashMethod;
         }
     }
 
@@ -244,6 +255,19 @@ public final class Card {
      */
     public double wilsonVolume(int k) {
         return wilsonVolumes == null ? Double.NaN : wilsonVolumes[k];
+    }
+
+    /**
+     * Component k's closed-cup flash point in K from its 'flash point' row: NaN when the card has no such row for it,
+     * positive infinity when the row says it does not flash ("none").
+     */
+    public double flashPointKelvin(int k) {
+        return flashKelvin == null ? Double.NaN : flashKelvin[k];
+    }
+
+    /** The test method the card gives with component k's flash point, or null. */
+    public String flashPointMethod(int k) {
+        return flashMethod == null ? null : flashMethod[k];
     }
 
     /** The card's pressure unit, or null when it states none. */

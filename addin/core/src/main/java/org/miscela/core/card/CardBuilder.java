@@ -197,9 +197,12 @@ final class CardBuilder {
         Units.Pressure pressure = rows.global(CardLabels.PRESSURE_UNIT) != null
                 ? unit(CardLabels.PRESSURE_UNIT, Units.Pressure.class) : null;
         VapourPressure[] vapour = vapourPressures(names, pressure);
+        double[][] flash = {null};
+        String[] flashMethods = flashPoints(names, flash);
         return new Card(title, source, units, components, volume, enthalpy, validity, allow, missingIdeal,
                 basisReferenceKelvin, solutionHeatCapacity(names, masses), boilingCurve(names), mixtureDensity,
-                new Card.PhaseData(gibbs, vapour, pressure, wilsonVolumes));
+                new Card.PhaseData(gibbs, vapour, pressure, wilsonVolumes, flash[0] == null ? null : flash[0],
+                        flashMethods));
     }
 
     /**
@@ -296,6 +299,50 @@ final class CardBuilder {
         double[] volume = wilsonVolumes(subjects, volumes, true);
         wilsonVolumes = volume;
         return LocalCompositionGibbs.wilson(volume, a, b, c, ideal);
+    }
+
+    /**
+     * Each component's 'flash point' row, 'flash point | component | T | test method' (T in the card's temperature
+     * unit; the method, e.g. "closed cup, ASTM D56", is required), or 'flash point | component | none' for a liquid
+     * that does not flash: the kelvins into {@code kelvin[0]} (NaN without a row, +∞ for none) and the methods
+     * returned; nothing (nulls) when the card has no such row.
+     */
+    private String[] flashPoints(List<String> names, double[][] kelvin) {
+        Map<String, CardRow> byComponent = rows.keyed(CardLabels.FLASH_POINT);
+        if (byComponent.isEmpty()) {
+            return null;
+        }
+        double[] out = new double[names.size()];
+        String[] methods = new String[names.size()];
+        for (int k = 0; k < names.size(); k++) {
+            CardRow r = byComponent.get(normalise(names.get(k)));
+            if (r == null) {
+                out[k] = Double.NaN;
+                continue;
+            }
+            Object first = r.values.length > 1 ? r.values[1] : null;
+            if (first instanceof String && sameKeyword(((String) first).trim(), "none")) {
+                r.atMost(2);
+                out[k] = Double.POSITIVE_INFINITY;
+                continue;
+            }
+            double kelvinAt = units.temperature().toKelvin(r.number(1));
+            String method = r.values.length > 2 && r.values[2] instanceof String ? ((String) r.values[2]).trim() : "";
+            if (method.isEmpty()) {
+                throw Problem.MODEL_VALUES.raise(r.number, r.label, "flash point", "the temperature and then the test "
+                        + "method (e.g. closed cup, ASTM D56), or the word none for a liquid that does not flash",
+                        "found no method");
+            }
+            r.atMost(3);
+            if (!(kelvinAt > 0) || Double.isInfinite(kelvinAt)) {
+                throw Problem.NOT_POSITIVE.raise(r.number, r.label, "the flash point (in kelvin)",
+                        Numbers.show(kelvinAt));
+            }
+            out[k] = kelvinAt;
+            methods[k] = method;
+        }
+        kelvin[0] = out;
+        return methods;
     }
 
     /** The 'Wilson volume' rows in cm³/mol, NaN for a component without one unless each must have one. */

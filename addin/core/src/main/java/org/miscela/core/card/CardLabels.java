@@ -48,6 +48,7 @@ final class CardLabels {
     static final String EXCESS_GIBBS = "excess gibbs energy";
     static final String PRESSURE_UNIT = "pressure unit";
     static final String VAPOUR_PRESSURE = "vapour pressure";
+    static final String FLASH_POINT = "flash point";
     static final String WILSON = "wilson";
     static final String WILSON_VOLUME = "wilson volume";
     static final String NRTL = "nrtl";
@@ -67,12 +68,12 @@ final class CardLabels {
     /** Rows whose column 2 names a component (or a pair) and whose values follow. */
     private static final String[] KEYED = {COMPONENT, DENSITY_MODEL, DENSITY_REFERENCE, DENSITY_COEFFICIENTS,
         VALID_MOLE_FRACTION, HEAT_CAPACITY, HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION,
-        SOLUTION_HEAT_CAPACITY, BOILING, APPARENT_DENSITY, VAPOUR_PRESSURE, WILSON, WILSON_VOLUME, NRTL};
+        SOLUTION_HEAT_CAPACITY, BOILING, APPARENT_DENSITY, VAPOUR_PRESSURE, WILSON, WILSON_VOLUME, NRTL, FLASH_POINT};
     /** Labels of version 2 beyond the excess-enthalpy and ternary rows. */
     private static final String[] VERSION_2 = {MODEL, MISSING_PAIRS, ENTHALPY_UNIT, HEAT_CAPACITY,
         EXCESS_VOLUME + " covariance", HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION,
         COMPONENT_ORDER, BASIS_REFERENCE, SOLUTION_HEAT_CAPACITY, SOLVENT, BOILING, MIXTURE_DENSITY_REFERENCE,
-        APPARENT_DENSITY, CARD_SIZE, PRESSURE_UNIT, VAPOUR_PRESSURE, WILSON, WILSON_VOLUME, NRTL};
+        APPARENT_DENSITY, CARD_SIZE, PRESSURE_UNIT, VAPOUR_PRESSURE, WILSON, WILSON_VOLUME, NRTL, FLASH_POINT};
     /** Keyed rows whose subject is a pair "a + b" rather than one component. */
     private static final String[] PAIR_KEYED = {VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION, WILSON, NRTL};
 

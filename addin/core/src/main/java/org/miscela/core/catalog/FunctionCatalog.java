@@ -95,6 +95,9 @@ public final class FunctionCatalog {
                     + "\"residuals\", \"orders\" or \"check\". \"orders\" gives the fits of order 0 to the order "
                     + "given, with F-tests, AIC and BIC; \"check\" gives \"OK\", or why the fit is refused, in "
                     + "words.");
+    private static final ArgumentInfo ACTIVITY = optional("activity", "activity",
+            "\"card\" (left out): γ from the card's G^E/RT; \"ideal\": γ = 1, the ideal-solution estimate, for "
+                    + "comparison only.");
     private static final ArgumentInfo BOILING = optional("boiling", "boiling",
             "TRUE gives the temperature even at or above the card's boiling point. Left out or FALSE, such a batch "
                     + "is refused: it would boil first.");
@@ -812,7 +815,29 @@ public final class FunctionCatalog {
                     "=MIX.PARTIALPRESSURE(vle; \"ethanol\"; 0.1; 70)",
                     CARD, COMPONENT, MOLE_FRACTION, TEMPERATURE, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
                     .shows("23.47").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
-                            COMPONENT_PROBLEMS, VAPOUR_PROBLEMS))));
+                            COMPONENT_PROBLEMS, VAPOUR_PROBLEMS)),
+            new FunctionInfo("flashPoint", "MIX.FLASHPOINT",
+                    "estimated closed-cup flash point of a blend (Liaw's model: Le Chatelier's rule with activities)",
+                    "Estimated flash point of the liquid blend, in the card's temperature unit, by Liaw's model: the "
+                            + "flammable liquids' vapour by modified Raoult's law, summed by Le Chatelier's rule.",
+                    "Σ_{i flammable} x_i·γ_i(x, T)·p_i*(T) / p_i*(T_fp,i) = 1, solved for T (Brent's method)",
+                    "=MIX.FLASHPOINT(vle; 0.3; ; TRUE)",
+                    CARD, MOLE_FRACTION, ACTIVITY, EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("23.2").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
+                            VAPOUR_PROBLEMS, list(Problem.NO_FLASH_POINT_ROW, Problem.NOT_FLAMMABLE,
+                            Problem.NO_FLASH_POINT, Problem.UNKNOWN_ACTIVITY))),
+            new FunctionInfo("flashMinimum", "MIX.FLASHMINIMUM",
+                    "a two-component blend that flashes below both pure liquids: its composition or flash point",
+                    "The blend of two components whose flash point is lower than both pure liquids' (minimum flash "
+                            + "point behaviour): its mole fraction x1, or its flash point. Refused when there is none.",
+                    "min over x1 of the flash point (scan of 200 compositions, then golden section)",
+                    "=MIX.FLASHMINIMUM(fmin; \"temperature\")",
+                    CARD, optional("result", "result", "\"composition\" (left out) for x1, or \"temperature\" for "
+                            + "its flash point in the card's unit."), ACTIVITY, EXTRAPOLATE)
+                    .shows("11.32").refuses(union(POINT_PROBLEMS, VAPOUR_PROBLEMS, list(Problem.NO_FLASH_POINT_ROW,
+                            Problem.NOT_FLAMMABLE, Problem.NO_FLASH_POINT, Problem.NO_FLASH_MINIMUM,
+                            Problem.NOT_BINARY_FLASH, Problem.UNKNOWN_ACTIVITY, Problem.ARG_NOT_TEXT,
+                            Problem.UNKNOWN_RESULT)))));
 
     private FunctionCatalog() {
     }

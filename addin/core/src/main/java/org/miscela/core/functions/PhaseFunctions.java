@@ -362,7 +362,7 @@ public final class PhaseFunctions {
     }
 
     /** The temperature search range: the card's validity and, unless extrapolating, the vapour pressures' ranges. */
-    private static double[] searchRange(Card card, double[] z, Extrapolation e) {
+    static double[] searchRange(Card card, double[] z, Extrapolation e) {
         double lo = card.validity().lowestKelvin();
         double hi = card.validity().highestKelvin();
         if (!card.mayExtrapolate(e)) {
@@ -387,8 +387,15 @@ public final class PhaseFunctions {
 
     /** The point's checks, then each present component's vapour pressure range (unless extrapolation is allowed). */
     static double checkVapourPoint(Card card, double[] z, double t, Extrapolation e) {
+        return checkVapourPoint(card, z, t, e, true);
+    }
+
+    /** As {@link #checkVapourPoint(Card, double[], double, Extrapolation)}; the card's G^E required or not. */
+    static double checkVapourPoint(Card card, double[] z, double t, Extrapolation e, boolean needsGibbs) {
         double kelvin = PointChecks.checkPoint(card, z, t, e);
-        card.mixture().gibbs();
+        if (needsGibbs) {
+            card.mixture().gibbs();
+        }
         for (int k = 0; k < z.length; k++) {
             if (z[k] == 0.0) {
                 continue;

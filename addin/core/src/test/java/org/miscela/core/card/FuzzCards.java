@@ -455,6 +455,16 @@ public final class FuzzCards {
                     double c = 280 - mid;
                     row(label("vapour pressure"), names.get(i), "Antoine", 1 + r.nextDouble() + b / 280, b, c);
                 }
+                // flash points mid-range, or none (a liquid that does not flash), for most of the phase cards
+                for (int i = 0; i < n && r.nextInt(4) > 0; i++) {
+                    if (r.nextInt(4) == 0) {
+                        row(label("flash point"), names.get(i), "none");
+                    } else {
+                        double span = highestK - lowestK;
+                        row(label("flash point"), names.get(i), t(lowestK + span * (0.2 + 0.6 * r.nextDouble())),
+                                "closed cup (invented)");
+                    }
+                }
             }
             enthalpy = enthalpyRows;
             // a card without volume rows but with enthalpy or Gibbs rows describes no volume
