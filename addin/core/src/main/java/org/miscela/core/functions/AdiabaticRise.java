@@ -127,10 +127,12 @@ final class AdiabaticRise {
             }
             end = finalTemperature(balance, Math.min(reference, far), Math.max(reference, far), BALANCE_EVALUATIONS);
         }
-        double boils = card.boiling() == null ? Double.NaN : card.boiling().kelvinAt(x);
+        double boils = BoilingPoints.kelvinAt(card, x);
         if (!boiling && end >= boils) {
             throw Problem.BOILS.raise(Numbers.show(unit.fromKelvin(end)), unit.symbol(),
-                    Numbers.show(unit.fromKelvin(boils)), unit.symbol());
+                    Numbers.show(unit.fromKelvin(boils)), unit.symbol(), BoilingPoints.fromBubblePoint(card, x)
+                            ? "its bubble point at 1 atm from the card's G^E and vapour pressures"
+                            : "the card's 'boiling temperatures'");
         }
         if (!card.mayExtrapolate(e) && !(pure ? card.validity().containsTemperature(end)
                 : PointChecks.insideTemperature(card, x, end))) {

@@ -126,9 +126,15 @@ final class Trace {
                 tr.add("heat capacity: " + name(card, k) + " [" + cpUnit + "]",
                         c == null ? "not on the card" : (Object) scaleT.fromPerKelvin(scale * c.at(kelvin), 1));
             }
-            double boils = card.boiling() == null ? Double.NaN : card.boiling().kelvinAt(x);
-            tr.add("boiling temperature [" + scaleT.symbol() + "]", card.boiling() == null ? "not on the card"
-                    : Double.isNaN(boils) ? "outside the card's boiling points" : (Object) scaleT.fromKelvin(boils));
+            double boils = BoilingPoints.kelvinAt(card, x);
+            boolean bubble = BoilingPoints.fromBubblePoint(card, x);
+            tr.add("boiling temperature [" + scaleT.symbol() + "]", card.boiling() == null && !bubble
+                    ? "not on the card" : Double.isNaN(boils) ? bubble ? "no bubble point at 1 atm inside the card's "
+                    + "range" : "outside the card's boiling points" : (Object) scaleT.fromKelvin(boils));
+            if (bubble) {
+                tr.add("boiling temperature source", "bubble point at 101.325 kPa (an open vessel) from the card's "
+                        + "G^E and vapour pressures, modified Raoult's law");
+            }
             tr.add("blend heat capacity source", m.heatCapacitySource().words());
             double[] partial = new double[x.length];
             boolean known = true;

@@ -171,8 +171,8 @@ public enum Problem {
     OUTSIDE_PAIR_TEMPERATURE(CALL, "The temperature %s %s is outside the range %s to %s %s stated for the pair %s.", Advice.EXTRAPOLATION),
     OUTSIDE_PAIR_COMPOSITION(CALL, "The pair %s is present at the ratio %s = %s, outside the range %s to %s stated for it.", Advice.EXTRAPOLATION),
     OUTSIDE_FINAL_TEMPERATURE(CALL, "The batch would reach %s %s, outside the card's validity range %s to %s %s.", Advice.EXTRAPOLATION),
-    BOILS(CALL, "The batch would reach %s %s, at or above its boiling point of %s %s at this composition (the card's "
-            + "'boiling temperatures'): it would boil first, throwing out hot liquid and vapour, and the heat balance no "
+    BOILS(CALL, "The batch would reach %s %s, at or above its boiling point of %s %s at this composition (%s): it "
+            + "would boil first, throwing out hot liquid and vapour, and the heat balance no "
             + "longer holds. Plan more cooling or a slower addition; to see the temperature the balance gives all the "
             + "same, pass TRUE as 'boiling'."),
     PATH_EMPTY_VESSEL(CALL, "The first charge, %s, is what the vessel holds when the addition starts; it must be more "

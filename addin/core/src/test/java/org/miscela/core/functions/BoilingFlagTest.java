@@ -1,0 +1,44 @@
+package org.miscela.core.functions;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.junit.jupiter.api.Test;
+import org.miscela.core.card.Card;
+import org.miscela.core.card.Extrapolation;
+import org.miscela.core.card.TestCards;
+import org.miscela.core.problem.MiscelaException;
+import org.miscela.core.problem.Problem;
+
+/**
+ * The temperature rise's boiling flag on a card without stated boiling temperatures but with G^E/RT and vapour
+ * pressures: the blend's bubble point at 1 atm is the limit (identities on an invented card: the limit is
+ * MIX.BUBBLEPOINT's value at 101.325 kPa, and a rise past it is refused unless accepted).
+ */
+class BoilingFlagTest {
+    private static final Card HOT = TestCards.card("invented-hot-mixing.tsv");
+    private static final Extrapolation E = Extrapolation.AS_CARD;
+
+    @Test
+    void theBubblePointAtOneAtmosphereIsTheBoilingLimit() {
+        double[] x = {0.5, 0.5};
+        double bubble = PhaseFunctions.bubblePoint(HOT, x, 101.325, E);
+        assertEquals(bubble + 273.15, BoilingPoints.kelvinAt(HOT, x), 1e-9);
+        assertTrue(BoilingPoints.fromBubblePoint(HOT, x));
+        // 1 mol + 1 mol from 20 °C: H^E = −30000/4 J/mol released into 2 × 100 J/K: about 75 K, past the bubble point
+        double[] amounts = {1, 1};
+        MiscelaException e = assertThrows(MiscelaException.class,
+                () -> CardFunctions.adiabaticRise(HOT, amounts, AmountBasis.MOL, 20, E));
+        assertEquals(Problem.BOILS, e.problem());
+        assertTrue(e.getMessage().contains("bubble point at 1 atm"), e.getMessage());
+        double rise = CardFunctions.adiabaticRise(HOT, amounts, AmountBasis.MOL, 20, E, true);
+        assertTrue(20 + rise > bubble, "accepted, the balance's temperature lies past the bubble point: " + rise);
+    }
+
+    @Test
+    void aCardWithoutPhaseDataHasNoBoilingLimit() {
+        assertTrue(Double.isNaN(BoilingPoints.kelvinAt(TestCards.card("sulfuric-acid-water-nbs.tsv"),
+                new double[] {0.1, 0.9})));
+    }
+}
