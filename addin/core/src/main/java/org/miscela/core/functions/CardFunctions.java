@@ -454,12 +454,15 @@ public final class CardFunctions {
     public static Object[][] trace(Card card, double[] x, double t, PropertyKind property, Extrapolation e) {
         double[] z = moleFractions(card, x);
         Object[][] rows;
-        if (property == PropertyKind.VAPOUR) {
+        if (property == PropertyKind.VAPOUR || property == PropertyKind.FLASH) {
             if (card.pressureUnit() == null) {
                 throw Problem.NO_PRESSURE_UNIT.raise();
             }
             double kelvin = PhaseFunctions.checkVapourPoint(card, z, t, e);
             rows = Trace.vapour(card, z, t, kelvin, e, PointChecks.violations(card, z, kelvin, t));
+            if (property == PropertyKind.FLASH) {
+                rows = Trace.flash(card, z, kelvin, e, rows);
+            }
         } else {
             double kelvin = PointChecks.checkPoint(card, z, t, e);
             if (property == PropertyKind.ENTHALPY) {

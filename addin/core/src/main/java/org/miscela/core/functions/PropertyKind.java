@@ -7,7 +7,9 @@ public enum PropertyKind {
     VOLUME("volume"),
     ENTHALPY("enthalpy"),
     /** The liquid's activity coefficients and the vapour over it (MIX.TRACE only). */
-    VAPOUR("vapour");
+    VAPOUR("vapour"),
+    /** The vapour trace and the flash point's terms by Liaw's model (MIX.TRACE only). */
+    FLASH("flash");
 
     private final String word;
 
@@ -26,6 +28,6 @@ public enum PropertyKind {
                 return p;
             }
         }
-        throw Problem.UNKNOWN_PROPERTY.raise(text.trim(), "volume, enthalpy, vapour");
+        throw Problem.UNKNOWN_PROPERTY.raise(text.trim(), "volume, enthalpy, vapour, flash");
     }
 }

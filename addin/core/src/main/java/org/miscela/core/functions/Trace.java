@@ -242,6 +242,54 @@ final class Trace {
         return tr.rows.toArray(new Object[0][]);
     }
 
+    /**
+     * The vapour trace followed by the flash point's terms by Liaw's model at the same temperature: each flammable
+     * liquid's flash point, test method, vapour pressure there and share of Le Chatelier's sum, the sum (1 at the
+     * flash point), the blend's flash point (or why there is none) and the model's assumptions.
+     */
+    static Object[][] flash(Card card, double[] x, double kelvin, Extrapolation e, Object[][] vapourRows) {
+        Trace tr = new Trace();
+        for (Object[] row : vapourRows) {
+            tr.rows.add(row);
+        }
+        Units.Temperature tu = card.units().temperature();
+        Units.Pressure pu = card.pressureUnit();
+        double[] lnGamma = new double[x.length];
+        card.mixture().logActivityCoefficients(x, kelvin, lnGamma);
+        double sum = 0.0;
+        for (int k = 0; k < x.length; k++) {
+            double fp = card.flashPointKelvin(k);
+            String who = name(card, k);
+            if (Double.isNaN(fp)) {
+                tr.add("flash point: " + who + " [" + tu.symbol() + "]", "no 'flash point' row on the card");
+                continue;
+            }
+            if (Double.isInfinite(fp)) {
+                tr.add("flash point: " + who + " [" + tu.symbol() + "]", "none: does not flash (dilutes only)");
+                continue;
+            }
+            tr.add("flash point: " + who + " [" + tu.symbol() + "]", tu.fromKelvin(fp));
+            tr.add("flash point test method: " + who, card.flashPointMethod(k));
+            double reference = card.mixture().vapourPressure(k, fp);
+            tr.add("vapour pressure at its flash point: " + who + " [" + pu.symbol() + "]", pu.fromPascal(reference));
+            double share = x[k] * Math.exp(lnGamma[k]) * card.mixture().vapourPressure(k, kelvin) / reference;
+            tr.add("flammable share x·γ·p*(T)/p*(T_fp): " + who, share);
+            sum += share;
+        }
+        tr.add("Le Chatelier sum at T (1 at the flash point)", sum);
+        Object blend;
+        try {
+            blend = FlashPoints.flashPoint(card, x, false, e);
+        } catch (org.miscela.core.problem.MiscelaException none) {
+            blend = none.getMessage();
+        }
+        tr.add("flash point of the blend [" + tu.symbol() + "]", blend);
+        tr.add("flash point model", "Liaw et al.: Σ x_i·γ_i·p_i*(T)/p_i*(T_fp,i) = 1 over the flammable liquids "
+                + "(Le Chatelier's rule with modified Raoult's law); liquids marked none only dilute; an estimate of "
+                + "a closed-cup flash point, which measured values and local codes overrule");
+        return tr.rows.toArray(new Object[0][]);
+    }
+
     /** Per pair: the series argument d, each coefficient at T, and the pair's term; then the ternary terms. */
     private void pairs(Card card, ExcessFunction f, double[] x, double kelvin, double scale, String unit) {
         int n = card.componentCount();

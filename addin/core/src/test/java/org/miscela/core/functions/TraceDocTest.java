@@ -54,6 +54,8 @@ class TraceDocTest {
                 PropertyKind.VAPOUR, Extrapolation.AS_CARD));
         traces.add(CardFunctions.trace(org.miscela.core.card.TestCards.card("ethanol-water-wilson.tsv"), binary, 70,
                 PropertyKind.VAPOUR, Extrapolation.AS_CARD));
+        traces.add(CardFunctions.trace(org.miscela.core.card.TestCards.card("ethanol-water-vle.tsv"), binary, 50,
+                PropertyKind.FLASH, Extrapolation.AS_CARD));
         List<Object[]> nrtl = new ArrayList<>();
         for (Object[] row : org.miscela.core.card.TestCards.cells("ethanol-water-vle.tsv")) {
             if (!String.valueOf(row[0]).startsWith("excess Gibbs energy")
