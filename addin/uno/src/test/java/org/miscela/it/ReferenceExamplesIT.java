@@ -27,7 +27,7 @@ class ReferenceExamplesIT {
     static final String[][] CARDS = {{"card", "ethanol-water-oiml.tsv"}, {"tern", "ternary-invented.tsv"},
         {"acid", "sulfuric-acid-water-nbs.tsv"}, {"cov", "ethanol-water-covariance.tsv"},
         {"vle", "ethanol-water-vle.tsv"}, {"vlw", "ethanol-water-wilson.tsv"},
-        {"gibhelm", "invented-gibbs-helmholtz.tsv"}};
+        {"gibhelm", "invented-gibbs-helmholtz.tsv"}, {"ice", "ethanol-water-vle-ice.tsv"}};
 
     @Test
     void everyExampleShowsItsPrintedValue(Office office) throws Exception {

@@ -51,6 +51,7 @@ public final class Card {
     private final Units.Pressure pressureUnit;
     /** The molar volumes of 'Wilson volume' rows (cm³/mol; NaN for a component without one), or null. */
     private final double[] wilsonVolumes;
+    private final Fusion[] fusion;
 
     /**
      * 20 °C, the temperature at which alcoholic strength by volume is defined (OIML R 22 (1975)), used for every
@@ -104,6 +105,7 @@ public final class Card {
         this.vapourPressures = phase == null || phase.vapour == null ? null : phase.vapour.clone();
         this.pressureUnit = phase == null ? null : phase.pressure;
         this.wilsonVolumes = phase == null || phase.wilsonVolumes == null ? null : phase.wilsonVolumes.clone();
+        this.fusion = phase == null || phase.fusion == null ? null : phase.fusion.clone();
         if (densityModel != null && excessVolume != null) {
             throw new IllegalArgumentException("a card states its volumes one way");
         }
@@ -219,13 +221,25 @@ public final class Card {
         final VapourPressure[] vapour;
         final Units.Pressure pressure;
         final double[] wilsonVolumes;
+        final Fusion[] fusion;
 
         PhaseData(ExcessModel gibbs, VapourPressure[] vapour, Units.Pressure pressure, double[] wilsonVolumes) {
+            this(gibbs, vapour, pressure, wilsonVolumes, null);
+        }
+
+        PhaseData(ExcessModel gibbs, VapourPressure[] vapour, Units.Pressure pressure, double[] wilsonVolumes,
+                Fusion[] fusion) {
             this.gibbs = gibbs;
             this.vapour = vapour;
             this.pressure = pressure;
             this.wilsonVolumes = wilsonVolumes;
+            this.fusion = fusion;
         }
+    }
+
+    /** Component k's melting data ('melting point', 'enthalpy of fusion' rows), or null when the card gives none. */
+    public Fusion fusion(int k) {
+        return fusion == null ? null : fusion[k];
     }
 
     /** G^E/RT of the liquid (dimensionless), or null when the card gives none. */
