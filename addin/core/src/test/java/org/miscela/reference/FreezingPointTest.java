@@ -133,7 +133,7 @@ class FreezingPointTest {
      */
     @Test
     void ethyleneGlycolIdealSolutionAgainstCrc() {
-        double[][] crc = {{10, 3.37}, {20, 7.93}, {40, 23.84}, {60, 51.23}};
+        double[][] crc = {{10, 3.37}, {20, 7.93}, {40, 23.84}, {60, 51.23}, {48, 33.30}, {52, 38.81}};
         StringBuilder table = new StringBuilder();
         double[] shortfall = new double[crc.length];
         for (int i = 0; i < crc.length; i++) {
