@@ -31,6 +31,7 @@ class FreezingPointTest {
     private static final Card ETHANOL_NO_CP = withoutHeatCapacityOfFusion("ethanol-water-vle-ice.tsv");
     private static final Card GLYCOL = TestCards.card("ethylene-glycol-water-ice-ideal.tsv");
     private static final Card GLYCOL_NO_CP = withoutHeatCapacityOfFusion("ethylene-glycol-water-ice-ideal.tsv");
+    private static final Card METHANOL = TestCards.card("methanol-water-ice-ideal.tsv");
     private static final double R = PhaseFunctions.GAS_CONSTANT;
     private static final double TM = 273.15;
     private static final double DH = 6010.0;
@@ -148,6 +149,26 @@ class FreezingPointTest {
         assertTrue(shortfall[2] > 5 && shortfall[2] < 7, "40 %: " + shortfall[2]);
         assertTrue(shortfall[3] > 10 && shortfall[3] < 16, "60 %: " + shortfall[3]);
         Figures.note(FreezingPointTest.class, "ethylene glycol + water, ideal solution (computed − CRC):%s", table);
+    }
+
+    /**
+     * Methanol + water, ideal solution only (no published G^E/RT reaching the ice line was found), against the CRC
+     * table: measured 0.36, 1.53, 3.83 and 6.15 K too warm at 10, 20, 30 and 40 % w/w.
+     */
+    @Test
+    void methanolIdealSolutionAgainstCrc() {
+        double[][] crc = {{10, 6.6}, {20, 15.02}, {30, 25.91}, {40, 38.6}};
+        double[] seen = {6.24, 13.49, 22.08, 32.45};
+        StringBuilder table = new StringBuilder();
+        for (int i = 0; i < crc.length; i++) {
+            double ideal = -PhaseFunctions.freezingPoint(METHANOL, 1, fromMassPercent(METHANOL, crc[i][0]),
+                    Activity.IDEAL, Extrapolation.AS_CARD);
+            assertEquals(seen[i], ideal, 0.01, crc[i][0] + " %");
+            assertTrue(ideal < crc[i][1]);
+            table.append(String.format("%n  %2.0f %% w/w: CRC %.2f K; ideal %.2f (%+.2f)", crc[i][0], crc[i][1], ideal,
+                    ideal - crc[i][1]));
+        }
+        Figures.note(FreezingPointTest.class, "methanol + water, ideal solution (computed − CRC):%s", table);
     }
 
     /** The refusals: a G^E that is needed but missing, a blend without the component, outside the card's range. */
