@@ -171,6 +171,27 @@ class FreezingPointTest {
         Figures.note(FreezingPointTest.class, "methanol + water, ideal solution (computed − CRC):%s", table);
     }
 
+    /**
+     * Along the freezing curve: every result satisfies the SLE equation with γ_w from MIX.ACTIVITY at that
+     * temperature (to 10⁻⁹ in ln a), and the freezing point falls as ethanol is added, from values x1 = 0.01 … 0.3.
+     */
+    @Test
+    void everyPointOfTheCurveSatisfiesTheEquation() {
+        double previous = 0.0;
+        for (int i = 1; i <= 30; i++) {
+            double x1 = i / 100.0;
+            double[] x = {x1, 1 - x1};
+            double t = freezing(ETHANOL, x, Activity.CARD);
+            double kelvin = t + TM;
+            double gamma = PhaseFunctions.activityCoefficient(ETHANOL, 1, x, t, Extrapolation.ALLOW);
+            double r = TM / kelvin;
+            double line = (-DH * (1 / kelvin - 1 / TM) + 38.25 * (r - 1 - Math.log(r))) / R;
+            assertEquals(line, Math.log(x[1] * gamma), 1e-9, "x1 = " + x1);
+            assertTrue(t < previous, "x1 = " + x1 + ": " + t + " not below " + previous);
+            previous = t;
+        }
+    }
+
     /** The refusals: a G^E that is needed but missing, a blend without the component, outside the card's range. */
     @Test
     void refusals() {
