@@ -147,6 +147,7 @@ final class Explanations {
         add("partialPressure", (a, p) -> a.partialPressure(r(p[0]), r(p[1]), r(p[2]), r(p[3]), p[4], p[5], p[6]));
         add("flashPoint", (a, p) -> a.flashPoint(r(p[0]), r(p[1]), p[2], p[3], p[4], p[5]));
         add("flashMinimum", (a, p) -> a.flashMinimum(r(p[0]), p[1], p[2], p[3]));
+        add("freezingPoint", (a, p) -> a.freezingPoint(r(p[0]), r(p[1]), p[2], p[3], p[4], p[5], p[6], p[7]));
     }
 
     private Explanations() {

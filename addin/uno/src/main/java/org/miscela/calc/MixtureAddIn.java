@@ -888,6 +888,39 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
         }
     }
 
+    @Override
+    public Object freezingPoint(Object[][] card, Object[][] moleFraction, Object component, Object activity,
+            Object result, Object extrapolate, Object basis, Object basisTemperature)
+            throws IllegalArgumentException {
+        try {
+            Card c = Arguments.card(card);
+            int i = Arguments.optionalComponent(c, component, -1);
+            PhaseFunctions.Activity a = Arguments.idealActivity(activity) ? PhaseFunctions.Activity.IDEAL
+                    : PhaseFunctions.Activity.CARD;
+            boolean which = keyword("result", result, "temperature", "component") == 1;
+            Extrapolation e = Arguments.extrapolation(extrapolate);
+            // no temperature is given: a one-cell placeholder stands where the other functions take it
+            return BasisArguments.overCompositions(c, moleFraction, new Object[][] {{0.0}},
+                    BasisArguments.basis(c, basis, basisTemperature), e, (k, x, t) -> {
+                        double freezing = PhaseFunctions.freezingPoint(k, i, x, a, e);
+                        return which ? PhaseFunctions.freezingComponent(k, i, x, a) + 1 : freezing;
+                    });
+        } catch (RuntimeException ex) {
+            throw Failures.refusal(ex, "freezingPoint");
+        }
+    }
+
+    /** The index of a keyword argument among its choices (0, the first, when left out or blank). */
+    private static int keyword(String what, Object value, String... choices) {
+        String v = Arguments.text(what, value, choices[0]).trim().toLowerCase(java.util.Locale.ROOT);
+        for (int j = 0; j < choices.length; j++) {
+            if (v.isEmpty() || v.equals(choices[j])) {
+                return v.isEmpty() ? 0 : j;
+            }
+        }
+        throw Problem.UNKNOWN_RESULT.raise(v, String.join(", ", choices));
+    }
+
     /** The path's rows as a range, or its peak, the amount at the peak or its end as a number. */
     private static Object pathResult(Object result) {
         if (result instanceof double[][]) {

@@ -451,6 +451,12 @@ final class FuzzCall {
                         clean ? pick(Any.VOID, 60.0, 330.0) : pick(Any.VOID, 60.0, -300.0, junk())};
                     break;
                 }
+                case "freezingPoint":
+                    a = new Object[] {composition(), pickedComponent(),
+                        clean ? pick(Any.VOID, "card", "ideal", " Ideal ") : pick(Any.VOID, "ideal", "", "gamma", 1.0),
+                        clean ? pick(Any.VOID, "temperature", "component") : pick(Any.VOID, "component", "x", 2.0),
+                        extrapolate()};
+                    break;
                 case "libraryList":
                     a = new Object[] {pick(Any.VOID, "chloride", "water", " Acid ", "", clean ? "sodium" : junk(),
                         1.0, Boolean.TRUE)};
@@ -499,6 +505,7 @@ final class FuzzCall {
                 case "partialExcessEntropy":
                 case "infiniteDilutionActivity":
                 case "flashPoint":
+                case "freezingPoint":
                 case "mixtureMolarMass": {
                     Object[] out = java.util.Arrays.copyOf(a, a.length + 2);
                     out[a.length] = clean ? pick(Any.VOID, Any.VOID, "mole fraction", "mass fraction", "w")

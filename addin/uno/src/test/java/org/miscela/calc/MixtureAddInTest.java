@@ -573,4 +573,48 @@ class MixtureAddInTest {
                 () -> addIn.dewPressure(CARD, one(0.3), one(20.0), Any.VOID));
         assertEquals("Problem.NO_PRESSURE_UNIT", Catalogue.entryOf(noP.getMessage()), noP.getMessage());
     }
+    /**
+     * MIX.FREEZINGPOINT through the adapter: the core's number for a mass percentage, a column of x1 giving a column
+     * (the freezing curve), the component that crystallises, the ideal solution on request only, and its refusals
+     * with the catalogue's entries (the values are checked against the CRC Handbook in the core's FreezingPointTest).
+     */
+    @Test
+    void freezingPoint() throws Exception {
+        Object[][] ice = TestCards.cells("ethanol-water-vle-ice.tsv");
+        Object[][] glycol = TestCards.cells("ethylene-glycol-water-ice-ideal.tsv");
+        org.miscela.core.card.Card iceCard = TestCards.card("ethanol-water-vle-ice.tsv");
+        org.miscela.core.functions.PhaseFunctions.Activity card = org.miscela.core.functions.PhaseFunctions.Activity.CARD;
+        double m1 = iceCard.components().get(0).molarMass();
+        double m2 = iceCard.components().get(1).molarMass();
+        double x1 = (20 / m1) / (20 / m1 + 80 / m2);
+        double expected = org.miscela.core.functions.PhaseFunctions.freezingPoint(iceCard, -1,
+                new double[] {x1, 1 - x1}, card, Extrapolation.ALLOW);
+        assertEquals(-9.415, expected, 0.001); // as FreezingPointTest records
+        assertEquals(expected, (Double) addIn.freezingPoint(ice, one(20.0), Any.VOID, Any.VOID, Any.VOID,
+                Boolean.TRUE, "%w/w", Any.VOID), 1e-9);
+        Object column = addIn.freezingPoint(ice, new Object[][] {{0.0}, {x1}}, Any.VOID, Any.VOID, Any.VOID,
+                Boolean.TRUE, Any.VOID, Any.VOID);
+        Object[][] rows = (Object[][]) (column instanceof Any ? ((Any) column).getObject() : column);
+        assertEquals(0.0, (Double) rows[0][0], 0.0);
+        assertEquals(expected, (Double) rows[1][0], 1e-9);
+        assertEquals(2.0, (Double) addIn.freezingPoint(ice, one(0.1), Any.VOID, Any.VOID, "component", Boolean.TRUE,
+                Any.VOID, Any.VOID), 0.0);
+        double ideal = (Double) addIn.freezingPoint(glycol, one(40.0), "water", "ideal", Any.VOID, Any.VOID, "%w/w",
+                Any.VOID);
+        assertEquals(-18.12, ideal, 0.005); // the ideal-solution value of FreezingPointTest (CRC: -23.84 °C)
+        IllegalArgumentException noGibbs = assertThrows(IllegalArgumentException.class,
+                () -> addIn.freezingPoint(glycol, one(0.1), Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID,
+                        Any.VOID));
+        assertEquals("Problem.FREEZING_NEEDS_GIBBS", Catalogue.entryOf(noGibbs.getMessage()), noGibbs.getMessage());
+        IllegalArgumentException outside = assertThrows(IllegalArgumentException.class,
+                () -> addIn.freezingPoint(ice, one(0.1), Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+        assertEquals("Problem.OUTSIDE_TEMPERATURE", Catalogue.entryOf(outside.getMessage()), outside.getMessage());
+        IllegalArgumentException word = assertThrows(IllegalArgumentException.class,
+                () -> addIn.freezingPoint(ice, one(0.1), Any.VOID, "gamma", Any.VOID, Any.VOID, Any.VOID, Any.VOID));
+        assertEquals("Problem.UNKNOWN_ACTIVITY", Catalogue.entryOf(word.getMessage()), word.getMessage());
+        IllegalArgumentException noData = assertThrows(IllegalArgumentException.class,
+                () -> addIn.freezingPoint(ice, one(0.1), "ethanol", Any.VOID, Any.VOID, Boolean.TRUE, Any.VOID,
+                        Any.VOID));
+        assertEquals("Problem.NO_FUSION_DATA", Catalogue.entryOf(noData.getMessage()), noData.getMessage());
+    }
 }

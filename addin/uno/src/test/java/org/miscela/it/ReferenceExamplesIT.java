@@ -27,7 +27,8 @@ class ReferenceExamplesIT {
     static final String[][] CARDS = {{"card", "ethanol-water-oiml.tsv"}, {"tern", "ternary-invented.tsv"},
         {"acid", "sulfuric-acid-water-nbs.tsv"}, {"cov", "ethanol-water-covariance.tsv"},
         {"vle", "ethanol-water-vle.tsv"}, {"vlw", "ethanol-water-wilson.tsv"},
-        {"gibhelm", "invented-gibbs-helmholtz.tsv"}, {"fmin", "invented-flash-minimum.tsv"}};
+        {"gibhelm", "invented-gibbs-helmholtz.tsv"}, {"fmin", "invented-flash-minimum.tsv"},
+        {"ice", "ethanol-water-vle-ice.tsv"}};
 
     @Test
     void everyExampleShowsItsPrintedValue(Office office) throws Exception {

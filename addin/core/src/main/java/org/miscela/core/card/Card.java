@@ -53,6 +53,7 @@ public final class Card {
     private final String[] flashMethod;
     /** The molar volumes of 'Wilson volume' rows (cm³/mol; NaN for a component without one), or null. */
     private final double[] wilsonVolumes;
+    private final Fusion[] fusion;
 
     /**
      * 20 °C, the temperature at which alcoholic strength by volume is defined (OIML R 22 (1975)), used for every
@@ -108,6 +109,7 @@ public final class Card {
         this.wilsonVolumes = phase == null || phase.wilsonVolumes == null ? null : phase.wilsonVolumes.clone();
         this.flashKelvin = phase == null || phase.flashKelvin == null ? null : phase.flashKelvin.clone();
         this.flashMethod = phase == null || phase.flashMethod == null ? null : phase.flashMethod.clone();
+        this.fusion = phase == null || phase.fusion == null ? null : phase.fusion.clone();
         if (densityModel != null && excessVolume != null) {
             throw new IllegalArgumentException("a card states its volumes one way");
         }
@@ -227,16 +229,23 @@ public final class Card {
         final double[] flashKelvin;
         /** Each flash point's test method as the card writes it (null without a row). */
         final String[] flashMethod;
+        final Fusion[] fusion;
 
         PhaseData(ExcessModel gibbs, VapourPressure[] vapour, Units.Pressure pressure, double[] wilsonVolumes,
-                double[] flashKelvin, String[] flashMethod) {
+                double[] flashKelvin, String[] flashMethod, Fusion[] fusion) {
             this.gibbs = gibbs;
             this.vapour = vapour;
             this.pressure = pressure;
             this.wilsonVolumes = wilsonVolumes;
             this.flashKelvin = flashKelvin;
             this.flashMethod = flashMethod;
+            this.fusion = fusion;
         }
+    }
+
+    /** Component k's melting data ('melting point', 'enthalpy of fusion' rows), or null when the card gives none. */
+    public Fusion fusion(int k) {
+        return fusion == null ? null : fusion[k];
     }
 
     /** G^E/RT of the liquid (dimensionless), or null when the card gives none. */

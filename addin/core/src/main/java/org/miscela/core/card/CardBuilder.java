@@ -202,7 +202,69 @@ final class CardBuilder {
         return new Card(title, source, units, components, volume, enthalpy, validity, allow, missingIdeal,
                 basisReferenceKelvin, solutionHeatCapacity(names, masses), boilingCurve(names), mixtureDensity,
                 new Card.PhaseData(gibbs, vapour, pressure, wilsonVolumes, flash[0] == null ? null : flash[0],
-                        flashMethods));
+                        flashMethods, fusion(names)));
+    }
+
+    /**
+     * Each component's melting data: 'melting point | component | T_m' (card temperature unit), 'enthalpy of fusion |
+     * component | ΔH_fus' (card enthalpy unit) and optionally 'heat capacity of fusion | component | ΔCp' (liquid minus
+     * solid, enthalpy unit per degree of the card's temperature scale); null when the card gives none. The first two
+     * come together; T_m (in kelvin) and ΔH_fus must be greater than zero, ΔCp a finite number.
+     */
+    private Fusion[] fusion(List<String> names) {
+        Map<String, CardRow> melting = rows.keyed(CardLabels.MELTING_POINT);
+        Map<String, CardRow> enthalpy = rows.keyed(CardLabels.FUSION_ENTHALPY);
+        Map<String, CardRow> heat = rows.keyed(CardLabels.FUSION_HEAT_CAPACITY);
+        if (melting.isEmpty() && enthalpy.isEmpty() && heat.isEmpty()) {
+            return null;
+        }
+        Fusion[] out = new Fusion[names.size()];
+        for (int k = 0; k < names.size(); k++) {
+            String subject = normalise(names.get(k));
+            CardRow m = melting.get(subject);
+            CardRow h = enthalpy.get(subject);
+            CardRow c = heat.get(subject);
+            if (m == null && h == null && c == null) {
+                continue;
+            }
+            if (m == null || h == null) {
+                String have = m != null ? CardLabels.MELTING_POINT : h != null ? CardLabels.FUSION_ENTHALPY
+                        : CardLabels.FUSION_HEAT_CAPACITY;
+                throw Problem.MISSING_PAIR_ROW.raise(have, names.get(k), m == null ? CardLabels.MELTING_POINT
+                        : CardLabels.FUSION_ENTHALPY);
+            }
+            if (units.enthalpy() == null) {
+                throw Problem.MISSING_ROW.raise(ENTHALPY_UNIT);
+            }
+            m.atMost(2);
+            h.atMost(2);
+            double stated = m.number(1);
+            double kelvin = units.temperature().toKelvin(stated);
+            if (!(kelvin > 0.0) || Double.isInfinite(kelvin)) {
+                throw Problem.NOT_POSITIVE.raise(m.number, m.label, "the melting point (in kelvin)",
+                        Numbers.show(kelvin));
+            }
+            double dh = units.enthalpy().toJoulePerMol(h.number(1));
+            if (!(dh > 0.0) || Double.isInfinite(dh)) {
+                throw Problem.NOT_POSITIVE.raise(h.number, h.label, "the enthalpy of fusion",
+                        Numbers.show(h.number(1)));
+            }
+            double dcp = 0.0;
+            if (c != null) {
+                c.atMost(2);
+                dcp = units.temperature().toPerKelvin(units.enthalpy().toJoulePerMol(c.number(1)), 1);
+                if (!Double.isFinite(dcp) || 0.1 * Math.abs(dcp) * kelvin >= dh) {
+                    // ΔH_fus + ΔCp·(T − T_m), the enthalpy of fusion at T, must stay positive within 10 % of T_m
+                    throw Problem.MODEL_VALUES.raise(c.number, c.label, CardLabels.FUSION_HEAT_CAPACITY, "a value "
+                            + "smaller in size than 10·ΔH_fus/T_m = " + Numbers.show(units.temperature().fromPerKelvin(
+                                    units.enthalpy().fromJoulePerMol(10 * dh / kelvin), 1)) + ", or the enthalpy of "
+                            + "fusion would vanish within 10 % of the melting point", "found "
+                            + Numbers.show(c.number(1)));
+                }
+            }
+            out[k] = new Fusion(kelvin, stated, dh, dcp, c != null);
+        }
+        return out;
     }
 
     /**

@@ -52,6 +52,9 @@ final class CardLabels {
     static final String WILSON = "wilson";
     static final String WILSON_VOLUME = "wilson volume";
     static final String NRTL = "nrtl";
+    static final String MELTING_POINT = "melting point";
+    static final String FUSION_ENTHALPY = "enthalpy of fusion";
+    static final String FUSION_HEAT_CAPACITY = "heat capacity of fusion";
 
     /**
      * Rows of an excess-property section: binary coefficients A0..A99 (group 2), ternary C0..C9 (group 3; only C0..C2
@@ -68,12 +71,14 @@ final class CardLabels {
     /** Rows whose column 2 names a component (or a pair) and whose values follow. */
     private static final String[] KEYED = {COMPONENT, DENSITY_MODEL, DENSITY_REFERENCE, DENSITY_COEFFICIENTS,
         VALID_MOLE_FRACTION, HEAT_CAPACITY, HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION,
-        SOLUTION_HEAT_CAPACITY, BOILING, APPARENT_DENSITY, VAPOUR_PRESSURE, WILSON, WILSON_VOLUME, NRTL, FLASH_POINT};
+        SOLUTION_HEAT_CAPACITY, BOILING, APPARENT_DENSITY, VAPOUR_PRESSURE, WILSON, WILSON_VOLUME, NRTL, FLASH_POINT,
+        MELTING_POINT, FUSION_ENTHALPY, FUSION_HEAT_CAPACITY};
     /** Labels of version 2 beyond the excess-enthalpy and ternary rows. */
     private static final String[] VERSION_2 = {MODEL, MISSING_PAIRS, ENTHALPY_UNIT, HEAT_CAPACITY,
         EXCESS_VOLUME + " covariance", HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION,
         COMPONENT_ORDER, BASIS_REFERENCE, SOLUTION_HEAT_CAPACITY, SOLVENT, BOILING, MIXTURE_DENSITY_REFERENCE,
-        APPARENT_DENSITY, CARD_SIZE, PRESSURE_UNIT, VAPOUR_PRESSURE, WILSON, WILSON_VOLUME, NRTL, FLASH_POINT};
+        APPARENT_DENSITY, CARD_SIZE, PRESSURE_UNIT, VAPOUR_PRESSURE, WILSON, WILSON_VOLUME, NRTL, FLASH_POINT,
+        MELTING_POINT, FUSION_ENTHALPY, FUSION_HEAT_CAPACITY};
     /** Keyed rows whose subject is a pair "a + b" rather than one component. */
     private static final String[] PAIR_KEYED = {VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION, WILSON, NRTL};
 

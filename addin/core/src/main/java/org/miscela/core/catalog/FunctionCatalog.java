@@ -838,7 +838,25 @@ public final class FunctionCatalog {
                     .shows("11.32").refuses(union(POINT_PROBLEMS, VAPOUR_PROBLEMS, list(Problem.NO_FLASH_POINT_ROW,
                             Problem.NOT_FLAMMABLE, Problem.NO_FLASH_POINT, Problem.NO_FLASH_MINIMUM,
                             Problem.NOT_BINARY_FLASH, Problem.UNKNOWN_ACTIVITY, Problem.ARG_NOT_TEXT,
-                            Problem.UNKNOWN_RESULT)))));
+                            Problem.UNKNOWN_RESULT))),
+            new FunctionInfo("freezingPoint", "MIX.FREEZINGPOINT",
+                    "the temperature at which a pure solid starts to crystallise from the liquid blend (freezing point)",
+                    "Temperature at which a pure solid (ice, say) starts to form from the liquid blend, card unit, "
+                            + "from the card's melting rows and G^E/RT; an estimate, measured values prevail.",
+                    "ln(x_k·γ_k(x, T)) = −(ΔH_fus/R)(1/T − 1/T_m) + (ΔCp/R)[(T_m/T − 1) − ln(T_m/T)], solved for T "
+                            + "(Brent's method); the solid is pure k",
+                    "=MIX.FREEZINGPOINT(ice; 20; ; ; ; TRUE(); \"%w/w\")",
+                    CARD, MOLE_FRACTION, optional("component", "component", "The component that crystallises, by "
+                            + "number or name (left out: the one that freezes first, at the highest temperature)."),
+                    optional("activity", "activity", "\"card\" (left out): γ from the card's G^E/RT; \"ideal\": "
+                            + "assume an ideal solution (γ = 1), often kelvins too warm."),
+                    optional("result", "result", "\"temperature\" (left out) for the freezing point, or "
+                            + "\"component\" for the number of the component that crystallises."),
+                    EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
+                    .shows("-9.42").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
+                            COMPONENT_PROBLEMS, list(Problem.NO_FUSION_DATA, Problem.FREEZING_NEEDS_GIBBS,
+                            Problem.FREEZING_COMPONENT_ABSENT, Problem.NO_FREEZING_POINT, Problem.UNKNOWN_RESULT,
+                            Problem.ARG_NOT_TEXT, Problem.UNKNOWN_ACTIVITY)))));
 
     private FunctionCatalog() {
     }

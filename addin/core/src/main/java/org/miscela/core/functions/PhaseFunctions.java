@@ -3,6 +3,7 @@ package org.miscela.core.functions;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.miscela.core.card.Card;
 import org.miscela.core.card.Extrapolation;
+import org.miscela.core.card.Fusion;
 import org.miscela.core.card.Units;
 import org.miscela.core.model.VapourPressure;
 import org.miscela.core.problem.Numbers;
@@ -410,6 +411,159 @@ public final class PhaseFunctions {
             }
         }
         return kelvin;
+    }
+
+    /** How the freezing point takes the liquid's activity: from the card's G^E/RT, or an ideal solution, asked for. */
+    public enum Activity {
+        /** γ_k from the card's G^E/RT; refused when the card has none. */
+        CARD,
+        /** γ_k = 1: the ideal solution, only when the caller names it (never a quiet default). */
+        IDEAL
+    }
+
+    /**
+     * The freezing point of the liquid blend (card temperature unit): the temperature at which pure solid
+     * {@code component} starts to form, the root in T of the solid–liquid equilibrium with a pure solid,
+     * ln(x_k·γ_k(x, T)) = −(ΔH_fus/R)(1/T − 1/T_m) + (ΔCp/R)[(T_m/T − 1) − ln(T_m/T)] (J. M. Prausnitz, R. N.
+     * Lichtenthaler, E. G. de Azevedo, Molecular Thermodynamics of Fluid-Phase Equilibria, 3rd ed., 1999, ch. 11),
+     * by Brent's method to 10⁻⁹ K. A component &lt; 0 takes the one that freezes first: the highest such temperature
+     * among the present components with melting data. The pure component gives its stated T_m exactly. With the card's
+     * G^E the point found is checked against the card's validity (refused outside unless extrapolating); with
+     * {@link Activity#IDEAL} only the melting data are used.
+     */
+    public static double freezingPoint(Card card, int component, double[] x, Activity a, Extrapolation e) {
+        double[] z = CardFunctions.moleFractions(card, x);
+        int k = freezingComponent(card, component, z, a);
+        double kelvin = freezingKelvin(card, k, z, a);
+        Fusion f = card.fusion(k);
+        Units.Temperature tu = card.units().temperature();
+        if (kelvin == f.meltingKelvin()) {
+            return f.meltingAsStated();
+        }
+        double t = tu.fromKelvin(kelvin);
+        if (a == Activity.CARD && z[k] < 1.0) {
+            PointChecks.checkPoint(card, z, t, e);
+        }
+        return t;
+    }
+
+    /**
+     * The index of the component whose freezing point {@link #freezingPoint} gives: {@code component} itself when
+     * given (≥ 0), else the present component with melting data that freezes at the highest temperature.
+     */
+    public static int freezingComponent(Card card, int component, double[] x, Activity a) {
+        double[] z = CardFunctions.moleFractions(card, x);
+        if (a == Activity.CARD && card.excessGibbs() == null) {
+            throw Problem.FREEZING_NEEDS_GIBBS.raise();
+        }
+        if (component >= 0) {
+            String name = card.components().get(component).name();
+            if (card.fusion(component) == null) {
+                throw Problem.NO_FUSION_DATA.raise(name);
+            }
+            if (!(z[component] > 0.0)) {
+                throw Problem.FREEZING_COMPONENT_ABSENT.raise(name, name);
+            }
+            return component;
+        }
+        int best = -1;
+        double warmest = Double.NEGATIVE_INFINITY;
+        int firstWithData = -1;
+        for (int k = 0; k < z.length; k++) {
+            if (card.fusion(k) == null) {
+                continue;
+            }
+            firstWithData = firstWithData < 0 ? k : firstWithData;
+            if (z[k] > 0.0) {
+                double kelvin = freezingRoot(card, k, z, a);
+                if (kelvin > warmest) {
+                    warmest = kelvin;
+                    best = k;
+                }
+                best = best < 0 ? k : best; // no root: still named in the refusal
+            }
+        }
+        if (firstWithData < 0) {
+            throw Problem.NO_FUSION_DATA.raise("any of its components");
+        }
+        if (best < 0) {
+            String name = card.components().get(firstWithData).name();
+            throw Problem.FREEZING_COMPONENT_ABSENT.raise(name, name);
+        }
+        return best;
+    }
+
+    /** The freezing temperature of component k in K; refused with words when the search range holds none. */
+    private static double freezingKelvin(Card card, int k, double[] z, Activity a) {
+        double kelvin = freezingRoot(card, k, z, a);
+        if (Double.isNaN(kelvin)) {
+            double[] range = freezingRange(card.fusion(k));
+            Units.Temperature tu = card.units().temperature();
+            throw Problem.NO_FREEZING_POINT.raise(Numbers.show(tu.fromKelvin(range[0])),
+                    Numbers.show(tu.fromKelvin(range[1])), tu.symbol(), card.components().get(k).name(),
+                    Numbers.show(z[k]));
+        }
+        return kelvin;
+    }
+
+    /**
+     * The search range in K: T_m/4 to 1.25·T_m, narrowed to where the enthalpy of fusion at T,
+     * ΔH_fus + ΔCp·(T − T_m), stays above a tenth of its value at T_m (the right-hand side rises with T there, so
+     * the root is unique).
+     */
+    private static double[] freezingRange(Fusion f) {
+        double tm = f.meltingKelvin();
+        double lo = tm / 4;
+        double hi = 1.25 * tm;
+        double dcp = f.heatCapacity();
+        if (dcp > 0.0) {
+            lo = Math.max(lo, tm - 0.9 * f.enthalpy() / dcp);
+        } else if (dcp < 0.0) {
+            hi = Math.min(hi, tm + 0.9 * f.enthalpy() / -dcp);
+        }
+        return new double[] {lo, hi};
+    }
+
+    /** The root in K, T_m itself when the residual vanishes there, or NaN when the range holds none. */
+    private static double freezingRoot(Card card, int k, double[] z, Activity a) {
+        Fusion f = card.fusion(k);
+        java.util.function.DoubleUnaryOperator residual = tk -> {
+            double lnActivity = Math.log(z[k]);
+            if (a == Activity.CARD) {
+                double[] lnGamma = new double[z.length];
+                card.mixture().logActivityCoefficients(z, tk, lnGamma);
+                lnActivity += lnGamma[k];
+            }
+            return lnActivity - solidLine(f, tk);
+        };
+        double tm = f.meltingKelvin();
+        double atMelting = residual.applyAsDouble(tm);
+        if (atMelting == 0.0) {
+            return tm;
+        }
+        double[] range = freezingRange(f);
+        double lo = atMelting < 0.0 ? range[0] : tm;
+        double hi = atMelting < 0.0 ? tm : range[1];
+        double fLo = residual.applyAsDouble(lo);
+        double fHi = residual.applyAsDouble(hi);
+        if (!Double.isFinite(atMelting) || !(fLo >= 0.0 && fHi <= 0.0)) {
+            return Double.NaN;
+        }
+        if (fLo == 0.0 || fHi == 0.0) {
+            return fLo == 0.0 ? lo : hi;
+        }
+        return new BrentSolver(1e-15, ACCURACY_KELVIN).solve(200, residual::applyAsDouble, lo, hi);
+    }
+
+    /**
+     * The right-hand side of the freezing equation at T (K): ln of the activity of the pure liquid relative to the pure
+     * solid, −(ΔH_fus/R)(1/T − 1/T_m) + (ΔCp/R)[(T_m/T − 1) − ln(T_m/T)]; zero at T_m.
+     */
+    static double solidLine(Fusion f, double kelvin) {
+        double tm = f.meltingKelvin();
+        double r = tm / kelvin;
+        return (-f.enthalpy() * (1.0 / kelvin - 1.0 / tm) + f.heatCapacity() * ((r - 1.0) - Math.log(r)))
+                / GAS_CONSTANT;
     }
 
     private static double finite(Card card, double t, String what, double v) {

@@ -227,6 +227,10 @@ public enum Problem {
     NON_PHYSICAL(CALL, "At %s %s the card gives a %s of %s, which is not physical; the card is being used where its models do not hold."),
     NO_CONVERGENCE(CALL, "The numerical search for %s did not converge (%s), so there is no result; the card's models "
             + "may be irregular there: check them near this point."),
+    NO_FUSION_DATA(CALL, "The card gives no 'melting point' and 'enthalpy of fusion' rows for %s, so it cannot say when a solid forms: add both rows for the component that crystallises (see docs/card-format.md).", Advice.INSIDE_RANGE),
+    FREEZING_NEEDS_GIBBS(CALL, "The card gives no excess Gibbs energy (G^E/RT rows), so the freezing point cannot allow for how the liquids interact: add them, or pass \"ideal\" as 'activity' to assume an ideal solution (γ = 1), which can be kelvins too warm for a strong blend.", Advice.INSIDE_RANGE),
+    FREEZING_COMPONENT_ABSENT(CALL, "The blend holds no %s, so no solid %s can form from it; name a component that is present, or leave the component out for the one that freezes first."),
+    NO_FREEZING_POINT(CALL, "No temperature from %s to %s %s lets solid %s form from this blend (x = %s): its activity in the liquid does not meet the melting curve there; the card's G^E may not hold so far from its data."),
 
     // --- the fitting engine (point numbers count from 1, as a user reads rows)
     NO_POINTS(FIT, "No data points were given."),

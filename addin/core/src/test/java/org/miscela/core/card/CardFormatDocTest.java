@@ -147,7 +147,7 @@ public class CardFormatDocTest {
     @Test
     void examplesBehaveAsDescribed() throws IOException {
         List<Example> examples = examples(lines());
-        assertEquals(12, examples.size());
+        assertEquals(13, examples.size());
         Card one = CardReader.read(examples.get(0).cells);
         // "the functions refuse x1 above 0.9 unless extrapolation is allowed"
         assertEquals(CardFunctions.OK, CardFunctions.check(one, 0.0, T, Extrapolation.AS_CARD));
@@ -247,6 +247,20 @@ public class CardFormatDocTest {
                 x12, 50, Extrapolation.AS_CARD), 1e-9);
         assertEquals(Problem.NO_VOLUME, org.junit.jupiter.api.Assertions.assertThrows(MiscelaException.class,
                 () -> CardFunctions.density(twelve, 0.3, 50, Extrapolation.AS_CARD)).problem());
+
+        // Example 13: pure S freezes at its 5.5 °C; at x_S = 0.9 the freezing point satisfies the SLE equation with
+        // ln γ_S = x_P²·A0 (Redlich–Kister, one term), ΔH_fus = 9900 J/mol, ΔCp = 10 J/(mol·K).
+        Card thirteen = CardReader.read(examples.get(12).cells);
+        org.miscela.core.functions.PhaseFunctions.Activity fromCard =
+                org.miscela.core.functions.PhaseFunctions.Activity.CARD;
+        assertEquals(5.5, org.miscela.core.functions.PhaseFunctions.freezingPoint(thirteen, -1, new double[] {0, 1},
+                fromCard, Extrapolation.AS_CARD), 0.0);
+        double tf = org.miscela.core.functions.PhaseFunctions.freezingPoint(thirteen, -1, new double[] {0.1, 0.9},
+                fromCard, Extrapolation.AS_CARD) + 273.15;
+        double tm = 278.65;
+        double r = org.miscela.core.functions.PhaseFunctions.GAS_CONSTANT;
+        assertEquals(Math.log(0.9) + 0.01 * 0.8, -9900 / r * (1 / tf - 1 / tm) + 10 / r * (tm / tf - 1 - Math.log(tm / tf)),
+                1e-9);
     }
 
     private static final Pattern CHECK_MARKER = Pattern.compile("^\\s*<!--\\s*check-example:(.*?)-->\\s*$");

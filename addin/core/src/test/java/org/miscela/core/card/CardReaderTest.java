@@ -353,7 +353,28 @@ class CardReaderTest {
                 bad("an apparent density of another name", Problem.BAD_KEYWORD, 20, "\"Cooper 2004\"",
                         v2(c -> c.set(12, "# off").set(13, "# off")
                                 .row("apparent density", "alpha", "Cooper 2004", 1, 2, 3, 4, 5)
-                                .row("solvent", "beta"))));
+                                .row("solvent", "beta"))),
+                // melting data for the freezing point (invented values: only the card's grammar is tested here)
+                bad("a melting point without an enthalpy of fusion", Problem.MISSING_PAIR_ROW, 0,
+                        "'melting point' rows for alpha but no 'enthalpy of fusion' row",
+                        v2(c -> c.row("enthalpy unit", "J/mol").row("melting point", "alpha", 250))),
+                bad("a heat capacity of fusion alone", Problem.MISSING_PAIR_ROW, 0,
+                        "'heat capacity of fusion' rows for beta but no 'melting point' row",
+                        v2(c -> c.row("enthalpy unit", "J/mol").row("heat capacity of fusion", "beta", 30))),
+                bad("melting data without an enthalpy unit", Problem.MISSING_ROW, 0, "\"enthalpy unit\"",
+                        v2(c -> c.row("melting point", "alpha", 250).row("enthalpy of fusion", "alpha", 5000))),
+                bad("a zero enthalpy of fusion", Problem.NOT_POSITIVE, 22, "the enthalpy of fusion must be greater",
+                        v2(c -> c.row("enthalpy unit", "J/mol").row("melting point", "alpha", 250)
+                                .row("enthalpy of fusion", "alpha", 0))),
+                bad("a melting point below absolute zero", Problem.NOT_POSITIVE, 21, "the melting point (in kelvin)",
+                        v2(c -> c.row("enthalpy unit", "J/mol").row("melting point", "alpha", -300)
+                                .row("enthalpy of fusion", "alpha", 5000))),
+                bad("a heat capacity of fusion that would cancel the enthalpy of fusion", Problem.MODEL_VALUES, 23,
+                        "within 10 % of the melting point", v2(c -> c.row("enthalpy unit", "J/mol")
+                                .row("melting point", "alpha", 250).row("enthalpy of fusion", "alpha", 5000)
+                                .row("heat capacity of fusion", "alpha", 250))),
+                bad("melting data on a version 1 card", Problem.NEEDS_VERSION_2, 20, "melting point",
+                        base(c -> c.row("melting point", "alpha", 250))));
     }
 
     @ParameterizedTest(name = "{0}")
