@@ -29,7 +29,7 @@ import org.miscela.it.Office;
 
 /**
  * The examples' main job: installs the built extension into a fresh private office profile, opens every
- * examples/*.ods (the builders' eight workbooks must be among them, see {@link #EXPECTED}), recalculates it, and
+ * examples/*.ods (the builders' nine workbooks must be among them, see {@link #EXPECTED}), recalculates it, and
  * writes a PDF of each workbook and a CSV of each of its sheets into the output folder (first argument, else system
  * property miscela.examples.out, else out/examples under the repository root). It then checks that no formula cell
  * shows an error and that every check cell (MIX.CHECK, MIX.CHECKPOINT, a fit's result "check") says OK, and exits
@@ -51,7 +51,7 @@ public final class ExampleRunner {
     static final String[] EXPECTED = {ExampleWorkbookBuilder.FILE, TernaryWorkbookBuilder.FILE,
         QuoteWorkbookBuilder.FILE, PlantWorkbookBuilder.FILE, LabFitWorkbookBuilder.FILE,
         AcidDilutionWorkbookBuilder.FILE, BrinePlantWorkbookBuilder.FILE,
-        SolventRecoveryWorkbookBuilder.FILE};
+        SolventRecoveryWorkbookBuilder.FILE, SanitiserStrengthWorkbookBuilder.FILE};
 
     /** Error cells listed per sheet before the rest are only counted. */
     private static final int SHOWN = 12;

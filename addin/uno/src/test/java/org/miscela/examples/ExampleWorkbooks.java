@@ -150,6 +150,11 @@ final class ExampleWorkbooks {
      * card's cells as Calc hands them to the add-in.
      */
     static Object[][] writeOimlCard(XComponent doc, XSpreadsheet s) throws Exception {
+        return writeOimlCard(doc, s, "card");
+    }
+
+    /** As {@link #writeOimlCard(XComponent, XSpreadsheet)}, its range named {@code name}. */
+    static Object[][] writeOimlCard(XComponent doc, XSpreadsheet s, String name) throws Exception {
         Object[][] cells = org.miscela.core.card.TestCards.cells(OIML_CARD);
         int top = 5;
         int columns = 0;
@@ -170,7 +175,7 @@ final class ExampleWorkbooks {
                 width);
         band(s, "A2:" + last + "2", REFERENCE_COLOUR);
         bold(s, "A2", 10);
-        cardTable(doc, s, cells, top, columns, 2, width, 26);
+        cardTable(doc, s, cells, top, columns, 2, width, 26, name);
         Object[][] padded = new Object[cells.length][columns];
         for (int r = 0; r < cells.length; r++) {
             for (int c = 0; c < columns; c++) {

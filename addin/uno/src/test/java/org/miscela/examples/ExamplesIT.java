@@ -61,6 +61,7 @@ import org.miscela.core.functions.TemperaturePath;
 import org.miscela.core.fit.VleFitter;
 import org.miscela.core.functions.FitFunctions;
 import org.miscela.core.functions.FitOutput;
+import org.miscela.core.functions.FlashPoints;
 import org.miscela.core.functions.PhaseFunctions;
 import org.miscela.core.functions.PropertyKind;
 import org.miscela.core.library.CardLibrary;
@@ -80,7 +81,8 @@ import org.miscela.testing.Figures;
  * identities (each order ends at MIX.TEMPERATURERISE's temperature; with the "cooling" removed the peak is the limit);
  * the brine plant's card block is the library's card, cell by cell, and its recipe against the recipe's definition;
  * the solvent recovery's phase equilibria against Wilson's equation with published parameters, the published
- * azeotrope at 1 atm, the pure liquids' boiling points and a published isobar.
+ * azeotrope at 1 atm, the pure liquids' boiling points and a published isobar; the sanitiser strengths' flash points
+ * against the core and a published list.
  */
 @ExtendWith(OfficeParameterResolver.class)
 class ExamplesIT {
@@ -932,6 +934,118 @@ class ExamplesIT {
                     SolventRecoveryWorkbookBuilder.CHART_NAME), "the T-x-y chart is on sheet Recovery");
             for (String name : new String[] {"Recovery", "Lab VLE", "Diagram data", "Wilson card", "RK card",
                 "Fitted card"}) {
+                XCellRangesQuery q = UnoRuntime.queryInterface(XCellRangesQuery.class, sheet(doc, name));
+                assertFalse(q.queryFormulaCells(FormulaResult.ERROR).getCells().createEnumeration().hasMoreElements(),
+                        "no cell of sheet " + name + " shows an error");
+            }
+        } finally {
+            close(doc);
+        }
+    }
+
+    /**
+     * The sanitiser workbook: its mole fractions are MIX.CONVERT's on the OIML card (and within 0.001 of the
+     * conversion of the published list's strengths with CRC densities at 20 °C that FlashPointTest quotes, itself
+     * good to about 0.1 % w/w), its flash points the core's FlashPoints.flashPoint on the VLE card, the card's within 3 K of the
+     * published list (Wikipedia "Ethanol" as quoted on DCHAS-L; method not stated, a rough check) and closer to it
+     * than the ideal solution; the comparison with the limits follows the limits; the freezing-point column is
+     * empty; the trace re-derives the flash point; MIX.FLASHMINIMUM's refusal is the core's.
+     */
+    @Test
+    void sanitiserStrengthIsTheCoreLibrarysFlashPointsAndMeetsThePublishedList(Office office) throws Exception {
+        XComponent doc = open(office, SanitiserStrengthWorkbookBuilder.FILE);
+        try {
+            Card vle = sheetCard(doc, SanitiserStrengthWorkbookBuilder.VLE, SanitiserStrengthWorkbookBuilder.VLE_CARD,
+                    "VLE card");
+            Card oiml = CardReader.read(namedRange(doc, SanitiserStrengthWorkbookBuilder.OIML));
+            assertEquals("OK", text(sheet(doc, "OIML card").getCellByPosition(1, 3)), "MIX.CHECK of card oiml");
+            Extrapolation allow = Extrapolation.ALLOW;
+            XSpreadsheet s = sheet(doc, "Strengths");
+            // the published list's strengths as mole fractions, converted with CRC densities at 20 °C (FlashPointTest)
+            double[] listedX = {0.0330, 0.0703, 0.1132, 0.1634, 0.2237, 0.2983, 0.3935, 0.5200, 0.7004, 0.8567};
+            double limit1 = value(s, SanitiserStrengthWorkbookBuilder.LIMIT_COL, SanitiserStrengthWorkbookBuilder.LIMIT_1_ROW);
+            double limit2 = value(s, SanitiserStrengthWorkbookBuilder.LIMIT_COL, SanitiserStrengthWorkbookBuilder.LIMIT_2_ROW);
+            assertEquals(SanitiserStrengthWorkbookBuilder.LIMIT_1, limit1, 0.0, "example limit 1");
+            assertEquals(SanitiserStrengthWorkbookBuilder.LIMIT_2, limit2, 0.0, "example limit 2");
+            double worstCard = 0;
+            double worstIdeal = 0;
+            for (int i = 0; i < SanitiserStrengthWorkbookBuilder.ROWS; i++) {
+                int r = SanitiserStrengthWorkbookBuilder.TABLE_FIRST + i;
+                double strength = value(s, SanitiserStrengthWorkbookBuilder.STRENGTH, r);
+                assertEquals(SanitiserStrengthWorkbookBuilder.STRENGTHS[i], strength, 0.0, "strength " + i);
+                double x1 = value(s, SanitiserStrengthWorkbookBuilder.X1, r);
+                assertClose(SanitiserStrengthWorkbookBuilder.moleFraction(oiml, strength), x1, "x1 at " + strength);
+                assertEquals(listedX[i], x1, 1e-3, "x1 against the CRC-density conversion at " + strength + " % vol");
+                double[] z = {x1, 1 - x1};
+                double card = value(s, SanitiserStrengthWorkbookBuilder.FP_CARD, r);
+                double ideal = value(s, SanitiserStrengthWorkbookBuilder.FP_IDEAL, r);
+                assertClose(FlashPoints.flashPoint(vle, z, false, allow), card, "flash point at " + strength);
+                assertClose(FlashPoints.flashPoint(vle, z, true, allow), ideal, "ideal flash point at " + strength);
+                assertTrue(card < ideal, "γ > 1 lowers the flash point at " + strength + " % vol");
+                double published = value(s, SanitiserStrengthWorkbookBuilder.FP_PUBLISHED, r);
+                assertEquals(SanitiserStrengthWorkbookBuilder.PUBLISHED[i], published, 0.0, "published " + strength);
+                assertEquals(card - published, value(s, SanitiserStrengthWorkbookBuilder.DEVIATION, r), 1e-12,
+                        "deviation at " + strength);
+                worstCard = Math.max(worstCard, Math.abs(card - published));
+                worstIdeal = Math.max(worstIdeal, Math.abs(ideal - published));
+                assertEquals(card < 30 ? "extrapolated (< 30 °C)" : "inside 30–100 °C",
+                        text(s.getCellByPosition(SanitiserStrengthWorkbookBuilder.RANGE, r)), "range at " + strength);
+                String verdict = card < limit1 ? "below limit 1" : card < limit2 ? "from limit 1 to below limit 2"
+                        : "at or above limit 2";
+                assertEquals(verdict, text(s.getCellByPosition(SanitiserStrengthWorkbookBuilder.VERDICT, r)),
+                        "against the limits at " + strength);
+                XCell freezing = s.getCellByPosition(SanitiserStrengthWorkbookBuilder.FREEZING, r);
+                assertEquals(com.sun.star.table.CellContentType.EMPTY, freezing.getType(),
+                        "the freezing-point column is left empty at " + strength);
+            }
+            // the published list: Wikipedia "Ethanol" as quoted on DCHAS-L, method not stated: a rough check
+            assertTrue(worstCard < 3.0, "card within 3 K of the published list: " + worstCard);
+            assertTrue(worstIdeal > 10.0 && worstCard < worstIdeal, "the ideal solution is far off: " + worstIdeal);
+            assertEquals("freezing point, °C (to be added)", text(s.getCellByPosition(
+                    SanitiserStrengthWorkbookBuilder.FREEZING, SanitiserStrengthWorkbookBuilder.TABLE_LABEL_ROW)));
+            // pure ethanol flashes at the card's 13 °C (NFPA 497)
+            assertEquals(13.0, FlashPoints.flashPoint(vle, new double[] {1, 0}, false, allow), 1e-8);
+
+            // MIX.FLASHMINIMUM's refusal in the core's words
+            MiscelaException none = assertThrows(MiscelaException.class,
+                    () -> FlashPoints.minimum(vle, true, false, allow));
+            assertEquals(org.miscela.core.problem.Problem.NO_FLASH_MINIMUM, none.problem());
+            String words = text(s.getCellByPosition(0, SanitiserStrengthWorkbookBuilder.MINIMUM_ROW + 1));
+            assertTrue(words.contains(none.getMessage()), "the refusal in the core's words: " + words);
+
+            // the trace: the core's rows, its flash point the sheet's, the sum 1
+            XSpreadsheet t = sheet(doc, "Trace");
+            double x = value(t, 1, SanitiserStrengthWorkbookBuilder.TRACE_X_ROW);
+            assertClose(SanitiserStrengthWorkbookBuilder.moleFraction(oiml,
+                    value(t, 1, SanitiserStrengthWorkbookBuilder.TRACE_STRENGTH_ROW)), x, "trace x1");
+            double fp = value(t, 1, SanitiserStrengthWorkbookBuilder.TRACE_T_ROW);
+            assertClose(FlashPoints.flashPoint(vle, new double[] {x, 1 - x}, false, allow), fp, "trace flash point");
+            Object[][] core = CardFunctions.trace(vle, new double[] {x, 1 - x}, fp, PropertyKind.FLASH, allow);
+            int top = SanitiserStrengthWorkbookBuilder.TRACE_TOP;
+            boolean sum = false;
+            boolean blend = false;
+            for (int r = 0; r < core.length; r++) {
+                XCell label = t.getCellByPosition(0, top + r);
+                assertEquals(core[r][0], text(label), "trace label " + (r + 1));
+                XCell cell = t.getCellByPosition(1, top + r);
+                if (core[r][1] instanceof Double) {
+                    assertClose((Double) core[r][1], cell.getValue(), "trace row " + core[r][0]);
+                    if (((String) core[r][0]).startsWith("Le Chatelier sum")) {
+                        assertEquals(1.0, cell.getValue(), 1e-9, "Le Chatelier's sum at the flash point");
+                        sum = true;
+                    }
+                    if (((String) core[r][0]).startsWith("flash point of the blend")) {
+                        assertClose(fp, cell.getValue(), "the trace's flash point");
+                        blend = true;
+                    }
+                }
+            }
+            assertTrue(sum && blend, "the trace has the sum and the blend's flash point");
+
+            Object charts = UnoRuntime.queryInterface(XTableChartsSupplier.class, s).getCharts();
+            assertTrue(UnoRuntime.queryInterface(XNameAccess.class, charts).hasByName(
+                    SanitiserStrengthWorkbookBuilder.CHART_NAME), "the flash point chart is on sheet Strengths");
+            for (String name : new String[] {"Strengths", "Trace", "Chart data", "VLE card", "OIML card"}) {
                 XCellRangesQuery q = UnoRuntime.queryInterface(XCellRangesQuery.class, sheet(doc, name));
                 assertFalse(q.queryFormulaCells(FormulaResult.ERROR).getCells().createEnumeration().hasMoreElements(),
                         "no cell of sheet " + name + " shows an error");

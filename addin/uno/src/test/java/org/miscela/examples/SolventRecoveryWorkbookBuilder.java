@@ -717,7 +717,7 @@ public final class SolventRecoveryWorkbookBuilder {
     }
 
     /** A card from the test resources, unchanged, with its named range, a banner and its source read off the card. */
-    private static void writeCard(XComponent doc, XSpreadsheet s, String resource, String name, String what,
+    static void writeCard(XComponent doc, XSpreadsheet s, String resource, String name, String what,
             String use) throws Exception {
         Object[][] cells = TestCards.cells(resource);
         int top = 6;
