@@ -201,10 +201,44 @@ public final class VleCardFitter {
         return b.toString();
     }
 
+    /**
+     * The same card with the melting of ice (for the freezing point): melting point 0 °C (the ice point, common
+     * practice), enthalpy of fusion 6010 J/mol (CRC Handbook, table Enthalpy of Fusion, as transcribed in the chemicals
+     * library), heat capacity of fusion 38.25 J/(mol·K) (liquid water 76.02 J/(mol·K), IAPWS-95, from memory, minus
+     * ice 37.77 J/(mol·K), IAPWS R10-06). Below 30 °C its G^E/RT rows are extrapolated.
+     */
+    static String iceCard() {
+        StringBuilder b = new StringBuilder();
+        for (String line : card().split("\n")) {
+            String label = line.split("\t", -1)[0];
+            if (label.equals("title")) {
+                line = "title\tEthanol + water: activity coefficients and vapour pressures, 30 to 100 °C, with the "
+                        + "melting of ice";
+            } else if (label.equals("source")) {
+                line += "; ice: melting point 0 °C (common practice, the ice point), enthalpy of fusion 6010 J/mol (CRC "
+                        + "Handbook of Chemistry and Physics, table Enthalpy of Fusion, as transcribed in the chemicals "
+                        + "library), heat capacity of fusion 38.25 J/(mol K) = Cp of liquid water 76.02 J/(mol K) "
+                        + "(IAPWS-95, from memory) minus Cp of ice 37.77 J/(mol K) (IAPWS R10-06, 2096.78 J/(kg K) at "
+                        + "the triple point)";
+            } else if (label.equals("note")) {
+                line = "note\tBelow 30 °C the G^E/RT rows are extrapolated (linear in T): freezing points need "
+                        + "extrapolation allowed. " + line.substring("note\t".length());
+            } else if (label.equals("valid temperature")) {
+                b.append("melting point\twater\t0\n").append("enthalpy of fusion\twater\t6010\n")
+                        .append("heat capacity of fusion\twater\t38.25\n");
+            }
+            b.append(line).append('\n');
+        }
+        return b.toString();
+    }
+
     public static void main(String[] args) throws IOException {
         System.out.println(points().length + " points; coefficients " + java.util.Arrays.deepToString(
                 fit().coefficients()));
         TsvCard.write(args[0], card());
         TsvCard.write(args[1], wilsonCard());
+        if (args.length > 2) {
+            TsvCard.write(args[2], iceCard());
+        }
     }
 }

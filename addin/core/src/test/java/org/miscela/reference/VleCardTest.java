@@ -21,7 +21,7 @@ class VleCardTest {
     private static final Card VLE = TestCards.card("ethanol-water-vle.tsv");
     private static final Extrapolation E = Extrapolation.AS_CARD;
 
-    /** The fitter writes today what is committed (no hand edits), both cards. */
+    /** The fitter writes today what is committed (no hand edits), all three cards. */
     @Test
     void theCardsAreTheirFittersOutput() throws java.io.IOException {
         try (java.io.InputStream in = VleCardTest.class.getResourceAsStream("/cards/ethanol-water-vle.tsv")) {
@@ -29,6 +29,10 @@ class VleCardTest {
         }
         try (java.io.InputStream in = VleCardTest.class.getResourceAsStream("/cards/ethanol-water-wilson.tsv")) {
             assertEquals(VleCardFitter.wilsonCard(), new String(in.readAllBytes(),
+                    java.nio.charset.StandardCharsets.UTF_8));
+        }
+        try (java.io.InputStream in = VleCardTest.class.getResourceAsStream("/cards/ethanol-water-vle-ice.tsv")) {
+            assertEquals(VleCardFitter.iceCard(), new String(in.readAllBytes(),
                     java.nio.charset.StandardCharsets.UTF_8));
         }
     }

@@ -53,7 +53,7 @@ import org.miscela.examples.ExampleWorkbooks.Formats;
  * into mole fractions (it carries the mixture's contraction; the VLE card has no excess volume).
  *
  * <p>Sheets: Strengths (the strength table with the card's and the ideal-solution flash points beside a published
- * list, the user's limits and the comparison with them, an empty freezing-point column, the chart), Trace (MIX.TRACE
+ * list, the user's limits and the comparison with them, the freezing point of ice, the chart), Trace (MIX.TRACE
  * "flash" for one strength), Chart data, VLE card, OIML card. The constants that locate cells are shared with
  * ExamplesIT (0-based rows and columns).
  *
@@ -63,7 +63,7 @@ import org.miscela.examples.ExampleWorkbooks.Formats;
  */
 public final class SanitiserStrengthWorkbookBuilder {
     static final String FILE = "sanitiser-strength.ods";
-    static final String VLE_CARD = "ethanol-water-vle.tsv";
+    static final String VLE_CARD = "ethanol-water-vle-ice.tsv";
     static final String VLE = "vle";
     static final String OIML = "oiml";
     static final String CHART_NAME = "FlashPointChart";
@@ -101,6 +101,12 @@ public final class SanitiserStrengthWorkbookBuilder {
     static final int RANGE = 6;
     static final int VERDICT = 7;
     static final int FREEZING = 8;
+    /**
+     * The strongest blend (% vol) given a freezing point: about 33 % w/w, within the CRC Handbook's checks of the card's
+     * extrapolated G^E (FreezingPointTest: 5.6 K too warm at 30 % w/w); stronger blends freeze far below the card's
+     * data, where ethanol itself (no melting rows on the card) may crystallise first.
+     */
+    static final int FREEZING_UP_TO = 40;
     /** The note under the table. */
     static final int TABLE_NOTE_ROW = TABLE_FIRST + ROWS;
     /** The limits: label A..E, value in column {@link #LIMIT_COL}, unit beside it. */
@@ -176,7 +182,8 @@ public final class SanitiserStrengthWorkbookBuilder {
         fitted(s, "A2:" + last + "2", 1, "INVENTED SCENARIO. The company, its range of strengths and the example "
                 + "limits in section 2 are made up to show how MIX.FLASHPOINT, MIX.FLASHMINIMUM and MIX.TRACE work; "
                 + "they are no one's real figures. The cards are not invented: sheet 'VLE card' (Redlich–Kister "
-                + "G^E/RT fitted to published VLE data, with ethanol's closed-cup flash point from NFPA 497) and "
+                + "G^E/RT fitted to published VLE data, with ethanol's closed-cup flash point from NFPA 497 and the "
+                + "melting of ice) and "
                 + "sheet 'OIML card' (densities of OIML R 22) are the project's ethanol + water cards, copied "
                 + "unchanged with their source rows. The published flash points in column E come from a secondary "
                 + "source and are a rough check only.", WIDE_MM);
@@ -205,7 +212,7 @@ public final class SanitiserStrengthWorkbookBuilder {
             "flash point, °C: card's γ (MIX.FLASHPOINT)", "flash point, °C: ideal, γ = 1 (comparison only)",
             "flash point, °C: published (rough check)", "card minus published, K",
             "card's range (G^E fitted 30–100 °C)", "estimate against your limits (a measured value decides)",
-            "freezing point, °C (to be added)"};
+            "ice forms at, °C: card's γ (MIX.FREEZINGPOINT; runs warm, see note)"};
         for (int c = 0; c < heads.length; c++) {
             text(s, c, TABLE_LABEL_ROW, heads[c]);
         }
@@ -235,6 +242,14 @@ public final class SanitiserStrengthWorkbookBuilder {
         // one array formula per column: a column of x1 values on a two-component card gives one result each
         array(s, column(FP_CARD), "=MIX.FLASHPOINT(" + VLE + ";" + absColumn(X1) + ";\"card\";TRUE)");
         array(s, column(FP_IDEAL), "=MIX.FLASHPOINT(" + VLE + ";" + absColumn(X1) + ";\"ideal\";TRUE)");
+        for (int i = 0; i < ROWS; i++) {
+            int r = TABLE_FIRST + i;
+            // the ice line only where the card's extrapolation stays within reach of the handbook's checks
+            s.getCellByPosition(FREEZING, r).setFormula("=IF(A" + (r + 1) + "<=" + FREEZING_UP_TO
+                    + ";MIX.FREEZINGPOINT(" + VLE + ";" + col(X1) + (r + 1) + ";;;;TRUE);\"not estimated above "
+                    + FREEZING_UP_TO + " % vol\")");
+        }
+        format(s, FREEZING, "0.0");
         format(s, STRENGTH, "0");
         format(s, X1, "0.0000");
         format(s, FP_CARD, "0.0");
@@ -248,7 +263,12 @@ public final class SanitiserStrengthWorkbookBuilder {
                 + "says, so the ideal estimate is too high and must not be used. Both are asked with extrapolate "
                 + "TRUE because most of these flash points lie below 30 °C, where the card's G^E is extrapolated "
                 + "(column G says which). Column E: " + PUBLISHED_SOURCE + "; a rough check, not a closed-cup "
-                + "reference. Column I is left empty for a freezing-point function still to come.", WIDE_MM);
+                + "reference. Column I: the temperature at which ice starts to form (MIX.FREEZINGPOINT, the card's "
+                + "melting rows of ice), again extrapolated from 30 °C: against the CRC Handbook's freezing points "
+                + "of aqueous ethanol it runs warm, by 0.1 K at 10 % w/w, 1.5 K at 20 %, 5.6 K at 30 % and 9.1 K at "
+                + "40 % w/w (FreezingPointTest), so store below it only with the handbook's or the maker's figures. Above " + FREEZING_UP_TO + " % vol it "
+                + "is not estimated: the ice line lies far below the card's data, and ethanol may crystallise first.",
+                WIDE_MM);
         band(s, "A" + (TABLE_NOTE_ROW + 1) + ":" + last + (TABLE_NOTE_ROW + 1), REFERENCE_COLOUR);
 
         // 2. the user's limits
