@@ -250,7 +250,7 @@ final class Trace {
     static Object[][] flash(Card card, double[] x, double kelvin, Extrapolation e, Object[][] vapourRows) {
         Trace tr = new Trace();
         for (Object[] row : vapourRows) {
-            tr.rows.add(row);
+            tr.rows.add("property".equals(row[0]) ? new Object[] {"property", PropertyKind.FLASH.word()} : row);
         }
         Units.Temperature tu = card.units().temperature();
         Units.Pressure pu = card.pressureUnit();
