@@ -856,7 +856,7 @@ public final class FunctionCatalog {
                     .shows("-9.42").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
                             COMPONENT_PROBLEMS, list(Problem.NO_FUSION_DATA, Problem.FREEZING_NEEDS_GIBBS,
                             Problem.FREEZING_COMPONENT_ABSENT, Problem.NO_FREEZING_POINT, Problem.UNKNOWN_RESULT,
-                            Problem.ARG_NOT_TEXT, Problem.UNKNOWN_ACTIVITY)))));
+                            Problem.ARG_NOT_TEXT, Problem.UNKNOWN_ACTIVITY, Problem.FREEZING_TOO_FAR)))));
 
     private FunctionCatalog() {
     }

@@ -443,6 +443,12 @@ public final class PhaseFunctions {
         double t = tu.fromKelvin(kelvin);
         if (a == Activity.CARD && z[k] < 1.0) {
             PointChecks.checkPoint(card, z, t, e);
+            double lowest = card.validity().lowestKelvin();
+            if (kelvin < lowest - FlashPoints.EXTRAPOLATION_KELVIN) {
+                throw Problem.FREEZING_TOO_FAR.raise(Numbers.show(t), tu.symbol(), Numbers.show(lowest - kelvin),
+                        Numbers.show(tu.fromKelvin(lowest)), tu.symbol(),
+                        Numbers.show(FlashPoints.EXTRAPOLATION_KELVIN));
+            }
         }
         return t;
     }

@@ -230,6 +230,7 @@ public enum Problem {
     NO_FUSION_DATA(CALL, "The card gives no 'melting point' and 'enthalpy of fusion' rows for %s, so it cannot say when a solid forms: add both rows for the component that crystallises (see docs/card-format.md).", Advice.INSIDE_RANGE),
     FREEZING_NEEDS_GIBBS(CALL, "The card gives no excess Gibbs energy (G^E/RT rows), so the freezing point cannot allow for how the liquids interact: add them, or pass \"ideal\" as 'activity' to assume an ideal solution (γ = 1), which can be kelvins too warm for a strong blend.", Advice.INSIDE_RANGE),
     FREEZING_COMPONENT_ABSENT(CALL, "The blend holds no %s, so no solid %s can form from it; name a component that is present, or leave the component out for the one that freezes first."),
+    FREEZING_TOO_FAR(CALL, "The freezing point found, %s %s, lies %s K below the lowest temperature of the card's data (%s %s): further than Miscela extrapolates a card's G^E (%s K), and another liquid without melting rows on the card may crystallise first. Use a card whose data reach nearer the freezing point."),
     NO_FREEZING_POINT(CALL, "No temperature from %s to %s %s lets solid %s form from this blend (x = %s): its activity in the liquid does not meet the melting curve there; the card's G^E may not hold so far from its data."),
 
     // --- the fitting engine (point numbers count from 1, as a user reads rows)
