@@ -20,23 +20,27 @@ public final class TestCards {
             if (in == null) {
                 throw new IllegalArgumentException("no test card " + resource);
             }
-            String text = new String(in.readAllBytes(), StandardCharsets.UTF_8);
-            List<Object[]> rows = new ArrayList<>();
-            for (String line : text.split("\n", -1)) {
-                if (line.isEmpty()) {
-                    continue;
-                }
-                String[] parts = line.split("\t", -1);
-                Object[] row = new Object[parts.length];
-                for (int i = 0; i < parts.length; i++) {
-                    row[i] = cell(parts[i]);
-                }
-                rows.add(row);
-            }
-            return rows.toArray(new Object[0][]);
+            return fromText(new String(in.readAllBytes(), StandardCharsets.UTF_8));
         } catch (IOException e) {
             throw new IllegalStateException(e);
         }
+    }
+
+    /** The cells of a card written as tab-separated text, numbers where a cell reads as one. */
+    public static Object[][] fromText(String text) {
+        List<Object[]> rows = new ArrayList<>();
+        for (String line : text.split("\n", -1)) {
+            if (line.isEmpty()) {
+                continue;
+            }
+            String[] parts = line.split("\t", -1);
+            Object[] row = new Object[parts.length];
+            for (int i = 0; i < parts.length; i++) {
+                row[i] = cell(parts[i]);
+            }
+            rows.add(row);
+        }
+        return rows.toArray(new Object[0][]);
     }
 
     public static Card card(String resource) {
