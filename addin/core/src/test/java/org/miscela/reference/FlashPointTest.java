@@ -102,4 +102,23 @@ class FlashPointTest {
                 () -> FlashPoints.minimum(c, false, true, e)).problem());
         Figures.note(FlashPointTest.class, "invented minimum flash point: x1 = %.4f, %.2f C (pure 15 and 25 C)", x1, t);
     }
+
+    /**
+     * A liquid given by its lower flammable limit instead of a flash point: ethanol's 3.3 % by volume in air (a common
+     * handbook value, from memory) puts pure ethanol's vapour at that limit at the temperature the card's vapour
+     * pressure gives for 3.3 % of 1 atm, a little below its closed-cup flash point of 13 °C (NFPA 497), as closed-cup
+     * flash points lie above the lower-limit temperature; a blend's estimate follows the same rule.
+     */
+    @Test
+    void aLowerFlammableLimitStandsInForAFlashPoint() {
+        Card lfl = CardReader.read(CardEdits.apply(TestCards.cells("ethanol-water-vle.tsv"),
+                "set 23 = lower flammable limit | ethanol | 3.3 | % by volume"));
+        double pure = FlashPoints.flashPoint(lfl, new double[] {1, 0}, false, ALLOW);
+        assertEquals(0.033 * 101.325, lfl.vapourPressure(0).pascal(pure + 273.15) / 1000, 1e-9);
+        assertTrue(pure < 13 && pure > 13 - 5, "a few kelvin below the closed-cup flash point: " + pure);
+        double blend = FlashPoints.flashPoint(lfl, new double[] {0.1634, 0.8366}, false, ALLOW);
+        assertTrue(blend < FlashPoints.flashPoint(CARD, new double[] {0.1634, 0.8366}, false, ALLOW));
+        Figures.note(FlashPointTest.class, "from the lower flammable limit 3.3 %% vol: pure ethanol %.2f C, "
+                + "40 %% vol %.2f C", pure, blend);
+    }
 }

@@ -51,6 +51,7 @@ public final class Card {
     private final Units.Pressure pressureUnit;
     private final double[] flashKelvin;
     private final String[] flashMethod;
+    private final double[] lowerFlammableLimit;
     /** The molar volumes of 'Wilson volume' rows (cm³/mol; NaN for a component without one), or null. */
     private final double[] wilsonVolumes;
     private final Fusion[] fusion;
@@ -109,6 +110,8 @@ public final class Card {
         this.wilsonVolumes = phase == null || phase.wilsonVolumes == null ? null : phase.wilsonVolumes.clone();
         this.flashKelvin = phase == null || phase.flashKelvin == null ? null : phase.flashKelvin.clone();
         this.flashMethod = phase == null || phase.flashMethod == null ? null : phase.flashMethod.clone();
+        this.lowerFlammableLimit = phase == null || phase.lowerFlammableLimit == null ? null
+                : phase.lowerFlammableLimit.clone();
         this.fusion = phase == null || phase.fusion == null ? null : phase.fusion.clone();
         if (densityModel != null && excessVolume != null) {
             throw new IllegalArgumentException("a card states its volumes one way");
@@ -229,16 +232,19 @@ public final class Card {
         final double[] flashKelvin;
         /** Each flash point's test method as the card writes it (null without a row). */
         final String[] flashMethod;
+        /** Each component's lower flammable limit as a volume fraction of the air mixture (NaN without a row). */
+        final double[] lowerFlammableLimit;
         final Fusion[] fusion;
 
         PhaseData(ExcessModel gibbs, VapourPressure[] vapour, Units.Pressure pressure, double[] wilsonVolumes,
-                double[] flashKelvin, String[] flashMethod, Fusion[] fusion) {
+                double[] flashKelvin, String[] flashMethod, double[] lowerFlammableLimit, Fusion[] fusion) {
             this.gibbs = gibbs;
             this.vapour = vapour;
             this.pressure = pressure;
             this.wilsonVolumes = wilsonVolumes;
             this.flashKelvin = flashKelvin;
             this.flashMethod = flashMethod;
+            this.lowerFlammableLimit = lowerFlammableLimit;
             this.fusion = fusion;
         }
     }
@@ -272,6 +278,14 @@ public final class Card {
      */
     public double flashPointKelvin(int k) {
         return flashKelvin == null ? Double.NaN : flashKelvin[k];
+    }
+
+    /**
+     * Component k's lower flammable limit in air as a volume fraction, from its 'lower flammable limit' row, or NaN
+     * when the card has none.
+     */
+    public double lowerFlammableLimit(int k) {
+        return lowerFlammableLimit == null ? Double.NaN : lowerFlammableLimit[k];
     }
 
     /** The test method the card gives with component k's flash point, or null. */

@@ -202,7 +202,7 @@ final class CardBuilder {
         return new Card(title, source, units, components, volume, enthalpy, validity, allow, missingIdeal,
                 basisReferenceKelvin, solutionHeatCapacity(names, masses), boilingCurve(names), mixtureDensity,
                 new Card.PhaseData(gibbs, vapour, pressure, wilsonVolumes, flash[0] == null ? null : flash[0],
-                        flashMethods, fusion(names)));
+                        flashMethods, lowerFlammableLimits(names), fusion(names)));
     }
 
     /**
@@ -405,6 +405,40 @@ final class CardBuilder {
         }
         kelvin[0] = out;
         return methods;
+    }
+
+    /**
+     * Each component's 'lower flammable limit | component | L | unit' row: L in "% by volume" (or "% vol", "%") or as
+     * a "volume fraction", between 0 and 1 as a fraction; NaN for a component without a row, null without any.
+     */
+    private double[] lowerFlammableLimits(List<String> names) {
+        Map<String, CardRow> byComponent = rows.keyed(CardLabels.LOWER_FLAMMABLE_LIMIT);
+        if (byComponent.isEmpty()) {
+            return null;
+        }
+        double[] out = new double[names.size()];
+        for (int k = 0; k < names.size(); k++) {
+            CardRow r = byComponent.get(normalise(names.get(k)));
+            if (r == null) {
+                out[k] = Double.NaN;
+                continue;
+            }
+            double value = r.number(1);
+            String unit = r.text(2).trim();
+            double factor = sameKeyword(unit, "% by volume") || sameKeyword(unit, "% vol") || sameKeyword(unit, "%")
+                    ? 0.01 : sameKeyword(unit, "volume fraction") ? 1.0 : Double.NaN;
+            if (Double.isNaN(factor)) {
+                throw Problem.BAD_KEYWORD.raise(r.number, r.label, unit, "% by volume, % vol, %, volume fraction");
+            }
+            r.atMost(3);
+            double fraction = value * factor;
+            if (!(fraction > 0.0 && fraction < 1.0)) {
+                throw Problem.MODEL_VALUES.raise(r.number, r.label, "lower flammable limit", "a share of the air "
+                        + "mixture above 0 and below 100 % by volume", "found " + Numbers.show(value) + " " + unit);
+            }
+            out[k] = fraction;
+        }
+        return out;
     }
 
     /** The 'Wilson volume' rows in cm³/mol, NaN for a component without one unless each must have one. */

@@ -49,6 +49,7 @@ final class CardLabels {
     static final String PRESSURE_UNIT = "pressure unit";
     static final String VAPOUR_PRESSURE = "vapour pressure";
     static final String FLASH_POINT = "flash point";
+    static final String LOWER_FLAMMABLE_LIMIT = "lower flammable limit";
     static final String WILSON = "wilson";
     static final String WILSON_VOLUME = "wilson volume";
     static final String NRTL = "nrtl";
@@ -72,13 +73,13 @@ final class CardLabels {
     private static final String[] KEYED = {COMPONENT, DENSITY_MODEL, DENSITY_REFERENCE, DENSITY_COEFFICIENTS,
         VALID_MOLE_FRACTION, HEAT_CAPACITY, HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION,
         SOLUTION_HEAT_CAPACITY, BOILING, APPARENT_DENSITY, VAPOUR_PRESSURE, WILSON, WILSON_VOLUME, NRTL, FLASH_POINT,
-        MELTING_POINT, FUSION_ENTHALPY, FUSION_HEAT_CAPACITY};
+        LOWER_FLAMMABLE_LIMIT, MELTING_POINT, FUSION_ENTHALPY, FUSION_HEAT_CAPACITY};
     /** Labels of version 2 beyond the excess-enthalpy and ternary rows. */
     private static final String[] VERSION_2 = {MODEL, MISSING_PAIRS, ENTHALPY_UNIT, HEAT_CAPACITY,
         EXCESS_VOLUME + " covariance", HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION,
         COMPONENT_ORDER, BASIS_REFERENCE, SOLUTION_HEAT_CAPACITY, SOLVENT, BOILING, MIXTURE_DENSITY_REFERENCE,
         APPARENT_DENSITY, CARD_SIZE, PRESSURE_UNIT, VAPOUR_PRESSURE, WILSON, WILSON_VOLUME, NRTL, FLASH_POINT,
-        MELTING_POINT, FUSION_ENTHALPY, FUSION_HEAT_CAPACITY};
+        LOWER_FLAMMABLE_LIMIT, MELTING_POINT, FUSION_ENTHALPY, FUSION_HEAT_CAPACITY};
     /** Keyed rows whose subject is a pair "a + b" rather than one component. */
     private static final String[] PAIR_KEYED = {VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION, WILSON, NRTL};
 

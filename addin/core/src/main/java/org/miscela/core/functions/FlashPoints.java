@@ -18,6 +18,10 @@ import org.miscela.core.problem.Problem;
  *
  * <p>Σ_{i flammable} x_i·γ_i(x, T)·p_i*(T) / p_i*(T_fp,i) = 1.
  *
+ * <p>A liquid without a flash point but with a lower flammable limit L (volume fraction in air) takes L·p, p = 1 atm,
+ * for p_i*(T_fp,i): its vapour flashes where it reaches that limit (the same Le Chatelier rule; closed-cup flash
+ * points lie a few kelvin above that temperature, so the measured flash point, where the card has it, comes first).
+ *
  * <p>Components whose 'flash point' row says none (water) only dilute. γ comes from the card's G^E, or is 1 when the
  * caller asks for the ideal-solution estimate explicitly. The result is an estimate of a closed-cup flash point (the
  * pure flash points on the card should be closed-cup values); measured values and local codes prevail.
@@ -145,7 +149,17 @@ public final class FlashPoints {
             String name = card.components().get(k).name();
             double fp = card.flashPointKelvin(k);
             if (Double.isNaN(fp)) {
-                throw Problem.NO_FLASH_POINT_ROW.raise(name);
+                double lfl = card.lowerFlammableLimit(k);
+                if (Double.isNaN(lfl)) {
+                    throw Problem.NO_FLASH_POINT_ROW.raise(name);
+                }
+                // no flash point: the vapour reaches the lower flammable limit at 1 atm
+                if (card.vapourPressure(k) == null) {
+                    throw Problem.NO_VAPOUR_PRESSURE.raise(name);
+                }
+                out[k] = lfl * BoilingPoints.OPEN_VESSEL_PASCAL;
+                any = true;
+                continue;
             }
             if (Double.isInfinite(fp)) {
                 inert.append(inert.length() == 0 ? "" : ", ").append(name);

@@ -261,7 +261,18 @@ final class Trace {
             double fp = card.flashPointKelvin(k);
             String who = name(card, k);
             if (Double.isNaN(fp)) {
-                tr.add("flash point: " + who + " [" + tu.symbol() + "]", "no 'flash point' row on the card");
+                double lfl = card.lowerFlammableLimit(k);
+                tr.add("flash point: " + who + " [" + tu.symbol() + "]", Double.isNaN(lfl)
+                        ? "no 'flash point' row on the card" : "none on the card: its lower flammable limit is used");
+                if (!Double.isNaN(lfl)) {
+                    tr.add("lower flammable limit: " + who + " [volume fraction]", lfl);
+                    double reference = lfl * BoilingPoints.OPEN_VESSEL_PASCAL;
+                    tr.add("vapour pressure at its flash point: " + who + " [" + pu.symbol() + "]",
+                            pu.fromPascal(reference));
+                    double share = x[k] * Math.exp(lnGamma[k]) * card.mixture().vapourPressure(k, kelvin) / reference;
+                    tr.add("flammable share x·γ·p*(T)/p*(T_fp): " + who, share);
+                    sum += share;
+                }
                 continue;
             }
             if (Double.isInfinite(fp)) {
