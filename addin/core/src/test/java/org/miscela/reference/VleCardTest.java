@@ -35,6 +35,12 @@ class VleCardTest {
             assertEquals(VleCardFitter.iceCard(), new String(in.readAllBytes(),
                     java.nio.charset.StandardCharsets.UTF_8));
         }
+        // the library's phase-equilibrium card is the same card, shipped
+        try (java.io.InputStream in = VleCardTest.class.getResourceAsStream(
+                "/org/miscela/core/library/ethanol-water-vle.tsv")) {
+            assertEquals(VleCardFitter.iceCard(), new String(in.readAllBytes(),
+                    java.nio.charset.StandardCharsets.UTF_8));
+        }
     }
 
     /**
