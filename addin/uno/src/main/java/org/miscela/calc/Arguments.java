@@ -186,7 +186,7 @@ final class Arguments {
             return PropertyKind.VOLUME;
         }
         if (!(v instanceof String)) {
-            throw Problem.UNKNOWN_PROPERTY.raise(describe(v), "volume, enthalpy, vapour, flash");
+            throw Problem.UNKNOWN_PROPERTY.raise(describe(v), "volume, enthalpy, vapour, flash, freezing");
         }
         return PropertyKind.lookup((String) v);
     }

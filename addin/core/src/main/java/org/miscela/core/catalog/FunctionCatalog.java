@@ -312,9 +312,10 @@ public final class FunctionCatalog {
                     "—",
                     "=MIX.TRACE(card; 0.3; 20)",
                     CARD, MOLE_FRACTION_ONE, TEMPERATURE_ONE, optional("quantity", "property",
-                            "\"volume\" (left out), \"enthalpy\", \"vapour\" or \"flash\": what to trace. "
-                                    + "\"vapour\": γ, the bubble pressure and the vapour by modified Raoult's law; "
-                                    + "\"flash\": those and the flash point's terms."), EXTRAPOLATE, COMPOSITION_BASIS,
+                            "\"volume\" (left out), \"enthalpy\", \"vapour\", \"flash\" or \"freezing\": what "
+                                    + "to trace. \"vapour\": γ, the bubble pressure and the vapour; \"flash\": those "
+                                    + "and the flash point's terms; \"freezing\": the freezing point's."),
+                    EXTRAPOLATE, COMPOSITION_BASIS,
                     BASIS_T)
                     .shows("card").refuses(union(BLEND_PROBLEMS, ONE_COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, list(Problem.NO_ENTHALPY, Problem.UNKNOWN_PROPERTY, Problem.ARG_NOT_SINGLE), VAPOUR_PROBLEMS)),
             new FunctionInfo("fitExcessVolume", "MIX.FITEXCESS",

@@ -454,7 +454,11 @@ public final class CardFunctions {
     public static Object[][] trace(Card card, double[] x, double t, PropertyKind property, Extrapolation e) {
         double[] z = moleFractions(card, x);
         Object[][] rows;
-        if (property == PropertyKind.VAPOUR || property == PropertyKind.FLASH) {
+        if (property == PropertyKind.FREEZING) {
+            double kelvin = PointChecks.checkPoint(card, z, t, e);
+            card.mixture().gibbs();
+            rows = Trace.freezing(card, z, t, kelvin, e, PointChecks.violations(card, z, kelvin, t));
+        } else if (property == PropertyKind.VAPOUR || property == PropertyKind.FLASH) {
             if (card.pressureUnit() == null) {
                 throw Problem.NO_PRESSURE_UNIT.raise();
             }

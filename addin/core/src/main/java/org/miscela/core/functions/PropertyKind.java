@@ -9,7 +9,9 @@ public enum PropertyKind {
     /** The liquid's activity coefficients and the vapour over it (MIX.TRACE only). */
     VAPOUR("vapour"),
     /** The vapour trace and the flash point's terms by Liaw's model (MIX.TRACE only). */
-    FLASH("flash");
+    FLASH("flash"),
+    /** The freezing point's terms: each crystallising component's melting data against its activity (MIX.TRACE only). */
+    FREEZING("freezing");
 
     private final String word;
 
@@ -28,6 +30,6 @@ public enum PropertyKind {
                 return p;
             }
         }
-        throw Problem.UNKNOWN_PROPERTY.raise(text.trim(), "volume, enthalpy, vapour, flash");
+        throw Problem.UNKNOWN_PROPERTY.raise(text.trim(), "volume, enthalpy, vapour, flash, freezing");
     }
 }

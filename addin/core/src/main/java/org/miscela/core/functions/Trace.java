@@ -301,6 +301,66 @@ final class Trace {
         return tr.rows.toArray(new Object[0][]);
     }
 
+    /**
+     * The freezing point's terms at T: for each component with melting rows, its melting data, ln(x·γ) at T and the
+     * solid line's ln a at T (equal at its freezing point), then the blend's freezing point, the component that freezes
+     * first and the model's assumptions.
+     */
+    static Object[][] freezing(Card card, double[] x, double t, double kelvin, Extrapolation e,
+            List<Violation> outside) {
+        Trace tr = new Trace();
+        Units.Temperature tu = card.units().temperature();
+        tr.add("card", card.title());
+        tr.add("source", card.source());
+        tr.add("property", PropertyKind.FREEZING.word());
+        tr.add("components", (double) card.componentCount());
+        tr.add("temperature [" + tu.symbol() + "]", t);
+        tr.add("temperature [K]", kelvin);
+        tr.add("extrapolation", extrapolation(card, e));
+        if (outside.isEmpty()) {
+            tr.add("outside validity", "none");
+        }
+        for (Violation v : outside) {
+            tr.add("outside validity", v.limit());
+        }
+        for (int k = 0; k < x.length; k++) {
+            tr.add("mole fraction: " + name(card, k), x[k]);
+        }
+        double[] lnGamma = new double[x.length];
+        card.mixture().logActivityCoefficients(x, kelvin, lnGamma);
+        for (int k = 0; k < x.length; k++) {
+            org.miscela.core.card.Fusion f = card.fusion(k);
+            String who = name(card, k);
+            if (f == null) {
+                tr.add("melting point: " + who + " [" + tu.symbol() + "]", "no melting rows on the card");
+                continue;
+            }
+            tr.add("melting point: " + who + " [" + tu.symbol() + "]", f.meltingAsStated());
+            tr.add("enthalpy of fusion: " + who + " [J/mol]", f.enthalpy());
+            tr.add("heat capacity of fusion: " + who + " [J/(mol K)]", f.heatCapacity());
+            tr.add("ln activity coefficient: " + who, lnGamma[k]);
+            tr.add("ln(x·γ) in the liquid: " + who, x[k] > 0.0 ? (Object) (Math.log(x[k]) + lnGamma[k])
+                    : "absent from the blend");
+            tr.add("ln a of the pure liquid over its solid at T: " + who, PhaseFunctions.solidLine(f, kelvin));
+        }
+        Object blend;
+        Object which;
+        try {
+            blend = PhaseFunctions.freezingPoint(card, -1, x, PhaseFunctions.Activity.CARD, e);
+            which = card.components().get(PhaseFunctions.freezingComponent(card, -1, x,
+                    PhaseFunctions.Activity.CARD)).name();
+        } catch (org.miscela.core.problem.MiscelaException none) {
+            blend = none.getMessage();
+            which = "none";
+        }
+        tr.add("freezing point of the blend [" + tu.symbol() + "]", blend);
+        tr.add("component that freezes first", which);
+        tr.add("freezing model", "solid-liquid equilibrium with a pure solid: ln(x·γ) = −(ΔH_fus/R)(1/T − 1/T_m) + "
+                + "(ΔCp/R)[(T_m/T − 1) − ln(T_m/T)], γ from the card's G^E; no solid solutions, no eutectic search; "
+                + "an estimate that measured freezing points overrule");
+        return tr.rows.toArray(new Object[0][]);
+    }
+
     /** Per pair: the series argument d, each coefficient at T, and the pair's term; then the ternary terms. */
     private void pairs(Card card, ExcessFunction f, double[] x, double kelvin, double scale, String unit) {
         int n = card.componentCount();

@@ -56,6 +56,8 @@ class TraceDocTest {
                 PropertyKind.VAPOUR, Extrapolation.AS_CARD));
         traces.add(CardFunctions.trace(org.miscela.core.card.TestCards.card("ethanol-water-vle.tsv"), binary, 50,
                 PropertyKind.FLASH, Extrapolation.AS_CARD));
+        traces.add(CardFunctions.trace(org.miscela.core.card.TestCards.card("ethanol-water-vle-ice.tsv"),
+                new double[] {0.05, 0.95}, -5, PropertyKind.FREEZING, Extrapolation.ALLOW));
         List<Object[]> nrtl = new ArrayList<>();
         for (Object[] row : org.miscela.core.card.TestCards.cells("ethanol-water-vle.tsv")) {
             if (!String.valueOf(row[0]).startsWith("excess Gibbs energy")
