@@ -722,11 +722,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
         try {
             Card c = Arguments.card(card);
             double p = Arguments.number("pressure", Arguments.value(pressure));
-            String r = Arguments.text("result", result, "composition").trim().toLowerCase(java.util.Locale.ROOT);
-            if (!r.isEmpty() && !r.equals("composition") && !r.equals("temperature")) {
-                throw Problem.UNKNOWN_RESULT.raise(r, "composition, temperature");
-            }
-            return PhaseFunctions.azeotrope(c, p, r.equals("temperature"), Arguments.extrapolation(extrapolate));
+            boolean temperature = keyword("result", result, "composition", "temperature") == 1;
+            return PhaseFunctions.azeotrope(c, p, temperature, Arguments.extrapolation(extrapolate));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "azeotrope");
         }
@@ -877,11 +874,8 @@ public final class MixtureAddIn extends WeakBase implements XMixtureFunctions, X
             throws IllegalArgumentException {
         try {
             Card c = Arguments.card(card);
-            String r = Arguments.text("result", result, "composition").trim().toLowerCase(java.util.Locale.ROOT);
-            if (!r.isEmpty() && !r.equals("composition") && !r.equals("temperature")) {
-                throw Problem.UNKNOWN_RESULT.raise(r, "composition, temperature");
-            }
-            return FlashPoints.minimum(c, r.equals("temperature"), Arguments.idealActivity(activity),
+            boolean temperature = keyword("result", result, "composition", "temperature") == 1;
+            return FlashPoints.minimum(c, temperature, Arguments.idealActivity(activity),
                     Arguments.extrapolation(extrapolate));
         } catch (RuntimeException ex) {
             throw Failures.refusal(ex, "flashMinimum");
