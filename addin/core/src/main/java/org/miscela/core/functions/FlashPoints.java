@@ -109,28 +109,34 @@ public final class FlashPoints {
         return temperature ? best : bestX;
     }
 
-    /** How far beyond the card's validity range the search goes when extrapolation is allowed. */
-    static final double EXTRAPOLATION_KELVIN = 100.0;
-
     /**
      * The search range: the card's validity and the present components' vapour-pressure ranges; allowed to
-     * extrapolate, {@value #EXTRAPOLATION_KELVIN} K beyond the validity at each end, within the vapour-pressure
-     * constants' own ranges where they state one.
+     * extrapolate, {@link PhaseFunctions#EXTRAPOLATION_KELVIN} K beyond the validity at each end, within the
+     * vapour-pressure constants' own ranges where they state one.
      */
     private static double[] range(Card card, double[] z, Extrapolation e) {
         if (!card.mayExtrapolate(e)) {
             return PhaseFunctions.searchRange(card, z, e);
         }
-        double lo = Math.max(1.0, card.validity().lowestKelvin() - EXTRAPOLATION_KELVIN);
-        double hi = card.validity().highestKelvin() + EXTRAPOLATION_KELVIN;
-        for (int k = 0; k < z.length; k++) {
-            VapourPressure p = card.vapourPressure(k);
-            if (z[k] > 0.0 && p != null && p.hasRange()) {
-                lo = Math.max(lo, p.lowestKelvin());
-                hi = Math.min(hi, p.highestKelvin());
-            }
+        return PhaseFunctions.withinVapourRanges(card, z,
+                Math.max(1.0, card.validity().lowestKelvin() - PhaseFunctions.EXTRAPOLATION_KELVIN),
+                card.validity().highestKelvin() + PhaseFunctions.EXTRAPOLATION_KELVIN);
+    }
+
+    /**
+     * Component k's vapour pressure at its flash point, Pa: p_k*(T_fp,k) from its 'flash point' row, or L·(1 atm)
+     * from its 'lower flammable limit' row when it has no flash point; +∞ for a liquid marked as not flashing, NaN
+     * when the card has neither row.
+     */
+    static double referencePascal(Card card, int k) {
+        double fp = card.flashPointKelvin(k);
+        if (Double.isInfinite(fp)) {
+            return fp;
         }
-        return new double[] {lo, hi};
+        if (Double.isNaN(fp)) {
+            return card.lowerFlammableLimit(k) * BoilingPoints.OPEN_VESSEL_PASCAL;
+        }
+        return card.mixture().vapourPressure(k, fp);
     }
 
     /**
@@ -148,18 +154,8 @@ public final class FlashPoints {
             }
             String name = card.components().get(k).name();
             double fp = card.flashPointKelvin(k);
-            if (Double.isNaN(fp)) {
-                double lfl = card.lowerFlammableLimit(k);
-                if (Double.isNaN(lfl)) {
-                    throw Problem.NO_FLASH_POINT_ROW.raise(name);
-                }
-                // no flash point: the vapour reaches the lower flammable limit at 1 atm
-                if (card.vapourPressure(k) == null) {
-                    throw Problem.NO_VAPOUR_PRESSURE.raise(name);
-                }
-                out[k] = lfl * BoilingPoints.OPEN_VESSEL_PASCAL;
-                any = true;
-                continue;
+            if (Double.isNaN(fp) && Double.isNaN(card.lowerFlammableLimit(k))) {
+                throw Problem.NO_FLASH_POINT_ROW.raise(name);
             }
             if (Double.isInfinite(fp)) {
                 inert.append(inert.length() == 0 ? "" : ", ").append(name);
@@ -169,13 +165,14 @@ public final class FlashPoints {
             if (p == null) {
                 throw Problem.NO_VAPOUR_PRESSURE.raise(name);
             }
-            if (!card.mayExtrapolate(e) && p.hasRange() && (fp < p.lowestKelvin() || fp > p.highestKelvin())) {
+            if (!Double.isNaN(fp) && !card.mayExtrapolate(e) && p.hasRange()
+                    && (fp < p.lowestKelvin() || fp > p.highestKelvin())) {
                 Units.Temperature tu = card.units().temperature();
                 throw Problem.OUTSIDE_VAPOUR_PRESSURE.raise(Numbers.show(tu.fromKelvin(fp)), tu.symbol(),
                         Numbers.show(tu.fromKelvin(p.lowestKelvin())), Numbers.show(tu.fromKelvin(p.highestKelvin())),
                         tu.symbol(), name);
             }
-            out[k] = p.pascal(fp);
+            out[k] = referencePascal(card, k);
             any = true;
         }
         if (!any) {

@@ -366,13 +366,22 @@ public final class PhaseFunctions {
     static double[] searchRange(Card card, double[] z, Extrapolation e) {
         double lo = card.validity().lowestKelvin();
         double hi = card.validity().highestKelvin();
-        if (!card.mayExtrapolate(e)) {
-            for (int k = 0; k < z.length; k++) {
-                VapourPressure p = card.vapourPressure(k);
-                if (z[k] > 0.0 && p != null && p.hasRange()) {
-                    lo = Math.max(lo, p.lowestKelvin());
-                    hi = Math.min(hi, p.highestKelvin());
-                }
+        return card.mayExtrapolate(e) ? new double[] {lo, hi} : withinVapourRanges(card, z, lo, hi);
+    }
+
+    /**
+     * How far beyond the lowest or highest temperature of a card's data the searches that may extrapolate go (the
+     * flash point's) or accept a result (the freezing point's): no card's G^E is trusted further.
+     */
+    static final double EXTRAPOLATION_KELVIN = 100.0;
+
+    /** lo..hi (K) narrowed to the ranges the present components' vapour-pressure constants state. */
+    static double[] withinVapourRanges(Card card, double[] z, double lo, double hi) {
+        for (int k = 0; k < z.length; k++) {
+            VapourPressure p = card.vapourPressure(k);
+            if (z[k] > 0.0 && p != null && p.hasRange()) {
+                lo = Math.max(lo, p.lowestKelvin());
+                hi = Math.min(hi, p.highestKelvin());
             }
         }
         return new double[] {lo, hi};
@@ -444,10 +453,10 @@ public final class PhaseFunctions {
         if (a == Activity.CARD && z[k] < 1.0) {
             PointChecks.checkPoint(card, z, t, e);
             double lowest = card.validity().lowestKelvin();
-            if (kelvin < lowest - FlashPoints.EXTRAPOLATION_KELVIN) {
+            if (kelvin < lowest - EXTRAPOLATION_KELVIN) {
                 throw Problem.FREEZING_TOO_FAR.raise(Numbers.show(t), tu.symbol(), Numbers.show(lowest - kelvin),
                         Numbers.show(tu.fromKelvin(lowest)), tu.symbol(),
-                        Numbers.show(FlashPoints.EXTRAPOLATION_KELVIN));
+                        Numbers.show(EXTRAPOLATION_KELVIN));
             }
         }
         return t;

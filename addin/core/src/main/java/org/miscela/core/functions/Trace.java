@@ -259,29 +259,25 @@ final class Trace {
         double sum = 0.0;
         for (int k = 0; k < x.length; k++) {
             double fp = card.flashPointKelvin(k);
+            double lfl = card.lowerFlammableLimit(k);
             String who = name(card, k);
-            if (Double.isNaN(fp)) {
-                double lfl = card.lowerFlammableLimit(k);
-                tr.add("flash point: " + who + " [" + tu.symbol() + "]", Double.isNaN(lfl)
-                        ? "no 'flash point' row on the card" : "none on the card: its lower flammable limit is used");
-                if (!Double.isNaN(lfl)) {
-                    tr.add("lower flammable limit: " + who + " [volume fraction]", lfl);
-                    double reference = lfl * BoilingPoints.OPEN_VESSEL_PASCAL;
-                    tr.add("vapour pressure at its flash point: " + who + " [" + pu.symbol() + "]",
-                            pu.fromPascal(reference));
-                    double share = x[k] * Math.exp(lnGamma[k]) * card.mixture().vapourPressure(k, kelvin) / reference;
-                    tr.add("flammable share x·γ·p*(T)/p*(T_fp): " + who, share);
-                    sum += share;
-                }
-                continue;
-            }
+            String fpLabel = "flash point: " + who + " [" + tu.symbol() + "]";
             if (Double.isInfinite(fp)) {
-                tr.add("flash point: " + who + " [" + tu.symbol() + "]", "none: does not flash (dilutes only)");
+                tr.add(fpLabel, "none: does not flash (dilutes only)");
                 continue;
             }
-            tr.add("flash point: " + who + " [" + tu.symbol() + "]", tu.fromKelvin(fp));
-            tr.add("flash point test method: " + who, card.flashPointMethod(k));
-            double reference = card.mixture().vapourPressure(k, fp);
+            if (Double.isNaN(fp) && Double.isNaN(lfl)) {
+                tr.add(fpLabel, "no 'flash point' row on the card");
+                continue;
+            }
+            if (Double.isNaN(fp)) {
+                tr.add(fpLabel, "none on the card: its lower flammable limit is used");
+                tr.add("lower flammable limit: " + who + " [volume fraction]", lfl);
+            } else {
+                tr.add(fpLabel, tu.fromKelvin(fp));
+                tr.add("flash point test method: " + who, card.flashPointMethod(k));
+            }
+            double reference = FlashPoints.referencePascal(card, k);
             tr.add("vapour pressure at its flash point: " + who + " [" + pu.symbol() + "]", pu.fromPascal(reference));
             double share = x[k] * Math.exp(lnGamma[k]) * card.mixture().vapourPressure(k, kelvin) / reference;
             tr.add("flammable share x·γ·p*(T)/p*(T_fp): " + who, share);
