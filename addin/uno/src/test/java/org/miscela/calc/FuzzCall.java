@@ -963,12 +963,7 @@ final class FuzzCall {
             double[] t = new double[points];
             double[] rho = new double[points];
             double[] w = new double[points];
-            Card pure = null;
-            try {
-                pure = CardReader.readPureComponents(card.cells);
-            } catch (MiscelaException e) {
-                // no pure data: the densities below are plausible numbers only
-            }
+            Card pure = pureOrNull();
             int[] members = new int[2];
             Object pair = pairArgument(members);
             int first = members[0];
@@ -990,6 +985,15 @@ final class FuzzCall {
         Object activity() {
             return clean ? pick(Any.VOID, Any.VOID, "card", "ideal")
                     : pick(Any.VOID, "card", "ideal", "Ideal ", "raoult", "", 1.0);
+        }
+
+        /** The card's pure part as a fit reads it, or null when it has none (the fits' data are then plausible only). */
+        Card pureOrNull() {
+            try {
+                return CardReader.readPureComponents(card.cells);
+            } catch (MiscelaException e) {
+                return null;
+            }
         }
 
         /** The pair argument of a fit (left out on a binary card, often): its members into {@code members}. */
@@ -1014,12 +1018,7 @@ final class FuzzCall {
             double[] t = new double[points];
             double[] p = new double[points];
             double[] w = new double[points];
-            Card pure = null;
-            try {
-                pure = CardReader.readPureComponents(card.cells);
-            } catch (MiscelaException e) {
-                // no pure data: the pressures below are plausible numbers only
-            }
+            Card pure = pureOrNull();
             int[] members = new int[2];
             Object pair = pairArgument(members);
             double scale = 0.5 + 1.5 * r.nextDouble();
