@@ -130,9 +130,7 @@ final class AdiabaticRise {
         double boils = BoilingPoints.kelvinAt(card, x);
         if (!boiling && end >= boils) {
             throw Problem.BOILS.raise(Numbers.show(unit.fromKelvin(end)), unit.symbol(),
-                    Numbers.show(unit.fromKelvin(boils)), unit.symbol(), BoilingPoints.fromBubblePoint(card, x)
-                            ? "its bubble point at 1 atm from the card's G^E and vapour pressures"
-                            : "the card's 'boiling temperatures'");
+                    Numbers.show(unit.fromKelvin(boils)), unit.symbol(), BoilingPoints.source(card, x, boils));
         }
         if (!card.mayExtrapolate(e) && !(pure ? card.validity().containsTemperature(end)
                 : PointChecks.insideTemperature(card, x, end))) {

@@ -29,8 +29,28 @@ public final class BoilingPoints {
                     Extrapolation.AS_CARD);
             return card.units().temperature().toKelvin(t);
         } catch (MiscelaException outside) {
-            return Double.NaN; // no bubble point inside the card's range: unknown, as outside stated points
+            // no bubble point inside the card's range: if the blend's vapour already exceeds 1 atm at the range's
+            // lowest temperature it boils below the range, so that temperature is the limit (a batch inside the
+            // range is past it); otherwise it boils above the range, unknown as outside stated points
+            double lowest = card.validity().lowestKelvin();
+            try {
+                return card.mixture().bubblePressure(x, lowest, null) >= OPEN_VESSEL_PASCAL ? lowest : Double.NaN;
+            } catch (MiscelaException unknown) {
+                return Double.NaN;
+            }
         }
+    }
+
+    /**
+     * The words naming where {@link #kelvinAt}'s limit came from, for refusals and the trace: the card's stated
+     * points, the bubble point at 1 atm, or the card's lowest temperature when the blend boils at or below it.
+     */
+    public static String source(Card card, double[] x, double kelvin) {
+        if (!fromBubblePoint(card, x)) {
+            return "the card's 'boiling temperatures'";
+        }
+        return kelvin == card.validity().lowestKelvin() ? "its bubble point at 1 atm is at or below the card's lowest "
+                + "temperature, the limit used" : "its bubble point at 1 atm from the card's G^E and vapour pressures";
     }
 
     /** Whether the boiling temperature comes from the bubble point (no stated points; G^E and vapour pressures). */

@@ -41,4 +41,19 @@ class BoilingFlagTest {
         assertTrue(Double.isNaN(BoilingPoints.kelvinAt(TestCards.card("sulfuric-acid-water-nbs.tsv"),
                 new double[] {0.1, 0.9})));
     }
+
+    /**
+     * A blend that boils below the card's range: on the same invented card valid from 95 °C only, the equimolar
+     * blend's vapour already exceeds 1 atm there (its bubble point is 89.9 °C on the full card), so the lowest
+     * temperature of the range is the limit and a rise from 100 °C is refused, not left unchecked.
+     */
+    @Test
+    void aBlendThatBoilsBelowTheCardsRangeIsHeldToItsBottom() {
+        Card hot = org.miscela.core.card.CardReader.read(org.miscela.core.card.CardEdits.apply(
+                TestCards.cells("invented-hot-mixing.tsv"), "set 22 = valid temperature | 95 | 150"));
+        double[] x = {0.5, 0.5};
+        assertEquals(95 + 273.15, BoilingPoints.kelvinAt(hot, x), 1e-9);
+        assertEquals(Problem.BOILS, assertThrows(MiscelaException.class,
+                () -> CardFunctions.adiabaticRise(hot, new double[] {1, 1}, AmountBasis.MOL, 100, E)).problem());
+    }
 }
