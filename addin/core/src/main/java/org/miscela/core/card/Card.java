@@ -9,6 +9,7 @@ import org.miscela.core.model.ExcessModel;
 import org.miscela.core.model.MixtureDensityModel;
 import org.miscela.core.model.GeometricModel;
 import org.miscela.core.model.RedlichKister;
+import org.miscela.core.model.PitzerOsmotic;
 import org.miscela.core.model.SolutionHeatCapacity;
 import org.miscela.core.model.TernaryTerm;
 import org.miscela.core.problem.Problem;
@@ -55,6 +56,7 @@ public final class Card {
     /** The molar volumes of 'Wilson volume' rows (cm³/mol; NaN for a component without one), or null. */
     private final double[] wilsonVolumes;
     private final Fusion[] fusion;
+    private final PitzerOsmotic osmotic;
 
     /**
      * 20 °C, the temperature at which alcoholic strength by volume is defined (OIML R 22 (1975)), used for every
@@ -113,6 +115,7 @@ public final class Card {
         this.lowerFlammableLimit = phase == null || phase.lowerFlammableLimit == null ? null
                 : phase.lowerFlammableLimit.clone();
         this.fusion = phase == null || phase.fusion == null ? null : phase.fusion.clone();
+        this.osmotic = phase == null ? null : phase.osmotic;
         if (densityModel != null && excessVolume != null) {
             throw new IllegalArgumentException("a card states its volumes one way");
         }
@@ -235,9 +238,13 @@ public final class Card {
         /** Each component's lower flammable limit as a volume fraction of the air mixture (NaN without a row). */
         final double[] lowerFlammableLimit;
         final Fusion[] fusion;
+        /** The water's activity by Pitzer's osmotic coefficient, or null. */
+        final PitzerOsmotic osmotic;
 
         PhaseData(ExcessModel gibbs, VapourPressure[] vapour, Units.Pressure pressure, double[] wilsonVolumes,
-                double[] flashKelvin, String[] flashMethod, double[] lowerFlammableLimit, Fusion[] fusion) {
+                double[] flashKelvin, String[] flashMethod, double[] lowerFlammableLimit, Fusion[] fusion,
+                PitzerOsmotic osmotic) {
+            this.osmotic = osmotic;
             this.gibbs = gibbs;
             this.vapour = vapour;
             this.pressure = pressure;
@@ -252,6 +259,11 @@ public final class Card {
     /** Component k's melting data ('melting point', 'enthalpy of fusion' rows), or null when the card gives none. */
     public Fusion fusion(int k) {
         return fusion == null ? null : fusion[k];
+    }
+
+    /** The water's activity by Pitzer's osmotic coefficient ('osmotic coefficient' row), or null. */
+    public PitzerOsmotic osmotic() {
+        return osmotic;
     }
 
     /** G^E/RT of the liquid (dimensionless), or null when the card gives none. */
@@ -296,6 +308,20 @@ public final class Card {
     /** The card's pressure unit, or null when it states none. */
     public Units.Pressure pressureUnit() {
         return pressureUnit;
+    }
+
+    /**
+     * The component the card's 'solvent' row names (the water of a solution model: apparent density, solution heat
+     * capacity or osmotic coefficient), or −1 on a card without one.
+     */
+    public int solventIndex() {
+        if (osmotic != null) {
+            return osmotic.solvent();
+        }
+        if (densityModel instanceof org.miscela.core.model.ApparentVolumeDensity) {
+            return ((org.miscela.core.model.ApparentVolumeDensity) densityModel).solvent();
+        }
+        return solutionHeatCapacity == null ? -1 : solutionHeatCapacity.solvent();
     }
 
     /** Whether component k's pure liquid is only a limit of the card's mixture-density model (a dissolved salt). */

@@ -43,6 +43,7 @@ import org.miscela.core.model.BoilingCurve;
 import org.miscela.core.model.HeatCapacity;
 import org.miscela.core.model.SolutionHeatCapacity;
 import org.miscela.core.model.PolynomialDensity;
+import org.miscela.core.model.PitzerOsmotic;
 import org.miscela.core.model.PureDensity;
 import org.miscela.core.model.Tanaka2001WaterDensity;
 import org.miscela.core.problem.Numbers;
@@ -202,7 +203,84 @@ final class CardBuilder {
         return new Card(title, source, units, components, volume, enthalpy, validity, allow, missingIdeal,
                 basisReferenceKelvin, solutionHeatCapacity(names, masses), boilingCurve(names), mixtureDensity,
                 new Card.PhaseData(gibbs, vapour, pressure, wilsonVolumes, flash[0] == null ? null : flash[0],
-                        flashMethods, lowerFlammableLimits(names), fusion(names)));
+                        flashMethods, lowerFlammableLimits(names), fusion(names), osmotic(names, masses, gibbs)));
+    }
+
+    /**
+     * The water's activity by Pitzer's osmotic coefficient: an 'osmotic coefficient | salt | Pitzer | z_M | |z_X|
+     * [| lowest | highest temperature]' row on a card of the salt and the water the 'solvent' row names, with 'Pitzer beta0', 'Pitzer beta1' and 'Pitzer
+     * Cphi' rows for the salt, each one to six terms of its function of T (K, {@link PitzerOsmotic}); null when the
+     * card has none. A card states the liquid's activity one way: no G^E rows beside it.
+     */
+    private PitzerOsmotic osmotic(List<String> names, List<Double> masses, ExcessModel gibbs) {
+        Map<String, CardRow> rowsBySalt = rows.keyed(CardLabels.OSMOTIC);
+        if (rowsBySalt.isEmpty()) {
+            for (String label : CardLabels.PITZER) {
+                if (!rows.keyed(label).isEmpty()) {
+                    throw Problem.MISSING_PAIR_ROW.raise(label, "the salt", CardLabels.OSMOTIC);
+                }
+            }
+            return null;
+        }
+        CardRow r = rowsBySalt.values().iterator().next();
+        if (gibbs != null) {
+            throw Problem.MODEL_VALUES.raise(r.number, r.label, PitzerOsmotic.NAME, "no G^E rows beside it",
+                    "the card states the liquid's activity one way; remove one of them");
+        }
+        if (names.size() != 2) {
+            throw Problem.MODEL_VALUES.raise(r.number, r.label, PitzerOsmotic.NAME, "a card of one salt and the "
+                    + "water", "this card has " + names.size() + " components; mixed salts need mixing terms the card "
+                    + "cannot hold");
+        }
+        int solvent = solvent(names);
+        int solute = 1 - solvent;
+        double[] v = soluteParameters(names, solvent, rowsBySalt, PitzerOsmotic.NAME, -1, "")[solute];
+        if (v.length != 2 && v.length != 4) {
+            throw Problem.MODEL_VALUES.raise(r.number, r.label, PitzerOsmotic.NAME, "the cation's charge and the size "
+                    + "of the anion's, optionally followed by the lowest and highest temperature the parameters hold "
+                    + "for", "found " + v.length + " number(s)");
+        }
+        double lowest = Double.NaN;
+        double highest = Double.NaN;
+        if (v.length == 4) {
+            lowest = units.temperature().toKelvin(v[2]);
+            highest = units.temperature().toKelvin(v[3]);
+            if (!(lowest > 0.0 && highest > lowest) || Double.isInfinite(highest)) {
+                throw Problem.MODEL_VALUES.raise(r.number, r.label, PitzerOsmotic.NAME, "a lowest temperature above "
+                        + "absolute zero and a higher highest one", "found " + Numbers.show(v[2]) + " and "
+                        + Numbers.show(v[3]));
+            }
+        }
+        for (int i = 0; i < 2; i++) {
+            if (v[i] != Math.rint(v[i]) || v[i] < 1 || v[i] > 3) {
+                throw Problem.MODEL_VALUES.raise(r.number, r.label, PitzerOsmotic.NAME, "the cation's charge and the "
+                        + "size of the anion's, whole numbers 1 to 3", "found " + Numbers.show(v[i]));
+            }
+        }
+        if (v[0] > 1 && v[1] > 1) {
+            throw Problem.MODEL_VALUES.raise(r.number, r.label, PitzerOsmotic.NAME, "at least one univalent ion",
+                    "a 2:2 salt needs Pitzer's further β(2) term, which the card cannot hold");
+        }
+        double[][] terms = new double[3][];
+        for (int i = 0; i < 3; i++) {
+            String label = CardLabels.PITZER[i];
+            CardRow p = rows.keyed(label).get(normalise(names.get(solute)));
+            if (rows.keyed(label).size() > (p == null ? 0 : 1)) {
+                CardRow other = rows.keyed(label).values().stream().filter(o -> o != p).findFirst().get();
+                throw Problem.MODEL_VALUES.raise(other.number, other.label, PitzerOsmotic.NAME, "its rows for the "
+                        + "salt " + names.get(solute), "this row names another component");
+            }
+            if (p == null) {
+                throw Problem.MISSING_PAIR_ROW.raise(CardLabels.OSMOTIC, names.get(solute), label);
+            }
+            terms[i] = p.numbersFrom(1);
+            if (terms[i].length < 1 || terms[i].length > PitzerOsmotic.TERMS) {
+                throw Problem.MODEL_VALUES.raise(p.number, p.label, PitzerOsmotic.NAME, "one to six terms of its "
+                        + "function of T", "found " + terms[i].length);
+            }
+        }
+        return new PitzerOsmotic(solvent, solute, masses.get(solvent), (int) v[0], (int) v[1], terms, lowest,
+                highest);
     }
 
     /**
@@ -633,7 +711,8 @@ final class CardBuilder {
 
     /**
      * The parameters of a solution model's rows, one row per solute naming the model ({@code model}, compared as
-     * {@link #sameKeyword} does) and then {@code count} numbers; null at the solvent, which must have no such row.
+     * {@link #sameKeyword} does) and then {@code count} numbers (any number when {@code count} &lt; 0); null at the
+     * solvent, which must have no such row.
      */
     private static double[][] soluteParameters(List<String> names, int solvent, Map<String, CardRow> byComponent,
             String model, int count, String takes) {
@@ -653,7 +732,7 @@ final class CardBuilder {
                 throw Problem.BAD_KEYWORD.raise(r.number, r.label, r.text(1).trim(), model);
             }
             out[k] = r.numbersFrom(2);
-            if (out[k].length != count) {
+            if (count >= 0 && out[k].length != count) {
                 throw Problem.MODEL_VALUES.raise(r.number, r.label, model, takes, "found " + out[k].length);
             }
         }
@@ -736,7 +815,8 @@ final class CardBuilder {
         Map<String, CardRow> solutes = rows.keyed(CardLabels.SOLUTION_HEAT_CAPACITY);
         CardRow solventRow = rows.global(CardLabels.SOLVENT);
         if (solutes.isEmpty()) {
-            if (solventRow != null && rows.keyed(CardLabels.APPARENT_DENSITY).isEmpty()) {
+            if (solventRow != null && rows.keyed(CardLabels.APPARENT_DENSITY).isEmpty()
+                    && rows.keyed(CardLabels.OSMOTIC).isEmpty()) {
                 throw Problem.MISSING_PAIR_ROW.raise(CardLabels.SOLVENT, "the solution",
                         CardLabels.SOLUTION_HEAT_CAPACITY);
             }

@@ -842,8 +842,8 @@ public final class FunctionCatalog {
                             Problem.UNKNOWN_RESULT))),
             new FunctionInfo("freezingPoint", "MIX.FREEZINGPOINT",
                     "the temperature at which a pure solid starts to crystallise from the liquid blend (freezing point)",
-                    "Temperature at which a pure solid (ice, say) starts to form from the liquid blend, card unit, "
-                            + "from the card's melting rows and G^E/RT; an estimate, measured values prevail.",
+                    "Temperature at which a pure solid (ice, say) starts to form from the blend, card unit, from the "
+                            + "card's melting rows and G^E/RT (or a brine's osmotic coefficient); an estimate.",
                     "ln(x_k·γ_k(x, T)) = −(ΔH_fus/R)(1/T − 1/T_m) + (ΔCp/R)[(T_m/T − 1) − ln(T_m/T)], solved for T "
                             + "(Brent's method); the solid is pure k",
                     "=MIX.FREEZINGPOINT(ice; 20; ; ; ; TRUE(); \"%w/w\")",
@@ -856,7 +856,7 @@ public final class FunctionCatalog {
                     EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
                     .shows("-9.42").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
                             COMPONENT_PROBLEMS, list(Problem.NO_FUSION_DATA, Problem.FREEZING_NEEDS_GIBBS,
-                            Problem.FREEZING_COMPONENT_ABSENT, Problem.NO_FREEZING_POINT, Problem.UNKNOWN_RESULT,
+                            Problem.IDEAL_NEEDS_IONS, Problem.SOLUTE_ACTIVITY, Problem.FREEZING_COMPONENT_ABSENT, Problem.NO_FREEZING_POINT, Problem.UNKNOWN_RESULT,
                             Problem.ARG_NOT_TEXT, Problem.UNKNOWN_ACTIVITY, Problem.FREEZING_TOO_FAR)))));
 
     private FunctionCatalog() {

@@ -455,9 +455,11 @@ public final class CardFunctions {
         double[] z = moleFractions(card, x);
         Object[][] rows;
         if (property == PropertyKind.FREEZING) {
-            double kelvin = PointChecks.checkPoint(card, z, t, e);
-            card.mixture().gibbs();
-            rows = Trace.freezing(card, z, t, kelvin, e, PointChecks.violations(card, z, kelvin, t));
+            double kelvin = PhaseFunctions.checkFreezingPoint(card, z, t, e);
+            if (card.osmotic() == null) {
+                card.mixture().gibbs();
+            }
+            rows = Trace.freezing(card, z, t, kelvin, e, PhaseFunctions.freezingViolations(card, z, kelvin, t));
         } else if (property == PropertyKind.VAPOUR || property == PropertyKind.FLASH) {
             if (card.pressureUnit() == null) {
                 throw Problem.NO_PRESSURE_UNIT.raise();

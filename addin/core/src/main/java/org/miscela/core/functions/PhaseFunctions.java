@@ -1,10 +1,12 @@
 package org.miscela.core.functions;
 
+import java.util.List;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.miscela.core.card.Card;
 import org.miscela.core.card.Extrapolation;
 import org.miscela.core.card.Fusion;
 import org.miscela.core.card.Units;
+import org.miscela.core.model.PitzerOsmotic;
 import org.miscela.core.model.VapourPressure;
 import org.miscela.core.problem.Numbers;
 import org.miscela.core.problem.Problem;
@@ -451,7 +453,7 @@ public final class PhaseFunctions {
         }
         double t = tu.fromKelvin(kelvin);
         if (a == Activity.CARD && z[k] < 1.0) {
-            PointChecks.checkPoint(card, z, t, e);
+            checkFreezingPoint(card, z, t, e);
             double lowest = card.validity().lowestKelvin();
             if (kelvin < lowest - EXTRAPOLATION_KELVIN) {
                 throw Problem.FREEZING_TOO_FAR.raise(Numbers.show(t), tu.symbol(), Numbers.show(lowest - kelvin),
@@ -463,13 +465,58 @@ public final class PhaseFunctions {
     }
 
     /**
+     * {@link PointChecks#checkPoint} for a freezing point: on a card whose osmotic-coefficient row states its own
+     * temperature range, that range replaces the card's (whose densities may start at 0 °C while the brine's
+     * parameters reach far below); compositions are the card's.
+     */
+    static double checkFreezingPoint(Card card, double[] z, double t, Extrapolation e) {
+        PitzerOsmotic o = card.osmotic();
+        if (o == null || !o.hasRange()) {
+            return PointChecks.checkPoint(card, z, t, e);
+        }
+        double kelvin = PointChecks.checkTemperature(card, t, Extrapolation.ALLOW); // finite, above 0 K
+        if (!card.mayExtrapolate(e)) {
+            List<Violation> outside = freezingViolations(card, z, kelvin, t);
+            if (!outside.isEmpty()) {
+                throw outside.get(0).refusal();
+            }
+        }
+        return kelvin;
+    }
+
+    /** {@link PointChecks#violations} for a freezing point, with the osmotic row's range as above. */
+    static List<Violation> freezingViolations(Card card, double[] z, double kelvin, double t) {
+        List<Violation> all = PointChecks.violations(card, z, kelvin, t);
+        PitzerOsmotic o = card.osmotic();
+        if (o == null || !o.hasRange()) {
+            return all;
+        }
+        List<Violation> out = new java.util.ArrayList<>();
+        if (kelvin < o.lowestKelvin() || kelvin > o.highestKelvin()) {
+            Units.Temperature u = card.units().temperature();
+            out.add(new Violation(Problem.OUTSIDE_TEMPERATURE, Numbers.show(t), u.symbol(),
+                    Numbers.show(u.fromKelvin(o.lowestKelvin())), Numbers.show(u.fromKelvin(o.highestKelvin())),
+                    u.symbol()));
+        }
+        for (Violation v : all) {
+            if (v.problem() != Problem.OUTSIDE_TEMPERATURE) {
+                out.add(v);
+            }
+        }
+        return out;
+    }
+
+    /**
      * The index of the component whose freezing point {@link #freezingPoint} gives: {@code component} itself when
      * given (≥ 0), else the present component with melting data that freezes at the highest temperature.
      */
     public static int freezingComponent(Card card, int component, double[] x, Activity a) {
         double[] z = CardFunctions.moleFractions(card, x);
-        if (a == Activity.CARD && card.excessGibbs() == null) {
+        if (a == Activity.CARD && card.excessGibbs() == null && card.osmotic() == null) {
             throw Problem.FREEZING_NEEDS_GIBBS.raise();
+        }
+        if (a == Activity.IDEAL && card.osmotic() == null && card.solventIndex() >= 0) {
+            throw Problem.IDEAL_NEEDS_IONS.raise(card.components().get(card.solventIndex()).name());
         }
         if (component >= 0) {
             String name = card.components().get(component).name();
@@ -542,15 +589,7 @@ public final class PhaseFunctions {
     /** The root in K, T_m itself when the residual vanishes there, or NaN when the range holds none. */
     private static double freezingRoot(Card card, int k, double[] z, Activity a) {
         Fusion f = card.fusion(k);
-        java.util.function.DoubleUnaryOperator residual = tk -> {
-            double lnActivity = Math.log(z[k]);
-            if (a == Activity.CARD) {
-                double[] lnGamma = new double[z.length];
-                card.mixture().logActivityCoefficients(z, tk, lnGamma);
-                lnActivity += lnGamma[k];
-            }
-            return lnActivity - solidLine(f, tk);
-        };
+        java.util.function.DoubleUnaryOperator residual = tk -> lnActivity(card, k, z, tk, a) - solidLine(f, tk);
         double tm = f.meltingKelvin();
         double atMelting = residual.applyAsDouble(tm);
         if (atMelting == 0.0) {
@@ -568,6 +607,29 @@ public final class PhaseFunctions {
             return fLo == 0.0 ? lo : hi;
         }
         return new BrentSolver(1e-15, ACCURACY_KELVIN).solve(200, residual::applyAsDouble, lo, hi);
+    }
+
+    /**
+     * ln(x_k·γ_k), the log of component k's activity in the liquid at T (K): γ from the card's G^E/RT, or 1 for the
+     * ideal solution. On a card whose 'osmotic coefficient' row gives the water's activity, the water's is ln a_w =
+     * −φ·ν·m·M_w, or for the ideal solution the log of its mole fraction among the ions; the salt's is refused.
+     */
+    static double lnActivity(Card card, int k, double[] z, double kelvin, Activity a) {
+        PitzerOsmotic osmotic = card.osmotic();
+        if (osmotic != null) {
+            if (k != osmotic.solvent()) {
+                throw Problem.SOLUTE_ACTIVITY.raise(card.components().get(k).name(),
+                        card.components().get(osmotic.solvent()).name());
+            }
+            return a == Activity.CARD ? osmotic.lnWaterActivity(z, kelvin) : osmotic.lnIdealWaterActivity(z);
+        }
+        double lnActivity = Math.log(z[k]);
+        if (a == Activity.CARD) {
+            double[] lnGamma = new double[z.length];
+            card.mixture().logActivityCoefficients(z, kelvin, lnGamma);
+            lnActivity += lnGamma[k];
+        }
+        return lnActivity;
     }
 
     /**

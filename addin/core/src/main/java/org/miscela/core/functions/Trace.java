@@ -324,8 +324,17 @@ final class Trace {
         for (int k = 0; k < x.length; k++) {
             tr.add("mole fraction: " + name(card, k), x[k]);
         }
+        org.miscela.core.model.PitzerOsmotic osmotic = card.osmotic();
         double[] lnGamma = new double[x.length];
-        card.mixture().logActivityCoefficients(x, kelvin, lnGamma);
+        if (osmotic == null) {
+            card.mixture().logActivityCoefficients(x, kelvin, lnGamma);
+        } else {
+            double m = osmotic.molality(x);
+            tr.add("molality: " + name(card, osmotic.solute()) + " [mol/kg]", m);
+            tr.add("ions per formula unit", (double) osmotic.ions());
+            tr.add("Debye-Hückel slope A_φ [kg^½/mol^½]", org.miscela.core.model.PitzerOsmotic.debyeHuckel(kelvin));
+            tr.add("osmotic coefficient φ (Pitzer)", osmotic.osmoticCoefficient(m, kelvin));
+        }
         for (int k = 0; k < x.length; k++) {
             org.miscela.core.card.Fusion f = card.fusion(k);
             String who = name(card, k);
@@ -336,9 +345,14 @@ final class Trace {
             tr.add("melting point: " + who + " [" + tu.symbol() + "]", f.meltingAsStated());
             tr.add("enthalpy of fusion: " + who + " [J/mol]", f.enthalpy());
             tr.add("heat capacity of fusion: " + who + " [J/(mol K)]", f.heatCapacity());
-            tr.add("ln activity coefficient: " + who, lnGamma[k]);
-            tr.add("ln(x·γ) in the liquid: " + who, x[k] > 0.0 ? (Object) (Math.log(x[k]) + lnGamma[k])
-                    : "absent from the blend");
+            if (osmotic != null) {
+                tr.add("ln a in the liquid (−φ·ν·m·M_w): " + who, k == osmotic.solvent() && x[k] > 0.0
+                        ? (Object) osmotic.lnWaterActivity(x, kelvin) : "the osmotic coefficient gives the water's only");
+            } else {
+                tr.add("ln activity coefficient: " + who, lnGamma[k]);
+                tr.add("ln(x·γ) in the liquid: " + who, x[k] > 0.0 ? (Object) (Math.log(x[k]) + lnGamma[k])
+                        : "absent from the blend");
+            }
             tr.add("ln a of the pure liquid over its solid at T: " + who, PhaseFunctions.solidLine(f, kelvin));
         }
         Object blend;
@@ -354,7 +368,9 @@ final class Trace {
         tr.add("freezing point of the blend [" + tu.symbol() + "]", blend);
         tr.add("component that freezes first", which);
         tr.add("freezing model", "solid-liquid equilibrium with a pure solid: ln(x·γ) = −(ΔH_fus/R)(1/T − 1/T_m) + "
-                + "(ΔCp/R)[(T_m/T − 1) − ln(T_m/T)], γ from the card's G^E; no solid solutions, no eutectic search; "
+                + "(ΔCp/R)[(T_m/T − 1) − ln(T_m/T)], " + (osmotic == null ? "γ from the card's G^E"
+                        : "the water's activity from Pitzer's osmotic coefficient, ln a_w = −φ·ν·m·M_w") + "; no solid "
+                + "solutions, no eutectic search; "
                 + "an estimate that measured freezing points overrule");
         return tr.rows.toArray(new Object[0][]);
     }

@@ -71,10 +71,10 @@ public enum Problem {
     COVARIANCE_SIZE(CARD, "Card row %d (%s): the pair %s has %d coefficients, so its covariance takes %d rows of %d values; found %s."),
     COVARIANCE_NOT_SYMMETRIC(CARD, "Card row %d (%s): the covariance is not symmetric: entry (%d, %d) is %s but (%d, %d) is %s."),
     COVARIANCE_NEGATIVE(CARD, "Card row %d (%s): the variance of coefficient %d is %s; a variance cannot be negative."),
-    NO_SOLUTION_MODEL(CARD, "The card gives 'solution heat capacity' rows, so every component but the solvent %s needs "
-            + "one; %s has none.", Advice.INSIDE_RANGE),
-    SOLVENT_WITH_SOLUTION_MODEL(CARD, "Card row %d (%s): %s is the card's solvent, whose heat capacity is its own "
-            + "'heat capacity' row; a 'solution heat capacity' row belongs to a solute."),
+    NO_SOLUTION_MODEL(CARD, "The card gives solution-model rows (one per solute), so every component but the solvent "
+            + "%s needs one of each kind; %s has none.", Advice.INSIDE_RANGE),
+    SOLVENT_WITH_SOLUTION_MODEL(CARD, "Card row %d (%s): %s is the card's solvent, whose own data are its pure-liquid "
+            + "rows; a row of this kind belongs to a solute."),
     PACKED_VERSION(CARD, "The packed card is of format version %s; this add-in reads version %d. Pack the card again "
             + "with MIX.PACK, or name its range instead."),
     PACKED_DAMAGED(CARD, "The packed card does not read: %s does not match what it holds, so the text was changed "
@@ -228,7 +228,9 @@ public enum Problem {
     NO_CONVERGENCE(CALL, "The numerical search for %s did not converge (%s), so there is no result; the card's models "
             + "may be irregular there: check them near this point."),
     NO_FUSION_DATA(CALL, "The card gives no 'melting point' and 'enthalpy of fusion' rows for %s, so it cannot say when a solid forms: add both rows for the component that crystallises (see docs/card-format.md).", Advice.INSIDE_RANGE),
-    FREEZING_NEEDS_GIBBS(CALL, "The card gives no excess Gibbs energy (G^E/RT rows), so the freezing point cannot allow for how the liquids interact: add them, or pass \"ideal\" as 'activity' to assume an ideal solution (γ = 1), which can be kelvins too warm for a strong blend.", Advice.INSIDE_RANGE),
+    FREEZING_NEEDS_GIBBS(CALL, "The card gives no excess Gibbs energy (G^E/RT rows) and no osmotic coefficient, so the freezing point cannot allow for how the liquids interact: add them, or pass \"ideal\" as 'activity' to assume an ideal solution (γ = 1), which can be kelvins too warm for a strong blend.", Advice.INSIDE_RANGE),
+    IDEAL_NEEDS_IONS(CALL, "The card is a solution of salts or acids in %s, and it does not say how many ions each solute gives (an 'osmotic coefficient' row does), so an ideal solution would count each solute as one molecule and put the freezing point far too warm: add the row (see docs/card-format.md).", Advice.INSIDE_RANGE),
+    SOLUTE_ACTIVITY(CALL, "The card's osmotic coefficient gives the activity of the water only, not of %s: a solid of the dissolved salt (or its hydrate) is not computed; ask for the ice from %s.", Advice.INSIDE_RANGE),
     FREEZING_COMPONENT_ABSENT(CALL, "The blend holds no %s, so no solid %s can form from it; name a component that is present, or leave the component out for the one that freezes first."),
     FREEZING_TOO_FAR(CALL, "The freezing point found, %s %s, lies %s K below the lowest temperature of the card's data (%s %s): further than Miscela extrapolates a card's G^E (%s K), and another liquid without melting rows on the card may crystallise first. Use a card whose data reach nearer the freezing point."),
     NO_FREEZING_POINT(CALL, "No temperature from %s to %s %s lets solid %s form from this blend (x = %s): its activity in the liquid does not meet the melting curve there; the card's G^E may not hold so far from its data."),

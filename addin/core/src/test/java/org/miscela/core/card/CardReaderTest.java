@@ -298,7 +298,7 @@ class CardReaderTest {
                         v2(c -> c.row("solution heat capacity", "alpha", "Laliberté 2009", 1, 0, 0, 0, 1, 1)
                                 .row("solvent", "gamma"))),
                 bad("a solute without a solution heat capacity", Problem.NO_SOLUTION_MODEL, 0,
-                        "solvent alpha needs one; gamma has none", ternary(c -> c.row("solvent", "alpha")
+                        "solvent alpha needs one of each kind; gamma has none", ternary(c -> c.row("solvent", "alpha")
                                 .row("solution heat capacity", "beta", "Laliberté 2009", 1, 0, 0, 0, 1, 1))),
                 bad("the solvent with a solution heat capacity", Problem.SOLVENT_WITH_SOLUTION_MODEL, 20,
                         "beta is the card's solvent", v2(c -> c.row("solution heat capacity", "beta",
@@ -314,6 +314,42 @@ class CardReaderTest {
                 bad("a solution model with five parameters", Problem.MODEL_VALUES, 20, "six parameters a1 to a6",
                         v2(c -> c.row("solution heat capacity", "alpha", "Laliberté 2009", 1, 0, 0, 0, 1)
                                 .row("solvent", "beta"))),
+                // Pitzer's osmotic coefficient (invented parameters: only the card's grammar is tested here)
+                bad("an osmotic coefficient without a solvent row", Problem.MISSING_ROW, 0, "\"solvent\"",
+                        v2(c -> c.row("osmotic coefficient", "alpha", "Pitzer", 1, 1))),
+                bad("an osmotic coefficient beside G^E rows", Problem.MODEL_VALUES, 20, "no G^E rows beside it",
+                        v2(c -> c.row("osmotic coefficient", "alpha", "Pitzer", 1, 1)
+                                .row("solvent", "beta").row("excess Gibbs energy A0", "alpha + beta", 0.5))),
+                bad("an osmotic coefficient on a card of three", Problem.MODEL_VALUES, 25, "mixed salts",
+                        ternary(c -> c.row("osmotic coefficient", "beta", "Pitzer", 1, 1)
+                                .row("solvent", "alpha"))),
+                bad("an osmotic coefficient with three numbers", Problem.MODEL_VALUES, 20, "found 3 number(s)",
+                        v2(c -> c.row("osmotic coefficient", "alpha", "Pitzer", 1, 1, 0.08)
+                                .row("solvent", "beta"))),
+                bad("a charge that is no whole number", Problem.MODEL_VALUES, 20, "found 1.5",
+                        v2(c -> c.row("osmotic coefficient", "alpha", "Pitzer", 1.5, 1).row("solvent", "beta"))),
+                bad("a 2:2 salt", Problem.MODEL_VALUES, 20, "β(2)",
+                        v2(c -> c.row("osmotic coefficient", "alpha", "Pitzer", 2, 2).row("solvent", "beta"))),
+                bad("a range upside down", Problem.MODEL_VALUES, 20, "found 25 and -60",
+                        v2(c -> c.row("osmotic coefficient", "alpha", "Pitzer", 1, 1, 25, -60)
+                                .row("solvent", "beta"))),
+                bad("an osmotic coefficient without its beta0 row", Problem.MISSING_PAIR_ROW, 0, "'pitzer beta0'",
+                        v2(c -> c.row("osmotic coefficient", "alpha", "Pitzer", 1, 1).row("solvent", "beta"))),
+                bad("Pitzer rows without an osmotic coefficient row", Problem.MISSING_PAIR_ROW, 0,
+                        "'pitzer beta1' rows for the salt", v2(c -> c.row("Pitzer beta1", "alpha", 0.27))),
+                bad("seven terms of beta1", Problem.MODEL_VALUES, 23, "one to six terms", v2(c -> c
+                        .row("osmotic coefficient", "alpha", "Pitzer", 1, 1).row("solvent", "beta")
+                        .row("Pitzer beta0", "alpha", 0.08).row("Pitzer beta1", "alpha", 1, 2, 3, 4, 5, 6, 7)
+                        .row("Pitzer Cphi", "alpha", 0.001))),
+                bad("a Pitzer row for the water", Problem.MODEL_VALUES, 25, "this row names another component",
+                        v2(c -> c.row("osmotic coefficient", "alpha", "Pitzer", 1, 1).row("solvent", "beta")
+                                .row("Pitzer beta0", "alpha", 0.08).row("Pitzer beta1", "alpha", 0.27)
+                                .row("Pitzer Cphi", "alpha", 0.001).row("Pitzer Cphi", "beta", 0.001))),
+                bad("an osmotic coefficient for the solvent", Problem.SOLVENT_WITH_SOLUTION_MODEL, 20,
+                        "beta is the card's solvent", v2(c -> c.row("osmotic coefficient", "beta", "Pitzer", 1, 1)
+                                .row("osmotic coefficient", "alpha", "Pitzer", 1, 1).row("solvent", "beta"))),
+                bad("an osmotic model of another name", Problem.BAD_KEYWORD, 20, "\"Debye\"",
+                        v2(c -> c.row("osmotic coefficient", "alpha", "Debye", 1, 1).row("solvent", "beta"))),
                 // mixture-density models (invented coefficients: only the card's grammar is tested here)
                 bad("a density formula and excess volume rows", Problem.VOLUME_STATED_TWICE, 0,
                         "by its mass fraction polynomial model and by 'excess volume' rows",
