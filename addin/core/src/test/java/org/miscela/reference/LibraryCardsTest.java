@@ -238,7 +238,7 @@ class LibraryCardsTest {
         List<Object[]> cells = new ArrayList<>(java.util.Arrays.asList(CardLibrary.find("NaCl").cells()));
         double[] a = {-0.0693559668993322, -0.0782134167486952, 3.84798479408635, -11.2762109247072,
             8.73187698542672, 1.81245930472755};
-        cells.add(new Object[] {"enthalpy unit", "kJ/mol"});
+        // the card already has its 'enthalpy unit' row (kJ/mol, for the melting of ice)
         cells.add(new Object[] {"solution heat capacity", "sodium chloride", "Laliberté 2009", a[0], a[1], a[2], a[3],
             a[4], a[5]});
         cells.add(new Object[] {"heat capacity", "water", 0.07533898202, -1.141090799E-05, 4.367075878E-07,

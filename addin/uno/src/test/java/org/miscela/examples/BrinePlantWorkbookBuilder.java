@@ -51,7 +51,9 @@ import org.miscela.examples.ExampleWorkbooks.Formats;
  *
  * <p>Sheets: Make-up (the batch from MIX.RECIPE, its volume and density from MIX.BATCH, the check by a density
  * reading with MIX.DENSITY and MIX.FROMDENSITY, two refusals in the card's own words from MIX.EXPLAIN, a table of
- * density against strength at three temperatures as MIX.DENSITY array formulas, and its chart) and Card. The
+ * density against strength at three temperatures as MIX.DENSITY array formulas, and its chart, the brine's freezing
+ * point from the card's osmotic coefficient beside the ideal solution of the ions, the margin to an invented road
+ * temperature and the refusal past the eutectic) and Card. The
  * constants that locate cells are shared with ExamplesIT (0-based rows; single values in column B).
  *
  * <p>Run: {@code mvn -q -B test-compile exec:java -pl addin/uno -Dexec.classpathScope=test
@@ -97,6 +99,15 @@ public final class BrinePlantWorkbookBuilder {
     static final int TOO_STRONG_ROW = 30;
     static final double TOO_STRONG = 28;
 
+    // --- Make-up: when the brine freezes (column B)
+    /** Starts below row 40, which the chart's note on the right makes tall. */
+    static final int FREEZING_ROW = 42;
+    static final int FREEZING_IDEAL_ROW = 43;
+    static final int ROAD_T_ROW = 44;
+    static final int MARGIN_ROW = 45;
+    static final int PAST_EUTECTIC_ROW = 47;
+    static final double PAST_EUTECTIC = 24;
+
     // --- Make-up: the table, columns E (strength) and F..H (density at each temperature)
     static final int TABLE_HEAD_ROW = 6;
     static final int TABLE_T_ROW = 7;
@@ -113,6 +124,7 @@ public final class BrinePlantWorkbookBuilder {
     private static final double TEMPERATURE = 8;
     private static final double SAMPLE_T = 20;
     private static final double READING = 1168.5;
+    private static final double ROAD_T = -15;
 
     private static Formats formats;
 
@@ -217,12 +229,39 @@ public final class BrinePlantWorkbookBuilder {
                 + "sample's temperature is the reading; MIX.ADJUST the least salt that brings the batch to the "
                 + "target. Before adding salt, make sure the salt charged has all dissolved. Salt and water go in by "
                 + "mass: the card has no volume of pure salt, and refuses one.", LEFT_MM);
-        prop(s, "C" + (STRENGTH_ROW + 1) + ":C" + (ADD_SALT_ROW + 1), "ParaLeftMargin", 150);
+
+        // 5. when the brine freezes
+        section(s, FREEZING_ROW - 1, "5. When the brine freezes (MIX.FREEZINGPOINT)");
+        String freezing = "=MIX.FREEZINGPOINT(" + NAME + ";" + b(STRENGTH_ROW) + ";;";
+        result(formats, s, FREEZING_ROW, "Ice starts to form in the target brine at",
+                freezing + ";;;\"%w/w\")", "°C", "0.0");
+        result(formats, s, FREEZING_IDEAL_ROW, "… an ideal solution of the ions would say",
+                freezing + "\"ideal\";;;\"%w/w\")", "°C", "0.0");
+        input(formats, s, ROAD_T_ROW, "Coldest road surface the depot plans for (invented)", ROAD_T, "°C", "0.0");
+        result(formats, s, MARGIN_ROW, "… margin: road temperature minus freezing point", "="
+                + b(ROAD_T_ROW) + "-" + b(FREEZING_ROW), "K", "+0.0;-0.0;0.0");
+        refusal(s, PAST_EUTECTIC_ROW, "A brine of " + (int) PAST_EUTECTIC + " % w/w: =MIX.FREEZINGPOINT(" + NAME
+                + "; " + (int) PAST_EUTECTIC + "; …; \"%w/w\") says", "=MIX.EXPLAIN(\"MIX.FREEZINGPOINT\";" + NAME
+                + ";" + PAST_EUTECTIC + ";;;;;\"%w/w\")", 4);
+        int freezingNote = PAST_EUTECTIC_ROW + 3;
+        fitted(s, "A" + (freezingNote + 1) + ":C" + (freezingNote + 1), freezingNote, "FREEZING POINTS ARE "
+                + "ESTIMATES. The card's osmotic coefficient (Pitzer's model with published low-temperature "
+                + "parameters) puts this freezing point within about 0.3 K of the CRC Handbook's table up to the "
+                + "eutectic (23.3 % w/w, about -21 °C). Brine stronger than that does not protect to a lower "
+                + "temperature: salt crystallises out of it first, so the card refuses it. Once spread, brine is "
+                + "diluted by melt water and its freezing point rises. Road-treatment guidance, the salt supplier's "
+                + "data and local practice prevail over this estimate.", LEFT_MM);
+        prop(s, "C" + (STRENGTH_ROW + 1) + ":C" + (MARGIN_ROW + 1), "ParaLeftMargin", 150);
         widths(s, MAKE_UP_MM);
     }
 
     /** A label and, in the merged row below it (A..C), the words of an MIX.EXPLAIN formula. */
     private static void refusal(XSpreadsheet s, int row, String label, String formula) throws Exception {
+        refusal(s, row, label, formula, 3);
+    }
+
+    /** As above, the words' row {@code lines} lines high. */
+    private static void refusal(XSpreadsheet s, int row, String label, String formula, int lines) throws Exception {
         text(s, 0, row, label);
         String range = "A" + (row + 2) + ":C" + (row + 2);
         s.getCellByPosition(0, row + 1).setFormula(formula);
@@ -230,7 +269,7 @@ public final class BrinePlantWorkbookBuilder {
         prop(s, range, "IsTextWrapped", Boolean.TRUE);
         prop(s, range, "VertJustify", com.sun.star.table.CellVertJustify2.TOP);
         band(s, range, CAUTION_COLOUR);
-        ExampleWorkbooks.rowHeight(s, row + 1, 3 * 460 + 120);
+        ExampleWorkbooks.rowHeight(s, row + 1, lines * 460 + 120);
     }
 
     private static void writeTable(XSpreadsheet s) throws Exception {

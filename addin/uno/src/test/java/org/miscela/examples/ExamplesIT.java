@@ -66,6 +66,7 @@ import org.miscela.core.functions.PhaseFunctions;
 import org.miscela.core.functions.PropertyKind;
 import org.miscela.core.library.CardLibrary;
 import org.miscela.core.problem.MiscelaException;
+import org.miscela.core.problem.Problem;
 import org.miscela.core.blend.BlendFunctions;
 import org.miscela.core.blend.CompositionBasis;
 import org.miscela.it.Office;
@@ -745,6 +746,24 @@ class ExamplesIT {
                     () -> CardFunctions.density(card, tooStrong, t, e));
             assertTrue(strong.contains(outside.getMessage()) && strong.contains("outside the card's validity range"),
                     strong);
+
+            // the freezing point: the core's, with the card's osmotic coefficient and with the ideal solution of ions
+            double freezing = value(m, 1, BrinePlantWorkbookBuilder.FREEZING_ROW);
+            assertClose(PhaseFunctions.freezingPoint(card, -1, x, PhaseFunctions.Activity.CARD, e), freezing,
+                    "MIX.FREEZINGPOINT of the target");
+            assertClose(PhaseFunctions.freezingPoint(card, -1, x, PhaseFunctions.Activity.IDEAL, e),
+                    value(m, 1, BrinePlantWorkbookBuilder.FREEZING_IDEAL_ROW), "the ideal solution of the ions");
+            // CRC Handbook, Concentrative Properties of Aqueous Solutions: 23 % w/w NaCl freezes at -20.67 °C
+            assertEquals(-20.67, freezing, 0.3, "the batch's freezing point against the CRC table");
+            assertEquals(value(m, 1, BrinePlantWorkbookBuilder.ROAD_T_ROW) - freezing,
+                    value(m, 1, BrinePlantWorkbookBuilder.MARGIN_ROW), 1e-12, "margin");
+            String eutectic = text(m.getCellByPosition(0, BrinePlantWorkbookBuilder.PAST_EUTECTIC_ROW + 1));
+            double[] past = BlendFunctions.convert(card, BlendFunctions.binary(card,
+                    BrinePlantWorkbookBuilder.PAST_EUTECTIC, pct), pct, CompositionBasis.moleFraction(), e);
+            MiscelaException iceLimit = assertThrows(MiscelaException.class, () -> PhaseFunctions.freezingPoint(card,
+                    -1, past, PhaseFunctions.Activity.CARD, e));
+            assertEquals(Problem.PAST_ICE_LIMIT, iceLimit.problem());
+            assertTrue(eutectic.contains(iceLimit.getMessage()), eutectic);
 
             Object charts = UnoRuntime.queryInterface(XTableChartsSupplier.class, m).getCharts();
             assertTrue(UnoRuntime.queryInterface(XNameAccess.class, charts).hasByName(

@@ -215,7 +215,8 @@ final class CardBuilder {
     private PitzerOsmotic osmotic(List<String> names, List<Double> masses, ExcessModel gibbs) {
         Map<String, CardRow> rowsBySalt = rows.keyed(CardLabels.OSMOTIC);
         if (rowsBySalt.isEmpty()) {
-            for (String label : CardLabels.PITZER) {
+            for (String label : new String[] {CardLabels.PITZER[0], CardLabels.PITZER[1], CardLabels.PITZER[2],
+                CardLabels.ICE_LIMIT}) {
                 if (!rows.keyed(label).isEmpty()) {
                     throw Problem.MISSING_PAIR_ROW.raise(label, "the salt", CardLabels.OSMOTIC);
                 }
@@ -279,8 +280,19 @@ final class CardBuilder {
                         + "function of T", "found " + terms[i].length);
             }
         }
+        CardRow limit = rows.keyed(CardLabels.ICE_LIMIT).get(normalise(names.get(solute)));
+        if (limit == null) {
+            throw Problem.MISSING_PAIR_ROW.raise(CardLabels.OSMOTIC, names.get(solute), CardLabels.ICE_LIMIT);
+        }
+        limit.atMost(2);
+        double iceLimit = limit.number(1);
+        if (!(iceLimit > 0.0 && iceLimit < 1.0)) {
+            throw Problem.MODEL_VALUES.raise(limit.number, limit.label, PitzerOsmotic.NAME, "the salt's mole fraction "
+                    + "past which ice is no longer known to form first, between 0 and 1", "found "
+                    + Numbers.show(iceLimit));
+        }
         return new PitzerOsmotic(solvent, solute, masses.get(solvent), (int) v[0], (int) v[1], terms, lowest,
-                highest);
+                highest, iceLimit);
     }
 
     /**

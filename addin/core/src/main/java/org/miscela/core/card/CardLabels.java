@@ -57,6 +57,7 @@ final class CardLabels {
     static final String FUSION_ENTHALPY = "enthalpy of fusion";
     static final String FUSION_HEAT_CAPACITY = "heat capacity of fusion";
     static final String OSMOTIC = "osmotic coefficient";
+    static final String ICE_LIMIT = "ice limit";
     /** The rows of Pitzer's β0, β1 and C^φ, in that order. */
     static final String[] PITZER = {"pitzer beta0", "pitzer beta1", "pitzer cphi"};
 
@@ -77,14 +78,14 @@ final class CardLabels {
         VALID_MOLE_FRACTION, HEAT_CAPACITY, HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION,
         SOLUTION_HEAT_CAPACITY, BOILING, APPARENT_DENSITY, VAPOUR_PRESSURE, WILSON, WILSON_VOLUME, NRTL, FLASH_POINT,
         LOWER_FLAMMABLE_LIMIT, MELTING_POINT, FUSION_ENTHALPY, FUSION_HEAT_CAPACITY, OSMOTIC, PITZER[0], PITZER[1],
-        PITZER[2]};
+        PITZER[2], ICE_LIMIT};
     /** Labels of version 2 beyond the excess-enthalpy and ternary rows. */
     private static final String[] VERSION_2 = {MODEL, MISSING_PAIRS, ENTHALPY_UNIT, HEAT_CAPACITY,
         EXCESS_VOLUME + " covariance", HEAT_CAPACITY_REFERENCE, VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION,
         COMPONENT_ORDER, BASIS_REFERENCE, SOLUTION_HEAT_CAPACITY, SOLVENT, BOILING, MIXTURE_DENSITY_REFERENCE,
         APPARENT_DENSITY, CARD_SIZE, PRESSURE_UNIT, VAPOUR_PRESSURE, WILSON, WILSON_VOLUME, NRTL, FLASH_POINT,
         LOWER_FLAMMABLE_LIMIT, MELTING_POINT, FUSION_ENTHALPY, FUSION_HEAT_CAPACITY, OSMOTIC, PITZER[0], PITZER[1],
-        PITZER[2]};
+        PITZER[2], ICE_LIMIT};
     /** Keyed rows whose subject is a pair "a + b" rather than one component. */
     private static final String[] PAIR_KEYED = {VALID_PAIR_TEMPERATURE, VALID_PAIR_FRACTION, WILSON, NRTL};
 

@@ -317,7 +317,8 @@ public final class FunctionCatalog {
                                     + "and the flash point's terms; \"freezing\": the freezing point's."),
                     EXTRAPOLATE, COMPOSITION_BASIS,
                     BASIS_T)
-                    .shows("card").refuses(union(BLEND_PROBLEMS, ONE_COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, list(Problem.NO_ENTHALPY, Problem.UNKNOWN_PROPERTY, Problem.ARG_NOT_SINGLE), VAPOUR_PROBLEMS)),
+                    .shows("card").refuses(union(BLEND_PROBLEMS, ONE_COMPOSITION_PROBLEMS, POINT_PROBLEMS, VOLUME_PROBLEMS, list(Problem.NO_ENTHALPY, Problem.UNKNOWN_PROPERTY, Problem.ARG_NOT_SINGLE,
+                            Problem.OSMOTIC_SERIES_RANGE), VAPOUR_PROBLEMS)),
             new FunctionInfo("fitExcessVolume", "MIX.FITEXCESS",
                     "Redlich–Kister coefficients fitted to excess volumes (or their statistics)",
                     "Redlich–Kister coefficients fitted by least squares to excess volumes, or the fit's standard "
@@ -856,7 +857,9 @@ public final class FunctionCatalog {
                     EXTRAPOLATE, COMPOSITION_BASIS, BASIS_T)
                     .shows("-9.42").refuses(union(BLEND_PROBLEMS, COMPOSITION_PROBLEMS, POINT_PROBLEMS,
                             COMPONENT_PROBLEMS, list(Problem.NO_FUSION_DATA, Problem.FREEZING_NEEDS_GIBBS,
-                            Problem.IDEAL_NEEDS_IONS, Problem.SOLUTE_ACTIVITY, Problem.FREEZING_COMPONENT_ABSENT, Problem.NO_FREEZING_POINT, Problem.UNKNOWN_RESULT,
+                            Problem.IDEAL_NEEDS_IONS, Problem.SOLUTE_ACTIVITY, Problem.OSMOTIC_SERIES_RANGE,
+                            Problem.PAST_ICE_LIMIT,
+                            Problem.FREEZING_COMPONENT_ABSENT, Problem.NO_FREEZING_POINT, Problem.UNKNOWN_RESULT,
                             Problem.ARG_NOT_TEXT, Problem.UNKNOWN_ACTIVITY, Problem.FREEZING_TOO_FAR)))));
 
     private FunctionCatalog() {

@@ -458,6 +458,8 @@ public final class CardFunctions {
             double kelvin = PhaseFunctions.checkFreezingPoint(card, z, t, e);
             if (card.osmotic() == null) {
                 card.mixture().gibbs();
+            } else {
+                PhaseFunctions.requireOsmoticSeries(card, kelvin);
             }
             rows = Trace.freezing(card, z, t, kelvin, e, PhaseFunctions.freezingViolations(card, z, kelvin, t));
         } else if (property == PropertyKind.VAPOUR || property == PropertyKind.FLASH) {

@@ -444,6 +444,11 @@ public final class PhaseFunctions {
      */
     public static double freezingPoint(Card card, int component, double[] x, Activity a, Extrapolation e) {
         double[] z = CardFunctions.moleFractions(card, x);
+        PitzerOsmotic o = card.osmotic();
+        if (o != null && z[o.solute()] > o.iceLimit()) {
+            throw Problem.PAST_ICE_LIMIT.raise(card.components().get(o.solute()).name(), Numbers.show(z[o.solute()]),
+                    Numbers.show(o.iceLimit()));
+        }
         int k = freezingComponent(card, component, z, a);
         double kelvin = freezingKelvin(card, k, z, a);
         Fusion f = card.fusion(k);
@@ -559,7 +564,7 @@ public final class PhaseFunctions {
     private static double freezingKelvin(Card card, int k, double[] z, Activity a) {
         double kelvin = freezingRoot(card, k, z, a);
         if (Double.isNaN(kelvin)) {
-            double[] range = freezingRange(card.fusion(k));
+            double[] range = freezingRange(card, k);
             Units.Temperature tu = card.units().temperature();
             throw Problem.NO_FREEZING_POINT.raise(Numbers.show(tu.fromKelvin(range[0])),
                     Numbers.show(tu.fromKelvin(range[1])), tu.symbol(), card.components().get(k).name(),
@@ -573,6 +578,16 @@ public final class PhaseFunctions {
      * ΔH_fus + ΔCp·(T − T_m), stays above a tenth of its value at T_m (the right-hand side rises with T there, so
      * the root is unique).
      */
+    private static double[] freezingRange(Card card, int k) {
+        double[] range = freezingRange(card.fusion(k));
+        if (card.osmotic() != null) {
+            // the osmotic coefficient's Debye–Hückel slope is known only within its series' range
+            range[0] = Math.max(range[0], PitzerOsmotic.LOWEST_KELVIN);
+            range[1] = Math.min(range[1], PitzerOsmotic.HIGHEST_KELVIN);
+        }
+        return range;
+    }
+
     private static double[] freezingRange(Fusion f) {
         double tm = f.meltingKelvin();
         double lo = tm / 4;
@@ -595,7 +610,7 @@ public final class PhaseFunctions {
         if (atMelting == 0.0) {
             return tm;
         }
-        double[] range = freezingRange(f);
+        double[] range = freezingRange(card, k);
         double lo = atMelting < 0.0 ? range[0] : tm;
         double hi = atMelting < 0.0 ? tm : range[1];
         double fLo = residual.applyAsDouble(lo);
@@ -621,7 +636,11 @@ public final class PhaseFunctions {
                 throw Problem.SOLUTE_ACTIVITY.raise(card.components().get(k).name(),
                         card.components().get(osmotic.solvent()).name());
             }
-            return a == Activity.CARD ? osmotic.lnWaterActivity(z, kelvin) : osmotic.lnIdealWaterActivity(z);
+            if (a == Activity.IDEAL) {
+                return osmotic.lnIdealWaterActivity(z);
+            }
+            requireOsmoticSeries(card, kelvin);
+            return osmotic.lnWaterActivity(z, kelvin);
         }
         double lnActivity = Math.log(z[k]);
         if (a == Activity.CARD) {
@@ -630,6 +649,14 @@ public final class PhaseFunctions {
             lnActivity += lnGamma[k];
         }
         return lnActivity;
+    }
+
+    /** Refuses a temperature (K) outside the range of the osmotic coefficient's Debye–Hückel series. */
+    static void requireOsmoticSeries(Card card, double kelvin) {
+        if (!(kelvin >= PitzerOsmotic.LOWEST_KELVIN && kelvin <= PitzerOsmotic.HIGHEST_KELVIN)) {
+            Units.Temperature tu = card.units().temperature();
+            throw Problem.OSMOTIC_SERIES_RANGE.raise(Numbers.show(tu.fromKelvin(kelvin)), tu.symbol());
+        }
     }
 
     /**

@@ -19,10 +19,9 @@ package org.miscela.core.model;
  * zero, so a0 alone is a constant and a0 with a3 the linear form of the first temperature derivatives tabulated by
  * Silvester and Pitzer (J. Phys. Chem. 81 (1977) 1822).
  *
- * <p>The Debye–Hückel slope A_φ = ⅓·(2π·N_A·ρ_w)^½·(e²/(4π·ε0·ε_r·k·T))^{3/2} is computed from the static relative
- * permittivity of water by C. G. Malmberg and A. A. Maryott (J. Res. Natl. Bur. Stand. 56 (1956) 1–8),
- * ε_r = 87.740 − 0.40008·t + 9.398·10⁻⁴·t² − 1.410·10⁻⁶·t³ (t in °C, 0–100 °C), and the density of water by Kell 1975
- * ({@link Kell1975WaterDensity}); both are carried a little below 0 °C for the freezing point of a brine. Immutable.
+ * <p>The Debye–Hückel slope A_φ is the Chebyshev series of S. L. Clegg, J. A. Rard and K. S. Pitzer (J. Chem. Soc.,
+ * Faraday Trans. 90 (1994) 1875–1894, appendix II), fitted from 234.15 to 373.15 K, supercooled water included (as
+ * transcribed in the pytzer package, debyehueckel.py); outside that range the water's activity is refused. Immutable.
  */
 public final class PitzerOsmotic {
     /** The model's name as a card row writes it. */
@@ -33,10 +32,15 @@ public final class PitzerOsmotic {
     public static final int TERMS = 6;
     private static final double B = 1.2;
     private static final double ALPHA = 2.0;
-    private static final double AVOGADRO = 6.02214076e23;
-    private static final double ELEMENTARY_CHARGE = 1.602176634e-19;
-    private static final double VACUUM_PERMITTIVITY = 8.8541878128e-12;
-    private static final double BOLTZMANN = 1.380649e-23;
+    /** The range of the A_φ series, K. */
+    public static final double LOWEST_KELVIN = 234.15;
+    public static final double HIGHEST_KELVIN = 373.15;
+    /** The coefficients a_0 … a_18 of Clegg, Rard and Pitzer's series (a_0 as printed, halved in use). */
+    private static final double[] CHEBYSHEV = {0.797256081240, 0.573389669896e-1, 0.977632177788e-3,
+        0.489973732417e-2, -0.313151784342e-2, 0.179145971002e-2, -0.920584241844e-3, 0.443862726879e-3,
+        -0.203661129991e-3, 0.900924147948e-4, -0.388189392385e-4, 0.164245088592e-4, -0.686031972567e-5,
+        0.283455806377e-5, -0.115641433004e-5, 0.461489672579e-6, -0.177069754948e-6, 0.612464488231e-7,
+        -0.175689013085e-7};
 
     private final int solvent;
     private final int solute;
@@ -45,6 +49,7 @@ public final class PitzerOsmotic {
     private final int anionCharge;
     private final int cations;
     private final int anions;
+    private final double iceLimit;
     private final double lowestKelvin;
     private final double highestKelvin;
     /** The terms a0..a5 of β0, β1 and C^φ, in that order. */
@@ -59,9 +64,12 @@ public final class PitzerOsmotic {
      * @param terms the terms a0, a1, … (one to six) of β0, β1 and C^φ, in that order
      * @param lowestKelvin the lowest temperature the parameters hold for, K, or NaN (the card's range then)
      * @param highestKelvin the highest, K, or NaN
+     * @param iceLimit the salt's mole fraction past which ice is no longer known to crystallise first (the eutectic,
+     *     or the strongest brine of the data)
      */
     public PitzerOsmotic(int solvent, int solute, double waterGramPerMol, int cationCharge, int anionCharge,
-            double[][] terms, double lowestKelvin, double highestKelvin) {
+            double[][] terms, double lowestKelvin, double highestKelvin, double iceLimit) {
+        this.iceLimit = iceLimit;
         this.lowestKelvin = lowestKelvin;
         this.highestKelvin = highestKelvin;
         if (cationCharge < 1 || anionCharge < 1 || cationCharge > 3 || anionCharge > 3
@@ -113,6 +121,11 @@ public final class PitzerOsmotic {
         return highestKelvin;
     }
 
+    /** The salt's mole fraction past which ice is no longer known to form first. */
+    public double iceLimit() {
+        return iceLimit;
+    }
+
     public int solvent() {
         return solvent;
     }
@@ -126,18 +139,25 @@ public final class PitzerOsmotic {
         return cations + anions;
     }
 
-    /** The relative permittivity of liquid water at T (K), Malmberg and Maryott 1956. */
-    public static double waterPermittivity(double kelvin) {
-        double t = kelvin - 273.15;
-        return ((-1.410e-6 * t + 9.398e-4) * t - 0.40008) * t + 87.740;
-    }
-
-    /** The Debye–Hückel slope for the osmotic coefficient A_φ at T (K), in kg^½/mol^½. */
+    /**
+     * The Debye–Hückel slope for the osmotic coefficient A_φ at T (K), in kg^½/mol^½: Σ a_i·T_i(X) over the Chebyshev
+     * polynomials T_i, X = (2T − 607.3)/139, the first coefficient halved as usual; NaN outside 234.15 to 373.15 K.
+     */
     public static double debyeHuckel(double kelvin) {
-        double bjerrum = ELEMENTARY_CHARGE * ELEMENTARY_CHARGE
-                / (4.0 * Math.PI * VACUUM_PERMITTIVITY * waterPermittivity(kelvin) * BOLTZMANN * kelvin);
-        double rho = Kell1975WaterDensity.INSTANCE.at(kelvin);
-        return Math.sqrt(2.0 * Math.PI * AVOGADRO * rho) * Math.pow(bjerrum, 1.5) / 3.0;
+        if (!(kelvin >= LOWEST_KELVIN && kelvin <= HIGHEST_KELVIN)) {
+            return Double.NaN;
+        }
+        double x = (2.0 * kelvin - 607.3) / 139.0;
+        double previous = 1.0;
+        double current = x;
+        double sum = CHEBYSHEV[0] / 2.0 + CHEBYSHEV[1] * x;
+        for (int i = 2; i < CHEBYSHEV.length; i++) {
+            double next = 2.0 * x * current - previous;
+            sum += CHEBYSHEV[i] * next;
+            previous = current;
+            current = next;
+        }
+        return sum;
     }
 
     /** The osmotic coefficient φ at molality m (mol/kg) and T (K). */

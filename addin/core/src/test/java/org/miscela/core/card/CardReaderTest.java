@@ -335,6 +335,14 @@ class CardReaderTest {
                                 .row("solvent", "beta"))),
                 bad("an osmotic coefficient without its beta0 row", Problem.MISSING_PAIR_ROW, 0, "'pitzer beta0'",
                         v2(c -> c.row("osmotic coefficient", "alpha", "Pitzer", 1, 1).row("solvent", "beta"))),
+                bad("an osmotic coefficient without its ice limit", Problem.MISSING_PAIR_ROW, 0, "'ice limit'",
+                        v2(c -> c.row("osmotic coefficient", "alpha", "Pitzer", 1, 1).row("solvent", "beta")
+                                .row("Pitzer beta0", "alpha", 0.08).row("Pitzer beta1", "alpha", 0.27)
+                                .row("Pitzer Cphi", "alpha", 0.001))),
+                bad("an ice limit of 1", Problem.MODEL_VALUES, 25, "found 1", v2(c -> c
+                        .row("osmotic coefficient", "alpha", "Pitzer", 1, 1).row("solvent", "beta")
+                        .row("Pitzer beta0", "alpha", 0.08).row("Pitzer beta1", "alpha", 0.27)
+                        .row("Pitzer Cphi", "alpha", 0.001).row("ice limit", "alpha", 1))),
                 bad("Pitzer rows without an osmotic coefficient row", Problem.MISSING_PAIR_ROW, 0,
                         "'pitzer beta1' rows for the salt", v2(c -> c.row("Pitzer beta1", "alpha", 0.27))),
                 bad("seven terms of beta1", Problem.MODEL_VALUES, 23, "one to six terms", v2(c -> c
