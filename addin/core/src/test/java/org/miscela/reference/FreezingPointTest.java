@@ -11,6 +11,7 @@ import org.miscela.core.card.Card;
 import org.miscela.core.card.CardReader;
 import org.miscela.core.card.Extrapolation;
 import org.miscela.core.card.TestCards;
+import org.miscela.core.library.CardLibrary;
 import org.miscela.core.functions.PhaseFunctions;
 import org.miscela.core.functions.PhaseFunctions.Activity;
 import org.miscela.core.problem.MiscelaException;
@@ -169,6 +170,75 @@ class FreezingPointTest {
                     ideal - crc[i][1]));
         }
         Figures.note(FreezingPointTest.class, "methanol + water, ideal solution (computed − CRC):%s", table);
+    }
+
+    /**
+     * A library card (its densities and molar masses; no G^E) with the melting rows of ice added, for the ideal
+     * solution: ΔH_fus 6010 J/mol (CRC, as above), ΔCp 38.25 J/(mol·K) (partly from memory, as above).
+     */
+    private static Card libraryWithIce(String name) {
+        List<Object[]> rows = new ArrayList<>(java.util.Arrays.asList(CardLibrary.find(name).cells()));
+        rows.remove(1); // the 'card size' row: the card grows
+        rows.add(new Object[] {"enthalpy unit", "J/mol"});
+        rows.add(new Object[] {"melting point", "water", 0.0});
+        rows.add(new Object[] {"enthalpy of fusion", "water", 6010.0});
+        rows.add(new Object[] {"heat capacity of fusion", "water", 38.25});
+        return CardReader.read(rows.toArray(new Object[0][]));
+    }
+
+    /**
+     * Glycerol + water and propylene glycol + water, ideal solution only (no published G^E/RT reaching the ice line
+     * was found), against Lange's Handbook of Chemistry, 15th ed. (J. A. Dean, ed., 1999; title and editor from
+     * memory), Table 5.13, "Compositions of aqueous antifreeze solutions", as OCR text on yumpu.com (document
+     * 21974083, page 458; minus signs restored from the printed °F column). Glycerol by mass, 10 to 60 % (the ice
+     * branch; from 80 % glycerol crystallises). Propylene glycol by volume, converted to mass with the table's own
+     * specific gravity of each blend (15.6/15.6 °C) and 1.038 for the pure glycol (from memory; ±0.01 moves w by under
+     * 1 % of itself and the ideal point by under 0.3 K at 50 %), taking % by volume as glycol volume per volume of
+     * blend (the table does not say). Measured: from 30 % the ideal solution is too warm, increasingly, by 7.3 K for
+     * glycerol at 60 % w/w and 11.6 K for propylene glycol at 50 % by volume. At 10 % the table's depressions (glycerol
+     * 1.6 K, propylene glycol 2.2 K) lie 0.6 K below the ideal solution's, which is the dilute limit both liquids
+     * should reach (γ_w → 1): the table is coarse at its dilute end, and those rows are shown, not asserted.
+     */
+    @Test
+    void glycerolAndPropyleneGlycolIdealSolutionAgainstLange() {
+        Card glycerol = libraryWithIce("glycerol");
+        double[][] lange = {{10, 1.6}, {20, 4.8}, {30, 9.5}, {40, 15.5}, {50, 22.0}, {60, 33.6}};
+        StringBuilder table = new StringBuilder();
+        double[] short60 = {0};
+        double previous = 0;
+        for (double[] r : lange) {
+            double ideal = -PhaseFunctions.freezingPoint(glycerol, 1, fromMassPercent(glycerol, r[0]),
+                    Activity.IDEAL, Extrapolation.ALLOW);
+            table.append(String.format("%n  glycerol %2.0f %% w/w: Lange %.1f K; ideal %.2f (%+.2f)", r[0], r[1],
+                    ideal, ideal - r[1]));
+            if (r[0] >= 30) { // too warm, by more at each stronger row
+                assertTrue(r[1] - ideal > previous, "glycerol " + r[0]);
+                previous = r[1] - ideal;
+            }
+            short60[0] = r[1] - ideal;
+        }
+        assertTrue(short60[0] > 7 && short60[0] < 11, "glycerol 60 %: " + short60[0]);
+        Card pg = libraryWithIce("propylene glycol");
+        // % by volume, the blend's specific gravity at 15.6 °C, the depression
+        double[][] byVolume = {{10, 1.006, 2.2}, {20, 1.017, 6.7}, {30, 1.024, 12.8}, {40, 1.032, 20.6},
+            {50, 1.040, 33.3}};
+        double shortPg = 0;
+        previous = 0;
+        for (double[] r : byVolume) {
+            double w = r[0] * 1.038 / r[1];
+            double ideal = -PhaseFunctions.freezingPoint(pg, 1, fromMassPercent(pg, w), Activity.IDEAL,
+                    Extrapolation.ALLOW);
+            table.append(String.format("%n  propylene glycol %2.0f %% vol (%.1f %% w/w): Lange %.1f K; ideal %.2f "
+                    + "(%+.2f)", r[0], w, r[2], ideal, ideal - r[2]));
+            if (r[0] >= 30) {
+                assertTrue(r[2] - ideal > previous, "propylene glycol " + r[0]);
+                previous = r[2] - ideal;
+            }
+            shortPg = r[2] - ideal;
+        }
+        assertTrue(shortPg > 9 && shortPg < 15, "propylene glycol 50 % vol: " + shortPg);
+        Figures.note(FreezingPointTest.class, "glycerol and propylene glycol + water, ideal solution (computed − "
+                + "Lange):%s", table);
     }
 
     /**
