@@ -48,6 +48,7 @@ class TraceDocTest {
         }
         names.add("ethanol");
         names.add("water");
+        names.add("sodium chloride");
         // the vapour trace by each G^E model: Redlich–Kister, Wilson, NRTL (the Redlich–Kister card's rows replaced)
         double[] binary = {0.3, 0.7};
         traces.add(CardFunctions.trace(org.miscela.core.card.TestCards.card("ethanol-water-vle.tsv"), binary, 50,
@@ -58,6 +59,9 @@ class TraceDocTest {
                 PropertyKind.FLASH, Extrapolation.AS_CARD));
         traces.add(CardFunctions.trace(org.miscela.core.card.TestCards.card("ethanol-water-vle-ice.tsv"),
                 new double[] {0.05, 0.95}, -5, PropertyKind.FREEZING, Extrapolation.ALLOW));
+        // a brine: the water's activity from the osmotic coefficient (the library's NaCl card)
+        traces.add(CardFunctions.trace(org.miscela.core.card.TestCards.card("library:NaCl"),
+                new double[] {0.05, 0.95}, -5, PropertyKind.FREEZING, Extrapolation.AS_CARD));
         List<Object[]> nrtl = new ArrayList<>();
         for (Object[] row : org.miscela.core.card.TestCards.cells("ethanol-water-vle.tsv")) {
             if (!String.valueOf(row[0]).startsWith("excess Gibbs energy")
