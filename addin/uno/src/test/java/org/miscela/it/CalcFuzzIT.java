@@ -77,7 +77,7 @@ class CalcFuzzIT {
             String[][] named = {{"card", "ethanol-water-oiml.tsv"}, {"tern", "ternary-invented.tsv"},
                 {"acid", "sulfuric-acid-water-nbs.tsv"}, {"cov", "ethanol-water-covariance.tsv"},
                 {"vle", "ethanol-water-vle.tsv"}, {"gibhelm", "invented-gibbs-helmholtz.tsv"},
-                {"broken", "broken-unit.tsv"}, {"ice", "ethanol-water-vle-ice.tsv"}};
+                {"broken", "broken-unit.tsv"}, {"ice", "ethanol-water-vle-ice.tsv"}, {"brine", "library:NaCl"}};
             int row = 0;
             for (String[] c : named) {
                 Object[][] cells = TestCards.cells(c[1]);
@@ -204,7 +204,7 @@ class CalcFuzzIT {
     private static String card(FunctionInfo f, Random r) {
         int pick = r.nextInt(10);
         if (pick < 5 && f.errors().contains(org.miscela.core.problem.Problem.NO_FUSION_DATA)) {
-            return "ice"; // the vle card with the melting rows of ice
+            return pick < 3 ? "ice" : "brine"; // the vle card with the melting rows of ice; the library's NaCl card
         }
         if (pick < 5 && f.errors().contains(org.miscela.core.problem.Problem.NO_GIBBS)
                 && f.errors().contains(org.miscela.core.problem.Problem.NO_ENTHALPY)) {
