@@ -7,7 +7,8 @@ import org.miscela.core.problem.MiscelaException;
 /**
  * The boiling temperature the temperature-rise functions hold a batch to: the card's stated boiling points where it
  * has them (data at the batch's pressure); else, on a card with G^E/RT and every present liquid's vapour pressure, the
- * blend's bubble point at 1 atm (101.325 kPa: an open vessel), by modified Raoult's law; else unknown (NaN).
+ * blend's bubble point at 1 atm (101.325 kPa: an open vessel), by modified Raoult's law, extrapolated beyond the
+ * card's range where the blend boils above it; else unknown (NaN).
  */
 public final class BoilingPoints {
     /** The pressure of an open vessel, Pa (1 atm, exact). */
@@ -31,14 +32,42 @@ public final class BoilingPoints {
         } catch (MiscelaException outside) {
             // no bubble point inside the card's range: if the blend's vapour already exceeds 1 atm at the range's
             // lowest temperature it boils below the range, so that temperature is the limit (a batch inside the
-            // range is past it); otherwise it boils above the range, unknown as outside stated points
+            // range is past it); otherwise it boils above the range: the bubble point found by extrapolating the
+            // card's G^E and vapour pressures (as far as MIX.BUBBLEPOINT extrapolates) is a better limit for an
+            // extrapolated rise than none; unknown when even that finds none
             double lowest = card.validity().lowestKelvin();
             try {
-                return card.mixture().bubblePressure(x, lowest, null) >= OPEN_VESSEL_PASCAL ? lowest : Double.NaN;
+                if (card.mixture().bubblePressure(x, lowest, null) >= OPEN_VESSEL_PASCAL) {
+                    return lowest;
+                }
+                return aboveRange(card, x);
             } catch (MiscelaException unknown) {
                 return Double.NaN;
             }
         }
+    }
+
+    /**
+     * The bubble point at 1 atm above the card's highest temperature, within {@link PhaseFunctions#EXTRAPOLATION_KELVIN}
+     * of it and inside the ranges the vapour-pressure constants state (Brent's method to 10⁻⁶ K); NaN when none lies
+     * there.
+     */
+    private static double aboveRange(Card card, double[] x) {
+        double highest = card.validity().highestKelvin();
+        double[] range = PhaseFunctions.withinVapourRanges(card, x, highest,
+                highest + PhaseFunctions.EXTRAPOLATION_KELVIN);
+        if (!(range[1] > range[0])) {
+            return Double.NaN;
+        }
+        java.util.function.DoubleUnaryOperator excess = tk -> card.mixture().bubblePressure(x, tk, null)
+                - OPEN_VESSEL_PASCAL;
+        double lo = excess.applyAsDouble(range[0]);
+        double hi = excess.applyAsDouble(range[1]);
+        if (!(lo < 0.0 && hi > 0.0)) {
+            return Double.NaN;
+        }
+        return new org.apache.commons.math3.analysis.solvers.BrentSolver(1e-12, 1e-6)
+                .solve(200, excess::applyAsDouble, range[0], range[1]);
     }
 
     /**
@@ -48,6 +77,10 @@ public final class BoilingPoints {
     public static String source(Card card, double[] x, double kelvin) {
         if (!fromBubblePoint(card, x)) {
             return "the card's 'boiling temperatures'";
+        }
+        if (kelvin > card.validity().highestKelvin()) {
+            return "its bubble point at 1 atm from the card's G^E and vapour pressures, extrapolated above the card's "
+                    + "highest temperature";
         }
         return kelvin == card.validity().lowestKelvin() ? "its bubble point at 1 atm is at or below the card's lowest "
                 + "temperature, the limit used" : "its bubble point at 1 atm from the card's G^E and vapour pressures";

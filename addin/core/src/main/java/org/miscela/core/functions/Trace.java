@@ -130,12 +130,14 @@ final class Trace {
             boolean bubble = BoilingPoints.fromBubblePoint(card, x);
             tr.add("boiling temperature [" + scaleT.symbol() + "]", card.boiling() == null && !bubble
                     ? "not on the card" : Double.isNaN(boils) ? bubble ? "no bubble point at 1 atm inside the card's "
-                    + "range" : "outside the card's boiling points" : (Object) scaleT.fromKelvin(boils));
+                    + "range or within 100 K above it" : "outside the card's boiling points"
+                    : (Object) scaleT.fromKelvin(boils));
             if (bubble) {
                 tr.add("boiling temperature source", boils == card.validity().lowestKelvin()
                         ? "bubble point at 101.325 kPa at or below the card's lowest temperature, which is used"
                         : "bubble point at 101.325 kPa (an open vessel) from the card's G^E and vapour pressures, "
-                        + "modified Raoult's law");
+                        + "modified Raoult's law" + (boils > card.validity().highestKelvin() ? ", extrapolated above "
+                        + "the card's highest temperature" : ""));
             }
             tr.add("blend heat capacity source", m.heatCapacitySource().words());
             double[] partial = new double[x.length];

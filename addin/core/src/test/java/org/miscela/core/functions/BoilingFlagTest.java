@@ -56,4 +56,24 @@ class BoilingFlagTest {
         assertEquals(Problem.BOILS, assertThrows(MiscelaException.class,
                 () -> CardFunctions.adiabaticRise(hot, new double[] {1, 1}, AmountBasis.MOL, 100, E)).problem());
     }
+
+    /**
+     * A blend that boils above the card's range: on the same invented card valid to 60 °C only, the equimolar blend's
+     * bubble point lies above the range (89.9 °C on the full card); extrapolating the card's G^E and vapour pressures
+     * finds the same temperature, which is now the limit: a rise from 20 °C that the caller lets extrapolate (to about
+     * 95 °C) is refused as boiling, not left unchecked, and the refusal says the limit was extrapolated.
+     */
+    @Test
+    void aBlendThatBoilsAboveTheCardsRangeIsHeldToItsExtrapolatedBubblePoint() {
+        Card cool = org.miscela.core.card.CardReader.read(org.miscela.core.card.CardEdits.apply(
+                TestCards.cells("invented-hot-mixing.tsv"), "set 22 = valid temperature | 0 | 60"));
+        double[] x = {0.5, 0.5};
+        double full = PhaseFunctions.bubblePoint(HOT, x, 101.325, E);
+        assertTrue(full > 60, "the full card's bubble point lies above 60 °C: " + full);
+        assertEquals(full + 273.15, BoilingPoints.kelvinAt(cool, x), 1e-6);
+        MiscelaException boils = assertThrows(MiscelaException.class,
+                () -> CardFunctions.adiabaticRise(cool, new double[] {1, 1}, AmountBasis.MOL, 20, Extrapolation.ALLOW));
+        assertEquals(Problem.BOILS, boils.problem());
+        assertTrue(boils.getMessage().contains("extrapolated above"), boils.getMessage());
+    }
 }
