@@ -125,7 +125,10 @@ public final class FunctionCatalog {
                     + "reaches it; the cooling's (MIX.TEMPERATUREPATH's \"cooling\"), whose peak falls without "
                     + "bound as the heat removed grows, so its doubling always brackets the limit; and MIX.DEWPRESSURE's "
                     + "successive substitution of the drop, which settled on every card and vapour "
-                    + "tried, liquids that split among them (DewPressureTest). Calc would show Err:523",
+                    + "tried, liquids that split among them (DewPressureTest); and the bubble- and dew-point searches' "
+                    + "guard against a balance the card's models cannot evaluate, which no card is known to reach "
+                    + "since a Kohler pair of tiny fractions stopped giving 0/0 (MulticomponentCardTest). Calc would "
+                    + "show Err:523",
             Problem.VLE_FIT_NOT_CONVERGED, "MIX.FITVLE's Levenberg–Marquardt search stops on its cost and "
                     + "parameter tolerances long before its " + org.miscela.core.fit.VleFitter.MAX_ITERATIONS
                     + " iterations on every data set tried (the published sets of VleFitTest take 5 to 14, slips of "

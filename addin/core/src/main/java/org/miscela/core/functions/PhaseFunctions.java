@@ -307,13 +307,23 @@ public final class PhaseFunctions {
         double[] range = searchRange(card, z, e);
         double lo = range[0];
         double hi = range[1];
-        double fLo = f.at(lo, target);
-        double fHi = f.at(hi, target);
+        // a balance the card's models cannot evaluate is refused in words, never handed to the solver as NaN
+        java.util.function.DoubleUnaryOperator g = tk -> {
+            double v = f.at(tk, target);
+            if (Double.isNaN(v)) {
+                throw Problem.NO_CONVERGENCE.raise("the temperature at which this blend and its vapour are in "
+                        + "balance", "at " + Numbers.show(tu.fromKelvin(tk)) + " " + tu.symbol() + " the card's "
+                        + "models give no finite balance");
+            }
+            return v;
+        };
+        double fLo = g.applyAsDouble(lo);
+        double fHi = g.applyAsDouble(hi);
         if (!(hi > lo) || !(fLo >= 0.0 && fHi <= 0.0)) {
             throw none.at(lo, hi, tu);
         }
         BrentSolver solver = new BrentSolver(1e-15, ACCURACY_KELVIN);
-        double kelvin = fLo == 0.0 ? lo : fHi == 0.0 ? hi : solver.solve(200, tk -> f.at(tk, target), lo, hi);
+        double kelvin = fLo == 0.0 ? lo : fHi == 0.0 ? hi : solver.solve(200, g::applyAsDouble, lo, hi);
         double t = tu.fromKelvin(kelvin);
         checkVapourPoint(card, liquidAt.apply(kelvin), t, e);
         return t;

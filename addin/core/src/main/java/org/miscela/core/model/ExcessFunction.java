@@ -206,6 +206,39 @@ public final class ExcessFunction implements ExcessModel {
         return total;
     }
 
+    /**
+     * A Kohler pair, d = (x_i − x_j)/(x_i + x_j), written with the pair's own fractions a = x_i/(x_i + x_j) and
+     * b = x_j/(x_i + x_j) so that no power of the sum appears: x_i·x_j·∂d/∂x_i = 2ab·x_j, and every second-derivative
+     * term is a polynomial in a and b. The same values as the textbook form, but a pair whose sum is tiny (10⁻²⁰⁰, say,
+     * where its square underflows to zero) gives zeros instead of 0/0.
+     */
+    private double kohlerPair(int p, double xi, double xj, double sum, double kelvin, boolean temperatureSlope,
+            double[] s, double[] gradient, double[][] hessian) {
+        int i = first[p];
+        int j = second[p];
+        double a = xi / sum;
+        double b = xj / sum;
+        double d = a - b;
+        double u = xi * xj;
+        if (s == null) {
+            return u * expansion[p].sum(d, kelvin, temperatureSlope);
+        }
+        expansion[p].series(d, kelvin, temperatureSlope, s);
+        double ab = a * b;
+        if (gradient != null) {
+            gradient[i] += xj * s[0] + 2.0 * ab * xj * s[1];
+            gradient[j] += xi * s[0] - 2.0 * ab * xi * s[1];
+        }
+        if (hessian != null) {
+            hessian[i][i] += 4.0 * b * b * b * (s[1] + a * s[2]);
+            hessian[j][j] += 4.0 * a * a * a * (b * s[2] - s[1]);
+            double mixed = s[0] - 4.0 * ab * ab * s[2] + 2.0 * ab * (a - b) * s[1];
+            hessian[i][j] += mixed;
+            hessian[j][i] += mixed;
+        }
+        return u * s[0];
+    }
+
     private double accumulatePair(int p, double[] x, double kelvin, boolean temperatureSlope, double[] s,
             double[] gradient, double[][] hessian) {
         int i = first[p];
@@ -232,14 +265,7 @@ public final class ExcessFunction implements ExcessModel {
                 // x_i·x_j·S and its gradient vanish here; the Kohler term has no curvature limit at this corner.
                 return 0.0;
             }
-            double sum2 = sum * sum;
-            double sum3 = sum2 * sum;
-            d = (xi - xj) / sum;
-            di = 2.0 * xj / sum2;
-            dj = -2.0 * xi / sum2;
-            dii = -4.0 * xj / sum3;
-            djj = 4.0 * xi / sum3;
-            dij = 2.0 * (xi - xj) / sum3;
+            return kohlerPair(p, xi, xj, sum, kelvin, temperatureSlope, s, gradient, hessian);
         }
         double u = xi * xj;
         if (s == null) {

@@ -55,6 +55,25 @@ class MulticomponentCardTest {
     }
 
     /**
+     * A Kohler pair whose two fractions sum to almost nothing (10⁻²⁰⁰, whose square underflows to zero) contributes
+     * nothing, continuously: the partial molar excess volumes equal those with the pair absent. Found by the fuzzer as
+     * a dew-point search that met NaN (0/0 in the pair's derivatives) where the liquid held 10⁻³⁰⁰ of a component.
+     */
+    @Test
+    void kohlerPairWithATinySum() {
+        Card c = TestCard.ternary().row("multicomponent model", "Kohler").read();
+        for (double tiny : new double[] {1e-200, 1e-300, Double.MIN_VALUE}) {
+            double[] x = {tiny, 0, 1 - tiny};
+            for (int k = 0; k < 3; k++) {
+                double v = CardFunctions.partialExcessMolarVolume(c, k, x, T, Extrapolation.ALLOW);
+                double absent = CardFunctions.partialExcessMolarVolume(c, k, new double[] {0, 0, 1}, T,
+                        Extrapolation.ALLOW);
+                assertEquals(absent, v, 1e-12, "component " + k + " at x1 = " + tiny);
+            }
+        }
+    }
+
+    /**
      * Toop (1965) with alpha asymmetric: x_j/(1 − x_a)·B_aj(x_a, 1 − x_a) for the pairs with alpha, Kohler's rule for
      * beta + gamma.
      */
