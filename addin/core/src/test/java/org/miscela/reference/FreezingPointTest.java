@@ -242,6 +242,32 @@ class FreezingPointTest {
     }
 
     /**
+     * Propylene glycol + water by mass against a second source, the freezing-point polynomial of Å. Melinder,
+     * Properties of Secondary Working Fluids for Indirect Systems (IIR, 2010), evaluated at 20, 40 and 60 % w/w
+     * (7.17, 20.57 and 50.00 K below 0 °C; DERIVED by evaluating the coefficients as transcribed in the Modelica
+     * Buildings Library, Buildings/Media/Antifreeze/Functions/PropyleneGlycolWater.mo, whose ethylene glycol
+     * counterpart reproduces the CRC table within 0.04 K; the book itself was not seen). Ideal solution only: 1.2 K too
+     * warm at 20 %, 5.5 K at 40 % and 19 K at 60 %.
+     */
+    @Test
+    void propyleneGlycolIdealSolutionAgainstMelinder() {
+        Card pg = libraryWithIce("propylene glycol");
+        double[][] melinder = {{20, 7.17}, {40, 20.57}, {60, 50.00}};
+        double[] seen = {5.92, 15.03, 30.99}; // measured when this test was written
+        StringBuilder table = new StringBuilder();
+        for (int i = 0; i < melinder.length; i++) {
+            double ideal = -PhaseFunctions.freezingPoint(pg, 1, fromMassPercent(pg, melinder[i][0]), Activity.IDEAL,
+                    Extrapolation.ALLOW);
+            assertEquals(seen[i], ideal, 0.05, melinder[i][0] + " %");
+            assertTrue(ideal < melinder[i][1]);
+            table.append(String.format("%n  %2.0f %% w/w: Melinder %.2f K; ideal %.2f (%+.2f)", melinder[i][0],
+                    melinder[i][1], ideal, ideal - melinder[i][1]));
+        }
+        Figures.note(FreezingPointTest.class, "propylene glycol + water, ideal solution (computed − Melinder):%s",
+                table);
+    }
+
+    /**
      * Along the freezing curve: every result satisfies the SLE equation with γ_w from MIX.ACTIVITY at that
      * temperature (to 10⁻⁹ in ln a), and the freezing point falls as ethanol is added, from values x1 = 0.01 … 0.3.
      */
