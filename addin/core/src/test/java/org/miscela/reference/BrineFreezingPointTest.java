@@ -145,6 +145,52 @@ class BrineFreezingPointTest {
     }
 
     /**
+     * The same brine with its components in the other order (water first) freezes at the same temperature; and the
+     * ideal solution of the ions is the solid line solved with the water's share among water and ions, found here by
+     * bisection independently of the add-in's solver: NaCl at 10 % w/w.
+     */
+    @Test
+    void componentOrderAndTheIdealSolutionOfTheIons() {
+        Card flipped = CardReader.read(CardEdits.apply(TestCards.cells("library:NaCl"),
+                "set 11 = component | water | 18.015; set 12 = component | sodium chloride | 58.440; "
+                        + "set 13 = component order | water | sodium chloride"));
+        double[] x = fromMassPercent(NACL, 10);
+        double t = PhaseFunctions.freezingPoint(NACL, -1, x, Activity.CARD, Extrapolation.AS_CARD);
+        assertEquals(t, PhaseFunctions.freezingPoint(flipped, -1, new double[] {x[1], x[0]}, Activity.CARD,
+                Extrapolation.AS_CARD), 1e-9);
+        double share = x[1] / (x[1] + 2 * x[0]);
+        double lo = 250;
+        double hi = 273.15;
+        for (int i = 0; i < 100; i++) {
+            double mid = 0.5 * (lo + hi);
+            double r = 273.15 / mid;
+            double line = (-6010 * (1 / mid - 1 / 273.15) + 38.25 * (r - 1 - Math.log(r))) / PhaseFunctions.GAS_CONSTANT;
+            if (Math.log(share) > line) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        assertEquals(lo - 273.15, PhaseFunctions.freezingPoint(NACL, -1, x, Activity.IDEAL, Extrapolation.AS_CARD),
+                1e-8);
+    }
+
+    /**
+     * Without its own temperature range the osmotic row holds within the card's: at −6.6 °C the library card's 0 °C
+     * start then refuses the freezing point unless extrapolation is allowed.
+     */
+    @Test
+    void anOsmoticRowWithoutARangeTakesTheCards() {
+        Card noRange = CardReader.read(CardEdits.apply(TestCards.cells("library:NaCl"),
+                "set 17 = osmotic coefficient | sodium chloride | Pitzer | 1 | 1"));
+        double[] x = fromMassPercent(NACL, 10);
+        assertEquals(Problem.OUTSIDE_TEMPERATURE, assertThrows(MiscelaException.class,
+                () -> PhaseFunctions.freezingPoint(noRange, -1, x, Activity.CARD, Extrapolation.AS_CARD)).problem());
+        assertEquals(PhaseFunctions.freezingPoint(NACL, -1, x, Activity.CARD, Extrapolation.AS_CARD),
+                PhaseFunctions.freezingPoint(noRange, -1, x, Activity.CARD, Extrapolation.ALLOW), 1e-12);
+    }
+
+    /**
      * Refusals: the salt's own solid is not computed; a point below the osmotic row's range (−60 °C) is refused
      * unless extrapolation is allowed; without the osmotic row the ideal solution would count NaCl as one molecule.
      */

@@ -91,9 +91,9 @@ public final class PitzerOsmotic {
         this.waterKilogramPerMol = waterGramPerMol / 1000.0;
         this.cationCharge = cationCharge;
         this.anionCharge = anionCharge;
-        int g = gcd(cationCharge, anionCharge);
-        this.cations = anionCharge / g;
-        this.anions = cationCharge / g;
+        // one ion is univalent, so a formula unit holds |z_X| cations and z_M anions
+        this.cations = anionCharge;
+        this.anions = cationCharge;
     }
 
     /** β0 (i = 0), β1 (1) or C^φ (2) at T (K). */
@@ -102,10 +102,6 @@ public final class PitzerOsmotic {
         double r = REFERENCE_KELVIN;
         return a[0] + a[1] * (1.0 / kelvin - 1.0 / r) + a[2] * Math.log(kelvin / r) + a[3] * (kelvin - r)
                 + a[4] * (kelvin * kelvin - r * r) + a[5] * (1.0 / (kelvin * kelvin) - 1.0 / (r * r));
-    }
-
-    private static int gcd(int a, int b) {
-        return b == 0 ? a : gcd(b, a % b);
     }
 
     /** Whether the row states its own temperature range (else the card's holds). */
