@@ -187,12 +187,21 @@ class CalcFuzzIT {
             count = required + r.nextInt(count - required + 1);
         }
         StringBuilder b = new StringBuilder("=").append(f.displayName()).append('(');
+        String chosen = "";
         for (int i = 0; i < count; i++) {
             if (i > 0) {
                 b.append(';');
             }
             String name = i < args.size() ? args.get(i).name() : "extra";
-            b.append(name.equals("card") || name.equals("pure") ? card(f, r) : argument(name, r));
+            if (name.equals("card") || name.equals("pure")) {
+                chosen = card(f, r);
+                b.append(chosen);
+            } else if (chosen.equals("brine") && name.equals("moleFraction") && r.nextBoolean()) {
+                // a brine below its eutectic (the library card's ice limit is 0.0856), so that some calls answer
+                b.append(String.format(Locale.ROOT, "%.4f", 0.08 * r.nextDouble()));
+            } else {
+                b.append(argument(name, r));
+            }
         }
         return b.append(')').toString();
     }
