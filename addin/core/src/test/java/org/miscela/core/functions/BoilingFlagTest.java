@@ -76,4 +76,46 @@ class BoilingFlagTest {
         assertEquals(Problem.BOILS, boils.problem());
         assertTrue(boils.getMessage().contains("extrapolated above"), boils.getMessage());
     }
+
+    /**
+     * Where the limit comes from, in the words the refusal and the trace quote: the bubble point inside the range, the
+     * range's bottom for a blend that boils below it, the extrapolated bubble point above it, and the card's stated
+     * boiling temperatures on a card that has them.
+     */
+    @Test
+    void theSourceOfTheLimitInWords() {
+        double[] x = {0.5, 0.5};
+        String inside = BoilingPoints.source(HOT, x, BoilingPoints.kelvinAt(HOT, x));
+        assertTrue(inside.contains("from the card's G^E and vapour pressures") && !inside.contains("lowest")
+                && !inside.contains("extrapolated"), inside);
+        Card below = edited("set 22 = valid temperature | 95 | 150");
+        String bottom = BoilingPoints.source(below, x, BoilingPoints.kelvinAt(below, x));
+        assertTrue(bottom.contains("at or below the card's lowest temperature"), bottom);
+        Card above = edited("set 22 = valid temperature | 0 | 60");
+        String extrapolated = BoilingPoints.source(above, x, BoilingPoints.kelvinAt(above, x));
+        assertTrue(extrapolated.contains("extrapolated above the card's highest temperature"), extrapolated);
+        Card stated = edited("add boiling temperatures | liquid P | 0 | 100 | 1 | 80");
+        assertEquals(90 + 273.15, BoilingPoints.kelvinAt(stated, x), 1e-9);
+        assertEquals("the card's 'boiling temperatures'", BoilingPoints.source(stated, x, 363.15));
+    }
+
+    /**
+     * No limit where none can be known: a present liquid without a vapour-pressure row (then the bubble point is not
+     * used at all), and a blend whose bubble point lies more than 100 K above the card's range (an invented card
+     * valid from −100 to −90 °C only: the equimolar blend boils near 90 °C).
+     */
+    @Test
+    void noLimitWhereNoneCanBeKnown() {
+        Card oneVapour = edited("set 19 = note | the vapour pressure of liquid Q taken out");
+        assertTrue(!BoilingPoints.fromBubblePoint(oneVapour, new double[] {0.5, 0.5}));
+        assertTrue(Double.isNaN(BoilingPoints.kelvinAt(oneVapour, new double[] {0.5, 0.5})));
+        assertTrue(BoilingPoints.fromBubblePoint(oneVapour, new double[] {1, 0}), "liquid Q absent: its row is not needed");
+        Card far = edited("set 22 = valid temperature | -100 | -90");
+        assertTrue(Double.isNaN(BoilingPoints.kelvinAt(far, new double[] {0.5, 0.5})));
+    }
+
+    private static Card edited(String edits) {
+        return org.miscela.core.card.CardReader.read(org.miscela.core.card.CardEdits.apply(
+                TestCards.cells("invented-hot-mixing.tsv"), edits));
+    }
 }
