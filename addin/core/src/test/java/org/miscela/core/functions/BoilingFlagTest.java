@@ -112,6 +112,10 @@ class BoilingFlagTest {
         assertTrue(BoilingPoints.fromBubblePoint(oneVapour, new double[] {1, 0}), "liquid Q absent: its row is not needed");
         Card far = edited("set 22 = valid temperature | -100 | -90");
         assertTrue(Double.isNaN(BoilingPoints.kelvinAt(far, new double[] {0.5, 0.5})));
+        // above a range of 0 to 60 °C, but liquid P's vapour-pressure constants stop at 60 °C too: not extrapolated
+        Card stops = edited("set 22 = valid temperature | 0 | 60; set 18 = vapour pressure | liquid P | Antoine | 6.2 "
+                + "| 1300 | 230 | 0 | 60");
+        assertTrue(Double.isNaN(BoilingPoints.kelvinAt(stops, new double[] {0.5, 0.5})));
     }
 
     private static Card edited(String edits) {
