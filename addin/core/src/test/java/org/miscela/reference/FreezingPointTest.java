@@ -302,8 +302,65 @@ class FreezingPointTest {
         assertEquals(Problem.FREEZING_COMPONENT_ABSENT, assertThrows(MiscelaException.class,
                 () -> PhaseFunctions.freezingPoint(GLYCOL, 1, new double[] {1, 0}, Activity.IDEAL,
                         Extrapolation.AS_CARD)).problem());
-        assertEquals(Problem.NO_FREEZING_POINT, assertThrows(MiscelaException.class,
+        MiscelaException none = assertThrows(MiscelaException.class,
                 () -> PhaseFunctions.freezingPoint(GLYCOL, 1, new double[] {0.999, 0.001}, Activity.IDEAL,
-                        Extrapolation.AS_CARD)).problem());
+                        Extrapolation.AS_CARD));
+        assertEquals(Problem.NO_FREEZING_POINT, none.problem());
+        // the range searched: from where ΔH_fus + ΔCp·(T − T_m) falls to a tenth, T_m − 0.9·6010/38.25 K
+        // (−141.41 °C, above T_m/4), to 1.25·T_m (68.2875 °C)
+        assertTrue(none.getMessage().contains("from -141.41176") && none.getMessage().contains("to 68.2875 °C"),
+                none.getMessage());
+        // 96 % by volume (x1 about 0.88): the ice line lies far below the card's 30 °C, past 100 K of extrapolation
+        MiscelaException far = assertThrows(MiscelaException.class,
+                () -> PhaseFunctions.freezingPoint(ETHANOL, -1, new double[] {0.85, 0.15}, Activity.CARD,
+                        Extrapolation.ALLOW));
+        assertEquals(Problem.FREEZING_TOO_FAR, far.problem());
+        double t = Double.parseDouble(far.getMessage().replaceAll("^The freezing point found, (\\S+) °C.*$", "$1"));
+        double below = Double.parseDouble(far.getMessage().replaceAll("^.*lies (\\S+) K below.*$", "$1"));
+        assertEquals(30 - t, below, 1e-6, far.getMessage());
+        assertTrue(below > 100, far.getMessage());
+    }
+
+    /**
+     * The freezing trace names the limits the traced point lies outside: the ethanol card's G^E starts at 30 °C, so at
+     * −5 °C the trace (extrapolation allowed) lists the temperature limit; at 40 °C it lists none.
+     */
+    @Test
+    void theTraceNamesTheLimitsItCrosses() {
+        double[] x = {0.05, 0.95};
+        Object[][] cold = org.miscela.core.functions.CardFunctions.trace(ETHANOL, x, -5,
+                org.miscela.core.functions.PropertyKind.FREEZING, Extrapolation.ALLOW);
+        Object[][] warm = org.miscela.core.functions.CardFunctions.trace(ETHANOL, x, 40,
+                org.miscela.core.functions.PropertyKind.FREEZING, Extrapolation.ALLOW);
+        assertTrue(String.valueOf(row(cold, "outside validity")).contains("-5 °C"), String.valueOf(row(cold,
+                "outside validity")));
+        assertEquals("none", row(warm, "outside validity"));
+    }
+
+    private static Object row(Object[][] trace, String label) {
+        for (Object[] r : trace) {
+            if (label.equals(r[0])) {
+                return r[1];
+            }
+        }
+        throw new AssertionError("no row " + label);
+    }
+
+    /**
+     * A negative heat capacity of fusion (solid above liquid, invented here) narrows the search from above instead of
+     * below: the root found still satisfies the solid-liquid equation.
+     */
+    @Test
+    void aNegativeHeatCapacityOfFusion() {
+        List<Object[]> rows = new ArrayList<>();
+        for (Object[] r : TestCards.cells("ethylene-glycol-water-ice-ideal.tsv")) {
+            rows.add("heat capacity of fusion".equals(r[0]) ? new Object[] {r[0], r[1], -100.0} : r);
+        }
+        Card c = CardReader.read(rows.toArray(new Object[0][]));
+        double[] x = fromMassPercent(c, 20);
+        double t = PhaseFunctions.freezingPoint(c, 1, x, Activity.IDEAL, Extrapolation.AS_CARD);
+        double kelvin = t + TM;
+        double r = TM / kelvin;
+        assertEquals(Math.log(x[1]), (-DH * (1 / kelvin - 1 / TM) - 100 * (r - 1 - Math.log(r))) / R, 1e-9);
     }
 }
