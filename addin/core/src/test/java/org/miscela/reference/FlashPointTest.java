@@ -66,6 +66,8 @@ class FlashPointTest {
                 "set 24 = note | the water's flash point row taken out"));
         assertEquals(Problem.NO_FLASH_POINT_ROW, assertThrows(MiscelaException.class,
                 () -> FlashPoints.flashPoint(noWater, new double[] {0.3, 0.7}, false, ALLOW)).problem());
+        // a liquid absent from the blend needs no row: pure ethanol on that card flashes at its own 13 °C
+        assertEquals(13.0, FlashPoints.flashPoint(noWater, new double[] {1, 0}, false, ALLOW), 1e-8);
         assertEquals(Problem.NOT_FLAMMABLE, assertThrows(MiscelaException.class,
                 () -> FlashPoints.flashPoint(CARD, new double[] {0, 1}, false, ALLOW)).problem());
         assertEquals(Problem.NO_FLASH_MINIMUM, assertThrows(MiscelaException.class,
@@ -98,8 +100,18 @@ class FlashPointTest {
             double x = s / 100.0;
             assertTrue(FlashPoints.flashPoint(c, new double[] {x, 1 - x}, false, e) >= t - 1e-7, "x1 = " + x);
         }
-        assertEquals(Problem.NO_FLASH_MINIMUM, assertThrows(MiscelaException.class,
-                () -> FlashPoints.minimum(c, false, true, e)).problem());
+        MiscelaException noMinimum = assertThrows(MiscelaException.class,
+                () -> FlashPoints.minimum(c, false, true, e));
+        assertEquals(Problem.NO_FLASH_MINIMUM, noMinimum.problem());
+        // the refusal names the liquid that flashes lower on its own, solvent P at 15 °C
+        assertTrue(noMinimum.getMessage().contains("solvent P") && noMinimum.getMessage().contains("15"),
+                noMinimum.getMessage());
+        // a pure liquid's flash point outside the range its vapour-pressure constants state: refused
+        Card narrow = CardReader.read(CardEdits.apply(TestCards.cells("invented-flash-minimum.tsv"),
+                "set 15 = vapour pressure | solvent P | Antoine | 6.2 | 1300 | 230 | 20 | 60"));
+        assertEquals(Problem.OUTSIDE_VAPOUR_PRESSURE, assertThrows(MiscelaException.class,
+                () -> FlashPoints.flashPoint(narrow, new double[] {0.5, 0.5}, false, e)).problem());
+
         Figures.note(FlashPointTest.class, "invented minimum flash point: x1 = %.4f, %.2f C (pure 15 and 25 C)", x1, t);
     }
 
