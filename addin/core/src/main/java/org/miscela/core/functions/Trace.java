@@ -29,11 +29,7 @@ final class Trace {
             List<Violation> outside) {
         Trace tr = new Trace();
         Units u = card.units();
-        String tu = u.temperature().symbol();
-        tr.add("card", card.title());
-        tr.add("source", card.source());
-        tr.add("property", property.word());
-        tr.add("components", (double) card.componentCount());
+        tr.head(card, property.word());
         ExcessFunction f = property == PropertyKind.VOLUME ? card.excessVolume() : card.excessEnthalpy();
         ExcessModel excess = property == PropertyKind.VOLUME ? card.volumeModel() : f;
         if (f != null) {
@@ -45,18 +41,7 @@ final class Trace {
         } else {
             tr.add("mixture density model", card.densityModel().modelName());
         }
-        tr.add("temperature [" + tu + "]", t);
-        tr.add("temperature [K]", kelvin);
-        tr.add("extrapolation", extrapolation(card, e));
-        if (outside.isEmpty()) {
-            tr.add("outside validity", "none");
-        }
-        for (Violation v : outside) {
-            tr.add("outside validity", v.limit());
-        }
-        for (int k = 0; k < x.length; k++) {
-            tr.add("mole fraction: " + name(card, k), x[k]);
-        }
+        tr.point(card, x, t, kelvin, e, outside);
         Mixture m = card.mixture();
         String mm = u.molarMass().symbol();
         for (int k = 0; k < x.length; k++) {
@@ -169,11 +154,7 @@ final class Trace {
      */
     static Object[][] vapour(Card card, double[] x, double t, double kelvin, Extrapolation e, List<Violation> outside) {
         Trace tr = new Trace();
-        Units u = card.units();
-        tr.add("card", card.title());
-        tr.add("source", card.source());
-        tr.add("property", PropertyKind.VAPOUR.word());
-        tr.add("components", (double) card.componentCount());
+        tr.head(card, PropertyKind.VAPOUR.word());
         ExcessModel gibbs = card.mixture().gibbs();
         int n = x.length;
         if (gibbs instanceof ExcessFunction) {
@@ -182,18 +163,7 @@ final class Trace {
         } else {
             tr.add("activity model", ((LocalCompositionGibbs) gibbs).kind().cardName());
         }
-        tr.add("temperature [" + u.temperature().symbol() + "]", t);
-        tr.add("temperature [K]", kelvin);
-        tr.add("extrapolation", extrapolation(card, e));
-        if (outside.isEmpty()) {
-            tr.add("outside validity", "none");
-        }
-        for (Violation v : outside) {
-            tr.add("outside validity", v.limit());
-        }
-        for (int k = 0; k < n; k++) {
-            tr.add("mole fraction: " + name(card, k), x[k]);
-        }
+        tr.point(card, x, t, kelvin, e, outside);
         if (gibbs instanceof ExcessFunction) {
             tr.pairs(card, (ExcessFunction) gibbs, x, kelvin, 1.0, "1");
         } else {
@@ -310,22 +280,8 @@ final class Trace {
             List<Violation> outside) {
         Trace tr = new Trace();
         Units.Temperature tu = card.units().temperature();
-        tr.add("card", card.title());
-        tr.add("source", card.source());
-        tr.add("property", PropertyKind.FREEZING.word());
-        tr.add("components", (double) card.componentCount());
-        tr.add("temperature [" + tu.symbol() + "]", t);
-        tr.add("temperature [K]", kelvin);
-        tr.add("extrapolation", extrapolation(card, e));
-        if (outside.isEmpty()) {
-            tr.add("outside validity", "none");
-        }
-        for (Violation v : outside) {
-            tr.add("outside validity", v.limit());
-        }
-        for (int k = 0; k < x.length; k++) {
-            tr.add("mole fraction: " + name(card, k), x[k]);
-        }
+        tr.head(card, PropertyKind.FREEZING.word());
+        tr.point(card, x, t, kelvin, e, outside);
         org.miscela.core.model.PitzerOsmotic osmotic = card.osmotic();
         double[] lnGamma = new double[x.length];
         if (osmotic == null) {
@@ -407,6 +363,30 @@ final class Trace {
                 add("C" + c + " at T: " + triple + " [" + unit + "]", scale * term.coefficientAt(c, kelvin, false));
             }
             add("ternary term: " + triple + " [" + unit + "]", scale * f.ternaryContribution(t, x, kelvin));
+        }
+    }
+
+    /** The rows every trace opens with: the card, its source, the property traced and the number of components. */
+    private void head(Card card, String property) {
+        add("card", card.title());
+        add("source", card.source());
+        add("property", property);
+        add("components", (double) card.componentCount());
+    }
+
+    /** The point traced: its temperature (card unit and K), the extrapolation, the limits it crosses, x. */
+    private void point(Card card, double[] x, double t, double kelvin, Extrapolation e, List<Violation> outside) {
+        add("temperature [" + card.units().temperature().symbol() + "]", t);
+        add("temperature [K]", kelvin);
+        add("extrapolation", extrapolation(card, e));
+        if (outside.isEmpty()) {
+            add("outside validity", "none");
+        }
+        for (Violation v : outside) {
+            add("outside validity", v.limit());
+        }
+        for (int k = 0; k < x.length; k++) {
+            add("mole fraction: " + name(card, k), x[k]);
         }
     }
 
