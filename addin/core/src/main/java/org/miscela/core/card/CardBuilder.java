@@ -203,7 +203,7 @@ final class CardBuilder {
         return new Card(title, source, units, components, volume, enthalpy, validity, allow, missingIdeal,
                 basisReferenceKelvin, solutionHeatCapacity(names, masses), boilingCurve(names), mixtureDensity,
                 new Card.PhaseData(gibbs, vapour, pressure, wilsonVolumes, flash[0] == null ? null : flash[0],
-                        flashMethods, lowerFlammableLimits(names), fusion(names), osmotic(names, masses, gibbs)));
+                        flashMethods, lowerFlammableLimits(names), fusion(names), osmotic(names, masses, gibbs, validity)));
     }
 
     /**
@@ -212,7 +212,7 @@ final class CardBuilder {
      * Cphi' rows for the salt, each one to six terms of its function of T (K, {@link PitzerOsmotic}); null when the
      * card has none. A card states the liquid's activity one way: no G^E rows beside it.
      */
-    private PitzerOsmotic osmotic(List<String> names, List<Double> masses, ExcessModel gibbs) {
+    private PitzerOsmotic osmotic(List<String> names, List<Double> masses, ExcessModel gibbs, Validity validity) {
         Map<String, CardRow> rowsBySalt = rows.keyed(CardLabels.OSMOTIC);
         if (rowsBySalt.isEmpty()) {
             for (String label : new String[] {CardLabels.PITZER[0], CardLabels.PITZER[1], CardLabels.PITZER[2],
@@ -290,6 +290,13 @@ final class CardBuilder {
             throw Problem.MODEL_VALUES.raise(limit.number, limit.label, PitzerOsmotic.NAME, "the salt's mole fraction "
                     + "past which ice is no longer known to form first, between 0 and 1", "found "
                     + Numbers.show(iceLimit));
+        }
+        if (iceLimit > validity.highestFraction(solute)) {
+            // a limit the card's own range never reaches is most likely a mass fraction typed for a mole fraction
+            throw Problem.MODEL_VALUES.raise(limit.number, limit.label, PitzerOsmotic.NAME, "the salt's mole fraction "
+                    + "at the eutectic, inside the card's valid mole fraction (up to "
+                    + Numbers.show(validity.highestFraction(solute)) + ")", "found " + Numbers.show(iceLimit)
+                    + ": a mass fraction or percentage typed for a mole fraction?");
         }
         return new PitzerOsmotic(solvent, solute, masses.get(solvent), (int) v[0], (int) v[1], terms, lowest,
                 highest, iceLimit);

@@ -339,6 +339,11 @@ class CardReaderTest {
                         v2(c -> c.row("osmotic coefficient", "alpha", "Pitzer", 1, 1).row("solvent", "beta")
                                 .row("Pitzer beta0", "alpha", 0.08).row("Pitzer beta1", "alpha", 0.27)
                                 .row("Pitzer Cphi", "alpha", 0.001))),
+                bad("an ice limit past the card's valid mole fraction", Problem.MODEL_VALUES, 25,
+                        "typed for a mole fraction", v2(c -> c.set(16, "valid mole fraction", "alpha", 0, 0.1)
+                        .row("osmotic coefficient", "alpha", "Pitzer", 1, 1).row("solvent", "beta")
+                        .row("Pitzer beta0", "alpha", 0.08).row("Pitzer beta1", "alpha", 0.27)
+                        .row("Pitzer Cphi", "alpha", 0.001).row("ice limit", "alpha", 0.233))),
                 bad("an ice limit of 1", Problem.MODEL_VALUES, 25, "found 1", v2(c -> c
                         .row("osmotic coefficient", "alpha", "Pitzer", 1, 1).row("solvent", "beta")
                         .row("Pitzer beta0", "alpha", 0.08).row("Pitzer beta1", "alpha", 0.27)
